@@ -1,0 +1,46 @@
+#pragma once
+// Command-line arguments of one verb: "--name value" options and "--flag" switches.
+//
+// Parsing is strict: an unknown option, a missing value or a value that is not a
+// finite number is an InvalidInput naming the argument, so the CLI can print one
+// line and exit with status 2.
+
+#include <map>
+#include <optional>
+#include <set>
+#include <string>
+#include <vector>
+
+namespace cw::cli {
+
+struct OptionSpec {
+  std::string name;  ///< without the leading "--"
+  bool takesValue;   ///< false for a switch
+  std::string help;  ///< one line for --help
+};
+
+class Arguments {
+public:
+  /// Parses argv-style words against the specs; throws cw::InvalidInput on any problem.
+  Arguments(const std::vector<std::string>& words, const std::vector<OptionSpec>& specs);
+
+  bool has(const std::string& name) const;
+  /// The option's text, or nullopt when absent.
+  std::optional<std::string> text(const std::string& name) const;
+  /// The option as a finite number; throws InvalidInput when absent or not a number.
+  double number(const std::string& name) const;
+  /// The option as a finite number, or the fallback when absent.
+  double number(const std::string& name, double fallback) const;
+  /// Words that are not options (e.g. a case file).
+  const std::vector<std::string>& positional() const { return positional_; }
+
+private:
+  std::map<std::string, std::string> values_;
+  std::set<std::string> switches_;
+  std::vector<std::string> positional_;
+};
+
+/// Parses a whole string as a finite double in the C locale; nullopt otherwise.
+std::optional<double> parseNumber(const std::string& text);
+
+}  // namespace cw::cli

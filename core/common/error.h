@@ -1,0 +1,63 @@
+#pragma once
+// Errors of the Cyclewright core.
+//
+// Every error carries a stable code (for the GUI to translate), where it was raised
+// (the input's name or JSON path), the offending value and the valid range, so that
+// a message can name all three. The core never formats for display beyond the
+// English what() text used by the command line.
+
+#include <stdexcept>
+#include <string>
+
+namespace cw {
+
+enum class ErrorCode {
+  InvalidInput,   ///< a value outside its valid range, an unknown name, a malformed file
+  OutOfRange,     ///< a property asked outside the range of the underlying data
+  NotConverged,   ///< an iterative solver did not reach its tolerance
+  NoSolution,     ///< the inputs admit no physical solution (e.g. turbine cannot drive compressor)
+};
+
+class Error : public std::runtime_error {
+public:
+  Error(ErrorCode code, std::string where, std::string message);
+
+  ErrorCode code() const noexcept { return code_; }
+  /// The input, argument or JSON path the error concerns.
+  const std::string& where() const noexcept { return where_; }
+
+private:
+  ErrorCode code_;
+  std::string where_;
+};
+
+/// A value outside its valid range: "<where> = <value> <unit> is outside the valid range <range>".
+class InvalidInput : public Error {
+public:
+  InvalidInput(std::string where, double value, std::string unit, std::string validRange);
+  /// An input that is not a number (unknown name, wrong type): "<where>: <message>".
+  InvalidInput(std::string where, std::string message);
+};
+
+/// A property asked outside the range of its data (e.g. a temperature beyond the polynomials).
+class OutOfRange : public Error {
+public:
+  OutOfRange(std::string where, double value, std::string unit, std::string validRange);
+};
+
+/// An iterative solver that stopped short of its tolerance.
+class NotConverged : public Error {
+public:
+  NotConverged(std::string where, int iterations, double residual);
+};
+
+/// Inputs that admit no physical solution; the message says why.
+class NoSolution : public Error {
+public:
+  NoSolution(std::string where, std::string reason);
+};
+
+/// Formats a double for messages: shortest form that round-trips, no locale.
+std::string formatNumber(double value);
+
+}  // namespace cw

@@ -1,0 +1,69 @@
+// The main window opens offscreen with its menus, the demo case and an About box
+// carrying the caution; --screenshot writes a PNG of the requested size.
+#include "main_window.h"
+
+#include <QApplication>
+#include <QImage>
+#include <QMenu>
+#include <QMenuBar>
+#include <QMessageBox>
+#include <QProcess>
+#include <QTemporaryDir>
+#include <QTest>
+#include <QTimer>
+
+class TestMainWindow : public QObject {
+  Q_OBJECT
+private slots:
+  void hasFileAndHelpMenus() {
+    cw::gui::MainWindow window;
+    QVERIFY(window.menuBar()->findChild<QMenu*>("fileMenu") != nullptr);
+    QVERIFY(window.menuBar()->findChild<QMenu*>("helpMenu") != nullptr);
+    QVERIFY(window.findChild<QAction*>("aboutAction") != nullptr);
+  }
+  void opensTheDemoCase() {
+    cw::gui::MainWindow window;
+    QVERIFY(window.openCase(":/demo/demo-turbojet.json"));
+    QCOMPARE(window.casePath(), QString(":/demo/demo-turbojet.json"));
+    QVERIFY(window.windowTitle().startsWith("demo-turbojet.json"));
+  }
+  void rejectsAFileThatIsNotACase() {
+    cw::gui::MainWindow window;
+    QVERIFY(!window.openCase(":/no/such/file.json"));
+    QVERIFY(window.casePath().isEmpty());
+  }
+  void aboutBoxCarriesTheCaution() {
+    cw::gui::MainWindow window;
+    QString informative;
+    QTimer::singleShot(0, [&] {
+      auto* box = window.findChild<QMessageBox*>("aboutBox");
+      QVERIFY(box);
+      informative = box->informativeText();
+      box->accept();
+    });
+    window.showAbout();
+    QVERIFY(informative.contains("conceptual-design estimates"));
+    QVERIFY(informative.contains("engine manufacturer's data"));
+  }
+  void screenshotWritesPngOfStatedSize() {
+    QTemporaryDir dir;
+    const QString file = dir.filePath("window.png");
+    QProcess app;
+    app.start(CYCLEWRIGHT_GUI_PATH, {"--screenshot", file, "--size", "1024x700"});
+    QVERIFY(app.waitForFinished(30000));
+    QCOMPARE(app.exitCode(), 0);
+    const QImage image(file);
+    QVERIFY(!image.isNull());
+    QCOMPARE(image.size(), QSize(1024, 700));
+  }
+  void versionOption() {
+    QProcess app;
+    app.start(CYCLEWRIGHT_GUI_PATH, {"--version"});
+    QVERIFY(app.waitForFinished(30000));
+    QCOMPARE(app.exitCode(), 0);
+    QVERIFY(QString::fromUtf8(app.readAllStandardOutput()).contains("Cyclewright 0."));
+  }
+};
+
+QTEST_MAIN(TestMainWindow)
+#include "test_main_window.moc"
