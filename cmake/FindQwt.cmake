@@ -6,7 +6,7 @@
 # Defines the imported target Qwt::Qwt and Qwt_FOUND, Qwt_VERSION.
 
 set(_qwt_hints
-  ${QWT_ROOT} $ENV{QWT_ROOT}
+  ${QWT_ROOT} $ENV{QWT_ROOT} $ENV{CYCLEWRIGHT_QWT_PREFIX}
   /opt/cyclewright/qwt-6.3.0-qt6)
 
 find_path(Qwt_INCLUDE_DIR
