@@ -53,6 +53,7 @@ QwtPlot* MainWindow::createTemperatureEntropyChart() {
   plot->setAxisTitle(QwtAxis::YLeft, tr("Temperature T [K]"));
   plot->setAxisScale(QwtAxis::XBottom, 0.0, 1500.0);
   plot->setAxisScale(QwtAxis::YLeft, 200.0, 2000.0);
+  plot->setCanvasBackground(palette().color(QPalette::Base));
   auto* grid = new QwtPlotGrid;
   grid->setMajorPen(palette().color(QPalette::Mid), 0.0, Qt::DotLine);
   grid->attach(plot);

@@ -1,5 +1,6 @@
 // The main window opens offscreen with its menus, the demo case and an About box
 // carrying the caution; --screenshot writes a PNG of the requested size.
+#include "application.h"
 #include "main_window.h"
 
 #include <QApplication>
@@ -11,6 +12,7 @@
 #include <QTemporaryDir>
 #include <QTest>
 #include <QTimer>
+#include <QTranslator>
 
 class TestMainWindow : public QObject {
   Q_OBJECT
@@ -55,6 +57,18 @@ private slots:
     const QImage image(file);
     QVERIFY(!image.isNull());
     QCOMPARE(image.size(), QSize(1024, 700));
+  }
+  void germanTranslationIsPickedByLanguage() {
+    auto* app = qobject_cast<QApplication*>(QCoreApplication::instance());
+    QCOMPARE(cw::gui::installTranslation(*app, "de"), QString("de_DE"));
+    {
+      cw::gui::MainWindow window;
+      QCOMPARE(window.menuBar()->findChild<QMenu*>("fileMenu")->title(), QString("&Datei"));
+      QVERIFY(cw::gui::MainWindow::cautionText().contains("Konzeptentwurf"));
+    }
+    for (auto* translator : app->findChildren<QTranslator*>()) QCoreApplication::removeTranslator(translator);
+    cw::gui::MainWindow english;
+    QCOMPARE(english.menuBar()->findChild<QMenu*>("fileMenu")->title(), QString("&File"));
   }
   void versionOption() {
     QProcess app;
