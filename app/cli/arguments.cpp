@@ -38,10 +38,10 @@ Arguments::Arguments(const std::vector<std::string>& words, const std::vector<Op
       if (inlineValue) throw InvalidInput("--" + name, "is a switch and takes no value");
       switches_.insert(name);
     } else if (inlineValue) {
-      values_[name] = *inlineValue;
+      values_[name].push_back(*inlineValue);
     } else {
       if (i + 1 >= words.size()) throw InvalidInput("--" + name, "needs a value");
-      values_[name] = words[++i];
+      values_[name].push_back(words[++i]);
     }
   }
 }
@@ -53,7 +53,12 @@ bool Arguments::has(const std::string& name) const {
 std::optional<std::string> Arguments::text(const std::string& name) const {
   auto it = values_.find(name);
   if (it == values_.end()) return std::nullopt;
-  return it->second;
+  return it->second.back();
+}
+
+std::vector<std::string> Arguments::all(const std::string& name) const {
+  auto it = values_.find(name);
+  return it == values_.end() ? std::vector<std::string>{} : it->second;
 }
 
 double Arguments::number(const std::string& name) const {

@@ -31,11 +31,13 @@ public:
   double number(const std::string& name) const;
   /// The option as a finite number, or the fallback when absent.
   double number(const std::string& name, double fallback) const;
+  /// Every value given for a repeatable option, in order (e.g. several --set).
+  std::vector<std::string> all(const std::string& name) const;
   /// Words that are not options (e.g. a case file).
   const std::vector<std::string>& positional() const { return positional_; }
 
 private:
-  std::map<std::string, std::string> values_;
+  std::map<std::string, std::vector<std::string>> values_;
   std::set<std::string> switches_;
   std::vector<std::string> positional_;
 };

@@ -10,9 +10,12 @@ namespace cw::cli {
 
 // Each verb_<name>.cpp defines one of these.
 // (Add a verb: declare its factory here and list it in allVerbs().)
+Verb atmosphereVerb();
+Verb flowVerb();
+Verb evaluateVerb();
 
 const std::vector<Verb>& allVerbs() {
-  static const std::vector<Verb> verbs = {};
+  static const std::vector<Verb> verbs = {atmosphereVerb(), flowVerb(), evaluateVerb()};
   return verbs;
 }
 
@@ -69,7 +72,11 @@ int runCommandLine(const std::vector<std::string>& words, std::ostream& out, std
     Arguments args(rest, verb->options);
     return verb->run(args, out);
   } catch (const Error& e) {
-    err << "cyclewright-cli " << verb->name << ": " << e.what() << '\n';
+    // One line on stderr, even when a case file has several problems.
+    std::string message = e.what();
+    for (std::size_t at = message.find('\n'); at != std::string::npos; at = message.find('\n', at))
+      message.replace(at, 1, "; ");
+    err << "cyclewright-cli " << verb->name << ": " << message << '\n';
     switch (e.code()) {
       case ErrorCode::InvalidInput:
       case ErrorCode::OutOfRange: return kExitInvalidInput;

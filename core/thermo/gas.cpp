@@ -2,6 +2,7 @@
 
 #include "common/error.h"
 
+#include <algorithm>
 #include <cmath>
 #include <string>
 
@@ -23,6 +24,7 @@ double solveIncreasing(F f, DF dfdT, double target, double lo, double hi, double
   double residual = 0.0;
   for (int i = 0; i < kMaxIterations; ++i) {
     residual = f(T) - target;
+    if (residual == 0.0) return T;
     if (residual > 0) hi = T; else lo = T;
     const double slope = dfdT(T);
     double next = (slope > 0) ? T - residual / slope : 0.5 * (lo + hi);
@@ -59,8 +61,9 @@ double Gas::temperatureFromEnthalpy(double h) const {
   if (!std::isfinite(h) || h < enthalpy(lo) || h > enthalpy(hi))
     throw OutOfRange("temperature from enthalpy", h, "J/kg",
                      "[" + formatNumber(enthalpy(lo)) + ", " + formatNumber(enthalpy(hi)) + "] J/kg");
-  // First guess from a constant cp at 300 K.
-  const double guess = 300.0 + (h - enthalpy(300.0)) / cp(300.0);
+  // First guess from a constant cp at a temperature inside the range.
+  const double base = std::clamp(300.0, lo, hi);
+  const double guess = base + (h - enthalpy(base)) / cp(base);
   return solveIncreasing([this](double T) { return enthalpy(T); }, [this](double T) { return cp(T); }, h, lo, hi,
                          guess, "temperature from enthalpy");
 }

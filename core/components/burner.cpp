@@ -1,0 +1,83 @@
+#include "components/burner.h"
+
+#include "common/error.h"
+
+#include <cmath>
+
+namespace cw::components {
+
+HeatAddition::HeatAddition(std::string name, const thermo::GasModel& model, double pressureLossFraction,
+                           double combustionEfficiency)
+    : name_(std::move(name)),
+      model_(model),
+      pressureLossFraction_(pressureLossFraction),
+      combustionEfficiency_(combustionEfficiency) {}
+
+namespace {
+/// Mass of the stream per unit of its air: 1 + f, or 1 when the model neglects the fuel's mass.
+double massPerAir(const thermo::GasModel& model, double f) { return model.neglectsFuelMass() ? 1.0 : 1.0 + f; }
+}  // namespace
+
+double HeatAddition::residual(const engine::TotalState& entry, double df, double exitTemperature) const {
+  const double f1 = entry.fuelAirRatio;
+  const double fuelTerm = model_.fuelEnthalpy() - (1.0 - combustionEfficiency_) * model_.lowerHeatingValue();
+  const double exitEnthalpy = model_.products(f1 + df)->enthalpy(exitTemperature);
+  return massPerAir(model_, f1) * entry.enthalpy + df * fuelTerm - massPerAir(model_, f1 + df) * exitEnthalpy;
+}
+
+HeatAddition::Result HeatAddition::toExitTemperature(const engine::TotalState& entry, double exitTemperature) const {
+  const double f1 = entry.fuelAirRatio;
+  const double available = model_.stoichiometricFuelAirRatio() - f1;
+  if (available <= 0.0)
+    throw NoSolution(name_, "the entering gas holds no oxygen left to burn (fuel-air ratio " + formatNumber(f1) + ")");
+  // Linear in df: two evaluations give the root; secant steps polish it.
+  double a = 0.0, b = available;
+  double ra = residual(entry, a, exitTemperature), rb = residual(entry, b, exitTemperature);
+  double df = a - ra * (b - a) / (rb - ra);
+  for (int i = 0; i < 8; ++i) {
+    if (!(df >= 0.0)) {
+      throw NoSolution(name_, "the exit temperature " + formatNumber(exitTemperature) +
+                                  " K is below what the entering gas already has; no fuel can be burnt");
+    }
+    if (df > available) {
+      throw NoSolution(name_, "the exit temperature " + formatNumber(exitTemperature) +
+                                  " K needs more fuel than the stoichiometric fuel-air ratio " +
+                                  formatNumber(model_.stoichiometricFuelAirRatio()) + " allows");
+    }
+    const double r = residual(entry, df, exitTemperature);
+    if (std::abs(r) <= 1e-12 * (std::abs(entry.enthalpy) + model_.lowerHeatingValue() * df + 1.0)) break;
+    a = b; ra = rb;
+    b = df; rb = r;
+    df = b - rb * (b - a) / (rb - ra);
+  }
+  return finish(entry, df, exitTemperature);
+}
+
+HeatAddition::Result HeatAddition::withFuelAirRatio(const engine::TotalState& entry, double df) const {
+  const double f1 = entry.fuelAirRatio;
+  if (f1 + df > model_.stoichiometricFuelAirRatio())
+    throw NoSolution(name_, "fuel-air ratio " + formatNumber(f1 + df) + " is above the stoichiometric " +
+                                formatNumber(model_.stoichiometricFuelAirRatio()));
+  const double fuelTerm = model_.fuelEnthalpy() - (1.0 - combustionEfficiency_) * model_.lowerHeatingValue();
+  const double exitEnthalpy =
+      (massPerAir(model_, f1) * entry.enthalpy + df * fuelTerm) / massPerAir(model_, f1 + df);
+  return finish(entry, df, model_.products(f1 + df)->temperatureFromEnthalpy(exitEnthalpy));
+}
+
+HeatAddition::Result HeatAddition::finish(const engine::TotalState& entry, double df, double exitTemperature) const {
+  const double f1 = entry.fuelAirRatio;
+  const double airFlow = entry.massFlow / massPerAir(model_, f1);
+  Result result;
+  result.addedFuelAirRatio = df;
+  result.fuelMassFlow = df * airFlow;
+  engine::TotalState& out = result.exit;
+  out.gas = model_.products(f1 + df);
+  out.temperature = exitTemperature;
+  out.enthalpy = out.gas->enthalpy(exitTemperature);
+  out.pressure = entry.pressure * (1.0 - pressureLossFraction_);
+  out.fuelAirRatio = f1 + df;
+  out.massFlow = airFlow * massPerAir(model_, f1 + df);
+  return result;
+}
+
+}  // namespace cw::components

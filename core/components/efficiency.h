@@ -1,0 +1,39 @@
+#pragma once
+// Isentropic and polytropic efficiency of a compression or expansion on any gas model.
+//
+// Compression from (T1, p1) to p2 with exit T2 on a gas with standard entropy s°(T):
+//   isentropic   eta_c = (h(T2s) - h(T1)) / (h(T2) - h(T1)),  s°(T2s) = s°(T1) + R ln(p2/p1)
+//   polytropic   e_c   = R ln(p2/p1) / (s°(T2) - s°(T1))        (dh = v dp / e_c along the path)
+// Expansion from (T1, p1) to p2 < p1:
+//   isentropic   eta_t = (h(T1) - h(T2)) / (h(T1) - h(T2s))
+//   polytropic   e_t   = (s°(T2) - s°(T1)) / (R ln(p2/p1))      (dh = e_t v dp along the path)
+// Mattingly, Elements of Propulsion: Gas Turbines and Rockets, AIAA 2006, sec. 4.3.4
+// (constant-cp forms eqs. 4.9a-4.10b); the forms above are the same definitions for a
+// thermally perfect gas. A unit efficiency on either basis is the isentropic change.
+
+#include "engine/case_inputs.h"
+#include "thermo/gas.h"
+
+namespace cw::components {
+
+using engine::EfficiencyBasis;
+
+/// The efficiency of a change on both bases.
+struct EfficiencyPair {
+  double isentropic = 1.0;  ///< [-]
+  double polytropic = 1.0;  ///< [-]
+};
+
+/// Exit temperature of a compression or expansion (p2 > p1 compresses) with the given efficiency. [K]
+double exitTemperature(const thermo::Gas& gas, double temperature1, double pressure1, double pressure2,
+                       EfficiencyBasis basis, double efficiency);
+
+/// Both efficiencies of a change from (T1, p1) to (T2, p2); unit efficiencies for p2 = p1.
+EfficiencyPair efficiencies(const thermo::Gas& gas, double temperature1, double pressure1, double temperature2,
+                            double pressure2);
+
+/// Exit pressure of an expansion from (T1, p1) that ends at temperature T2 < T1. [Pa]
+double expansionExitPressure(const thermo::Gas& gas, double temperature1, double pressure1, double temperature2,
+                             EfficiencyBasis basis, double efficiency);
+
+}  // namespace cw::components

@@ -1,0 +1,40 @@
+#include "components/turbine.h"
+
+#include "common/error.h"
+
+#include <cmath>
+
+namespace cw::components {
+
+Turbine::Result Turbine::exit(const engine::TotalState& entry, double compressorPower) const {
+  const thermo::Gas& gas = *entry.gas;
+  const double shaftPower = compressorPower + inputs_.powerOfftake;
+  const double specificWork = shaftPower / (inputs_.mechanicalEfficiency * entry.massFlow);
+  const double exitEnthalpy = entry.enthalpy - specificWork;
+  const char* why = "the turbine cannot drive the compressor";
+  if (!(exitEnthalpy > gas.enthalpy(gas.minimumTemperature())))
+    throw NoSolution("turbine", std::string(why) + ": it would need " + formatNumber(specificWork) +
+                                    " J/kg, more than the gas at " + formatNumber(entry.temperature) + " K holds");
+  Result result;
+  engine::TotalState& out = result.exit;
+  out.gas = entry.gas;
+  out.enthalpy = exitEnthalpy;
+  out.temperature = gas.temperatureFromEnthalpy(exitEnthalpy);
+  try {
+    out.pressure = expansionExitPressure(gas, entry.temperature, entry.pressure, out.temperature,
+                                         inputs_.efficiency.basis, inputs_.efficiency.value);
+  } catch (const OutOfRange&) {
+    throw NoSolution("turbine", std::string(why) + ": the isentropic expansion for " + formatNumber(specificWork) +
+                                    " J/kg leaves the range of the gas data");
+  }
+  if (!(out.pressure > 0.0) || !std::isfinite(out.pressure))
+    throw NoSolution("turbine", std::string(why) + ": no exit pressure gives " + formatNumber(specificWork) + " J/kg");
+  out.massFlow = entry.massFlow;
+  out.fuelAirRatio = entry.fuelAirRatio;
+  result.specificWork = specificWork;
+  result.power = entry.massFlow * specificWork;
+  result.efficiency = efficiencies(gas, entry.temperature, entry.pressure, out.temperature, out.pressure);
+  return result;
+}
+
+}  // namespace cw::components

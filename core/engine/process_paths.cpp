@@ -1,0 +1,65 @@
+#include "engine/process_paths.h"
+
+#include <cmath>
+
+namespace cw::engine {
+
+namespace {
+
+PathState stateOf(const thermo::Gas& gas, double T, double p, double entropyReference) {
+  return {T, gas.entropy(T, p) - entropyReference, p, gas.gasConstant() * T / p, gas.enthalpy(T)};
+}
+
+double lerp(double a, double b, double x) { return a + (b - a) * x; }
+
+}  // namespace
+
+ProcessPath pressurePath(std::string component, std::string from, std::string to, const thermo::Gas& gas,
+                         double t1, double p1, double t2, double p2, double entropyReference) {
+  ProcessPath path{std::move(component), std::move(from), std::move(to), false, {}};
+  path.states.reserve(kPathStates);
+  const double s1 = gas.entropy(t1, p1), s2 = gas.entropy(t2, p2);
+  const double ln1 = std::log(p1), ln2 = std::log(p2);
+  for (int i = 0; i < kPathStates; ++i) {
+    const double x = double(i) / (kPathStates - 1);
+    double T = (i == 0) ? t1 : (i == kPathStates - 1) ? t2 : 0.0;
+    const double p = (i == 0) ? p1 : (i == kPathStates - 1) ? p2 : std::exp(lerp(ln1, ln2, x));
+    if (T == 0.0) T = gas.temperatureFromEntropy(lerp(s1, s2, x), p);
+    path.states.push_back(stateOf(gas, T, p, entropyReference));
+  }
+  return path;
+}
+
+ProcessPath heatingPath(std::string component, std::string from, std::string to, const thermo::Gas& entryGas,
+                        const thermo::GasModel& model, double f1, double f2, double t1, double p1, double t2,
+                        double p2, double entropyReference) {
+  ProcessPath path{std::move(component), std::move(from), std::move(to), false, {}};
+  path.states.reserve(kPathStates);
+  for (int i = 0; i < kPathStates; ++i) {
+    const double x = double(i) / (kPathStates - 1);
+    const double T = lerp(t1, t2, x), p = lerp(p1, p2, x);
+    if (i == 0) {
+      path.states.push_back(stateOf(entryGas, T, p, entropyReference));
+    } else {
+      path.states.push_back(stateOf(*model.products(lerp(f1, f2, x)), T, p, entropyReference));
+    }
+  }
+  return path;
+}
+
+ProcessPath closurePath(const thermo::Gas& exhaustGas, double t9, double p9, double t0, double p0,
+                        double entropyReference, const thermo::Gas& air) {
+  ProcessPath path{"closure", "9", "0", true, {}};
+  path.states.reserve(kPathStates);
+  const PathState first = stateOf(exhaustGas, t9, p9, entropyReference);
+  const PathState last = stateOf(air, t0, p0, entropyReference);
+  for (int i = 0; i < kPathStates; ++i) {
+    const double x = double(i) / (kPathStates - 1);
+    const double T = lerp(t9, t0, x), p = std::exp(lerp(std::log(p9), std::log(p0), x));
+    const double R = lerp(exhaustGas.gasConstant(), air.gasConstant(), x);
+    path.states.push_back({T, lerp(first.entropy, last.entropy, x), p, R * T / p, lerp(first.enthalpy, last.enthalpy, x)});
+  }
+  return path;
+}
+
+}  // namespace cw::engine

@@ -1,0 +1,31 @@
+#pragma once
+// Builders of the process paths that the charts draw between stations.
+//
+//   pressurePath  s linear in ln p between the end states: for a thermally perfect gas this
+//                 is exactly a polytropic change of constant efficiency (ds° = (R/e) d ln p,
+//                 Mattingly, Elements of Propulsion, 2006, sec. 4.3.4); used for the inlet,
+//                 compressor, turbine, ducts and nozzle.
+//   heatingPath   the burner: pressure falling linearly from entry to exit, temperature rising
+//                 linearly, the gas's fuel-air ratio growing in step (a drawing convention).
+//   closurePath   the open cycle's return from exhaust to the free-stream static state at
+//                 ambient pressure: temperature and ln p linear, entropy linear (drawn dashed).
+
+#include "engine/process_path.h"
+#include "thermo/gas.h"
+#include "thermo/gas_model.h"
+
+namespace cw::engine {
+
+inline constexpr int kPathStates = 24;
+
+ProcessPath pressurePath(std::string component, std::string from, std::string to, const thermo::Gas& gas,
+                         double t1, double p1, double t2, double p2, double entropyReference);
+
+ProcessPath heatingPath(std::string component, std::string from, std::string to, const thermo::Gas& entryGas,
+                        const thermo::GasModel& model, double f1, double f2, double t1, double p1, double t2,
+                        double p2, double entropyReference);
+
+ProcessPath closurePath(const thermo::Gas& exhaustGas, double t9, double p9, double t0, double p0,
+                        double entropyReference, const thermo::Gas& air);
+
+}  // namespace cw::engine

@@ -1,0 +1,233 @@
+#include "engine/turbojet.h"
+
+#include "atmosphere/standard_atmosphere.h"
+#include "common/error.h"
+#include "components/burner.h"
+#include "components/compressor.h"
+#include "components/duct.h"
+#include "components/inlet.h"
+#include "components/nozzle.h"
+#include "components/turbine.h"
+#include "engine/process_paths.h"
+#include "flow/compressible_flow.h"
+#include "thermo/gas_model_factory.h"
+
+#include <cmath>
+#include <numbers>
+
+namespace cw::engine {
+
+FreeStream freeStreamOf(const FlightInputs& flight) {
+  FreeStream fs;
+  fs.mach = flight.mach;
+  if (const auto* standard = std::get_if<StandardAtmosphereAmbient>(&flight.ambient)) {
+    const atmosphere::StandardAtmosphere atmosphere(standard->isaOffset);
+    const atmosphere::AtmosphereState state = standard->geometricAltitude
+                                                  ? atmosphere.atGeometricAltitude(standard->altitude)
+                                                  : atmosphere.atGeopotentialAltitude(standard->altitude);
+    fs.temperature = state.temperature;
+    fs.pressure = state.pressure;
+  } else {
+    const auto& given = std::get<GivenAmbient>(flight.ambient);
+    fs.temperature = given.temperature;
+    fs.pressure = given.pressure;
+  }
+  return fs;
+}
+
+Turbojet::Turbojet(const Case& inputs)
+    : inputs_(inputs), gasModel_(thermo::makeGasModel(inputs.gasModel, inputs.fuel, inputs.flight.specificHumidity)) {}
+
+namespace {
+
+/// A station from a total state with the stream at rest (no area known there).
+Station stationAtRest(const std::string& id, const TotalState& t, double entropyReference) {
+  Station s;
+  s.id = id;
+  s.gas = t.gas;
+  s.totalTemperature = s.staticTemperature = t.temperature;
+  s.totalPressure = s.staticPressure = t.pressure;
+  s.totalEnthalpy = t.enthalpy;
+  s.massFlow = t.massFlow;
+  s.fuelAirRatio = t.fuelAirRatio;
+  s.entropy = t.gas->entropy(t.temperature, t.pressure) - entropyReference;
+  return s;
+}
+
+double entropyRate(const Station& in, const Station& out) { return out.massFlow * (out.entropy - in.entropy); }
+
+}  // namespace
+
+CycleResult Turbojet::evaluateAt(double airMassFlow) const {
+  const thermo::GasModel& model = *gasModel_;
+  const auto air = model.air();
+  const FreeStream fs = freeStreamOf(inputs_.flight);
+  const double entropyReference = air->entropy(fs.temperature, fs.pressure);
+  CycleResult result;
+
+  // 0: free stream.
+  const flow::FlowState free = flow::fromStatic(*air, fs.temperature, fs.pressure, fs.mach);
+  Station s0;
+  s0.id = "0";
+  s0.gas = air;
+  s0.totalTemperature = free.total.temperature;
+  s0.totalPressure = free.total.pressure;
+  s0.totalEnthalpy = free.totalEnthalpy;
+  s0.staticTemperature = fs.temperature;
+  s0.staticPressure = fs.pressure;
+  s0.mach = fs.mach;
+  s0.velocity = free.velocity;
+  s0.massFlow = airMassFlow;
+  s0.entropy = 0.0;
+  if (free.velocity > 0.0) s0.area = airMassFlow / free.massFlux();
+
+  // 2: engine face, at the sizing Mach number.
+  const TotalState t2 = components::Inlet(inputs_.inlet).exit(s0);
+  Station s2 = stationAtRest("2", t2, entropyReference);
+  const flow::FlowState face = flow::fromTotal(*air, t2.temperature, t2.pressure, inputs_.sizing.engineFaceMach);
+  s2.staticTemperature = face.local.temperature;
+  s2.staticPressure = face.local.pressure;
+  s2.mach = face.mach;
+  s2.velocity = face.velocity;
+  s2.area = airMassFlow / face.massFlux();
+
+  // 3: compressor exit, after the bleed.
+  const components::Compressor::Result compression = components::Compressor(inputs_.compressor).exit(t2);
+  const Station s3 = stationAtRest("3", compression.exit, entropyReference);
+
+  // 4: burner exit.
+  const components::HeatAddition burner("burner", model, inputs_.burner.pressureLossFraction,
+                                        inputs_.burner.combustionEfficiency);
+  const components::HeatAddition::Result combustion =
+      std::holds_alternative<ExitTemperatureSetting>(inputs_.burner.setting)
+          ? burner.toExitTemperature(compression.exit,
+                                     std::get<ExitTemperatureSetting>(inputs_.burner.setting).exitTemperature)
+          : burner.withFuelAirRatio(compression.exit,
+                                    std::get<FuelAirRatioSetting>(inputs_.burner.setting).fuelAirRatio);
+  const Station s4 = stationAtRest("4", combustion.exit, entropyReference);
+
+  // 5: turbine exit.
+  const components::Turbine::Result expansion =
+      components::Turbine(inputs_.turbine).exit(combustion.exit, compression.power);
+  const Station s5 = stationAtRest("5", expansion.exit, entropyReference);
+
+  // 7: nozzle entry, through the jet pipe and (when lit) the afterburner.
+  TotalState t7 = components::Duct(inputs_.jetPipe.pressureLossFraction).exit(expansion.exit);
+  std::optional<Station> s6;
+  double afterburnerFuel = 0.0;
+  if (inputs_.afterburner.enabled) {
+    s6 = stationAtRest("6", t7, entropyReference);
+    const components::HeatAddition afterburner("afterburner", model, inputs_.afterburner.pressureLossFractionLit,
+                                               inputs_.afterburner.combustionEfficiency);
+    const auto reheat = afterburner.toExitTemperature(t7, inputs_.afterburner.exitTemperature);
+    t7 = reheat.exit;
+    afterburnerFuel = reheat.fuelMassFlow;
+  } else if (inputs_.afterburner.pressureLossFractionUnlit > 0.0) {
+    t7 = components::Duct(inputs_.afterburner.pressureLossFractionUnlit).exit(t7);
+  }
+  const Station s7 = stationAtRest("7", t7, entropyReference);
+
+  // 8, 9: nozzle throat and exit.
+  const components::Nozzle::Result jet = components::Nozzle(inputs_.nozzle).expand(t7, fs.pressure);
+  Station s8 = jet.throat, s9 = jet.exit;
+  s8.entropy = s8.gas->entropy(s8.staticTemperature, s8.staticPressure) - entropyReference;
+  s9.entropy = s9.gas->entropy(s9.staticTemperature, s9.staticPressure) - entropyReference;
+
+  // Performance (Mattingly, Elements of Propulsion, 2006, eqs. 7.1-7.3 and 1.11-1.13).
+  Performance& perf = result.performance;
+  perf.grossThrust = jet.grossThrust;
+  perf.ramDrag = airMassFlow * free.velocity;
+  perf.netThrust = perf.grossThrust - perf.ramDrag;
+  if (!(perf.netThrust > 0.0))
+    throw NoSolution("cycle", "the net thrust " + formatNumber(perf.netThrust) +
+                                  " N is not positive: the jet is slower than the flight speed");
+  perf.specificThrust = perf.netThrust / airMassFlow;
+  perf.fuelFlow = combustion.fuelMassFlow + afterburnerFuel;
+  perf.fuelAirRatio = perf.fuelFlow / s3.massFlow;
+  perf.thrustSpecificFuelConsumption = perf.fuelFlow / perf.netThrust;
+  perf.jetVelocity = s9.velocity;
+  perf.effectiveJetVelocity = perf.grossThrust / s9.massFlow;
+  perf.nozzleChoked = jet.choked;
+  const double kineticPower = 0.5 * (s9.massFlow * perf.effectiveJetVelocity * perf.effectiveJetVelocity -
+                                     airMassFlow * free.velocity * free.velocity);
+  const double fuelPower = perf.fuelFlow * model.lowerHeatingValue();
+  perf.thermalEfficiency = (kineticPower + inputs_.turbine.powerOfftake) / fuelPower;
+  perf.propulsiveEfficiency = kineticPower > 0.0 ? perf.netThrust * free.velocity / kineticPower : 0.0;
+  perf.overallEfficiency = perf.netThrust * free.velocity / fuelPower;
+
+  // Sizing.
+  Sizing& size = result.sizing;
+  size.airMassFlow = airMassFlow;
+  size.captureArea = s0.area;
+  size.engineFaceArea = *s2.area;
+  const double hub = inputs_.sizing.hubToTipRatio;
+  size.engineFaceDiameter = std::sqrt(4.0 * size.engineFaceArea / (std::numbers::pi * (1.0 - hub * hub)));
+  size.throatArea = *s8.area;
+  size.exitArea = *s9.area;
+  size.fuelFlow = perf.fuelFlow;
+
+  // Component summaries: shaft power and entropy generated by each loss.
+  const double burnerLossEntropy =
+      s4.massFlow * s4.gas->gasConstant() * std::log(compression.exit.pressure / combustion.exit.pressure);
+  result.components = {
+      {"inlet", 0.0, std::nullopt, entropyRate(s0, s2)},
+      {"compressor", compression.power, compression.efficiency, s2.massFlow * (s3.entropy - s2.entropy)},
+      {"burner", 0.0, std::nullopt, burnerLossEntropy},
+      {"turbine", -expansion.power, expansion.efficiency, entropyRate(s4, s5)},
+      {"jet_pipe", 0.0, std::nullopt, entropyRate(s5, s6 ? *s6 : s7)},
+      {"nozzle", 0.0, jet.efficiency, entropyRate(s7, s9)},
+  };
+  if (s6) {
+    const double abLoss = s7.massFlow * s7.gas->gasConstant() * std::log(s6->totalPressure / s7.totalPressure);
+    result.components.insert(result.components.end() - 1, {"afterburner", 0.0, std::nullopt, abLoss});
+  }
+
+  // Process paths.
+  auto& paths = result.paths;
+  paths.push_back(pressurePath("inlet", "0", "2", *air, s0.staticTemperature, s0.staticPressure, s2.totalTemperature,
+                               s2.totalPressure, entropyReference));
+  paths.push_back(pressurePath("compressor", "2", "3", *air, s2.totalTemperature, s2.totalPressure,
+                               s3.totalTemperature, s3.totalPressure, entropyReference));
+  paths.push_back(heatingPath("burner", "3", "4", *s3.gas, model, 0.0, s4.fuelAirRatio, s3.totalTemperature,
+                              s3.totalPressure, s4.totalTemperature, s4.totalPressure, entropyReference));
+  paths.push_back(pressurePath("turbine", "4", "5", *s4.gas, s4.totalTemperature, s4.totalPressure,
+                               s5.totalTemperature, s5.totalPressure, entropyReference));
+  const Station& jetPipeEnd = s6 ? *s6 : s7;
+  paths.push_back(pressurePath("jet_pipe", "5", jetPipeEnd.id, *s5.gas, s5.totalTemperature, s5.totalPressure,
+                               jetPipeEnd.totalTemperature, jetPipeEnd.totalPressure, entropyReference));
+  if (s6)
+    paths.push_back(heatingPath("afterburner", "6", "7", *s6->gas, model, s6->fuelAirRatio, s7.fuelAirRatio,
+                                s6->totalTemperature, s6->totalPressure, s7.totalTemperature, s7.totalPressure,
+                                entropyReference));
+  paths.push_back(pressurePath("nozzle", "7", "9", *s7.gas, s7.totalTemperature, s7.totalPressure,
+                               s9.staticTemperature, s9.staticPressure, entropyReference));
+  paths.push_back(
+      closurePath(*s9.gas, s9.staticTemperature, s9.staticPressure, fs.temperature, fs.pressure, entropyReference, *air));
+
+  result.stations = {s0, s2, s3, s4, s5};
+  if (s6) result.stations.push_back(*s6);
+  result.stations.insert(result.stations.end(), {s7, s8, s9});
+  return result;
+}
+
+CycleResult Turbojet::evaluate() const {
+  if (const auto* flow = std::get_if<AirMassFlowTarget>(&inputs_.design.target)) return evaluateAt(flow->airMassFlow);
+  const double required = std::get<NetThrustTarget>(inputs_.design.target).netThrust;
+  // Net thrust rises with air mass flow (linearly but for the fixed power offtake): secant
+  // iteration on W2 from a first guess at 10 kg/s, to 1e-12 relative in thrust.
+  double w1 = 10.0;
+  CycleResult r1 = evaluateAt(w1);
+  double w2 = w1 * required / r1.performance.netThrust;
+  for (int i = 0; i < 60; ++i) {
+    CycleResult r2 = evaluateAt(w2);
+    const double f1 = r1.performance.netThrust - required, f2 = r2.performance.netThrust - required;
+    if (std::abs(f2) <= 1e-12 * required) return r2;
+    const double next = w2 - f2 * (w2 - w1) / (f2 - f1);
+    w1 = w2;
+    r1 = std::move(r2);
+    w2 = (next > 0.0 && std::isfinite(next)) ? next : 0.5 * w1;
+  }
+  throw NotConverged("design.required_net_thrust_N: air mass flow", 60, 0.0);
+}
+
+}  // namespace cw::engine

@@ -1,0 +1,64 @@
+#pragma once
+// The keys of the case-file format (docs/case-format.md, docs/case-schema.json) as data:
+// which keys each component object takes, their JSON types, the choices of choice keys,
+// the keys that apply only under a choice, and the "exactly one of" groups. The reader
+// (unknown keys, types, applicability), the writer (key order) and --set overrides
+// (known paths) all work from this one table.
+
+#include <string>
+#include <string_view>
+#include <vector>
+
+namespace cw::io {
+
+enum class CaseKeyType { Number, Integer, Boolean, String, Choice };
+
+/// A key applies only while another key of the same object has a given value.
+struct CaseKeyCondition {
+  std::string_view selector;  ///< a choice or boolean key of the same object
+  std::string_view value;     ///< the value (JSON text for booleans: "true", "false")
+};
+
+struct CaseKey {
+  std::string_view name;
+  CaseKeyType type;
+  std::vector<std::string_view> choices;     ///< for Choice keys; the first is the default
+  std::vector<CaseKeyCondition> conditions;  ///< all must hold for the key to apply
+};
+
+/// One alternative of an "exactly one of" group: its keys, of which `required` must be given.
+struct CaseAlternative {
+  std::vector<std::string_view> keys;
+  std::vector<std::string_view> required;
+};
+
+/// Keys of at most one alternative may be given; if `required`, exactly one alternative must be.
+struct CaseKeyGroup {
+  std::vector<CaseAlternative> alternatives;
+  bool required = false;
+};
+
+/// A component object of the case ("" for the document's top level).
+struct CaseSection {
+  std::string_view name;
+  bool required = false;      ///< the object must be present
+  std::vector<CaseKey> keys;  ///< in the order the writer uses
+  std::vector<std::string_view> requiredKeys;
+  std::vector<CaseKeyGroup> groups;
+
+  const CaseKey* find(std::string_view key) const;
+};
+
+/// The top level first, then the component objects in the order of the file.
+const std::vector<CaseSection>& caseSections();
+
+/// The section called name, or nullptr.
+const CaseSection* findCaseSection(std::string_view name);
+
+/// Every key the format knows, as JSON pointers ("/format", "/compressor/pressure_ratio", ...).
+std::vector<std::string> knownCaseKeyPaths();
+
+/// The known name closest to `name` (at most two edits away), or "" if none is that close.
+std::string closestName(std::string_view name, const std::vector<std::string_view>& candidates);
+
+}  // namespace cw::io

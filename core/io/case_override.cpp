@@ -1,0 +1,136 @@
+// Command-line overrides of case documents: applySetOverride (declared in io/case_file.h).
+#include "common/error.h"
+#include "io/case_file.h"
+#include "io/case_keys.h"
+
+#include <algorithm>
+#include <charconv>
+#include <cmath>
+
+namespace cw::io {
+
+using nlohmann::json;
+
+namespace {
+
+std::vector<std::string> split(const std::string& text, char separator) {
+  std::vector<std::string> parts;
+  std::string::size_type start = 0;
+  while (true) {
+    const auto end = text.find(separator, start);
+    parts.push_back(text.substr(start, end == std::string::npos ? std::string::npos : end - start));
+    if (end == std::string::npos) return parts;
+    start = end + 1;
+  }
+}
+
+/// A number in the C locale (std::from_chars ignores the global locale), the whole text, finite.
+bool parseNumber(const std::string& text, double& value) {
+  const char* begin = text.data();
+  const char* end = begin + text.size();
+  if (begin != end && *begin == '+') ++begin;
+  const auto [stop, ec] = std::from_chars(begin, end, value);
+  return ec == std::errc() && stop == end && begin != end && std::isfinite(value);
+}
+
+bool parseInteger(const std::string& text, long long& value) {
+  const char* begin = text.data();
+  const char* end = begin + text.size();
+  const auto [stop, ec] = std::from_chars(begin, end, value);
+  return ec == std::errc() && stop == end && begin != end;
+}
+
+std::string dotted(const CaseSection& section, std::string_view key) {
+  return section.name.empty() ? std::string(key) : std::string(section.name) + "." + std::string(key);
+}
+
+std::string unknownPathMessage(const std::string& path) {
+  std::vector<std::string> names;
+  for (const CaseSection& section : caseSections())
+    for (const CaseKey& key : section.keys) names.push_back(dotted(section, key.name));
+  std::vector<std::string_view> views(names.begin(), names.end());
+  const std::string suggestion = closestName(path, views);
+  return "unknown case key" + (suggestion.empty() ? std::string() : " (did you mean " + suggestion + "?)");
+}
+
+json valueFor(const CaseKey& key, const std::string& path, const std::string& text) {
+  switch (key.type) {
+    case CaseKeyType::Number: {
+      double value = 0.0;
+      if (!parseNumber(text, value)) throw InvalidInput(path, "expected a number, got \"" + text + "\"");
+      return value;
+    }
+    case CaseKeyType::Integer: {
+      long long value = 0;
+      if (!parseInteger(text, value)) throw InvalidInput(path, "expected an integer, got \"" + text + "\"");
+      return value;
+    }
+    case CaseKeyType::Boolean:
+      if (text == "true") return true;
+      if (text == "false") return false;
+      throw InvalidInput(path, "expected true or false, got \"" + text + "\"");
+    case CaseKeyType::String:
+    case CaseKeyType::Choice:
+      return text;
+  }
+  return text;
+}
+
+/// After setting `name`, drop the keys it excludes: the other alternatives of its group, and
+/// keys that apply only under another value of it (when it is a selector).
+void dropExcluded(const CaseSection& section, std::string_view name, const json& value, json& object) {
+  for (const CaseKeyGroup& group : section.groups) {
+    for (const CaseAlternative& alternative : group.alternatives) {
+      if (std::find(alternative.keys.begin(), alternative.keys.end(), name) == alternative.keys.end())
+        continue;
+      for (const CaseAlternative& other : group.alternatives)
+        if (&other != &alternative)
+          for (std::string_view key : other.keys) object.erase(std::string(key));
+    }
+  }
+  const std::string valueText = value.is_string() ? value.get<std::string>() : value.dump();
+  for (const CaseKey& key : section.keys)
+    for (const CaseKeyCondition& condition : key.conditions)
+      if (condition.selector == name && condition.value != valueText) object.erase(std::string(key.name));
+}
+
+}  // namespace
+
+void applySetOverride(json& document, const std::string& assignment) {
+  const auto equals = assignment.find('=');
+  if (equals == std::string::npos || equals == 0)
+    throw InvalidInput(assignment, "expected path.to.key=VALUE, e.g. compressor.pressure_ratio=12");
+  const std::string path = assignment.substr(0, equals);
+  const std::string text = assignment.substr(equals + 1);
+  if (!document.is_object()) throw InvalidInput(path, "the case document is not a JSON object");
+
+  const std::vector<std::string> parts = split(path, '.');
+  const CaseSection* section = nullptr;
+  std::string keyName;
+  if (parts.size() == 1) {
+    section = &caseSections().front();
+    keyName = parts[0];
+  } else if (parts.size() == 2 && !parts[0].empty()) {
+    section = findCaseSection(parts[0]);
+    keyName = parts[1];
+  }
+  const CaseKey* key = section ? section->find(keyName) : nullptr;
+  if (!key) {
+    if (parts.size() == 1 && findCaseSection(parts[0]))
+      throw InvalidInput(path, "names a component object, not a key (e.g. " + path + ".<key>)");
+    throw InvalidInput(path, unknownPathMessage(path));
+  }
+
+  const json value = valueFor(*key, path, text);
+  json* object = &document;
+  if (!section->name.empty()) {
+    const std::string name(section->name);
+    if (!document.contains(name)) document[name] = json::object();
+    object = &document[name];
+    if (!object->is_object()) throw InvalidInput(path, "\"" + name + "\" in the case is not an object");
+  }
+  (*object)[keyName] = value;
+  dropExcluded(*section, keyName, value, *object);
+}
+
+}  // namespace cw::io

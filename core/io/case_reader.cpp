@@ -1,0 +1,134 @@
+// Reading case files: parseCase and readCaseFile (declared in io/case_file.h).
+#include "common/error.h"
+#include "engine/case_validation.h"
+#include "engine/case_validation_error.h"
+#include "io/case_builder.h"
+#include "io/case_file.h"
+#include "io/case_structure_check.h"
+
+#include <cerrno>
+#include <filesystem>
+#include <fstream>
+#include <functional>
+#include <set>
+#include <sstream>
+#include <system_error>
+
+namespace cw::io {
+
+using nlohmann::json;
+
+namespace {
+
+/// Structural check, build, range check: every problem, and the case when there are none.
+engine::Case parseWithProblems(const json& document, std::vector<engine::CaseProblem> problems,
+                               const std::string& where) {
+  const CaseStructureCheck structure(document);
+  problems.insert(problems.end(), structure.problems().begin(), structure.problems().end());
+  engine::Case inputs = buildCase(structure.clean());
+  std::vector<engine::CaseProblem> ranges = engine::validateCase(inputs);
+  problems.insert(problems.end(), ranges.begin(), ranges.end());
+  if (!problems.empty()) throw engine::CaseValidationError(where, std::move(problems));
+  return inputs;
+}
+
+/// Remembers the path of the parser's position to report keys given twice in one object
+/// (nlohmann::json keeps the last silently; a typo'd file must not pass like that).
+class DuplicateKeyFinder {
+ public:
+  bool operator()(int /*depth*/, json::parse_event_t event, json& parsed) {
+    switch (event) {
+      case json::parse_event_t::object_start:
+        frames_.push_back({true, {}, {}, 0});
+        break;
+      case json::parse_event_t::array_start:
+        frames_.push_back({false, {}, {}, 0});
+        break;
+      case json::parse_event_t::object_end:
+      case json::parse_event_t::array_end:
+        frames_.pop_back();
+        if (!frames_.empty()) ++frames_.back().count;
+        break;
+      case json::parse_event_t::key: {
+        Frame& frame = frames_.back();
+        frame.key = parsed.get<std::string>();
+        if (!frame.keys.insert(frame.key).second)
+          problems.push_back({path(), "", "each key once", path() + ": duplicate key"});
+        break;
+      }
+      case json::parse_event_t::value:
+        if (!frames_.empty()) ++frames_.back().count;
+        break;
+    }
+    return true;
+  }
+
+  std::vector<engine::CaseProblem> problems;
+
+ private:
+  struct Frame {
+    bool isObject;
+    std::set<std::string> keys;
+    std::string key;
+    std::size_t count;
+  };
+  std::string path() const {
+    std::string text;
+    for (const Frame& frame : frames_)
+      text += frame.isObject ? casePointer("", frame.key) : "/" + std::to_string(frame.count);
+    return text;
+  }
+  std::vector<Frame> frames_;
+};
+
+std::string stripExceptionPrefix(const std::string& text) {
+  // nlohmann's messages begin "[json.exception.parse_error.101] ".
+  const auto end = text.find("] ");
+  return text.rfind("[json.exception.", 0) == 0 && end != std::string::npos ? text.substr(end + 2) : text;
+}
+
+/// The document of a file, and the keys it gives twice.
+json loadDocument(const std::string& path, std::vector<engine::CaseProblem>& duplicateProblems) {
+  std::error_code ec;
+  if (std::filesystem::is_directory(path, ec)) throw InvalidInput(path, "cannot read case file: is a folder");
+  std::ifstream stream(path, std::ios::binary);
+  if (!stream) {
+    const int error = errno;
+    throw InvalidInput(path, "cannot read case file: " + (error != 0 ? std::generic_category().message(error)
+                                                                     : std::string("cannot open")));
+  }
+  std::ostringstream text;
+  text << stream.rdbuf();
+  if (stream.bad()) throw InvalidInput(path, "cannot read case file: read error");
+
+  DuplicateKeyFinder duplicates;
+  json document;
+  try {
+    document = json::parse(text.str(), std::ref(duplicates));
+  } catch (const json::parse_error& e) {
+    throw InvalidInput(path, "not valid JSON: " + stripExceptionPrefix(e.what()));
+  }
+  duplicateProblems = std::move(duplicates.problems);
+  return document;
+}
+
+}  // namespace
+
+engine::Case parseCase(const json& document) {
+  return parseWithProblems(document, {}, "case");
+}
+
+json readCaseDocument(const std::string& path) {
+  std::vector<engine::CaseProblem> duplicates;
+  json document = loadDocument(path, duplicates);
+  if (!duplicates.empty()) throw engine::CaseValidationError(path, std::move(duplicates));
+  return document;
+}
+
+engine::Case readCaseFile(const std::string& path) {
+  std::vector<engine::CaseProblem> duplicates;
+  const json document = loadDocument(path, duplicates);
+  return parseWithProblems(document, std::move(duplicates), path);
+}
+
+}  // namespace cw::io

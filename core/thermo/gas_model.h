@@ -1,0 +1,52 @@
+#pragma once
+// A gas model: the choice, per case, of how the working fluid's properties are computed.
+//
+// It hands out frozen-composition gases (cw::thermo::Gas) for the engine's streams:
+// the incoming air, and the products of burning the case's fuel in that air at a
+// given fuel-air ratio. It also gives the fuel's enthalpy on the same reference as its
+// gases, so that every model's burner energy balance is the single equation
+//
+//   W_air h_air(T_in) + W_fuel h_fuel(T_fuel) - (1 - eta_b) W_fuel LHV = (W_air + W_fuel) h_products(T_out)
+//
+// (an energy balance on the control volume with complete combustion, the fraction
+// 1 - eta_b of the heating value unreleased; Mattingly, Elements of Propulsion, 2006,
+// eq. 7.9 in its constant-cp form). Kinds:
+//   constant-cp        one cp and gamma everywhere; h = cp T (0 K reference), h_fuel = LHV
+//   two-gamma          air values before the burner, product values after; as constant-cp
+//   thermally-perfect  NASA species data, absolute enthalpies with formation enthalpies
+
+#include "thermo/gas.h"
+
+#include <memory>
+#include <string>
+
+namespace cw::thermo {
+
+class GasModel {
+public:
+  virtual ~GasModel() = default;
+
+  /// The model's kind as written in case files: "constant-cp", "two-gamma", "thermally-perfect".
+  virtual std::string kind() const = 0;
+
+  /// The incoming (possibly humid) air.
+  virtual std::shared_ptr<const Gas> air() const = 0;
+
+  /// Products of complete lean combustion of the fuel at fuel-air ratio f (kg fuel per kg air);
+  /// throws cw::InvalidInput for f < 0 or above stoichiometric.
+  virtual std::shared_ptr<const Gas> products(double fuelAirRatio) const = 0;
+
+  /// Enthalpy of the fuel at its delivery temperature, on the gases' reference. [J/kg]
+  virtual double fuelEnthalpy() const = 0;
+
+  /// The fuel's lower heating value at 298.15 K. [J/kg]
+  virtual double lowerHeatingValue() const = 0;
+
+  /// Stoichiometric fuel-air ratio of the fuel in this air. [-]
+  virtual double stoichiometricFuelAirRatio() const = 0;
+
+  /// True when the fuel's mass is left out of the flow (textbook idealisation; simple models only).
+  virtual bool neglectsFuelMass() const { return false; }
+};
+
+}  // namespace cw::thermo
