@@ -7,23 +7,12 @@
 #include "output.h"
 #include "verbs.h"
 
-#include <fstream>
 #include <iomanip>
 #include <ostream>
 
 namespace cw::cli {
 
 namespace {
-
-nlohmann::json loadCaseDocument(const std::string& path) {
-  std::ifstream file(path);
-  if (!file) throw InvalidInput("CASE", "cannot open case file '" + path + "'");
-  try {
-    return nlohmann::json::parse(file);
-  } catch (const nlohmann::json::parse_error& e) {
-    throw InvalidInput("CASE", "'" + path + "' is not valid JSON (" + e.what() + ")");
-  }
-}
 
 void printText(std::ostream& out, const engine::Evaluation& e) {
   const auto& a = e.actual.performance;
@@ -63,7 +52,7 @@ void printText(std::ostream& out, const engine::Evaluation& e) {
 int runEvaluate(const Arguments& args, std::ostream& out) {
   if (args.positional().size() != 1) throw InvalidInput("CASE", "give exactly one case file");
   const Format format = parseFormat(args.text("format").value_or("text"));
-  nlohmann::json document = loadCaseDocument(args.positional().front());
+  nlohmann::json document = io::readCaseDocument(args.positional().front());
   for (const auto& assignment : args.all("set")) io::applySetOverride(document, assignment);
   const engine::Evaluation evaluation = engine::evaluateCase(io::parseCase(document));
   switch (format) {
