@@ -8,6 +8,8 @@ Run from the repository root:  python3 scripts/generate_species_data.py
 """
 import json
 import pathlib
+import shutil
+import subprocess
 
 ROOT = pathlib.Path(__file__).resolve().parent.parent
 DATA = ROOT / "core/thermo/data/nasa7-tm4513.json"
@@ -29,7 +31,9 @@ def main():
         "// edit the JSON file and re-run the script instead of editing this file.",
         "//",
         "// Source: " + data["source"],
+        "//",
         "// Form: " + data["form"],
+        "//",
         "// Units: " + data["units"],
         '#include "thermo/species_data.h"',
         "",
@@ -64,6 +68,8 @@ def main():
         "",
     ]
     OUT.write_text("\n".join(lines))
+    if shutil.which("clang-format"):  # the repository style (.clang-format); the table itself is fenced off
+        subprocess.run(["clang-format", "-i", str(OUT)], check=True)
 
 
 if __name__ == "__main__":

@@ -20,7 +20,7 @@ struct OptionSpec {
 };
 
 class Arguments {
-public:
+ public:
   /// Parses argv-style words against the specs; throws cw::InvalidInput on any problem.
   Arguments(const std::vector<std::string>& words, const std::vector<OptionSpec>& specs);
 
@@ -36,7 +36,7 @@ public:
   /// Words that are not options (e.g. a case file).
   const std::vector<std::string>& positional() const { return positional_; }
 
-private:
+ private:
   std::map<std::string, std::vector<std::string>> values_;
   std::set<std::string> switches_;
   std::vector<std::string> positional_;

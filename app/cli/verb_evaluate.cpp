@@ -19,11 +19,11 @@ void printText(std::ostream& out, const engine::Evaluation& e) {
   const auto& i = e.ideal.performance;
   out << std::fixed;
   auto row = [&](const char* name, const char* unit, double actual, double ideal, int digits) {
-    out << std::left << std::setw(26) << name << std::right << std::setw(14) << std::setprecision(digits) << actual
-        << std::setw(14) << ideal << std::setw(14) << (actual - ideal) << "  " << unit << '\n';
+    out << std::left << std::setw(26) << name << std::right << std::setw(14) << std::setprecision(digits)
+        << actual << std::setw(14) << ideal << std::setw(14) << (actual - ideal) << "  " << unit << '\n';
   };
-  out << std::left << std::setw(26) << "performance" << std::right << std::setw(14) << "with losses" << std::setw(14)
-      << "ideal" << std::setw(14) << "difference" << '\n';
+  out << std::left << std::setw(26) << "performance" << std::right << std::setw(14) << "with losses"
+      << std::setw(14) << "ideal" << std::setw(14) << "difference" << '\n';
   row("net thrust", "N", a.netThrust, i.netThrust, 1);
   row("specific thrust", "N s/kg", a.specificThrust, i.specificThrust, 2);
   row("TSFC", "g/(kN s)", a.thrustSpecificFuelConsumption * 1e6, i.thrustSpecificFuelConsumption * 1e6, 3);
@@ -39,10 +39,11 @@ void printText(std::ostream& out, const engine::Evaluation& e) {
       << "W [kg/s]" << std::setw(11) << "s [J/kg/K]" << std::setw(11) << "A [m^2]" << '\n';
   for (const auto& s : e.actual.stations) {
     out << std::left << std::setw(9) << s.id << std::right << std::setprecision(2) << std::setw(10)
-        << s.totalTemperature << std::setprecision(0) << std::setw(13) << s.totalPressure << std::setprecision(2)
-        << std::setw(10) << s.staticTemperature << std::setprecision(0) << std::setw(13) << s.staticPressure
-        << std::setprecision(3) << std::setw(8) << s.mach << std::setprecision(1) << std::setw(10) << s.velocity
-        << std::setprecision(3) << std::setw(10) << s.massFlow << std::setprecision(2) << std::setw(11) << s.entropy;
+        << s.totalTemperature << std::setprecision(0) << std::setw(13) << s.totalPressure
+        << std::setprecision(2) << std::setw(10) << s.staticTemperature << std::setprecision(0)
+        << std::setw(13) << s.staticPressure << std::setprecision(3) << std::setw(8) << s.mach
+        << std::setprecision(1) << std::setw(10) << s.velocity << std::setprecision(3) << std::setw(10)
+        << s.massFlow << std::setprecision(2) << std::setw(11) << s.entropy;
     if (s.area) out << std::setprecision(5) << std::setw(11) << *s.area;
     out << '\n';
   }
@@ -56,9 +57,15 @@ int runEvaluate(const Arguments& args, std::ostream& out) {
   for (const auto& assignment : args.all("set")) io::applySetOverride(document, assignment);
   const engine::Evaluation evaluation = engine::evaluateCase(io::parseCase(document));
   switch (format) {
-    case Format::Json: out << io::evaluationToJson(evaluation).dump(2) << '\n'; break;
-    case Format::Csv: out << io::stationTableCsv(evaluation.actual); break;
-    case Format::Text: printText(out, evaluation); break;
+    case Format::Json:
+      out << io::evaluationToJson(evaluation).dump(2) << '\n';
+      break;
+    case Format::Csv:
+      out << io::stationTableCsv(evaluation.actual);
+      break;
+    case Format::Text:
+      printText(out, evaluation);
+      break;
   }
   return kExitOk;
 }
@@ -66,12 +73,13 @@ int runEvaluate(const Arguments& args, std::ostream& out) {
 }  // namespace
 
 Verb evaluateVerb() {
-  return {"evaluate",
-          "evaluate a design-point case file with losses and its ideal twin",
-          "CASE.json [--set path.to.key=VALUE ...] [--format json|csv|text]",
-          {{"set", true, "override one input, e.g. --set compressor.pressure_ratio=12 (repeatable)"},
-           {"format", true, "json (stations, performance, sizing, ideal, paths), csv (station table) or text"}},
-          &runEvaluate};
+  return {
+      "evaluate",
+      "evaluate a design-point case file with losses and its ideal twin",
+      "CASE.json [--set path.to.key=VALUE ...] [--format json|csv|text]",
+      {{"set", true, "override one input, e.g. --set compressor.pressure_ratio=12 (repeatable)"},
+       {"format", true, "json (stations, performance, sizing, ideal, paths), csv (station table) or text"}},
+      &runEvaluate};
 }
 
 }  // namespace cw::cli

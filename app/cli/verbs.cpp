@@ -13,9 +13,10 @@ namespace cw::cli {
 Verb atmosphereVerb();
 Verb flowVerb();
 Verb evaluateVerb();
+Verb propertiesVerb();
 
 const std::vector<Verb>& allVerbs() {
-  static const std::vector<Verb> verbs = {atmosphereVerb(), flowVerb(), evaluateVerb()};
+  static const std::vector<Verb> verbs = {atmosphereVerb(), flowVerb(), evaluateVerb(), propertiesVerb()};
   return verbs;
 }
 
@@ -27,7 +28,9 @@ static void printTopHelp(std::ostream& out) {
          "output keys carry their unit in the name. Add --format json for JSON.\n"
          "\n"
          "Verbs:\n";
-  for (const auto& verb : allVerbs()) out << "  " << verb.name << std::string(14 - std::min<std::size_t>(13, verb.name.size()), ' ') << verb.summary << '\n';
+  for (const auto& verb : allVerbs())
+    out << "  " << verb.name << std::string(14 - std::min<std::size_t>(13, verb.name.size()), ' ')
+        << verb.summary << '\n';
   if (allVerbs().empty()) out << "  (none yet)\n";
   out << "\n"
          "Run 'cyclewright-cli VERB --help' for a verb's options.\n"
@@ -39,7 +42,8 @@ static void printTopHelp(std::ostream& out) {
 }
 
 static void printVerbHelp(std::ostream& out, const Verb& verb) {
-  out << "Usage: cyclewright-cli " << verb.name << ' ' << verb.usage << "\n\n" << verb.summary << "\n\nOptions:\n";
+  out << "Usage: cyclewright-cli " << verb.name << ' ' << verb.usage << "\n\n"
+      << verb.summary << "\n\nOptions:\n";
   for (const auto& option : verb.options)
     out << "  --" << option.name << (option.takesValue ? " VALUE" : "") << "\n      " << option.help << '\n';
   out << "  --help\n      show this help\n";
@@ -79,9 +83,11 @@ int runCommandLine(const std::vector<std::string>& words, std::ostream& out, std
     err << "cyclewright-cli " << verb->name << ": " << message << '\n';
     switch (e.code()) {
       case ErrorCode::InvalidInput:
-      case ErrorCode::OutOfRange: return kExitInvalidInput;
+      case ErrorCode::OutOfRange:
+        return kExitInvalidInput;
       case ErrorCode::NotConverged:
-      case ErrorCode::NoSolution: return kExitNoSolution;
+      case ErrorCode::NoSolution:
+        return kExitNoSolution;
     }
     return kExitNoSolution;
   }

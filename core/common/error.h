@@ -12,28 +12,28 @@
 namespace cw {
 
 enum class ErrorCode {
-  InvalidInput,   ///< a value outside its valid range, an unknown name, a malformed file
-  OutOfRange,     ///< a property asked outside the range of the underlying data
-  NotConverged,   ///< an iterative solver did not reach its tolerance
-  NoSolution,     ///< the inputs admit no physical solution (e.g. turbine cannot drive compressor)
+  InvalidInput,  ///< a value outside its valid range, an unknown name, a malformed file
+  OutOfRange,    ///< a property asked outside the range of the underlying data
+  NotConverged,  ///< an iterative solver did not reach its tolerance
+  NoSolution,    ///< the inputs admit no physical solution (e.g. turbine cannot drive compressor)
 };
 
 class Error : public std::runtime_error {
-public:
+ public:
   Error(ErrorCode code, std::string where, std::string message);
 
   ErrorCode code() const noexcept { return code_; }
   /// The input, argument or JSON path the error concerns.
   const std::string& where() const noexcept { return where_; }
 
-private:
+ private:
   ErrorCode code_;
   std::string where_;
 };
 
 /// A value outside its valid range: "<where> = <value> <unit> is outside the valid range <range>".
 class InvalidInput : public Error {
-public:
+ public:
   InvalidInput(std::string where, double value, std::string unit, std::string validRange);
   /// An input that is not a number (unknown name, wrong type): "<where>: <message>".
   InvalidInput(std::string where, std::string message);
@@ -41,19 +41,19 @@ public:
 
 /// A property asked outside the range of its data (e.g. a temperature beyond the polynomials).
 class OutOfRange : public Error {
-public:
+ public:
   OutOfRange(std::string where, double value, std::string unit, std::string validRange);
 };
 
 /// An iterative solver that stopped short of its tolerance.
 class NotConverged : public Error {
-public:
+ public:
   NotConverged(std::string where, int iterations, double residual);
 };
 
 /// Inputs that admit no physical solution; the message says why.
 class NoSolution : public Error {
-public:
+ public:
   NoSolution(std::string where, std::string reason);
 };
 

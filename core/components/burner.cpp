@@ -15,21 +15,25 @@ HeatAddition::HeatAddition(std::string name, const thermo::GasModel& model, doub
 
 namespace {
 /// Mass of the stream per unit of its air: 1 + f, or 1 when the model neglects the fuel's mass.
-double massPerAir(const thermo::GasModel& model, double f) { return model.neglectsFuelMass() ? 1.0 : 1.0 + f; }
+double massPerAir(const thermo::GasModel& model, double f) {
+  return model.neglectsFuelMass() ? 1.0 : 1.0 + f;
+}
 }  // namespace
 
 double HeatAddition::residual(const engine::TotalState& entry, double df, double exitTemperature) const {
   const double f1 = entry.fuelAirRatio;
   const double fuelTerm = model_.fuelEnthalpy() - (1.0 - combustionEfficiency_) * model_.lowerHeatingValue();
-  const double exitEnthalpy = model_.products(f1 + df)->enthalpy(exitTemperature);
-  return massPerAir(model_, f1) * entry.enthalpy + df * fuelTerm - massPerAir(model_, f1 + df) * exitEnthalpy;
+  return massPerAir(model_, f1) * entry.enthalpy + df * fuelTerm -
+         model_.productEnthalpyPerUnitAir(exitTemperature, f1 + df);
 }
 
-HeatAddition::Result HeatAddition::toExitTemperature(const engine::TotalState& entry, double exitTemperature) const {
+HeatAddition::Result HeatAddition::toExitTemperature(const engine::TotalState& entry,
+                                                     double exitTemperature) const {
   const double f1 = entry.fuelAirRatio;
   const double available = model_.stoichiometricFuelAirRatio() - f1;
   if (available <= 0.0)
-    throw NoSolution(name_, "the entering gas holds no oxygen left to burn (fuel-air ratio " + formatNumber(f1) + ")");
+    throw NoSolution(
+        name_, "the entering gas holds no oxygen left to burn (fuel-air ratio " + formatNumber(f1) + ")");
   // Linear in df: two evaluations give the root; secant steps polish it.
   double a = 0.0, b = available;
   double ra = residual(entry, a, exitTemperature), rb = residual(entry, b, exitTemperature);
@@ -46,8 +50,10 @@ HeatAddition::Result HeatAddition::toExitTemperature(const engine::TotalState& e
     }
     const double r = residual(entry, df, exitTemperature);
     if (std::abs(r) <= 1e-12 * (std::abs(entry.enthalpy) + model_.lowerHeatingValue() * df + 1.0)) break;
-    a = b; ra = rb;
-    b = df; rb = r;
+    a = b;
+    ra = rb;
+    b = df;
+    rb = r;
     df = b - rb * (b - a) / (rb - ra);
   }
   return finish(entry, df, exitTemperature);
@@ -64,7 +70,8 @@ HeatAddition::Result HeatAddition::withFuelAirRatio(const engine::TotalState& en
   return finish(entry, df, model_.products(f1 + df)->temperatureFromEnthalpy(exitEnthalpy));
 }
 
-HeatAddition::Result HeatAddition::finish(const engine::TotalState& entry, double df, double exitTemperature) const {
+HeatAddition::Result HeatAddition::finish(const engine::TotalState& entry, double df,
+                                          double exitTemperature) const {
   const double f1 = entry.fuelAirRatio;
   const double airFlow = entry.massFlow / massPerAir(model_, f1);
   Result result;

@@ -16,11 +16,11 @@
 namespace cw::components {
 
 class HeatAddition {
-public:
+ public:
   struct Result {
     engine::TotalState exit;
-    double fuelMassFlow = 0.0;      ///< fuel added here [kg/s]
-    double addedFuelAirRatio = 0.0; ///< df, per unit of the stream's air [-]
+    double fuelMassFlow = 0.0;       ///< fuel added here [kg/s]
+    double addedFuelAirRatio = 0.0;  ///< df, per unit of the stream's air [-]
   };
 
   /// `name` prefixes error messages ("burner", "afterburner").
@@ -33,7 +33,7 @@ public:
   /// Burns the given fuel-air ratio df (per unit of the stream's air).
   Result withFuelAirRatio(const engine::TotalState& entry, double addedFuelAirRatio) const;
 
-private:
+ private:
   double residual(const engine::TotalState& entry, double df, double exitTemperature) const;
   Result finish(const engine::TotalState& entry, double df, double exitTemperature) const;
 

@@ -8,8 +8,8 @@ Compressor::Result Compressor::exit(const engine::TotalState& entry) const {
   engine::TotalState& out = result.exit;
   out.gas = entry.gas;
   out.pressure = entry.pressure * inputs_.pressureRatio;
-  out.temperature = exitTemperature(gas, entry.temperature, entry.pressure, out.pressure, inputs_.efficiency.basis,
-                                    inputs_.efficiency.value);
+  out.temperature = exitTemperature(gas, entry.temperature, entry.pressure, out.pressure,
+                                    inputs_.efficiency.basis, inputs_.efficiency.value);
   out.enthalpy = gas.enthalpy(out.temperature);
   out.fuelAirRatio = entry.fuelAirRatio;
   result.bleedMassFlow = inputs_.bleedFraction * entry.massFlow;

@@ -15,20 +15,20 @@
 namespace cw::components {
 
 class Compressor {
-public:
+ public:
   struct Result {
-    engine::TotalState exit;      ///< station 3, after the bleed
-    double specificWork = 0.0;    ///< ht3 - ht2 [J/kg]
-    double power = 0.0;           ///< W2 (ht3 - ht2) [W]
-    double bleedMassFlow = 0.0;   ///< [kg/s]
-    EfficiencyPair efficiency;    ///< both bases, one given and one derived [-]
+    engine::TotalState exit;     ///< station 3, after the bleed
+    double specificWork = 0.0;   ///< ht3 - ht2 [J/kg]
+    double power = 0.0;          ///< W2 (ht3 - ht2) [W]
+    double bleedMassFlow = 0.0;  ///< [kg/s]
+    EfficiencyPair efficiency;   ///< both bases, one given and one derived [-]
   };
 
   explicit Compressor(const engine::CompressorInputs& inputs) : inputs_(inputs) {}
 
   Result exit(const engine::TotalState& entry) const;
 
-private:
+ private:
   engine::CompressorInputs inputs_;
 };
 

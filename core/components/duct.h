@@ -8,7 +8,7 @@
 namespace cw::components {
 
 class Duct {
-public:
+ public:
   explicit Duct(double pressureLossFraction) : pressureLossFraction_(pressureLossFraction) {}
 
   engine::TotalState exit(const engine::TotalState& entry) const {
@@ -17,7 +17,7 @@ public:
     return out;
   }
 
-private:
+ private:
   double pressureLossFraction_;
 };
 

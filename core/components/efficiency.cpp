@@ -18,8 +18,8 @@ double exitTemperature(const thermo::Gas& gas, double temperature1, double press
   return gas.temperatureFromEnthalpy(h1 + actualWork);
 }
 
-EfficiencyPair efficiencies(const thermo::Gas& gas, double temperature1, double pressure1, double temperature2,
-                            double pressure2) {
+EfficiencyPair efficiencies(const thermo::Gas& gas, double temperature1, double pressure1,
+                            double temperature2, double pressure2) {
   const double lnRatio = std::log(pressure2 / pressure1);
   const double entropyRise = gas.standardEntropy(temperature2) - gas.standardEntropy(temperature1);
   const double h1 = gas.enthalpy(temperature1), h2 = gas.enthalpy(temperature2);
@@ -36,8 +36,8 @@ EfficiencyPair efficiencies(const thermo::Gas& gas, double temperature1, double 
   return pair;
 }
 
-double expansionExitPressure(const thermo::Gas& gas, double temperature1, double pressure1, double temperature2,
-                             EfficiencyBasis basis, double efficiency) {
+double expansionExitPressure(const thermo::Gas& gas, double temperature1, double pressure1,
+                             double temperature2, EfficiencyBasis basis, double efficiency) {
   if (!(efficiency > 0.0 && efficiency <= 1.0)) throw InvalidInput("efficiency", efficiency, "", "(0, 1]");
   const double R = gas.gasConstant();
   const double s1 = gas.standardEntropy(temperature1);

@@ -29,11 +29,11 @@ double exitTemperature(const thermo::Gas& gas, double temperature1, double press
                        EfficiencyBasis basis, double efficiency);
 
 /// Both efficiencies of a change from (T1, p1) to (T2, p2); unit efficiencies for p2 = p1.
-EfficiencyPair efficiencies(const thermo::Gas& gas, double temperature1, double pressure1, double temperature2,
-                            double pressure2);
+EfficiencyPair efficiencies(const thermo::Gas& gas, double temperature1, double pressure1,
+                            double temperature2, double pressure2);
 
 /// Exit pressure of an expansion from (T1, p1) that ends at temperature T2 < T1. [Pa]
-double expansionExitPressure(const thermo::Gas& gas, double temperature1, double pressure1, double temperature2,
-                             EfficiencyBasis basis, double efficiency);
+double expansionExitPressure(const thermo::Gas& gas, double temperature1, double pressure1,
+                             double temperature2, EfficiencyBasis basis, double efficiency);
 
 }  // namespace cw::components

@@ -23,9 +23,10 @@ engine::TotalState Inlet::exit(const engine::Station& freeStream) const {
     const double h0 = gas.enthalpy(freeStream.staticTemperature);
     const double h2s = h0 + inputs_.loss * (freeStream.totalEnthalpy - h0);
     const double isentropicT = gas.temperatureFromEnthalpy(h2s);
-    recoveredPressure = freeStream.staticPressure *
-                        std::exp((gas.standardEntropy(isentropicT) - gas.standardEntropy(freeStream.staticTemperature)) /
-                                 gas.gasConstant());
+    recoveredPressure =
+        freeStream.staticPressure *
+        std::exp((gas.standardEntropy(isentropicT) - gas.standardEntropy(freeStream.staticTemperature)) /
+                 gas.gasConstant());
   }
   if (inputs_.supersonicRecoveryRule == engine::SupersonicRecoveryRule::MilE5008B)
     recoveredPressure *= supersonicRecovery(freeStream.mach);

@@ -18,7 +18,7 @@
 namespace cw::components {
 
 class Inlet {
-public:
+ public:
   explicit Inlet(const engine::InletInputs& inputs);
 
   /// Total state at the engine face (station 2) from the free stream (station 0).
@@ -27,7 +27,7 @@ public:
   /// The MIL-E-5008B supersonic recovery at flight Mach number M0 (1 at or below Mach 1). [-]
   static double supersonicRecovery(double mach);
 
-private:
+ private:
   engine::InletInputs inputs_;
 };
 

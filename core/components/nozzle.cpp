@@ -55,9 +55,10 @@ Nozzle::Result Nozzle::expand(const engine::TotalState& entry, double ambientPre
         const IdealExpansion e = idealExpansion(entry, p);
         return e.density * e.velocity - target;
       };
-      exitPressure = fixed->exitToThroatAreaRatio == 1.0
-                         ? pStar
-                         : flow::findRoot(flux, pStar * 1e-6, pStar, "nozzle: exit pressure for the area ratio");
+      exitPressure =
+          fixed->exitToThroatAreaRatio == 1.0
+              ? pStar
+              : flow::findRoot(flux, pStar * 1e-6, pStar, "nozzle: exit pressure for the area ratio");
     }
   }
 
@@ -72,9 +73,10 @@ Nozzle::Result Nozzle::expand(const engine::TotalState& entry, double ambientPre
     st.velocity = cv * ideal.velocity;
     st.staticTemperature = gas.temperatureFromEnthalpy(entry.enthalpy - 0.5 * st.velocity * st.velocity);
     // The total pressure that the actual static state and velocity stand for (isentropic stagnation).
-    st.totalPressure = pressure * std::exp((gas.standardEntropy(entry.temperature) -
-                                            gas.standardEntropy(st.staticTemperature)) /
-                                           gas.gasConstant());
+    st.totalPressure =
+        pressure *
+        std::exp((gas.standardEntropy(entry.temperature) - gas.standardEntropy(st.staticTemperature)) /
+                 gas.gasConstant());
     st.mach = st.velocity / gas.speedOfSound(st.staticTemperature);
     st.massFlow = entry.massFlow;
     st.fuelAirRatio = entry.fuelAirRatio;
@@ -88,8 +90,10 @@ Nozzle::Result Nozzle::expand(const engine::TotalState& entry, double ambientPre
   (void)throatEffectiveArea;
   result.throat = throat;
   result.exit = exit;
-  result.grossThrust = exit.massFlow * exit.velocity + (exit.staticPressure - ambientPressure) * exitEffectiveArea;
-  result.efficiency = efficiencies(gas, entry.temperature, entry.pressure, exit.staticTemperature, exitPressure);
+  result.grossThrust =
+      exit.massFlow * exit.velocity + (exit.staticPressure - ambientPressure) * exitEffectiveArea;
+  result.efficiency =
+      efficiencies(gas, entry.temperature, entry.pressure, exit.staticTemperature, exitPressure);
   return result;
 }
 

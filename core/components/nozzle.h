@@ -23,11 +23,11 @@
 namespace cw::components {
 
 class Nozzle {
-public:
+ public:
   struct Result {
-    engine::Station throat;   ///< station 8, area = geometric throat area
-    engine::Station exit;     ///< station 9, area = geometric exit area
-    double grossThrust = 0.0; ///< [N]
+    engine::Station throat;    ///< station 8, area = geometric throat area
+    engine::Station exit;      ///< station 9, area = geometric exit area
+    double grossThrust = 0.0;  ///< [N]
     bool choked = false;
     double velocityCoefficient = 1.0;  ///< C_V [-]
     EfficiencyPair efficiency;         ///< eta_n on both bases (polytropic over the expansion) [-]
@@ -38,7 +38,7 @@ public:
   /// Expands the stream at station 7 against the ambient static pressure p0. [Pa]
   Result expand(const engine::TotalState& entry, double ambientPressure) const;
 
-private:
+ private:
   engine::NozzleInputs inputs_;
 };
 

@@ -14,7 +14,8 @@ Turbine::Result Turbine::exit(const engine::TotalState& entry, double compressor
   const char* why = "the turbine cannot drive the compressor";
   if (!(exitEnthalpy > gas.enthalpy(gas.minimumTemperature())))
     throw NoSolution("turbine", std::string(why) + ": it would need " + formatNumber(specificWork) +
-                                    " J/kg, more than the gas at " + formatNumber(entry.temperature) + " K holds");
+                                    " J/kg, more than the gas at " + formatNumber(entry.temperature) +
+                                    " K holds");
   Result result;
   engine::TotalState& out = result.exit;
   out.gas = entry.gas;
@@ -24,11 +25,12 @@ Turbine::Result Turbine::exit(const engine::TotalState& entry, double compressor
     out.pressure = expansionExitPressure(gas, entry.temperature, entry.pressure, out.temperature,
                                          inputs_.efficiency.basis, inputs_.efficiency.value);
   } catch (const OutOfRange&) {
-    throw NoSolution("turbine", std::string(why) + ": the isentropic expansion for " + formatNumber(specificWork) +
-                                    " J/kg leaves the range of the gas data");
+    throw NoSolution("turbine", std::string(why) + ": the isentropic expansion for " +
+                                    formatNumber(specificWork) + " J/kg leaves the range of the gas data");
   }
   if (!(out.pressure > 0.0) || !std::isfinite(out.pressure))
-    throw NoSolution("turbine", std::string(why) + ": no exit pressure gives " + formatNumber(specificWork) + " J/kg");
+    throw NoSolution("turbine",
+                     std::string(why) + ": no exit pressure gives " + formatNumber(specificWork) + " J/kg");
   out.massFlow = entry.massFlow;
   out.fuelAirRatio = entry.fuelAirRatio;
   result.specificWork = specificWork;

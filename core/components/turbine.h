@@ -9,14 +9,14 @@
 // falls below what the gas data cover, or its expansion ratio becomes unphysical) the
 // result is cw::NoSolution: "the turbine cannot drive the compressor".
 
+#include "components/efficiency.h"
 #include "engine/case_inputs.h"
 #include "engine/station.h"
-#include "components/efficiency.h"
 
 namespace cw::components {
 
 class Turbine {
-public:
+ public:
   struct Result {
     engine::TotalState exit;    ///< station 5
     double specificWork = 0.0;  ///< ht4 - ht5 [J/kg]
@@ -29,7 +29,7 @@ public:
   /// Expands the stream so that it delivers the compressor power plus the offtake. [W]
   Result exit(const engine::TotalState& entry, double compressorPower) const;
 
-private:
+ private:
   engine::TurbineInputs inputs_;
 };
 

@@ -13,44 +13,44 @@
 namespace cw::engine {
 
 struct Performance {
-  double netThrust = 0.0;             ///< F_n = F_g - D_ram [N]
-  double grossThrust = 0.0;           ///< W9 V9 + (p9 - p0) A9 [N]
-  double ramDrag = 0.0;               ///< W0 V0 [N]
-  double specificThrust = 0.0;        ///< F_n / W2, per unit inlet air flow [N s/kg]
+  double netThrust = 0.0;                      ///< F_n = F_g - D_ram [N]
+  double grossThrust = 0.0;                    ///< W9 V9 + (p9 - p0) A9 [N]
+  double ramDrag = 0.0;                        ///< W0 V0 [N]
+  double specificThrust = 0.0;                 ///< F_n / W2, per unit inlet air flow [N s/kg]
   double thrustSpecificFuelConsumption = 0.0;  ///< W_f / F_n [kg/(N s)]; 0 when F_n <= 0
-  double fuelFlow = 0.0;              ///< burner plus afterburner [kg/s]
-  double fuelAirRatio = 0.0;          ///< total fuel per unit of burner air flow W3 [-]
-  double thermalEfficiency = 0.0;     ///< (delta KE + P_x) / (W_f LHV) [-]
-  double propulsiveEfficiency = 0.0;  ///< F_n V0 / delta KE [-]
-  double overallEfficiency = 0.0;     ///< F_n V0 / (W_f LHV) [-]
-  double jetVelocity = 0.0;           ///< V9 [m/s]
-  double effectiveJetVelocity = 0.0;  ///< F_g / W9 [m/s]
+  double fuelFlow = 0.0;                       ///< burner plus afterburner [kg/s]
+  double fuelAirRatio = 0.0;                   ///< total fuel per unit of burner air flow W3 [-]
+  double thermalEfficiency = 0.0;              ///< (delta KE + P_x) / (W_f LHV) [-]
+  double propulsiveEfficiency = 0.0;           ///< F_n V0 / delta KE [-]
+  double overallEfficiency = 0.0;              ///< F_n V0 / (W_f LHV) [-]
+  double jetVelocity = 0.0;                    ///< V9 [m/s]
+  double effectiveJetVelocity = 0.0;           ///< F_g / W9 [m/s]
   bool nozzleChoked = false;
 };
 
 struct Sizing {
-  double airMassFlow = 0.0;               ///< W2 [kg/s]
-  std::optional<double> captureArea;      ///< A0 = W2 / (rho0 V0); undefined at V0 = 0 [m^2]
-  double engineFaceArea = 0.0;            ///< annulus area at the face Mach number [m^2]
-  double engineFaceDiameter = 0.0;        ///< tip diameter of that annulus [m]
-  double throatArea = 0.0;                ///< geometric A8 = effective / C_d [m^2]
-  double exitArea = 0.0;                  ///< geometric A9 [m^2]
-  double fuelFlow = 0.0;                  ///< [kg/s]
+  double airMassFlow = 0.0;           ///< W2 [kg/s]
+  std::optional<double> captureArea;  ///< A0 = W2 / (rho0 V0); undefined at V0 = 0 [m^2]
+  double engineFaceArea = 0.0;        ///< annulus area at the face Mach number [m^2]
+  double engineFaceDiameter = 0.0;    ///< tip diameter of that annulus [m]
+  double throatArea = 0.0;            ///< geometric A8 = effective / C_d [m^2]
+  double exitArea = 0.0;              ///< geometric A9 [m^2]
+  double fuelFlow = 0.0;              ///< [kg/s]
 };
 
 /// What each component did, for reports and the loss audit.
 struct ComponentSummary {
-  std::string component;          ///< "inlet", "compressor", ...
-  double power = 0.0;             ///< shaft power absorbed (+) or delivered (-) [W]; 0 if none
+  std::string component;  ///< "inlet", "compressor", ...
+  double power = 0.0;     ///< shaft power absorbed (+) or delivered (-) [W]; 0 if none
   std::optional<components::EfficiencyPair> efficiency;  ///< turbomachines and nozzle [-]
-  double entropyGeneration = 0.0; ///< S_gen [W/K], rate of entropy generated in the component
+  double entropyGeneration = 0.0;  ///< S_gen [W/K], rate of entropy generated in the component
 };
 
 struct CycleResult {
-  std::vector<Station> stations;        ///< in flow order: 0, 2, 3, 4, 5, (6), 7, 8, 9
+  std::vector<Station> stations;  ///< in flow order: 0, 2, 3, 4, 5, (6), 7, 8, 9
   Performance performance;
   Sizing sizing;
-  std::vector<ProcessPath> paths;       ///< one per process, plus the closure
+  std::vector<ProcessPath> paths;  ///< one per process, plus the closure
   std::vector<ComponentSummary> components;
 
   /// The station with the given SAE number; throws std::out_of_range when absent.

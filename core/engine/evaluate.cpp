@@ -6,13 +6,14 @@
 
 namespace cw::engine {
 
-Evaluation evaluateCase(const Case& inputs) {
+Evaluation evaluateCase(const Case& inputs, bool withPaths) {
   requireValidCase(inputs);
   Evaluation evaluation;
-  evaluation.actual = Turbojet(inputs).evaluate();
+  evaluation.actual = Turbojet(inputs, withPaths).evaluate();
   const double burnerExitTemperature = evaluation.actual.station("4").totalTemperature;
-  const Case twin = analysis::idealTwinOf(inputs, burnerExitTemperature, evaluation.actual.sizing.airMassFlow);
-  evaluation.ideal = Turbojet(twin).evaluate();
+  const Case twin =
+      analysis::idealTwinOf(inputs, burnerExitTemperature, evaluation.actual.sizing.airMassFlow);
+  evaluation.ideal = Turbojet(twin, withPaths).evaluate();
   return evaluation;
 }
 

@@ -8,6 +8,7 @@
 namespace cw::engine {
 
 /// Throws cw::engine::CaseValidationError (invalid input) or cw::NoSolution / cw::NotConverged.
-Evaluation evaluateCase(const Case& inputs);
+/// withPaths = false skips the process paths (only the charts draw them).
+Evaluation evaluateCase(const Case& inputs, bool withPaths = true);
 
 }  // namespace cw::engine

@@ -18,10 +18,11 @@ struct PathState {
 
 /// The states a process passes through, from its entry station to its exit station.
 struct ProcessPath {
-  std::string component;  ///< "inlet", "compressor", "burner", "turbine", "jet_pipe", "afterburner", "nozzle", "closure"
+  std::string component;  ///< "inlet", "compressor", "burner", "turbine", "jet_pipe", "afterburner",
+                          ///< "nozzle", "closure"
   std::string fromStation;
   std::string toStation;
-  bool closure = false;   ///< true for the open-cycle closure from exhaust to ambient (drawn dashed)
+  bool closure = false;  ///< true for the open-cycle closure from exhaust to ambient (drawn dashed)
   std::vector<PathState> states;
 };
 

@@ -10,7 +10,9 @@ PathState stateOf(const thermo::Gas& gas, double T, double p, double entropyRefe
   return {T, gas.entropy(T, p) - entropyReference, p, gas.gasConstant() * T / p, gas.enthalpy(T)};
 }
 
-double lerp(double a, double b, double x) { return a + (b - a) * x; }
+double lerp(double a, double b, double x) {
+  return a + (b - a) * x;
+}
 
 }  // namespace
 
@@ -31,18 +33,17 @@ ProcessPath pressurePath(std::string component, std::string from, std::string to
 }
 
 ProcessPath heatingPath(std::string component, std::string from, std::string to, const thermo::Gas& entryGas,
-                        const thermo::GasModel& model, double f1, double f2, double t1, double p1, double t2,
-                        double p2, double entropyReference) {
+                        const thermo::Gas& exitGas, double t1, double p1, double t2, double p2,
+                        double entropyReference) {
   ProcessPath path{std::move(component), std::move(from), std::move(to), false, {}};
   path.states.reserve(kPathStates);
   for (int i = 0; i < kPathStates; ++i) {
     const double x = double(i) / (kPathStates - 1);
     const double T = lerp(t1, t2, x), p = lerp(p1, p2, x);
-    if (i == 0) {
-      path.states.push_back(stateOf(entryGas, T, p, entropyReference));
-    } else {
-      path.states.push_back(stateOf(*model.products(lerp(f1, f2, x)), T, p, entropyReference));
-    }
+    const PathState a = stateOf(entryGas, T, p, entropyReference),
+                    b = stateOf(exitGas, T, p, entropyReference);
+    path.states.push_back({T, lerp(a.entropy, b.entropy, x), p, lerp(a.specificVolume, b.specificVolume, x),
+                           lerp(a.enthalpy, b.enthalpy, x)});
   }
   return path;
 }
@@ -57,7 +58,8 @@ ProcessPath closurePath(const thermo::Gas& exhaustGas, double t9, double p9, dou
     const double x = double(i) / (kPathStates - 1);
     const double T = lerp(t9, t0, x), p = std::exp(lerp(std::log(p9), std::log(p0), x));
     const double R = lerp(exhaustGas.gasConstant(), air.gasConstant(), x);
-    path.states.push_back({T, lerp(first.entropy, last.entropy, x), p, R * T / p, lerp(first.enthalpy, last.enthalpy, x)});
+    path.states.push_back(
+        {T, lerp(first.entropy, last.entropy, x), p, R * T / p, lerp(first.enthalpy, last.enthalpy, x)});
   }
   return path;
 }

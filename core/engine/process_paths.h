@@ -6,13 +6,13 @@
 //                 Mattingly, Elements of Propulsion, 2006, sec. 4.3.4); used for the inlet,
 //                 compressor, turbine, ducts and nozzle.
 //   heatingPath   the burner: pressure falling linearly from entry to exit, temperature rising
-//                 linearly, the gas's fuel-air ratio growing in step (a drawing convention).
+//                 linearly, and the properties blended linearly from those of the entry gas to
+//                 those of the exit gas at the same (T, p) (a drawing convention, exact at both ends).
 //   closurePath   the open cycle's return from exhaust to the free-stream static state at
 //                 ambient pressure: temperature and ln p linear, entropy linear (drawn dashed).
 
 #include "engine/process_path.h"
 #include "thermo/gas.h"
-#include "thermo/gas_model.h"
 
 namespace cw::engine {
 
@@ -22,8 +22,8 @@ ProcessPath pressurePath(std::string component, std::string from, std::string to
                          double t1, double p1, double t2, double p2, double entropyReference);
 
 ProcessPath heatingPath(std::string component, std::string from, std::string to, const thermo::Gas& entryGas,
-                        const thermo::GasModel& model, double f1, double f2, double t1, double p1, double t2,
-                        double p2, double entropyReference);
+                        const thermo::Gas& exitGas, double t1, double p1, double t2, double p2,
+                        double entropyReference);
 
 ProcessPath closurePath(const thermo::Gas& exhaustGas, double t9, double p9, double t0, double p0,
                         double entropyReference, const thermo::Gas& air);

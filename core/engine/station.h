@@ -10,19 +10,19 @@
 namespace cw::engine {
 
 struct Station {
-  std::string id;                      ///< SAE AS755 station number, e.g. "0", "2", "3", "4", "5", "7", "8", "9"
+  std::string id;  ///< SAE AS755 station number, e.g. "0", "2", "3", "4", "5", "7", "8", "9"
   std::shared_ptr<const thermo::Gas> gas;  ///< the gas of the stream at this station
-  double totalTemperature = 0.0;       ///< Tt [K]
-  double totalPressure = 0.0;          ///< pt [Pa]
-  double totalEnthalpy = 0.0;          ///< ht [J/kg], on the gas model's reference
-  double staticTemperature = 0.0;      ///< Ts [K]
-  double staticPressure = 0.0;         ///< ps [Pa]
-  double mach = 0.0;                   ///< M [-]
-  double velocity = 0.0;               ///< V [m/s]
-  double massFlow = 0.0;               ///< W [kg/s], air plus fuel unless the model neglects fuel mass
-  double fuelAirRatio = 0.0;           ///< f [-], fuel per unit of the stream's air
-  double entropy = 0.0;                ///< s [J/(kg K)], zero at the free-stream static state
-  std::optional<double> area;          ///< flow area [m^2] where defined (capture, face, throat, exit)
+  double totalTemperature = 0.0;           ///< Tt [K]
+  double totalPressure = 0.0;              ///< pt [Pa]
+  double totalEnthalpy = 0.0;              ///< ht [J/kg], on the gas model's reference
+  double staticTemperature = 0.0;          ///< Ts [K]
+  double staticPressure = 0.0;             ///< ps [Pa]
+  double mach = 0.0;                       ///< M [-]
+  double velocity = 0.0;                   ///< V [m/s]
+  double massFlow = 0.0;                   ///< W [kg/s], air plus fuel unless the model neglects fuel mass
+  double fuelAirRatio = 0.0;               ///< f [-], fuel per unit of the stream's air
+  double entropy = 0.0;                    ///< s [J/(kg K)], zero at the free-stream static state
+  std::optional<double> area;              ///< flow area [m^2] where defined (capture, face, throat, exit)
 
   /// cp and gamma at the total temperature. [J/(kg K)], [-]
   double cp() const { return gas->cp(totalTemperature); }
@@ -32,11 +32,11 @@ struct Station {
 /// A stream's total state: the part of a station that a component changes.
 struct TotalState {
   std::shared_ptr<const thermo::Gas> gas;
-  double temperature = 0.0;  ///< Tt [K]
-  double pressure = 0.0;     ///< pt [Pa]
-  double enthalpy = 0.0;     ///< ht [J/kg]
-  double massFlow = 0.0;     ///< W [kg/s]
-  double fuelAirRatio = 0.0; ///< f [-]
+  double temperature = 0.0;   ///< Tt [K]
+  double pressure = 0.0;      ///< pt [Pa]
+  double enthalpy = 0.0;      ///< ht [J/kg]
+  double massFlow = 0.0;      ///< W [kg/s]
+  double fuelAirRatio = 0.0;  ///< f [-]
 };
 
 }  // namespace cw::engine

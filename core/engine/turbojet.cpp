@@ -35,8 +35,10 @@ FreeStream freeStreamOf(const FlightInputs& flight) {
   return fs;
 }
 
-Turbojet::Turbojet(const Case& inputs)
-    : inputs_(inputs), gasModel_(thermo::makeGasModel(inputs.gasModel, inputs.fuel, inputs.flight.specificHumidity)) {}
+Turbojet::Turbojet(const Case& inputs, bool withPaths)
+    : inputs_(inputs),
+      withPaths_(withPaths),
+      gasModel_(thermo::makeGasModel(inputs.gasModel, inputs.fuel, inputs.flight.specificHumidity)) {}
 
 namespace {
 
@@ -54,7 +56,9 @@ Station stationAtRest(const std::string& id, const TotalState& t, double entropy
   return s;
 }
 
-double entropyRate(const Station& in, const Station& out) { return out.massFlow * (out.entropy - in.entropy); }
+double entropyRate(const Station& in, const Station& out) {
+  return out.massFlow * (out.entropy - in.entropy);
+}
 
 }  // namespace
 
@@ -84,7 +88,8 @@ CycleResult Turbojet::evaluateAt(double airMassFlow) const {
   // 2: engine face, at the sizing Mach number.
   const TotalState t2 = components::Inlet(inputs_.inlet).exit(s0);
   Station s2 = stationAtRest("2", t2, entropyReference);
-  const flow::FlowState face = flow::fromTotal(*air, t2.temperature, t2.pressure, inputs_.sizing.engineFaceMach);
+  const flow::FlowState face =
+      flow::fromTotal(*air, t2.temperature, t2.pressure, inputs_.sizing.engineFaceMach);
   s2.staticTemperature = face.local.temperature;
   s2.staticPressure = face.local.pressure;
   s2.mach = face.mach;
@@ -117,7 +122,8 @@ CycleResult Turbojet::evaluateAt(double airMassFlow) const {
   double afterburnerFuel = 0.0;
   if (inputs_.afterburner.enabled) {
     s6 = stationAtRest("6", t7, entropyReference);
-    const components::HeatAddition afterburner("afterburner", model, inputs_.afterburner.pressureLossFractionLit,
+    const components::HeatAddition afterburner("afterburner", model,
+                                               inputs_.afterburner.pressureLossFractionLit,
                                                inputs_.afterburner.combustionEfficiency);
     const auto reheat = afterburner.toExitTemperature(t7, inputs_.afterburner.exitTemperature);
     t7 = reheat.exit;
@@ -178,40 +184,42 @@ CycleResult Turbojet::evaluateAt(double airMassFlow) const {
       {"nozzle", 0.0, jet.efficiency, entropyRate(s7, s9)},
   };
   if (s6) {
-    const double abLoss = s7.massFlow * s7.gas->gasConstant() * std::log(s6->totalPressure / s7.totalPressure);
+    const double abLoss =
+        s7.massFlow * s7.gas->gasConstant() * std::log(s6->totalPressure / s7.totalPressure);
     result.components.insert(result.components.end() - 1, {"afterburner", 0.0, std::nullopt, abLoss});
   }
 
+  result.stations = {s0, s2, s3, s4, s5};
+  if (s6) result.stations.push_back(*s6);
+  result.stations.insert(result.stations.end(), {s7, s8, s9});
+  if (!withPaths_) return result;
+
   // Process paths.
   auto& paths = result.paths;
-  paths.push_back(pressurePath("inlet", "0", "2", *air, s0.staticTemperature, s0.staticPressure, s2.totalTemperature,
-                               s2.totalPressure, entropyReference));
+  paths.push_back(pressurePath("inlet", "0", "2", *air, s0.staticTemperature, s0.staticPressure,
+                               s2.totalTemperature, s2.totalPressure, entropyReference));
   paths.push_back(pressurePath("compressor", "2", "3", *air, s2.totalTemperature, s2.totalPressure,
                                s3.totalTemperature, s3.totalPressure, entropyReference));
-  paths.push_back(heatingPath("burner", "3", "4", *s3.gas, model, 0.0, s4.fuelAirRatio, s3.totalTemperature,
-                              s3.totalPressure, s4.totalTemperature, s4.totalPressure, entropyReference));
+  paths.push_back(heatingPath("burner", "3", "4", *s3.gas, *s4.gas, s3.totalTemperature, s3.totalPressure,
+                              s4.totalTemperature, s4.totalPressure, entropyReference));
   paths.push_back(pressurePath("turbine", "4", "5", *s4.gas, s4.totalTemperature, s4.totalPressure,
                                s5.totalTemperature, s5.totalPressure, entropyReference));
   const Station& jetPipeEnd = s6 ? *s6 : s7;
   paths.push_back(pressurePath("jet_pipe", "5", jetPipeEnd.id, *s5.gas, s5.totalTemperature, s5.totalPressure,
                                jetPipeEnd.totalTemperature, jetPipeEnd.totalPressure, entropyReference));
   if (s6)
-    paths.push_back(heatingPath("afterburner", "6", "7", *s6->gas, model, s6->fuelAirRatio, s7.fuelAirRatio,
-                                s6->totalTemperature, s6->totalPressure, s7.totalTemperature, s7.totalPressure,
-                                entropyReference));
+    paths.push_back(heatingPath("afterburner", "6", "7", *s6->gas, *s7.gas, s6->totalTemperature,
+                                s6->totalPressure, s7.totalTemperature, s7.totalPressure, entropyReference));
   paths.push_back(pressurePath("nozzle", "7", "9", *s7.gas, s7.totalTemperature, s7.totalPressure,
                                s9.staticTemperature, s9.staticPressure, entropyReference));
-  paths.push_back(
-      closurePath(*s9.gas, s9.staticTemperature, s9.staticPressure, fs.temperature, fs.pressure, entropyReference, *air));
-
-  result.stations = {s0, s2, s3, s4, s5};
-  if (s6) result.stations.push_back(*s6);
-  result.stations.insert(result.stations.end(), {s7, s8, s9});
+  paths.push_back(closurePath(*s9.gas, s9.staticTemperature, s9.staticPressure, fs.temperature, fs.pressure,
+                              entropyReference, *air));
   return result;
 }
 
 CycleResult Turbojet::evaluate() const {
-  if (const auto* flow = std::get_if<AirMassFlowTarget>(&inputs_.design.target)) return evaluateAt(flow->airMassFlow);
+  if (const auto* flow = std::get_if<AirMassFlowTarget>(&inputs_.design.target))
+    return evaluateAt(flow->airMassFlow);
   const double required = std::get<NetThrustTarget>(inputs_.design.target).netThrust;
   // Net thrust rises with air mass flow (linearly but for the fixed power offtake): secant
   // iteration on W2 from a first guess at 10 kg/s, to 1e-12 relative in thrust.

@@ -18,9 +18,10 @@
 namespace cw::engine {
 
 class Turbojet {
-public:
-  /// Builds the gas model and the components of a validated case.
-  explicit Turbojet(const Case& inputs);
+ public:
+  /// Builds the gas model and the components of a validated case. Without paths, the
+  /// evaluation skips the process paths that only the charts need (sweeps, audits).
+  explicit Turbojet(const Case& inputs, bool withPaths = true);
 
   /// Evaluates the design point: at the case's air mass flow, or at the air mass flow that
   /// gives the required net thrust. Throws cw::NoSolution when no cycle exists.
@@ -31,9 +32,10 @@ public:
 
   const thermo::GasModel& gasModel() const { return *gasModel_; }
 
-private:
+ private:
   Case inputs_;
-  std::unique_ptr<thermo::GasModel> gasModel_;
+  bool withPaths_;
+  std::shared_ptr<const thermo::GasModel> gasModel_;
 };
 
 /// The free-stream static state and speed of the case's flight condition.

@@ -9,8 +9,8 @@ namespace cw::io {
 
 const std::vector<std::string>& stationColumns() {
   static const std::vector<std::string> columns = {
-      "id",          "Tt_K",          "pt_Pa",         "Ts_K",  "ps_Pa",  "mach", "V_m_per_s", "W_kg_per_s",
-      "fuel_air_ratio", "ht_J_per_kg", "s_J_per_kg_K", "cp_J_per_kg_K", "gamma", "area_m2"};
+      "id",         "Tt_K",           "pt_Pa",       "Ts_K",         "ps_Pa",         "mach",  "V_m_per_s",
+      "W_kg_per_s", "fuel_air_ratio", "ht_J_per_kg", "s_J_per_kg_K", "cp_J_per_kg_K", "gamma", "area_m2"};
   return columns;
 }
 
@@ -60,7 +60,8 @@ nlohmann::json cycleToJson(const engine::CycleResult& r, bool withPaths) {
   if (z.captureArea) j["sizing"]["inlet_capture_area_m2"] = *z.captureArea;
   j["components"] = nlohmann::json::array();
   for (const auto& c : r.components) {
-    nlohmann::json cj = {{"component", c.component}, {"power_W", c.power},
+    nlohmann::json cj = {{"component", c.component},
+                         {"power_W", c.power},
                          {"entropy_generation_W_per_K", c.entropyGeneration}};
     if (c.efficiency) {
       cj["isentropic_efficiency"] = c.efficiency->isentropic;
@@ -71,8 +72,11 @@ nlohmann::json cycleToJson(const engine::CycleResult& r, bool withPaths) {
   if (withPaths) {
     j["paths"] = nlohmann::json::array();
     for (const auto& path : r.paths) {
-      nlohmann::json pj = {{"component", path.component}, {"from", path.fromStation}, {"to", path.toStation},
-                           {"closure", path.closure}, {"states", nlohmann::json::array()}};
+      nlohmann::json pj = {{"component", path.component},
+                           {"from", path.fromStation},
+                           {"to", path.toStation},
+                           {"closure", path.closure},
+                           {"states", nlohmann::json::array()}};
       for (const auto& st : path.states)
         pj["states"].push_back({{"T_K", st.temperature},
                                 {"s_J_per_kg_K", st.entropy},

@@ -5,8 +5,9 @@
 namespace cw::thermo {
 
 CaloricallyPerfectModel::CaloricallyPerfectModel(std::string kind, std::shared_ptr<const ConstantCpGas> cold,
-                                                 std::shared_ptr<const ConstantCpGas> hot, double lowerHeatingValue,
-                                                 double stoichiometricFuelAirRatio, bool neglectFuelMass)
+                                                 std::shared_ptr<const ConstantCpGas> hot,
+                                                 double lowerHeatingValue, double stoichiometricFuelAirRatio,
+                                                 bool neglectFuelMass)
     : kind_(std::move(kind)),
       cold_(std::move(cold)),
       hot_(std::move(hot)),

@@ -16,7 +16,7 @@
 namespace cw::thermo {
 
 class CaloricallyPerfectModel : public GasModel {
-public:
+ public:
   /// kind is "constant-cp" or "two-gamma"; for constant-cp pass the same gas twice.
   CaloricallyPerfectModel(std::string kind, std::shared_ptr<const ConstantCpGas> cold,
                           std::shared_ptr<const ConstantCpGas> hot, double lowerHeatingValue,
@@ -30,7 +30,7 @@ public:
   double stoichiometricFuelAirRatio() const override { return stoichiometric_; }
   bool neglectsFuelMass() const override { return neglectFuelMass_; }
 
-private:
+ private:
   std::string kind_;
   std::shared_ptr<const ConstantCpGas> cold_, hot_;
   double lowerHeatingValue_;

@@ -28,16 +28,18 @@ double oxygenLeft(double carbon, double hydrogen, double oxygen) {
 
 double stoichiometricFuelAirRatio(const Composition& air, const HydrocarbonFuel& fuel) {
   checkElements(air);
-  // f_st = (b_O - 2 b_C - b_H/2) / ((2 + y/2) / M_f): the fuel takes (1 + y/4) O2 = (2 + y/2) O atoms per mole.
-  const double spareOxygenAtoms = 2.0 * oxygenLeft(air.elementMolesPerKilogram("C"), air.elementMolesPerKilogram("H"),
-                                                   air.elementMolesPerKilogram("O"));
+  // f_st = (b_O - 2 b_C - b_H/2) / ((2 + y/2) / M_f): the fuel takes (1 + y/4) O2 = (2 + y/2) O atoms per
+  // mole.
+  const double spareOxygenAtoms =
+      2.0 * oxygenLeft(air.elementMolesPerKilogram("C"), air.elementMolesPerKilogram("H"),
+                       air.elementMolesPerKilogram("O"));
   if (!(spareOxygenAtoms > 0.0))
     throw InvalidInput("combustion air", "holds no free oxygen (" + air.summary() + ")");
   return spareOxygenAtoms / (2.0 * fuel.oxygenDemand());
 }
 
-Composition completeCombustionProducts(const Composition& air, const HydrocarbonFuel& fuel, double fuelAirRatio,
-                                       const std::string& where) {
+Composition completeCombustionProducts(const Composition& air, const HydrocarbonFuel& fuel,
+                                       double fuelAirRatio, const std::string& where) {
   const double stoichiometric = stoichiometricFuelAirRatio(air, fuel);
   if (!std::isfinite(fuelAirRatio) || fuelAirRatio < 0.0 || fuelAirRatio > stoichiometric)
     throw InvalidInput(where, fuelAirRatio, "", "[0, " + formatNumber(stoichiometric) + "]");
@@ -51,8 +53,8 @@ Composition completeCombustionProducts(const Composition& air, const Hydrocarbon
   // At f = f_st rounding may leave -1e-17 mol of O2: clamp to zero.
   const double o2 = std::max(0.0, oxygenLeft(carbon, hydrogen, oxygen));
   return Composition::fromMoles(
-      {{"CO2", carbon}, {"H2O", 0.5 * hydrogen}, {"N2", 0.5 * nitrogen}, {"O2", o2}, {"Ar", argon}}, air.table(),
-      "combustion products");
+      {{"CO2", carbon}, {"H2O", 0.5 * hydrogen}, {"N2", 0.5 * nitrogen}, {"O2", o2}, {"Ar", argon}},
+      air.table(), "combustion products");
 }
 
 }  // namespace cw::thermo

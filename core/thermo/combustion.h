@@ -29,7 +29,7 @@ double stoichiometricFuelAirRatio(const Composition& air, const HydrocarbonFuel&
 /// Products of burning fuelAirRatio kg of fuel per kg of air completely (CO2, H2O, N2, O2, Ar).
 /// Throws cw::InvalidInput naming `where` unless 0 <= f <= f_st, or when the air holds an element
 /// other than C, H, O, N, Ar.
-Composition completeCombustionProducts(const Composition& air, const HydrocarbonFuel& fuel, double fuelAirRatio,
-                                       const std::string& where = "fuel-air ratio");
+Composition completeCombustionProducts(const Composition& air, const HydrocarbonFuel& fuel,
+                                       double fuelAirRatio, const std::string& where = "fuel-air ratio");
 
 }  // namespace cw::thermo

@@ -3,8 +3,8 @@
 #include "common/error.h"
 #include "thermo/gas.h"
 
-#include <cmath>
 #include <charconv>
+#include <cmath>
 
 namespace cw::thermo {
 
@@ -30,25 +30,30 @@ Composition::Composition(const SpeciesTable& table, std::vector<double> moles)
   for (double n : moleFractions_) total += n;
   for (double& x : moleFractions_) x /= total;
   for (std::size_t i = 0; i < size(); ++i) molarMass_ += moleFractions_[i] * table[i].molarMass();
-  for (std::size_t i = 0; i < size(); ++i) massFractions_[i] = moleFractions_[i] * table[i].molarMass() / molarMass_;
+  for (std::size_t i = 0; i < size(); ++i)
+    massFractions_[i] = moleFractions_[i] * table[i].molarMass() / molarMass_;
 }
 
-Composition Composition::fromMoles(const Amounts& moles, const SpeciesTable& table, const std::string& where) {
+Composition Composition::fromMoles(const Amounts& moles, const SpeciesTable& table,
+                                   const std::string& where) {
   std::vector<double> dense = denseAmounts(moles, table, where);
   double total = 0.0;
   for (double n : dense) total += n;
-  if (!(total > 0.0) || !std::isfinite(total)) throw InvalidInput(where + ": total amount", total, "", "(0, inf)");
+  if (!(total > 0.0) || !std::isfinite(total))
+    throw InvalidInput(where + ": total amount", total, "", "(0, inf)");
   return Composition(table, std::move(dense));
 }
 
-Composition Composition::fromMasses(const Amounts& masses, const SpeciesTable& table, const std::string& where) {
+Composition Composition::fromMasses(const Amounts& masses, const SpeciesTable& table,
+                                    const std::string& where) {
   std::vector<double> dense = denseAmounts(masses, table, where);
   double total = 0.0;
   for (std::size_t i = 0; i < dense.size(); ++i) {
     total += dense[i];
     dense[i] /= table[i].molarMass();  // moles from masses: n_i = m_i / M_i
   }
-  if (!(total > 0.0) || !std::isfinite(total)) throw InvalidInput(where + ": total mass", total, "", "(0, inf)");
+  if (!(total > 0.0) || !std::isfinite(total))
+    throw InvalidInput(where + ": total mass", total, "", "(0, inf)");
   return Composition(table, std::move(dense));
 }
 
@@ -64,7 +69,9 @@ double Composition::massFraction(const std::string& name) const {
   return massFractions_[table_->index(name)];
 }
 
-double Composition::gasConstant() const { return kMolarGasConstant / molarMass_; }
+double Composition::gasConstant() const {
+  return kMolarGasConstant / molarMass_;
+}
 
 double Composition::elementMolesPerKilogram(const std::string& element) const {
   // Atoms per mole of mixture, sum_i x_i a_i, divided by the molar mass.

@@ -47,6 +47,14 @@ public:
 
   /// True when the fuel's mass is left out of the flow (textbook idealisation; simple models only).
   virtual bool neglectsFuelMass() const { return false; }
+
+  /// Enthalpy of the products per unit mass of their air, (1 + f) h_p(T; f), or h_p(T; f) when
+  /// the fuel's mass is neglected: the right-hand side of the burner balance. Models whose
+  /// products are a mass blend of air and stoichiometric products override it with the blend,
+  /// which needs no new gas per call. [J/kg of air]
+  virtual double productEnthalpyPerUnitAir(double temperature, double fuelAirRatio) const {
+    return (neglectsFuelMass() ? 1.0 : 1.0 + fuelAirRatio) * products(fuelAirRatio)->enthalpy(temperature);
+  }
 };
 
 }  // namespace cw::thermo

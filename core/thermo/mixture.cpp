@@ -13,16 +13,21 @@ Composition dryAir() {
 }
 
 Composition humidAir(double specificHumidity, const std::string& where) {
-  if (!std::isfinite(specificHumidity) || specificHumidity < 0.0 || specificHumidity > kMaximumSpecificHumidity)
-    throw InvalidInput(where, specificHumidity, "kg/kg", "[0, " + formatNumber(kMaximumSpecificHumidity) + "] kg/kg");
+  if (!std::isfinite(specificHumidity) || specificHumidity < 0.0 ||
+      specificHumidity > kMaximumSpecificHumidity)
+    throw InvalidInput(where, specificHumidity, "kg/kg",
+                       "[0, " + formatNumber(kMaximumSpecificHumidity) + "] kg/kg");
   // y_i = (1 - q) y_i,dry, y_H2O = q.
   return mixByMass(dryAir(), 1.0 - specificHumidity, Composition::pure("H2O"), specificHumidity);
 }
 
 Composition mixByMass(const Composition& a, double massA, const Composition& b, double massB) {
-  if (&a.table() != &b.table()) throw InvalidInput("mixture", "the two compositions use different species tables");
-  if (!std::isfinite(massA) || massA < 0.0) throw InvalidInput("mixture: mass of the first part", massA, "kg", "[0, inf) kg");
-  if (!std::isfinite(massB) || massB < 0.0) throw InvalidInput("mixture: mass of the second part", massB, "kg", "[0, inf) kg");
+  if (&a.table() != &b.table())
+    throw InvalidInput("mixture", "the two compositions use different species tables");
+  if (!std::isfinite(massA) || massA < 0.0)
+    throw InvalidInput("mixture: mass of the first part", massA, "kg", "[0, inf) kg");
+  if (!std::isfinite(massB) || massB < 0.0)
+    throw InvalidInput("mixture: mass of the second part", massB, "kg", "[0, inf) kg");
   Composition::Amounts masses;
   for (std::size_t i = 0; i < a.size(); ++i) {
     const double m = massA * a.massFractions()[i] + massB * b.massFractions()[i];

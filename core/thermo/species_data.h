@@ -26,11 +26,11 @@ struct ElementCount {
 /// One species as tabulated: two ranges [tLow, tMid] and [tMid, tHigh].
 struct SpeciesRecord {
   const char* name;
-  const char* note;   ///< the data set's own date/origin tag, e.g. "TPIS78"
-  double molarMass;   ///< [kg/mol]
-  double tLow;        ///< [K]
-  double tMid;        ///< [K]
-  double tHigh;       ///< [K]
+  const char* note;            ///< the data set's own date/origin tag, e.g. "TPIS78"
+  double molarMass;            ///< [kg/mol]
+  double tLow;                 ///< [K]
+  double tMid;                 ///< [K]
+  double tHigh;                ///< [K]
   std::array<double, 7> low;   ///< a1..a7 on [tLow, tMid]
   std::array<double, 7> high;  ///< a1..a7 on [tMid, tHigh]
   std::array<ElementCount, 2> elements;

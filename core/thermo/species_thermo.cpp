@@ -27,8 +27,8 @@ SpeciesThermo::SpeciesThermo(std::string name, double molarMass, std::map<std::s
                            formatNumber(low_.maximumTemperature()) + "] K (the low range's maximum)");
   const Jumps jumps = jumpsAtMidTemperature();
   const std::string range = "[-" + formatNumber(kContinuityTolerance) + ", " +
-                            formatNumber(kContinuityTolerance) + "] (continuity at T_mid = " +
-                            formatNumber(midTemperature()) + " K)";
+                            formatNumber(kContinuityTolerance) +
+                            "] (continuity at T_mid = " + formatNumber(midTemperature()) + " K)";
   if (!(std::abs(jumps.cpOverR) <= kContinuityTolerance))
     throw InvalidInput(where + ": jump of cp/R at T_mid", jumps.cpOverR, "", range);
   if (!(std::abs(jumps.enthalpyOverRT) <= kContinuityTolerance))
@@ -44,8 +44,9 @@ int SpeciesThermo::atoms(const std::string& element) const {
 
 void SpeciesThermo::checkTemperature(double temperature) const {
   if (!std::isfinite(temperature) || temperature < minimumTemperature() || temperature > maximumTemperature())
-    throw OutOfRange("species " + name_ + ": temperature", temperature, "K",
-                     "[" + formatNumber(minimumTemperature()) + ", " + formatNumber(maximumTemperature()) + "] K");
+    throw OutOfRange(
+        "species " + name_ + ": temperature", temperature, "K",
+        "[" + formatNumber(minimumTemperature()) + ", " + formatNumber(maximumTemperature()) + "] K");
 }
 
 double SpeciesThermo::cpOverR(double temperature) const {
@@ -63,7 +64,9 @@ double SpeciesThermo::entropyOverR(double temperature) const {
   return rangeAt(temperature).entropyOverR(TemperaturePowers(temperature));
 }
 
-double SpeciesThermo::cp(double temperature) const { return kMolarGasConstant * cpOverR(temperature); }
+double SpeciesThermo::cp(double temperature) const {
+  return kMolarGasConstant * cpOverR(temperature);
+}
 
 double SpeciesThermo::enthalpy(double temperature) const {
   return kMolarGasConstant * temperature * enthalpyOverRT(temperature);

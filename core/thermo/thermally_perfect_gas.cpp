@@ -26,14 +26,15 @@ ThermallyPerfectGas::ThermallyPerfectGas(Composition composition, std::string de
   bool first = true;
   for (std::size_t i = 0; i < table.size(); ++i) {
     if (x[i] <= 0.0) continue;
-    minimumTemperature_ = first ? table[i].minimumTemperature()
-                                : std::max(minimumTemperature_, table[i].minimumTemperature());
-    maximumTemperature_ = first ? table[i].maximumTemperature()
-                                : std::min(maximumTemperature_, table[i].maximumTemperature());
+    minimumTemperature_ =
+        first ? table[i].minimumTemperature() : std::max(minimumTemperature_, table[i].minimumTemperature());
+    maximumTemperature_ =
+        first ? table[i].maximumTemperature() : std::min(maximumTemperature_, table[i].maximumTemperature());
     first = false;
   }
   if (!(maximumTemperature_ > minimumTemperature_))
-    throw InvalidInput(description_, "the species' temperature ranges do not overlap (" + composition_.summary() + ")");
+    throw InvalidInput(description_,
+                       "the species' temperature ranges do not overlap (" + composition_.summary() + ")");
   std::set<double> uppers{maximumTemperature_};
   for (std::size_t i = 0; i < table.size(); ++i)
     if (x[i] > 0.0 && table[i].midTemperature() > minimumTemperature_ &&
@@ -56,6 +57,15 @@ ThermallyPerfectGas::ThermallyPerfectGas(Composition composition, std::string de
                           {c[5], c[0], c[1] / 2.0, c[2] / 3.0, c[3] / 4.0, c[4] / 5.0},
                           {c[6], c[0], c[1], c[2] / 2.0, c[3] / 3.0, c[4] / 4.0}});
     lower = upper;
+  }
+
+  // Continuity: the data's h and s° jump at T_mid by < 1e-7 R T and < 1e-7 R (SpeciesThermo
+  // checks 1e-5); shift each upper interval's constants c6, c7 by the jump so that h(T) and s°(T)
+  // are continuous and increasing, and the inverses have one root.
+  for (std::size_t i = 1; i < intervals_.size(); ++i) {
+    const double t = intervals_[i - 1].upper;
+    intervals_[i].h[0] += enthalpyOf(intervals_[i - 1], t) - enthalpyOf(intervals_[i], t);
+    intervals_[i].s[0] += entropyOf(intervals_[i - 1], t) - entropyOf(intervals_[i], t);
   }
 
   // Table of h and s° that brackets the inverses.
@@ -111,8 +121,7 @@ template <typename Value, typename Slope>
 double ThermallyPerfectGas::solve(Value value, Slope slope, double target, double lo, double hi, double guess,
                                   const char* where) const {
   // Newton steps kept inside a shrinking bracket; a step that leaves the bracket or fails to
-  // halve the previous one is replaced by bisection (this also settles a root that falls in the
-  // ~1e-8 relative gap the data leave at T_mid).
+  // halve the previous one is replaced by bisection.
   constexpr int kMaxIterations = 100;
   constexpr double kTolerance = 1e-10;
   double t = guess;
@@ -140,6 +149,10 @@ double ThermallyPerfectGas::solve(Value value, Slope slope, double target, doubl
 }
 
 double ThermallyPerfectGas::temperatureFromEnthalpy(double h) const {
+  // Accept a target beyond an end by rounding only (e.g. h(T_max) recomputed elsewhere), as that end.
+  const double hSlack = 1e-13 * (std::abs(enthalpyNodes_.front()) + std::abs(enthalpyNodes_.back()));
+  if (h < enthalpyNodes_.front() && h >= enthalpyNodes_.front() - hSlack) h = enthalpyNodes_.front();
+  if (h > enthalpyNodes_.back() && h <= enthalpyNodes_.back() + hSlack) h = enthalpyNodes_.back();
   if (!(h >= enthalpyNodes_.front() && h <= enthalpyNodes_.back()))
     throw OutOfRange("temperature from enthalpy", h, "J/kg",
                      "[" + formatNumber(enthalpyNodes_.front()) + ", " + formatNumber(enthalpyNodes_.back()) +
@@ -147,7 +160,8 @@ double ThermallyPerfectGas::temperatureFromEnthalpy(double h) const {
                          formatNumber(maximumTemperature_) + "] K)");
   // Bracket from the table, first guess by linear interpolation in it.
   const auto k = std::clamp<std::ptrdiff_t>(
-      std::upper_bound(enthalpyNodes_.begin(), enthalpyNodes_.end(), h) - enthalpyNodes_.begin() - 1, 0, kNodes - 1);
+      std::upper_bound(enthalpyNodes_.begin(), enthalpyNodes_.end(), h) - enthalpyNodes_.begin() - 1, 0,
+      kNodes - 1);
   const double lo = minimumTemperature_ + k * nodeStep_;
   const double hi = (k == kNodes - 1) ? maximumTemperature_ : lo + nodeStep_;
   const double span = enthalpyNodes_[k + 1] - enthalpyNodes_[k];
@@ -158,9 +172,16 @@ double ThermallyPerfectGas::temperatureFromEnthalpy(double h) const {
 }
 
 double ThermallyPerfectGas::temperatureFromEntropy(double s, double pressure) const {
-  if (!std::isfinite(pressure) || pressure <= 0.0) throw InvalidInput("pressure", pressure, "Pa", "(0, inf) Pa");
+  if (!std::isfinite(pressure) || pressure <= 0.0)
+    throw InvalidInput("pressure", pressure, "Pa", "(0, inf) Pa");
   // s°(T) = s + R ln(p / p_ref); ds°/dT = cp / T.
-  const double target = s + gasConstant_ * std::log(pressure / kReferencePressure);
+  const double shift = gasConstant_ * std::log(pressure / kReferencePressure);
+  double target = s + shift;
+  // Accept a target beyond an end by rounding only (s = s° - R ln(p/p_ref) and back), as that end.
+  const double sSlack = 1e-13 * (std::abs(s) + std::abs(shift) + std::abs(entropyNodes_.back()));
+  if (target < entropyNodes_.front() && target >= entropyNodes_.front() - sSlack)
+    target = entropyNodes_.front();
+  if (target > entropyNodes_.back() && target <= entropyNodes_.back() + sSlack) target = entropyNodes_.back();
   if (!(target >= entropyNodes_.front() && target <= entropyNodes_.back()))
     throw OutOfRange("temperature from entropy", s, "J/(kg K)",
                      "the entropies of [" + formatNumber(minimumTemperature_) + ", " +
@@ -174,7 +195,7 @@ double ThermallyPerfectGas::temperatureFromEntropy(double s, double pressure) co
   const double guess = lo + (span > 0.0 ? (target - entropyNodes_[k]) / span : 0.5) * (hi - lo);
   return solve([](const Interval& in, double t) { return entropyOf(in, t); },
                [](const Interval& in, double t) { return cpOf(in, t) / t; }, target, lo, hi, guess,
-      "temperature from entropy");
+               "temperature from entropy");
 }
 
 }  // namespace cw::thermo

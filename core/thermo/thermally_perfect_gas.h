@@ -17,7 +17,10 @@
 // Boles, Thermodynamics: An Engineering Approach, ch. 13). h is absolute (formation
 // enthalpies included), so a burner's energy balance is one equation across compositions.
 //
-// The temperature axis splits at every species' T_mid (1000 K for the embedded data); the
+// The temperature axis splits at every species' T_mid (1000 K for the embedded data). The data
+// leave tiny jumps in h and s° there (below 1e-7 R T and 1e-7 R for the embedded species); the
+// constants c6 and c7 of each upper interval are shifted by the jump so that h(T) and s°(T) are
+// continuous and the inverses have exactly one root (a change far below the data's accuracy). The
 // mixture is valid on the intersection of its species' ranges (200 K to 6000 K here) and throws
 // cw::OutOfRange outside it. T(h) and T(s, p) are safeguarded Newton iterations on the
 // precombined polynomials, converging to 1e-10 relative in T or throwing cw::NotConverged.
@@ -62,10 +65,10 @@ class ThermallyPerfectGas : public Gas {
   // One interval of the temperature axis, (previous upper, upper], with the precombined
   // coefficients c1..c7 arranged for Horner evaluation.
   struct Interval {
-    double upper;                ///< [K]
-    std::array<double, 5> cp;    ///< c1, c2, c3, c4, c5
-    std::array<double, 6> h;     ///< c6, c1, c2/2, c3/3, c4/4, c5/5
-    std::array<double, 6> s;     ///< c7, c1 (of ln T), c2, c3/2, c4/3, c5/4
+    double upper;              ///< [K]
+    std::array<double, 5> cp;  ///< c1, c2, c3, c4, c5
+    std::array<double, 6> h;   ///< c6, c1, c2/2, c3/3, c4/4, c5/5
+    std::array<double, 6> s;   ///< c7, c1 (of ln T), c2, c3/2, c4/3, c5/4
   };
   // Number of equal steps of the table of h and s° that brackets the inverses.
   static constexpr int kNodes = 64;
@@ -93,7 +96,7 @@ class ThermallyPerfectGas : public Gas {
   double minimumTemperature_;
   double maximumTemperature_;
   std::vector<Interval> intervals_;
-  double nodeStep_;                      ///< [K]
+  double nodeStep_;                               ///< [K]
   std::array<double, kNodes + 1> enthalpyNodes_;  ///< h at T_min + k nodeStep_ [J/kg]
   std::array<double, kNodes + 1> entropyNodes_;   ///< s° at the same temperatures [J/(kg K)]
 };

@@ -25,6 +25,10 @@ class ThermallyPerfectModel : public GasModel {
   double fuelEnthalpy() const override { return fuelEnthalpy_; }
   double lowerHeatingValue() const override { return fuel_.lowerHeatingValue(); }
   double stoichiometricFuelAirRatio() const override { return stoichiometric_; }
+  /// Lean products at f are a mass blend of (1 - f/f_st) kg of air and f (1 + f_st)/f_st kg of
+  /// stoichiometric products per kg of air (species mass balance of complete combustion), so
+  /// (1 + f) h_p(T; f) = (1 - f/f_st) h_air(T) + f (1 + f_st)/f_st h_st(T). [J/kg of air]
+  double productEnthalpyPerUnitAir(double temperature, double fuelAirRatio) const override;
 
   const HydrocarbonFuel& fuel() const { return fuel_; }
 
@@ -32,6 +36,7 @@ class ThermallyPerfectModel : public GasModel {
   HydrocarbonFuel fuel_;
   Composition airComposition_;
   std::shared_ptr<const ThermallyPerfectGas> air_;
+  std::shared_ptr<const ThermallyPerfectGas> stoichiometricProducts_;
   double fuelEnthalpy_;
   double stoichiometric_;
 };

@@ -13,7 +13,8 @@
 
 namespace {
 
-const QString kExample = QStringLiteral(CYCLEWRIGHT_SOURCE_DIR "/resources/examples/supersonic-afterburning-two-gamma.json");
+const QString kExample =
+    QStringLiteral(CYCLEWRIGHT_SOURCE_DIR "/resources/examples/supersonic-afterburning-two-gamma.json");
 
 struct Run {
   int status;
@@ -31,7 +32,7 @@ Run runCli(const QStringList& arguments) {
 
 class TestCliEvaluate : public QObject {
   Q_OBJECT
-private slots:
+ private slots:
   void jsonHoldsStationsPerformanceSizingIdealAndPaths() {
     const Run run = runCli({"evaluate", kExample, "--format", "json"});
     QCOMPARE(run.status, 0);
@@ -43,17 +44,19 @@ private slots:
     QStringList ids;
     for (const auto& s : stations) ids << s.toObject()["id"].toString();
     QCOMPARE(ids, QStringList({"0", "2", "3", "4", "5", "6", "7", "8", "9"}));
-    for (const char* key : {"Tt_K", "pt_Pa", "Ts_K", "ps_Pa", "mach", "V_m_per_s", "W_kg_per_s", "fuel_air_ratio",
-                            "ht_J_per_kg", "s_J_per_kg_K", "cp_J_per_kg_K", "gamma"})
+    for (const char* key : {"Tt_K", "pt_Pa", "Ts_K", "ps_Pa", "mach", "V_m_per_s", "W_kg_per_s",
+                            "fuel_air_ratio", "ht_J_per_kg", "s_J_per_kg_K", "cp_J_per_kg_K", "gamma"})
       QVERIFY2(stations[3].toObject().contains(key), key);
     // The in-process core gives the same numbers (the CLI is a thin front).
     const auto evaluation = cw::engine::evaluateCase(cw::io::readCaseFile(kExample.toStdString()));
     const QJsonObject perf = j["performance"].toObject();
     QCOMPARE(perf["net_thrust_N"].toDouble(), evaluation.actual.performance.netThrust);
-    QCOMPARE(perf["tsfc_g_per_kN_s"].toDouble(), evaluation.actual.performance.thrustSpecificFuelConsumption * 1e6);
+    QCOMPARE(perf["tsfc_g_per_kN_s"].toDouble(),
+             evaluation.actual.performance.thrustSpecificFuelConsumption * 1e6);
     // The case asks for 60 kN; the air mass flow follows.
     QVERIFY(std::abs(perf["net_thrust_N"].toDouble() - 60000.0) < 1e-6);
-    QCOMPARE(j["sizing"].toObject()["air_mass_flow_kg_per_s"].toDouble(), evaluation.actual.sizing.airMassFlow);
+    QCOMPARE(j["sizing"].toObject()["air_mass_flow_kg_per_s"].toDouble(),
+             evaluation.actual.sizing.airMassFlow);
     QCOMPARE(j["ideal"].toObject()["stations"].toArray()[3].toObject()["Tt_K"].toDouble(), 1500.0);
     for (const auto& path : j["paths"].toArray()) QVERIFY(path.toObject()["states"].toArray().size() >= 20);
   }
@@ -68,10 +71,11 @@ private slots:
   }
   void setOverridesAnInput() {
     const Run base = runCli({"evaluate", kExample, "--format", "json"});
-    const Run more = runCli({"evaluate", kExample, "--format", "json", "--set", "compressor.pressure_ratio=12", "--set",
-                             "burner.exit_temperature_K=1600"});
+    const Run more = runCli({"evaluate", kExample, "--format", "json", "--set",
+                             "compressor.pressure_ratio=12", "--set", "burner.exit_temperature_K=1600"});
     QCOMPARE(more.status, 0);
-    const QJsonObject a = QJsonDocument::fromJson(base.out).object(), b = QJsonDocument::fromJson(more.out).object();
+    const QJsonObject a = QJsonDocument::fromJson(base.out).object(),
+                      b = QJsonDocument::fromJson(more.out).object();
     const double pt2 = b["stations"].toArray()[1].toObject()["pt_Pa"].toDouble();
     const double pt3 = b["stations"].toArray()[2].toObject()["pt_Pa"].toDouble();
     QVERIFY(std::abs(pt3 / pt2 - 12.0) < 1e-12);

@@ -28,13 +28,15 @@ Case idealConstantCpCase(double pressureRatio, double burnerExitTemperature, dou
   return c;
 }
 
-double relative(double a, double b) { return std::abs(a - b) / std::max(std::abs(b), 1e-300); }
+double relative(double a, double b) {
+  return std::abs(a - b) / std::max(std::abs(b), 1e-300);
+}
 
 }  // namespace
 
 class TestTurbojet : public QObject {
   Q_OBJECT
-private slots:
+ private slots:
   // Closed form: the ideal turbojet of parametric cycle analysis, Mattingly, Elements of
   // Propulsion: Gas Turbines and Rockets, AIAA 2006, sec. 5.6 (ideal turbojet), eqs. for
   // tau_r, tau_c, tau_lambda, tau_t = 1 - tau_r (tau_c - 1) / tau_lambda, V9/a0, F/m0,
@@ -86,6 +88,7 @@ private slots:
     QTest::addColumn<int>("model");
     QTest::newRow("constant-cp") << 0;
     QTest::newRow("two-gamma") << 1;
+    QTest::newRow("thermally-perfect") << 2;
   }
   void energyBalancesClose() {
     QFETCH(int, model);
@@ -99,7 +102,8 @@ private slots:
     const Station &s2 = r.station("2"), &s3 = r.station("3"), &s4 = r.station("4"), &s5 = r.station("5");
     const double compressorPower = s2.massFlow * (s3.totalEnthalpy - s2.totalEnthalpy);
     const double turbinePower = s4.massFlow * (s4.totalEnthalpy - s5.totalEnthalpy);
-    QVERIFY(relative(c.turbine.mechanicalEfficiency * turbinePower, compressorPower + c.turbine.powerOfftake) < 1e-9);
+    QVERIFY(relative(c.turbine.mechanicalEfficiency * turbinePower,
+                     compressorPower + c.turbine.powerOfftake) < 1e-9);
     const auto& gm = engine.gasModel();
     const double fuel = r.performance.fuelFlow;
     const double in = s3.massFlow * s3.totalEnthalpy + fuel * gm.fuelEnthalpy() -
@@ -142,7 +146,8 @@ private slots:
       k.nozzle.loss = 1 - scale * (1 - c.nozzle.loss);
       k.nozzle.dischargeCoefficient = 1 - scale * (1 - c.nozzle.dischargeCoefficient);
       const Evaluation e = evaluateCase(k);
-      const double gap = relative(e.actual.performance.specificThrust, reference.ideal.performance.specificThrust);
+      const double gap =
+          relative(e.actual.performance.specificThrust, reference.ideal.performance.specificThrust);
       QVERIFY(gap < previous);
       previous = gap;
     }
@@ -177,8 +182,8 @@ private slots:
     QVERIFY(relative(check.performance.netThrust, 25000.0) < 1e-9);
     // Face area: A2 = W2 / (rho2 V2); diameter from the annulus (common practice, no source).
     const double hub = c.sizing.hubToTipRatio;
-    QVERIFY(relative(r.sizing.engineFaceArea, M_PI / 4 * std::pow(r.sizing.engineFaceDiameter, 2) * (1 - hub * hub)) <
-            1e-12);
+    QVERIFY(relative(r.sizing.engineFaceArea,
+                     M_PI / 4 * std::pow(r.sizing.engineFaceDiameter, 2) * (1 - hub * hub)) < 1e-12);
   }
 
   // Random valid cases across the input ranges: finite and physical, or a clear error.
@@ -195,8 +200,8 @@ private slots:
       c.flight.ambient = StandardAtmosphereAmbient{uniform(0, 20000), false, uniform(-30, 30)};
       c.flight.mach = uniform(0, 3);
       c.compressor.pressureRatio = uniform(1.5, 40);
-      c.compressor.efficiency = Efficiency{i % 3 ? EfficiencyBasis::Isentropic : EfficiencyBasis::Polytropic,
-                                           uniform(0.7, 1.0)};
+      c.compressor.efficiency =
+          Efficiency{i % 3 ? EfficiencyBasis::Isentropic : EfficiencyBasis::Polytropic, uniform(0.7, 1.0)};
       c.compressor.bleedFraction = uniform(0, 0.1);
       c.burner.setting = ExitTemperatureSetting{uniform(900, 2200)};
       c.burner.pressureLossFraction = uniform(0, 0.1);

@@ -1,0 +1,32 @@
+// Benchmark: one design point with its ideal twin (goal: under 10 us for the thermally
+// perfect model on the development machine). Run with -callgrind for stable counts.
+#include "engine/evaluate.h"
+#include "io/case_file.h"
+
+#include <QTest>
+
+class BenchTurbojet : public QObject {
+  Q_OBJECT
+ private slots:
+  void designPointWithIdealTwin_data() {
+    QTest::addColumn<QString>("kind");
+    QTest::addColumn<bool>("withPaths");
+    QTest::newRow("thermally-perfect") << "thermally-perfect" << false;
+    QTest::newRow("thermally-perfect with chart paths") << "thermally-perfect" << true;
+    QTest::newRow("two-gamma") << "two-gamma" << false;
+  }
+  void designPointWithIdealTwin() {
+    QFETCH(QString, kind);
+    QFETCH(bool, withPaths);
+    cw::engine::Case c = cw::io::readCaseFile(CYCLEWRIGHT_SOURCE_DIR "/resources/demo/demo-turbojet.json");
+    if (kind == "two-gamma") c.gasModel.model = cw::engine::TwoGammaGasModel{};
+    double netThrust = 0.0;
+    QBENCHMARK {
+      netThrust = cw::engine::evaluateCase(c, withPaths).actual.performance.netThrust;
+    }
+    QVERIFY(netThrust > 0.0);
+  }
+};
+
+QTEST_APPLESS_MAIN(BenchTurbojet)
+#include "bench_turbojet.moc"
