@@ -4,6 +4,7 @@
 #include "flow/compressible_flow.h"
 #include "flow/root_finder.h"
 
+#include <algorithm>
 #include <cmath>
 #include <variant>
 
@@ -55,10 +56,20 @@ Nozzle::Result Nozzle::expand(const engine::TotalState& entry, double ambientPre
         const IdealExpansion e = idealExpansion(entry, p);
         return e.density * e.velocity - target;
       };
-      exitPressure =
-          fixed->exitToThroatAreaRatio == 1.0
-              ? pStar
-              : flow::findRoot(flux, pStar * 1e-6, pStar, "nozzle: exit pressure for the area ratio");
+      // The lowest exit pressure the gas data allow: the ideal expansion down to their lowest temperature.
+      const double coldest = gas.minimumTemperature() * (1.0 + 1e-9);
+      const double lowest = std::max(
+          pStar * 1e-6,
+          entry.pressure * std::exp((gas.standardEntropy(coldest) - gas.standardEntropy(entry.temperature)) /
+                                    gas.gasConstant()));
+      if (fixed->exitToThroatAreaRatio > 1.0 && flux(lowest) > 0.0)
+        throw NoSolution("nozzle", "the exit-to-throat area ratio " +
+                                       formatNumber(fixed->exitToThroatAreaRatio) +
+                                       " expands the jet below " + formatNumber(gas.minimumTemperature()) +
+                                       " K, the lowest temperature of the gas data");
+      exitPressure = fixed->exitToThroatAreaRatio == 1.0
+                         ? pStar
+                         : flow::findRoot(flux, lowest, pStar, "nozzle: exit pressure for the area ratio");
     }
   }
 

@@ -66,6 +66,10 @@ CycleResult Turbojet::evaluateAt(double airMassFlow) const {
   const thermo::GasModel& model = *gasModel_;
   const auto air = model.air();
   const FreeStream fs = freeStreamOf(inputs_.flight);
+  if (fs.temperature < air->minimumTemperature() || fs.temperature > air->maximumTemperature())
+    throw OutOfRange("/flight (ambient temperature, " + model.kind() + " gas data)", fs.temperature, "K",
+                     "[" + formatNumber(air->minimumTemperature()) + ", " +
+                         formatNumber(air->maximumTemperature()) + "] K");
   const double entropyReference = air->entropy(fs.temperature, fs.pressure);
   CycleResult result;
 
@@ -88,8 +92,12 @@ CycleResult Turbojet::evaluateAt(double airMassFlow) const {
   // 2: engine face, at the sizing Mach number.
   const TotalState t2 = components::Inlet(inputs_.inlet).exit(s0);
   Station s2 = stationAtRest("2", t2, entropyReference);
-  const flow::FlowState face =
-      flow::fromTotal(*air, t2.temperature, t2.pressure, inputs_.sizing.engineFaceMach);
+  flow::FlowState face;
+  try {
+    face = flow::fromTotal(*air, t2.temperature, t2.pressure, inputs_.sizing.engineFaceMach);
+  } catch (const Error& e) {
+    throw InvalidInput("/sizing/engine_face_mach", std::string("at the engine face: ") + e.what());
+  }
   s2.staticTemperature = face.local.temperature;
   s2.staticPressure = face.local.pressure;
   s2.mach = face.mach;
