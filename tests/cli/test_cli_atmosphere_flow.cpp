@@ -12,6 +12,8 @@
 #include <QProcess>
 #include <QTest>
 
+#include "cli_run.h"
+
 #include <cmath>
 #include <sstream>
 #include <string>
@@ -19,21 +21,9 @@
 
 namespace {
 
-struct Run {
-  int status;
-  std::string out;
-  std::string err;
-};
-
-Run run(const std::vector<std::string>& words) {
-  std::ostringstream out, err;
-  const int status = cw::cli::runCommandLine(words, out, err);
-  return {status, out.str(), err.str()};
-}
-
-QJsonObject json(const Run& r) {
-  return QJsonDocument::fromJson(QByteArray::fromStdString(r.out)).object();
-}
+using Run = cw::test::CliRun;
+Run run(const std::vector<std::string>& words) { return cw::test::runCli(words); }
+QJsonObject json(const Run& r) { return cw::test::jsonOf(r); }
 
 bool near(double actual, double expected, double tolerance) {
   return std::abs(actual - expected) <= tolerance;
