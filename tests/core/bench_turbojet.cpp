@@ -1,5 +1,6 @@
 // Benchmark: one design point with its ideal twin (goal: under 10 us for the thermally
-// perfect model on the development machine). Run with -callgrind for stable counts.
+// perfect model on the development machine). Run with -callgrind for stable counts (which is
+// why it has a core application object: QTEST_GUILESS_MAIN).
 #include "engine/evaluate.h"
 #include "io/case_file.h"
 
@@ -28,5 +29,5 @@ class BenchTurbojet : public QObject {
   }
 };
 
-QTEST_APPLESS_MAIN(BenchTurbojet)
+QTEST_GUILESS_MAIN(BenchTurbojet)
 #include "bench_turbojet.moc"
