@@ -2,11 +2,664 @@
 <!DOCTYPE TS>
 <TS version="2.1" language="de_DE">
 <context>
-    <name>cw::gui::MainWindow</name>
+    <name>CaseFields</name>
     <message>
-        <source>Cyclewright</source>
-        <translation>Cyclewright</translation>
+        <source>Ambient state</source>
+        <translation>Umgebungszustand</translation>
     </message>
+    <message>
+        <source>Take the free-stream static state from the U.S. Standard Atmosphere 1976, or give its temperature and pressure directly.</source>
+        <translation>Den statischen Zustand der Anströmung der U.S. Standard Atmosphere 1976 entnehmen oder Temperatur und Druck direkt angeben.</translation>
+    </message>
+    <message>
+        <source>Standard atmosphere</source>
+        <translation>Standardatmosphäre</translation>
+    </message>
+    <message>
+        <source>Given ambient</source>
+        <translation>Vorgegebene Umgebung</translation>
+    </message>
+    <message>
+        <source>Altitude</source>
+        <translation>Flughöhe</translation>
+    </message>
+    <message>
+        <source>Flight altitude; geopotential unless marked geometric.</source>
+        <translation>Flughöhe; geopotentiell, sofern nicht als geometrisch markiert.</translation>
+    </message>
+    <message>
+        <source>Geometric altitude</source>
+        <translation>Geometrische Höhe</translation>
+    </message>
+    <message>
+        <source>The altitude is geometric (checked) or geopotential (unchecked).</source>
+        <translation>Die Höhe ist geometrisch (markiert) oder geopotentiell (nicht markiert).</translation>
+    </message>
+    <message>
+        <source>Temperature offset from standard</source>
+        <translation>Temperaturabweichung vom Standardtag</translation>
+    </message>
+    <message>
+        <source>Added to the standard-day temperature; the pressure is unchanged.</source>
+        <translation>Wird zur Temperatur des Standardtags addiert; der Druck bleibt unverändert.</translation>
+    </message>
+    <message>
+        <source>Ambient static temperature</source>
+        <translation>Statische Umgebungstemperatur</translation>
+    </message>
+    <message>
+        <source>Free-stream static temperature, e.g. of a test cell.</source>
+        <translation>Statische Temperatur der Anströmung, z. B. eines Prüfstands.</translation>
+    </message>
+    <message>
+        <source>Ambient static pressure</source>
+        <translation>Statischer Umgebungsdruck</translation>
+    </message>
+    <message>
+        <source>Free-stream static pressure.</source>
+        <translation>Statischer Druck der Anströmung.</translation>
+    </message>
+    <message>
+        <source>Flight Mach number</source>
+        <translation>Flug-Machzahl</translation>
+    </message>
+    <message>
+        <source>Free-stream Mach number M0.</source>
+        <translation>Machzahl der Anströmung M0.</translation>
+    </message>
+    <message>
+        <source>Specific humidity</source>
+        <translation>Spezifische Feuchte</translation>
+    </message>
+    <message>
+        <source>Water vapour per unit mass of humid air.</source>
+        <translation>Wasserdampf je Masseneinheit feuchter Luft.</translation>
+    </message>
+    <message>
+        <source>Engine size set by</source>
+        <translation>Triebwerksgröße festgelegt durch</translation>
+    </message>
+    <message>
+        <source>Fix the engine-face air mass flow, or the net thrust (the mass flow follows).</source>
+        <translation>Den Luftmassenstrom am Verdichtereintritt oder den Nettoschub festlegen (der Massenstrom folgt daraus).</translation>
+    </message>
+    <message>
+        <source>Air mass flow</source>
+        <translation>Luftmassenstrom</translation>
+    </message>
+    <message>
+        <source>Net thrust</source>
+        <translation>Nettoschub</translation>
+    </message>
+    <message>
+        <source>Air mass flow W2</source>
+        <translation>Luftmassenstrom W2</translation>
+    </message>
+    <message>
+        <source>Engine-face air mass flow.</source>
+        <translation>Luftmassenstrom am Verdichtereintritt.</translation>
+    </message>
+    <message>
+        <source>Required net thrust</source>
+        <translation>Geforderter Nettoschub</translation>
+    </message>
+    <message>
+        <source>Net thrust at the design point; the air mass flow is sized to give it.</source>
+        <translation>Nettoschub im Auslegungspunkt; der Luftmassenstrom wird passend ausgelegt.</translation>
+    </message>
+    <message>
+        <source>Engine-face Mach number</source>
+        <translation>Machzahl am Verdichtereintritt</translation>
+    </message>
+    <message>
+        <source>Axial Mach number at the compressor face, for the face area.</source>
+        <translation>Axiale Machzahl am Verdichtereintritt, für die Eintrittsfläche.</translation>
+    </message>
+    <message>
+        <source>Hub-to-tip radius ratio</source>
+        <translation>Nabenverhältnis</translation>
+    </message>
+    <message>
+        <source>Hub radius over tip radius at the engine face.</source>
+        <translation>Nabenradius durch Spitzenradius am Verdichtereintritt.</translation>
+    </message>
+    <message>
+        <source>Lower heating value</source>
+        <translation>Unterer Heizwert</translation>
+    </message>
+    <message>
+        <source>Fuel&apos;s lower heating value at 298.15 K.</source>
+        <translation>Unterer Heizwert des Kraftstoffs bei 298,15 K.</translation>
+    </message>
+    <message>
+        <source>Hydrogen-carbon ratio</source>
+        <translation>Wasserstoff-Kohlenstoff-Verhältnis</translation>
+    </message>
+    <message>
+        <source>Molar H/C ratio y of the fuel CHy.</source>
+        <translation>Molares H/C-Verhältnis y des Kraftstoffs CHy.</translation>
+    </message>
+    <message>
+        <source>Fuel temperature</source>
+        <translation>Kraftstofftemperatur</translation>
+    </message>
+    <message>
+        <source>Delivery temperature of the fuel at the burner.</source>
+        <translation>Temperatur des Kraftstoffs am Brennkammereintritt.</translation>
+    </message>
+    <message>
+        <source>Gas model</source>
+        <translation>Gasmodell</translation>
+    </message>
+    <message>
+        <source>Thermally perfect: species data with variable composition. Constant cp: one cp and ratio of specific heats. Two-gamma: air values before the burner, product values after it.</source>
+        <translation>Thermisch ideal: Stoffdaten mit veränderlicher Zusammensetzung. Konstantes cp: ein cp und ein Isentropenexponent. Zwei-Gamma: Luftwerte vor der Brennkammer, Werte der Verbrennungsprodukte danach.</translation>
+    </message>
+    <message>
+        <source>Thermally perfect</source>
+        <translation>Thermisch ideal</translation>
+    </message>
+    <message>
+        <source>Constant cp</source>
+        <translation>Konstantes cp</translation>
+    </message>
+    <message>
+        <source>Two-gamma</source>
+        <translation>Zwei-Gamma</translation>
+    </message>
+    <message>
+        <source>Specific heat cp</source>
+        <translation>Spezifische Wärmekapazität cp</translation>
+    </message>
+    <message>
+        <source>Specific heat at constant pressure, everywhere.</source>
+        <translation>Spezifische Wärmekapazität bei konstantem Druck, überall.</translation>
+    </message>
+    <message>
+        <source>Ratio of specific heats γ</source>
+        <translation>Isentropenexponent γ</translation>
+    </message>
+    <message>
+        <source>cp/cv, everywhere.</source>
+        <translation>cp/cv, überall.</translation>
+    </message>
+    <message>
+        <source>Cold-section cp</source>
+        <translation>cp im kalten Teil</translation>
+    </message>
+    <message>
+        <source>Specific heat of air up to the burner.</source>
+        <translation>Spezifische Wärmekapazität der Luft bis zur Brennkammer.</translation>
+    </message>
+    <message>
+        <source>Cold-section γ</source>
+        <translation>γ im kalten Teil</translation>
+    </message>
+    <message>
+        <source>Ratio of specific heats of air up to the burner.</source>
+        <translation>Isentropenexponent der Luft bis zur Brennkammer.</translation>
+    </message>
+    <message>
+        <source>Hot-section cp</source>
+        <translation>cp im heißen Teil</translation>
+    </message>
+    <message>
+        <source>Specific heat of the combustion products after the burner.</source>
+        <translation>Spezifische Wärmekapazität der Verbrennungsprodukte nach der Brennkammer.</translation>
+    </message>
+    <message>
+        <source>Hot-section γ</source>
+        <translation>γ im heißen Teil</translation>
+    </message>
+    <message>
+        <source>Ratio of specific heats of the products after the burner.</source>
+        <translation>Isentropenexponent der Produkte nach der Brennkammer.</translation>
+    </message>
+    <message>
+        <source>Neglect fuel mass</source>
+        <translation>Kraftstoffmasse vernachlässigen</translation>
+    </message>
+    <message>
+        <source>Leave the fuel&apos;s mass out of the flow (constant-cp and two-gamma only).</source>
+        <translation>Die Masse des Kraftstoffs im Massenstrom nicht berücksichtigen (nur konstantes cp und Zwei-Gamma).</translation>
+    </message>
+    <message>
+        <source>Loss given as</source>
+        <translation>Verlust angegeben als</translation>
+    </message>
+    <message>
+        <source>Pressure recovery pt2/pt0, or ram efficiency: the fraction of the ram enthalpy rise kept as pressure.</source>
+        <translation>Druckrückgewinn pt2/pt0 oder Stauwirkungsgrad: der Anteil des Staudruck-Enthalpieanstiegs, der als Druck erhalten bleibt.</translation>
+    </message>
+    <message>
+        <source>Pressure recovery</source>
+        <translation>Druckrückgewinn</translation>
+    </message>
+    <message>
+        <source>Ram efficiency</source>
+        <translation>Stauwirkungsgrad</translation>
+    </message>
+    <message>
+        <source>Recovery or ram efficiency</source>
+        <translation>Druckrückgewinn oder Stauwirkungsgrad</translation>
+    </message>
+    <message>
+        <source>Pressure recovery pt2/pt0 or ram efficiency, per the basis above; 1 is loss-free.</source>
+        <translation>Druckrückgewinn pt2/pt0 oder Stauwirkungsgrad, je nach obiger Angabe; 1 ist verlustfrei.</translation>
+    </message>
+    <message>
+        <source>Supersonic shock loss</source>
+        <translation>Stoßverlust im Überschall</translation>
+    </message>
+    <message>
+        <source>A multiplier on the recovery above Mach 1: none, or the military specification rule 1 − 0.075 (M0 − 1)^1.35.</source>
+        <translation>Ein Faktor auf den Druckrückgewinn oberhalb Mach 1: keiner oder die Regel der Militärspezifikation 1 − 0,075 (M0 − 1)^1,35.</translation>
+    </message>
+    <message>
+        <source>None</source>
+        <translation>Keiner</translation>
+    </message>
+    <message>
+        <source>MIL-E-5008B</source>
+        <translation>MIL-E-5008B</translation>
+    </message>
+    <message>
+        <source>Isentropic</source>
+        <translation>Isentrop</translation>
+    </message>
+    <message>
+        <source>Polytropic</source>
+        <translation>Polytrop</translation>
+    </message>
+    <message>
+        <source>Pressure ratio pt3/pt2</source>
+        <translation>Druckverhältnis pt3/pt2</translation>
+    </message>
+    <message>
+        <source>Compressor total-pressure ratio.</source>
+        <translation>Totaldruckverhältnis des Verdichters.</translation>
+    </message>
+    <message>
+        <source>Efficiency basis</source>
+        <translation>Art des Wirkungsgrads</translation>
+    </message>
+    <message>
+        <source>Give the isentropic or the polytropic efficiency; the other is derived.</source>
+        <translation>Den isentropen oder den polytropen Wirkungsgrad angeben; der andere wird abgeleitet.</translation>
+    </message>
+    <message>
+        <source>Efficiency</source>
+        <translation>Wirkungsgrad</translation>
+    </message>
+    <message>
+        <source>Compressor efficiency on the basis above; 1 is isentropic.</source>
+        <translation>Verdichterwirkungsgrad nach obiger Art; 1 ist isentrop.</translation>
+    </message>
+    <message>
+        <source>Bleed fraction</source>
+        <translation>Zapfluftanteil</translation>
+    </message>
+    <message>
+        <source>Air bled off at compressor exit, per unit of inlet air.</source>
+        <translation>Am Verdichteraustritt entnommene Luft je Einheit Eintrittsluft.</translation>
+    </message>
+    <message>
+        <source>Burner set by</source>
+        <translation>Brennkammer festgelegt durch</translation>
+    </message>
+    <message>
+        <source>Fix the burner exit temperature Tt4, or the fuel-air ratio.</source>
+        <translation>Die Brennkammeraustrittstemperatur Tt4 oder das Kraftstoff-Luft-Verhältnis festlegen.</translation>
+    </message>
+    <message>
+        <source>Exit temperature</source>
+        <translation>Austrittstemperatur</translation>
+    </message>
+    <message>
+        <source>Fuel-air ratio</source>
+        <translation>Kraftstoff-Luft-Verhältnis</translation>
+    </message>
+    <message>
+        <source>Exit temperature Tt4</source>
+        <translation>Austrittstemperatur Tt4</translation>
+    </message>
+    <message>
+        <source>Burner exit (turbine entry) total temperature.</source>
+        <translation>Totaltemperatur am Brennkammeraustritt (Turbineneintritt).</translation>
+    </message>
+    <message>
+        <source>Fuel per unit of burner air.</source>
+        <translation>Kraftstoff je Einheit Brennkammerluft.</translation>
+    </message>
+    <message>
+        <source>Pressure-loss fraction</source>
+        <translation>Relativer Druckverlust</translation>
+    </message>
+    <message>
+        <source>1 − pt4/pt3.</source>
+        <translation>1 − pt4/pt3.</translation>
+    </message>
+    <message>
+        <source>Combustion efficiency</source>
+        <translation>Ausbrenngrad</translation>
+    </message>
+    <message>
+        <source>Fraction of the fuel&apos;s heating value released.</source>
+        <translation>Anteil des Heizwerts, der freigesetzt wird.</translation>
+    </message>
+    <message>
+        <source>Turbine efficiency on the basis above; 1 is isentropic.</source>
+        <translation>Turbinenwirkungsgrad nach obiger Art; 1 ist isentrop.</translation>
+    </message>
+    <message>
+        <source>Mechanical efficiency</source>
+        <translation>Mechanischer Wirkungsgrad</translation>
+    </message>
+    <message>
+        <source>Compressor power over turbine power (shaft losses).</source>
+        <translation>Verdichterleistung durch Turbinenleistung (Wellenverluste).</translation>
+    </message>
+    <message>
+        <source>Power offtake</source>
+        <translation>Wellenleistungsentnahme</translation>
+    </message>
+    <message>
+        <source>Shaft power taken for accessories.</source>
+        <translation>Für Hilfsgeräte entnommene Wellenleistung.</translation>
+    </message>
+    <message>
+        <source>1 − pt_out/pt_in of the duct from turbine exit to nozzle entry.</source>
+        <translation>1 − pt_aus/pt_ein des Kanals vom Turbinenaustritt zum Düseneintritt.</translation>
+    </message>
+    <message>
+        <source>Afterburner lit</source>
+        <translation>Nachbrenner gezündet</translation>
+    </message>
+    <message>
+        <source>Light the afterburner (reheat) between jet pipe and nozzle.</source>
+        <translation>Den Nachbrenner zwischen Strahlrohr und Düse zünden.</translation>
+    </message>
+    <message>
+        <source>Exit temperature Tt7</source>
+        <translation>Austrittstemperatur Tt7</translation>
+    </message>
+    <message>
+        <source>Afterburner exit total temperature when lit.</source>
+        <translation>Totaltemperatur am Nachbrenneraustritt, wenn gezündet.</translation>
+    </message>
+    <message>
+        <source>Pressure-loss fraction, lit</source>
+        <translation>Relativer Druckverlust, gezündet</translation>
+    </message>
+    <message>
+        <source>1 − pt_out/pt_in when lit.</source>
+        <translation>1 − pt_aus/pt_ein, wenn gezündet.</translation>
+    </message>
+    <message>
+        <source>Pressure-loss fraction, unlit</source>
+        <translation>Relativer Druckverlust, nicht gezündet</translation>
+    </message>
+    <message>
+        <source>1 − pt_out/pt_in when not lit; 0 for an engine without afterburner.</source>
+        <translation>1 − pt_aus/pt_ein, wenn nicht gezündet; 0 für ein Triebwerk ohne Nachbrenner.</translation>
+    </message>
+    <message>
+        <source>Fraction of the heating value released when lit.</source>
+        <translation>Anteil des Heizwerts, der bei gezündetem Nachbrenner freigesetzt wird.</translation>
+    </message>
+    <message>
+        <source>Nozzle</source>
+        <translation>Schubdüse</translation>
+    </message>
+    <message>
+        <source>Convergent (exit at the throat), convergent-divergent expanding fully to ambient pressure, or convergent-divergent of fixed area ratio.</source>
+        <translation>Konvergent (Austritt im engsten Querschnitt), konvergent-divergent mit vollständiger Expansion auf Umgebungsdruck oder konvergent-divergent mit festem Flächenverhältnis.</translation>
+    </message>
+    <message>
+        <source>Convergent</source>
+        <translation>Konvergent</translation>
+    </message>
+    <message>
+        <source>Convergent-divergent, full expansion</source>
+        <translation>Konvergent-divergent, vollständige Expansion</translation>
+    </message>
+    <message>
+        <source>Convergent-divergent, fixed area ratio</source>
+        <translation>Konvergent-divergent, festes Flächenverhältnis</translation>
+    </message>
+    <message>
+        <source>Exit-to-throat area ratio A9/A8</source>
+        <translation>Flächenverhältnis Austritt zu Hals A9/A8</translation>
+    </message>
+    <message>
+        <source>Geometric area ratio of the divergent part.</source>
+        <translation>Geometrisches Flächenverhältnis des divergenten Teils.</translation>
+    </message>
+    <message>
+        <source>Velocity coefficient V9/V9,ideal, or isentropic efficiency of the expansion.</source>
+        <translation>Geschwindigkeitsbeiwert V9/V9,ideal oder isentroper Wirkungsgrad der Expansion.</translation>
+    </message>
+    <message>
+        <source>Velocity coefficient</source>
+        <translation>Geschwindigkeitsbeiwert</translation>
+    </message>
+    <message>
+        <source>Nozzle efficiency</source>
+        <translation>Düsenwirkungsgrad</translation>
+    </message>
+    <message>
+        <source>Coefficient or efficiency</source>
+        <translation>Beiwert oder Wirkungsgrad</translation>
+    </message>
+    <message>
+        <source>Velocity coefficient or nozzle efficiency, per the basis above; 1 is loss-free.</source>
+        <translation>Geschwindigkeitsbeiwert oder Düsenwirkungsgrad, je nach obiger Angabe; 1 ist verlustfrei.</translation>
+    </message>
+    <message>
+        <source>Discharge coefficient</source>
+        <translation>Durchflussbeiwert</translation>
+    </message>
+    <message>
+        <source>Actual over ideal throat mass flow; sizes the geometric throat.</source>
+        <translation>Tatsächlicher durch idealen Massenstrom im Hals; bestimmt den geometrischen Halsquerschnitt.</translation>
+    </message>
+    <message>
+        <source>Flight</source>
+        <translation>Flugzustand</translation>
+    </message>
+    <message>
+        <source>Design and sizing</source>
+        <translation>Auslegung und Größe</translation>
+    </message>
+    <message>
+        <source>Fuel</source>
+        <translation>Kraftstoff</translation>
+    </message>
+    <message>
+        <source>Inlet</source>
+        <translation>Einlauf</translation>
+    </message>
+    <message>
+        <source>Compressor</source>
+        <translation>Verdichter</translation>
+    </message>
+    <message>
+        <source>Burner</source>
+        <translation>Brennkammer</translation>
+    </message>
+    <message>
+        <source>Turbine</source>
+        <translation>Turbine</translation>
+    </message>
+    <message>
+        <source>Jet pipe</source>
+        <translation>Strahlrohr</translation>
+    </message>
+    <message>
+        <source>Afterburner</source>
+        <translation>Nachbrenner</translation>
+    </message>
+    <message>
+        <source>%1
+Valid range: %2</source>
+        <translation>%1
+Gültiger Bereich: %2</translation>
+    </message>
+</context>
+<context>
+    <name>cw::gui::CaseDocument</name>
+    <message>
+        <source>No solution for these inputs: %1</source>
+        <translation>Keine Lösung für diese Eingaben: %1</translation>
+    </message>
+    <message>
+        <source>The solver did not converge: %1</source>
+        <translation>Der Löser ist nicht konvergiert: %1</translation>
+    </message>
+    <message>
+        <source>A property is outside its data range: %1</source>
+        <translation>Eine Stoffgröße liegt außerhalb ihres Datenbereichs: %1</translation>
+    </message>
+    <message>
+        <source>Invalid input: %1</source>
+        <translation>Ungültige Eingabe: %1</translation>
+    </message>
+    <message>
+        <source>The evaluation gave a value that is not a finite number; the inputs are probably extreme.</source>
+        <translation>Die Berechnung ergab einen Wert, der keine endliche Zahl ist; die Eingaben sind vermutlich extrem.</translation>
+    </message>
+    <message>
+        <source>Evaluation failed: %1</source>
+        <translation>Berechnung fehlgeschlagen: %1</translation>
+    </message>
+</context>
+<context>
+    <name>cw::gui::CaseForm</name>
+    <message>
+        <source>%1 = %2 is outside the valid range %3.</source>
+        <translation>%1 = %2 liegt außerhalb des gültigen Bereichs %3.</translation>
+    </message>
+    <message>
+        <source>%1: “%2” is not a number.</source>
+        <translation>%1: „%2“ ist keine Zahl.</translation>
+    </message>
+    <message>
+        <source>Change %1</source>
+        <translation>%1 ändern</translation>
+    </message>
+</context>
+<context>
+    <name>cw::gui::CycleChart</name>
+    <message>
+        <source>Closure to ambient</source>
+        <translation>Schließung zur Umgebung</translation>
+    </message>
+    <message>
+        <source>Temperature–entropy</source>
+        <translation>Temperatur–Entropie</translation>
+    </message>
+    <message>
+        <source>Specific entropy s (0 at the free-stream static state)</source>
+        <translation>Spezifische Entropie s (0 im statischen Zustand der Anströmung)</translation>
+    </message>
+    <message>
+        <source>Temperature T</source>
+        <translation>Temperatur T</translation>
+    </message>
+    <message>
+        <source>Pressure–volume</source>
+        <translation>Druck–Volumen</translation>
+    </message>
+    <message>
+        <source>Specific volume v</source>
+        <translation>Spezifisches Volumen v</translation>
+    </message>
+    <message>
+        <source>Pressure p</source>
+        <translation>Druck p</translation>
+    </message>
+    <message>
+        <source>Cycle with losses</source>
+        <translation>Kreisprozess mit Verlusten</translation>
+    </message>
+    <message>
+        <source>Ideal cycle</source>
+        <translation>Idealer Kreisprozess</translation>
+    </message>
+    <message>
+        <source>Closure to ambient, with losses</source>
+        <translation>Schließung zur Umgebung, mit Verlusten</translation>
+    </message>
+    <message>
+        <source>Closure to ambient, ideal</source>
+        <translation>Schließung zur Umgebung, ideal</translation>
+    </message>
+    <message>
+        <source>Isobars through station pressures</source>
+        <translation>Isobaren durch die Stationsdrücke</translation>
+    </message>
+    <message>
+        <source>Selected component</source>
+        <translation>Gewählte Komponente</translation>
+    </message>
+    <message>
+        <source>Selected: %1</source>
+        <translation>Gewählt: %1</translation>
+    </message>
+    <message>
+        <source>Stale: showing the last valid result</source>
+        <translation>Veraltet: letztes gültiges Ergebnis</translation>
+    </message>
+    <message>
+        <source>Ideal</source>
+        <translation>Ideal</translation>
+    </message>
+    <message>
+        <source>With losses</source>
+        <translation>Mit Verlusten</translation>
+    </message>
+    <message>
+        <source>%1, %2 (%3 → %4)
+T = %5   s = %6
+p = %7   v = %8</source>
+        <translation>%1, %2 (%3 → %4)
+T = %5   s = %6
+p = %7   v = %8</translation>
+    </message>
+</context>
+<context>
+    <name>cw::gui::ImageExportDialog</name>
+    <message>
+        <source>Export as PNG</source>
+        <translation>Als PNG exportieren</translation>
+    </message>
+    <message>
+        <source> px</source>
+        <translation> px</translation>
+    </message>
+    <message>
+        <source> dpi</source>
+        <translation> dpi</translation>
+    </message>
+    <message>
+        <source>Resolution: sets the size of text and lines in pixels.</source>
+        <translation>Auflösung: bestimmt die Größe von Schrift und Linien in Pixeln.</translation>
+    </message>
+    <message>
+        <source>&amp;Width:</source>
+        <translation>&amp;Breite:</translation>
+    </message>
+    <message>
+        <source>&amp;Height:</source>
+        <translation>&amp;Höhe:</translation>
+    </message>
+    <message>
+        <source>&amp;Resolution:</source>
+        <translation>&amp;Auflösung:</translation>
+    </message>
+</context>
+<context>
+    <name>cw::gui::MainWindow</name>
     <message>
         <source>Ready</source>
         <translation>Bereit</translation>
@@ -28,28 +681,8 @@
         <translation>Ü&amp;ber Cyclewright</translation>
     </message>
     <message>
-        <source>Temperature-entropy chart</source>
-        <translation>Temperatur-Entropie-Diagramm</translation>
-    </message>
-    <message>
-        <source>Specific entropy s [J/(kg·K)], zero at the free-stream static state</source>
-        <translation>Spezifische Entropie s [J/(kg·K)], null im statischen Zustand der Anströmung</translation>
-    </message>
-    <message>
-        <source>Temperature T [K]</source>
-        <translation>Temperatur T [K]</translation>
-    </message>
-    <message>
         <source>Cannot open %1: %2</source>
         <translation>%1 kann nicht geöffnet werden: %2</translation>
-    </message>
-    <message>
-        <source>%1 is not a Cyclewright case file</source>
-        <translation>%1 ist keine Cyclewright-Falldatei</translation>
-    </message>
-    <message>
-        <source>%1 — Cyclewright</source>
-        <translation>%1 — Cyclewright</translation>
     </message>
     <message>
         <source>Opened %1</source>
@@ -66,6 +699,475 @@
     <message>
         <source>&lt;b&gt;Cyclewright %1&lt;/b&gt;&lt;br&gt;A gas-turbine cycle explorer for conceptual design.</source>
         <translation>&lt;b&gt;Cyclewright %1&lt;/b&gt;&lt;br&gt;Ein Werkzeug zur Untersuchung von Gasturbinen-Kreisprozessen im Konzeptentwurf.</translation>
+    </message>
+    <message>
+        <source>&amp;New</source>
+        <translation>&amp;Neu</translation>
+    </message>
+    <message>
+        <source>&amp;Open…</source>
+        <translation>Ö&amp;ffnen…</translation>
+    </message>
+    <message>
+        <source>&amp;Save</source>
+        <translation>&amp;Speichern</translation>
+    </message>
+    <message>
+        <source>Save &amp;As…</source>
+        <translation>Speichern &amp;unter…</translation>
+    </message>
+    <message>
+        <source>&amp;Preferences…</source>
+        <translation>&amp;Einstellungen…</translation>
+    </message>
+    <message>
+        <source>&amp;Undo</source>
+        <translation>&amp;Rückgängig</translation>
+    </message>
+    <message>
+        <source>&amp;Redo</source>
+        <translation>&amp;Wiederholen</translation>
+    </message>
+    <message>
+        <source>&amp;Reset Zoom</source>
+        <translation>Zoom &amp;zurücksetzen</translation>
+    </message>
+    <message>
+        <source>Show the whole cycle on both charts</source>
+        <translation>Den ganzen Kreisprozess in beiden Diagrammen zeigen</translation>
+    </message>
+    <message>
+        <source>&amp;Logarithmic Pressure–Volume Axes</source>
+        <translation>&amp;Logarithmische Druck–Volumen-Achsen</translation>
+    </message>
+    <message>
+        <source>Log p–v</source>
+        <translation>Log p–v</translation>
+    </message>
+    <message>
+        <source>Charts &amp;Side by Side</source>
+        <translation>Diagramme &amp;nebeneinander</translation>
+    </message>
+    <message>
+        <source>Side by Side</source>
+        <translation>Nebeneinander</translation>
+    </message>
+    <message>
+        <source>Charts in &amp;Tabs</source>
+        <translation>Diagramme in &amp;Reitern</translation>
+    </message>
+    <message>
+        <source>Tabs</source>
+        <translation>Reiter</translation>
+    </message>
+    <message>
+        <source>Copy &amp;Temperature–Entropy Chart</source>
+        <translation>&amp;Temperatur–Entropie-Diagramm kopieren</translation>
+    </message>
+    <message>
+        <source>Copy &amp;Pressure–Volume Chart</source>
+        <translation>&amp;Druck–Volumen-Diagramm kopieren</translation>
+    </message>
+    <message>
+        <source>Copy Station &amp;Table</source>
+        <translation>Stations&amp;tabelle kopieren</translation>
+    </message>
+    <message>
+        <source>Open &amp;Recent</source>
+        <translation>&amp;Zuletzt geöffnet</translation>
+    </message>
+    <message>
+        <source>&amp;Export</source>
+        <translation>&amp;Exportieren</translation>
+    </message>
+    <message>
+        <source>PNG Image…</source>
+        <translation>PNG-Bild…</translation>
+    </message>
+    <message>
+        <source>SVG Drawing…</source>
+        <translation>SVG-Zeichnung…</translation>
+    </message>
+    <message>
+        <source>PDF Document…</source>
+        <translation>PDF-Dokument…</translation>
+    </message>
+    <message>
+        <source>Temperature–Entropy Chart as %1</source>
+        <translation>Temperatur–Entropie-Diagramm als %1</translation>
+    </message>
+    <message>
+        <source>Pressure–Volume Chart as %1</source>
+        <translation>Druck–Volumen-Diagramm als %1</translation>
+    </message>
+    <message>
+        <source>Station Table as CSV…</source>
+        <translation>Stationstabelle als CSV…</translation>
+    </message>
+    <message>
+        <source>Results as JSON…</source>
+        <translation>Ergebnisse als JSON…</translation>
+    </message>
+    <message>
+        <source>&amp;Edit</source>
+        <translation>&amp;Bearbeiten</translation>
+    </message>
+    <message>
+        <source>&amp;View</source>
+        <translation>&amp;Ansicht</translation>
+    </message>
+    <message>
+        <source>Main</source>
+        <translation>Haupt</translation>
+    </message>
+    <message>
+        <source>Stations</source>
+        <translation>Stationen</translation>
+    </message>
+    <message>
+        <source>With losses</source>
+        <translation>Mit Verlusten</translation>
+    </message>
+    <message>
+        <source>Ideal</source>
+        <translation>Ideal</translation>
+    </message>
+    <message>
+        <source>Difference (with losses − ideal)</source>
+        <translation>Differenz (mit Verlusten − ideal)</translation>
+    </message>
+    <message>
+        <source>Performance</source>
+        <translation>Leistung</translation>
+    </message>
+    <message>
+        <source>Temperature–entropy</source>
+        <translation>Temperatur–Entropie</translation>
+    </message>
+    <message>
+        <source>Pressure–volume</source>
+        <translation>Druck–Volumen</translation>
+    </message>
+    <message>
+        <source>%1: %2 is outside the valid range %3</source>
+        <translation>%1: %2 liegt außerhalb des gültigen Bereichs %3</translation>
+    </message>
+    <message>
+        <source>Charts and tables show the last valid result (stale).</source>
+        <translation>Diagramme und Tabellen zeigen das letzte gültige Ergebnis (veraltet).</translation>
+    </message>
+    <message>
+        <source>There is no valid result to show yet.</source>
+        <translation>Es gibt noch kein gültiges Ergebnis.</translation>
+    </message>
+    <message>
+        <source>Stale result. %1
+%2</source>
+        <translation>Veraltetes Ergebnis. %1
+%2</translation>
+    </message>
+    <message>
+        <source>%1 (unlit)</source>
+        <translation>%1 (nicht gezündet)</translation>
+    </message>
+    <message>
+        <source>%1: stations %2</source>
+        <translation>%1: Stationen %2</translation>
+    </message>
+    <message>
+        <source>%1 is not a valid Cyclewright case file</source>
+        <translation>%1 ist keine gültige Cyclewright-Falldatei</translation>
+    </message>
+    <message>
+        <source>Cannot open case</source>
+        <translation>Fall kann nicht geöffnet werden</translation>
+    </message>
+    <message>
+        <source>%1 is not a valid Cyclewright case file:
+%2</source>
+        <translation>%1 ist keine gültige Cyclewright-Falldatei:
+%2</translation>
+    </message>
+    <message>
+        <source>Cannot save %1: %2</source>
+        <translation>%1 kann nicht gespeichert werden: %2</translation>
+    </message>
+    <message>
+        <source>Cannot save</source>
+        <translation>Speichern nicht möglich</translation>
+    </message>
+    <message>
+        <source>Saved %1</source>
+        <translation>%1 gespeichert</translation>
+    </message>
+    <message>
+        <source>Open Case</source>
+        <translation>Fall öffnen</translation>
+    </message>
+    <message>
+        <source>Cyclewright cases (*.json);;All files (*)</source>
+        <translation>Cyclewright-Fälle (*.json);;Alle Dateien (*)</translation>
+    </message>
+    <message>
+        <source>Save Case As</source>
+        <translation>Fall speichern unter</translation>
+    </message>
+    <message>
+        <source>Cyclewright cases (*.json)</source>
+        <translation>Cyclewright-Fälle (*.json)</translation>
+    </message>
+    <message>
+        <source>No recent files</source>
+        <translation>Keine zuletzt geöffneten Dateien</translation>
+    </message>
+    <message>
+        <source>Unsaved changes</source>
+        <translation>Ungespeicherte Änderungen</translation>
+    </message>
+    <message>
+        <source>The case has unsaved changes. Save them first?</source>
+        <translation>Der Fall hat ungespeicherte Änderungen. Zuerst speichern?</translation>
+    </message>
+    <message>
+        <source>Untitled</source>
+        <translation>Unbenannt</translation>
+    </message>
+    <message>
+        <source>%1[*] — Cyclewright</source>
+        <translation>%1[*] — Cyclewright</translation>
+    </message>
+    <message>
+        <source>Autosave failed: %1</source>
+        <translation>Automatisches Speichern fehlgeschlagen: %1</translation>
+    </message>
+    <message>
+        <source>Recovered the autosaved case; save it to keep it.</source>
+        <translation>Automatisch gespeicherter Fall wiederhergestellt; zum Behalten speichern.</translation>
+    </message>
+    <message>
+        <source>Recover case</source>
+        <translation>Fall wiederherstellen</translation>
+    </message>
+    <message>
+        <source>Cyclewright did not close normally. Recover the case autosaved at %1?</source>
+        <translation>Cyclewright wurde nicht normal beendet. Den um %1 automatisch gespeicherten Fall wiederherstellen?</translation>
+    </message>
+    <message>
+        <source>PNG images (*.png)</source>
+        <translation>PNG-Bilder (*.png)</translation>
+    </message>
+    <message>
+        <source>SVG drawings (*.svg)</source>
+        <translation>SVG-Zeichnungen (*.svg)</translation>
+    </message>
+    <message>
+        <source>PDF documents (*.pdf)</source>
+        <translation>PDF-Dokumente (*.pdf)</translation>
+    </message>
+    <message>
+        <source>Export Chart</source>
+        <translation>Diagramm exportieren</translation>
+    </message>
+    <message>
+        <source>Exported %1</source>
+        <translation>%1 exportiert</translation>
+    </message>
+    <message>
+        <source>Cannot write %1</source>
+        <translation>%1 kann nicht geschrieben werden</translation>
+    </message>
+    <message>
+        <source>Export Station Table</source>
+        <translation>Stationstabelle exportieren</translation>
+    </message>
+    <message>
+        <source>Export Results</source>
+        <translation>Ergebnisse exportieren</translation>
+    </message>
+    <message>
+        <source>CSV files (*.csv)</source>
+        <translation>CSV-Dateien (*.csv)</translation>
+    </message>
+    <message>
+        <source>JSON files (*.json)</source>
+        <translation>JSON-Dateien (*.json)</translation>
+    </message>
+    <message>
+        <source>Exported %1 (SI units)</source>
+        <translation>%1 exportiert (SI-Einheiten)</translation>
+    </message>
+    <message>
+        <source>Chart copied to the clipboard</source>
+        <translation>Diagramm in die Zwischenablage kopiert</translation>
+    </message>
+    <message>
+        <source>Station table copied as tab-separated text</source>
+        <translation>Stationstabelle als tabulatorgetrennter Text kopiert</translation>
+    </message>
+</context>
+<context>
+    <name>cw::gui::PerformanceModel</name>
+    <message>
+        <source>Net thrust</source>
+        <translation>Nettoschub</translation>
+    </message>
+    <message>
+        <source>Specific thrust</source>
+        <translation>Spezifischer Schub</translation>
+    </message>
+    <message>
+        <source>Thrust-specific fuel consumption</source>
+        <translation>Schubspezifischer Kraftstoffverbrauch</translation>
+    </message>
+    <message>
+        <source>Fuel-air ratio</source>
+        <translation>Kraftstoff-Luft-Verhältnis</translation>
+    </message>
+    <message>
+        <source>Fuel flow</source>
+        <translation>Kraftstoffmassenstrom</translation>
+    </message>
+    <message>
+        <source>Thermal efficiency</source>
+        <translation>Thermischer Wirkungsgrad</translation>
+    </message>
+    <message>
+        <source>Propulsive efficiency</source>
+        <translation>Vortriebswirkungsgrad</translation>
+    </message>
+    <message>
+        <source>Overall efficiency</source>
+        <translation>Gesamtwirkungsgrad</translation>
+    </message>
+    <message>
+        <source>Jet velocity</source>
+        <translation>Strahlgeschwindigkeit</translation>
+    </message>
+    <message>
+        <source>Performance</source>
+        <translation>Leistung</translation>
+    </message>
+    <message>
+        <source>With losses</source>
+        <translation>Mit Verlusten</translation>
+    </message>
+    <message>
+        <source>Ideal</source>
+        <translation>Ideal</translation>
+    </message>
+    <message>
+        <source>Difference</source>
+        <translation>Differenz</translation>
+    </message>
+    <message>
+        <source>Unit</source>
+        <translation>Einheit</translation>
+    </message>
+</context>
+<context>
+    <name>cw::gui::PreferencesDialog</name>
+    <message>
+        <source>Preferences</source>
+        <translation>Einstellungen</translation>
+    </message>
+    <message>
+        <source>SI (K, kPa, kg/s, N)</source>
+        <translation>SI (K, kPa, kg/s, N)</translation>
+    </message>
+    <message>
+        <source>U.S. customary (°R, psia, lbm/s, lbf)</source>
+        <translation>US-Einheiten (°R, psia, lbm/s, lbf)</translation>
+    </message>
+    <message>
+        <source>Units for display and entry. Case files always store SI values.</source>
+        <translation>Einheiten für Anzeige und Eingabe. Falldateien speichern stets SI-Werte.</translation>
+    </message>
+    <message>
+        <source>&amp;Units:</source>
+        <translation>&amp;Einheiten:</translation>
+    </message>
+    <message>
+        <source>Side by side</source>
+        <translation>Nebeneinander</translation>
+    </message>
+    <message>
+        <source>Tabbed</source>
+        <translation>In Reitern</translation>
+    </message>
+    <message>
+        <source>&amp;Charts:</source>
+        <translation>&amp;Diagramme:</translation>
+    </message>
+    <message>
+        <source> s</source>
+        <translation> s</translation>
+    </message>
+    <message>
+        <source>Seconds after a change until the case is saved for recovery after a crash.</source>
+        <translation>Sekunden nach einer Änderung, bis der Fall für die Wiederherstellung nach einem Absturz gespeichert wird.</translation>
+    </message>
+    <message>
+        <source>&amp;Autosave after:</source>
+        <translation>&amp;Automatisch speichern nach:</translation>
+    </message>
+</context>
+<context>
+    <name>cw::gui::StationTableModel</name>
+    <message>
+        <source>Station</source>
+        <translation>Station</translation>
+    </message>
+    <message>
+        <source>Tt</source>
+        <translation>Tt</translation>
+    </message>
+    <message>
+        <source>pt</source>
+        <translation>pt</translation>
+    </message>
+    <message>
+        <source>Ts</source>
+        <translation>Ts</translation>
+    </message>
+    <message>
+        <source>ps</source>
+        <translation>ps</translation>
+    </message>
+    <message>
+        <source>M</source>
+        <translation>M</translation>
+    </message>
+    <message>
+        <source>V</source>
+        <translation>V</translation>
+    </message>
+    <message>
+        <source>W</source>
+        <translation>W</translation>
+    </message>
+    <message>
+        <source>f</source>
+        <translation>f</translation>
+    </message>
+    <message>
+        <source>s</source>
+        <translation>s</translation>
+    </message>
+    <message>
+        <source>A</source>
+        <translation>A</translation>
+    </message>
+    <message>
+        <source>Stations, cycle with losses</source>
+        <translation>Stationen, Kreisprozess mit Verlusten</translation>
+    </message>
+    <message>
+        <source>Stations, ideal cycle</source>
+        <translation>Stationen, idealer Kreisprozess</translation>
+    </message>
+    <message>
+        <source>Stations, difference (with losses − ideal)</source>
+        <translation>Stationen, Differenz (mit Verlusten − ideal)</translation>
     </message>
 </context>
 </TS>

@@ -1,9 +1,9 @@
 #pragma once
 // Start-up of the Cyclewright application: command-line options and translation.
 
+#include <QSize>
 #include <QString>
 #include <QStringList>
-#include <QSize>
 
 class QApplication;
 
@@ -13,7 +13,7 @@ struct StartOptions {
   QString casePath;        ///< case to open; the demo case when empty
   QString screenshotPath;  ///< when set: render the main window to this PNG and exit
   QSize screenshotSize{1600, 1000};
-  QString language;        ///< e.g. "de"; the system locale when empty
+  QString language;  ///< e.g. "de"; the system locale when empty
 };
 
 /// Returns true when argv asks for an offscreen render (--screenshot), before QApplication exists.

@@ -26,9 +26,12 @@ int main(int argc, char** argv) {
   parser.setApplicationDescription("Gas-turbine cycle explorer for conceptual design.");
   parser.addHelpOption();
   parser.addVersionOption();
-  QCommandLineOption screenshot("screenshot", "Render the main window offscreen to a PNG file and exit.", "FILE");
-  QCommandLineOption size("size", "Size of the --screenshot picture in pixels (default 1600x1000).", "WxH", "1600x1000");
-  QCommandLineOption language("language", "User-interface language, e.g. en or de (default: the system's).", "CODE");
+  QCommandLineOption screenshot("screenshot", "Render the main window offscreen to a PNG file and exit.",
+                                "FILE");
+  QCommandLineOption size("size", "Size of the --screenshot picture in pixels (default 1600x1000).", "WxH",
+                          "1600x1000");
+  QCommandLineOption language("language", "User-interface language, e.g. en or de (default: the system's).",
+                              "CODE");
   parser.addOption(screenshot);
   parser.addOption(size);
   parser.addOption(language);
@@ -52,7 +55,8 @@ int main(int argc, char** argv) {
 
   cw::gui::MainWindow window;
   const QStringList positional = parser.positionalArguments();
-  const QString casePath = positional.isEmpty() ? QStringLiteral(":/demo/demo-turbojet.json") : positional.first();
+  const QString casePath =
+      positional.isEmpty() ? QStringLiteral(":/demo/demo-turbojet.json") : positional.first();
   if (!window.openCase(casePath) && !positional.isEmpty()) {
     std::fprintf(stderr, "cyclewright: cannot open case %s\n", qPrintable(casePath));
   }
@@ -60,6 +64,7 @@ int main(int argc, char** argv) {
   if (parser.isSet(screenshot)) {
     window.resize(pictureSize);
     window.show();
+    QApplication::processEvents();
     QApplication::processEvents();
     const QPixmap picture = window.grab();
     if (!picture.save(parser.value(screenshot), "PNG")) {
@@ -71,5 +76,6 @@ int main(int argc, char** argv) {
 
   window.resize(1280, 800);
   window.show();
+  window.offerRecovery();
   return QApplication::exec();
 }

@@ -1,89 +1,768 @@
 #include "main_window.h"
 
+#include "case_document.h"
+#include "case_form.h"
+#include "charts/chart_export.h"
+#include "charts/cycle_chart.h"
+#include "charts/path_series.h"
+#include "common/error.h"
 #include "common/version.h"
+#include "dialogs.h"
+#include "engine/case_validation_error.h"
+#include "io/case_file.h"
+#include "io/result_export.h"
+#include "performance_model.h"
+#include "selection_router.h"
+#include "station_table_model.h"
+#include "units.h"
 
 #include <QAction>
+#include <QActionGroup>
 #include <QApplication>
+#include <QClipboard>
+#include <QCloseEvent>
+#include <QComboBox>
+#include <QDir>
 #include <QFile>
+#include <QFileDialog>
 #include <QFileInfo>
-#include <QJsonDocument>
-#include <QJsonObject>
+#include <QGroupBox>
+#include <QHeaderView>
 #include <QKeySequence>
+#include <QLabel>
+#include <QListWidget>
 #include <QMenuBar>
 #include <QMessageBox>
+#include <QSaveFile>
+#include <QScrollArea>
+#include <QSplitter>
+#include <QStackedWidget>
+#include <QStandardPaths>
 #include <QStatusBar>
+#include <QTabWidget>
+#include <QTableView>
+#include <QTimer>
+#include <QToolBar>
+#include <QUndoStack>
+#include <QVBoxLayout>
 
-#include <qwt_plot.h>
-#include <qwt_plot_grid.h>
-#include <qwt_text.h>
+#include <fstream>
 
 // The resources live in a static library; register them once before first use.
-static void initialiseResources() { Q_INIT_RESOURCE(resources); }
+static void initialiseResources() {
+  Q_INIT_RESOURCE(resources);
+}
 
 namespace cw::gui {
+
+namespace {
+
+QString problemsText(const engine::CaseValidationError& e) {
+  QStringList lines;
+  for (const auto& p : e.problems()) lines << QString::fromStdString(p.message);
+  return lines.join(QLatin1Char('\n'));
+}
+
+}  // namespace
 
 MainWindow::MainWindow(QWidget* parent) : QMainWindow(parent) {
   initialiseResources();
   setObjectName("mainWindow");
-  setWindowTitle(tr("Cyclewright"));
+  units_ = new DisplayUnits(this);
+  units_->setSystem(settings_.unitSystem());
+  document_ = new CaseDocument(this);
+  router_ = new SelectionRouter(this);
+
+  createActions();
   createMenus();
-  temperatureEntropyChart_ = createTemperatureEntropyChart();
-  setCentralWidget(temperatureEntropyChart_);
+  createCentralWidget();
+  createToolBar();
+
+  autosaveTimer_ = new QTimer(this);
+  autosaveTimer_->setSingleShot(true);
+  connect(autosaveTimer_, &QTimer::timeout, this, &MainWindow::autosaveNow);
+
+  connect(document_, &CaseDocument::resultChanged, this, &MainWindow::refreshResult);
+  connect(document_, &CaseDocument::caseChanged, this, &MainWindow::updateStrip);
+  connect(document_, &CaseDocument::caseChanged, this, &MainWindow::scheduleAutosave);
+  connect(document_, &CaseDocument::modifiedChanged, this, &MainWindow::updateTitle);
+  connect(router_, &SelectionRouter::selected, this, &MainWindow::routeSelection);
+  connect(units_, &DisplayUnits::changed, this, &MainWindow::updateBanner);
+
+  setChartLayout(settings_.chartLayout());
+  pvChart_->setLogAxes(settings_.pressureVolumeLogAxes());
+  actions_.logAxes->setChecked(settings_.pressureVolumeLogAxes());
+  restoreGeometry(settings_.windowGeometry());
+  restoreState(settings_.windowState());
+
+  router_->select(Section::Compressor);
+  refreshResult();
+  updateStrip();
+  updateTitle();
   statusBar()->showMessage(tr("Ready"));
+}
+
+MainWindow::~MainWindow() = default;
+
+// ---------------------------------------------------------------------------------------------
+// Actions, menus, toolbar
+
+void MainWindow::createActions() {
+  auto make = [this](const QString& text, const char* name, auto slot, QKeySequence::StandardKey key) {
+    auto* action = new QAction(text, this);
+    action->setObjectName(QString::fromLatin1(name));
+    if (key != QKeySequence::UnknownKey) action->setShortcut(key);
+    connect(action, &QAction::triggered, this, slot);
+    return action;
+  };
+  actions_.newCase = make(tr("&New"), "newAction", &MainWindow::newCase, QKeySequence::New);
+  actions_.open = make(tr("&Open…"), "openAction", &MainWindow::open, QKeySequence::Open);
+  actions_.save = make(tr("&Save"), "saveAction", &MainWindow::save, QKeySequence::Save);
+  actions_.saveAs = make(tr("Save &As…"), "saveAsAction", &MainWindow::saveAs, QKeySequence::SaveAs);
+  actions_.preferences =
+      make(tr("&Preferences…"), "preferencesAction", &MainWindow::showPreferences, QKeySequence::Preferences);
+  actions_.quit = new QAction(tr("&Quit"), this);
+  actions_.quit->setObjectName("quitAction");
+  actions_.quit->setShortcut(QKeySequence::Quit);
+  connect(actions_.quit, &QAction::triggered, this, &QWidget::close);
+  actions_.about =
+      make(tr("&About Cyclewright"), "aboutAction", &MainWindow::showAbout, QKeySequence::UnknownKey);
+
+  actions_.undo = document_->undoStack()->createUndoAction(this, tr("&Undo"));
+  actions_.undo->setObjectName("undoAction");
+  actions_.undo->setShortcut(QKeySequence::Undo);
+  actions_.redo = document_->undoStack()->createRedoAction(this, tr("&Redo"));
+  actions_.redo->setObjectName("redoAction");
+  actions_.redo->setShortcut(QKeySequence::Redo);
+
+  actions_.resetZoom = new QAction(tr("&Reset Zoom"), this);
+  actions_.resetZoom->setObjectName("resetZoomAction");
+  actions_.resetZoom->setShortcut(Qt::CTRL | Qt::Key_0);
+  actions_.resetZoom->setToolTip(tr("Show the whole cycle on both charts"));
+  connect(actions_.resetZoom, &QAction::triggered, this, [this] {
+    tsChart_->resetZoom();
+    pvChart_->resetZoom();
+  });
+  actions_.logAxes = new QAction(tr("&Logarithmic Pressure–Volume Axes"), this);
+  actions_.logAxes->setObjectName("logAxesAction");
+  actions_.logAxes->setCheckable(true);
+  actions_.logAxes->setIconText(tr("Log p–v"));
+  connect(actions_.logAxes, &QAction::toggled, this, [this](bool on) {
+    pvChart_->setLogAxes(on);
+    settings_.setPressureVolumeLogAxes(on);
+  });
+  actions_.layoutGroup = new QActionGroup(this);
+  actions_.sideBySide = new QAction(tr("Charts &Side by Side"), actions_.layoutGroup);
+  actions_.sideBySide->setObjectName("sideBySideAction");
+  actions_.sideBySide->setCheckable(true);
+  actions_.sideBySide->setIconText(tr("Side by Side"));
+  actions_.tabbed = new QAction(tr("Charts in &Tabs"), actions_.layoutGroup);
+  actions_.tabbed->setObjectName("tabbedAction");
+  actions_.tabbed->setCheckable(true);
+  actions_.tabbed->setIconText(tr("Tabs"));
+  connect(actions_.sideBySide, &QAction::triggered, this,
+          [this] { setChartLayout(ChartLayout::SideBySide); });
+  connect(actions_.tabbed, &QAction::triggered, this, [this] { setChartLayout(ChartLayout::Tabbed); });
+
+  actions_.copyTs = new QAction(tr("Copy &Temperature–Entropy Chart"), this);
+  actions_.copyTs->setObjectName("copyTsAction");
+  connect(actions_.copyTs, &QAction::triggered, this, [this] { copyChart(tsChart_); });
+  actions_.copyPv = new QAction(tr("Copy &Pressure–Volume Chart"), this);
+  actions_.copyPv->setObjectName("copyPvAction");
+  connect(actions_.copyPv, &QAction::triggered, this, [this] { copyChart(pvChart_); });
+  actions_.copyTable = new QAction(tr("Copy Station &Table"), this);
+  actions_.copyTable->setObjectName("copyTableAction");
+  connect(actions_.copyTable, &QAction::triggered, this, &MainWindow::copyTable);
 }
 
 void MainWindow::createMenus() {
   QMenu* fileMenu = menuBar()->addMenu(tr("&File"));
   fileMenu->setObjectName("fileMenu");
-  QAction* quit = fileMenu->addAction(tr("&Quit"), qApp, &QApplication::closeAllWindows);
-  quit->setShortcut(QKeySequence::Quit);
-  quit->setObjectName("quitAction");
+  fileMenu->addAction(actions_.newCase);
+  fileMenu->addAction(actions_.open);
+  recentMenu_ = fileMenu->addMenu(tr("Open &Recent"));
+  recentMenu_->setObjectName("recentMenu");
+  connect(recentMenu_, &QMenu::aboutToShow, this, &MainWindow::updateRecentMenu);
+  fileMenu->addAction(actions_.save);
+  fileMenu->addAction(actions_.saveAs);
+  fileMenu->addSeparator();
+  QMenu* exportMenu = fileMenu->addMenu(tr("&Export"));
+  exportMenu->setObjectName("exportMenu");
+  const std::pair<QString, QString> formats[] = {
+      {"png", tr("PNG Image…")}, {"svg", tr("SVG Drawing…")}, {"pdf", tr("PDF Document…")}};
+  for (const auto& [format, text] : formats) {
+    const QString f = format;
+    exportMenu->addAction(tr("Temperature–Entropy Chart as %1").arg(text), this,
+                          [this, f] { exportChart(tsChart_, f); });
+  }
+  for (const auto& [format, text] : formats) {
+    const QString f = format;
+    exportMenu->addAction(tr("Pressure–Volume Chart as %1").arg(text), this,
+                          [this, f] { exportChart(pvChart_, f); });
+  }
+  exportMenu->addSeparator();
+  exportMenu->addAction(tr("Station Table as CSV…"), this, [this] { exportTable("csv"); });
+  exportMenu->addAction(tr("Results as JSON…"), this, [this] { exportTable("json"); });
+  fileMenu->addSeparator();
+  fileMenu->addAction(actions_.preferences);
+  fileMenu->addSeparator();
+  fileMenu->addAction(actions_.quit);
+
+  QMenu* editMenu = menuBar()->addMenu(tr("&Edit"));
+  editMenu->setObjectName("editMenu");
+  editMenu->addAction(actions_.undo);
+  editMenu->addAction(actions_.redo);
+  editMenu->addSeparator();
+  editMenu->addAction(actions_.copyTs);
+  editMenu->addAction(actions_.copyPv);
+  editMenu->addAction(actions_.copyTable);
+
+  QMenu* viewMenu = menuBar()->addMenu(tr("&View"));
+  viewMenu->setObjectName("viewMenu");
+  viewMenu->addAction(actions_.sideBySide);
+  viewMenu->addAction(actions_.tabbed);
+  viewMenu->addSeparator();
+  viewMenu->addAction(actions_.logAxes);
+  viewMenu->addAction(actions_.resetZoom);
 
   QMenu* helpMenu = menuBar()->addMenu(tr("&Help"));
   helpMenu->setObjectName("helpMenu");
-  QAction* about = helpMenu->addAction(tr("&About Cyclewright"), this, &MainWindow::showAbout);
-  about->setObjectName("aboutAction");
+  helpMenu->addAction(actions_.about);
 }
 
-QwtPlot* MainWindow::createTemperatureEntropyChart() {
-  auto* plot = new QwtPlot(this);
-  plot->setObjectName("temperatureEntropyChart");
-  plot->setTitle(tr("Temperature-entropy chart"));
-  plot->setAxisTitle(QwtAxis::XBottom, tr("Specific entropy s [J/(kg·K)], zero at the free-stream static state"));
-  plot->setAxisTitle(QwtAxis::YLeft, tr("Temperature T [K]"));
-  plot->setAxisScale(QwtAxis::XBottom, 0.0, 1500.0);
-  plot->setAxisScale(QwtAxis::YLeft, 200.0, 2000.0);
-  plot->setCanvasBackground(palette().color(QPalette::Base));
-  auto* grid = new QwtPlotGrid;
-  grid->setMajorPen(palette().color(QPalette::Mid), 0.0, Qt::DotLine);
-  grid->attach(plot);
-  return plot;
+void MainWindow::createToolBar() {
+  QToolBar* bar = addToolBar(tr("Main"));
+  bar->setObjectName("mainToolBar");
+  bar->setToolButtonStyle(Qt::ToolButtonTextOnly);
+  bar->addAction(actions_.newCase);
+  bar->addAction(actions_.open);
+  bar->addAction(actions_.save);
+  bar->addSeparator();
+  bar->addAction(actions_.undo);
+  bar->addAction(actions_.redo);
+  bar->addSeparator();
+  bar->addAction(actions_.resetZoom);
+  bar->addAction(actions_.logAxes);
+  bar->addSeparator();
+  bar->addAction(actions_.sideBySide);
+  bar->addAction(actions_.tabbed);
+}
+
+void MainWindow::createCentralWidget() {
+  auto* central = new QWidget(this);
+  auto* layout = new QVBoxLayout(central);
+  layout->setContentsMargins(6, 6, 6, 6);
+
+  // The component strip, in flow order after the operating inputs.
+  strip_ = new QListWidget(central);
+  strip_->setObjectName("componentStrip");
+  strip_->setFlow(QListView::LeftToRight);
+  strip_->setWrapping(false);
+  strip_->setSelectionMode(QAbstractItemView::SingleSelection);
+  strip_->setHorizontalScrollBarPolicy(Qt::ScrollBarAsNeeded);
+  strip_->setVerticalScrollBarPolicy(Qt::ScrollBarAlwaysOff);
+  strip_->setSpacing(3);
+  for (int i = 0; i < kSectionCount; ++i) {
+    auto* item = new QListWidgetItem(sectionName(static_cast<Section>(i)), strip_);
+    item->setTextAlignment(Qt::AlignCenter);
+    item->setSizeHint(QSize(QFontMetrics(strip_->font()).horizontalAdvance(item->text()) + 28,
+                            QFontMetrics(strip_->font()).height() * 2 + 8));
+  }
+  strip_->setFixedHeight(QFontMetrics(strip_->font()).height() * 2 + 22);
+  connect(strip_, &QListWidget::currentRowChanged, this, [this](int row) {
+    if (row >= 0) router_->select(static_cast<Section>(row));
+  });
+  layout->addWidget(strip_);
+
+  banner_ = new QLabel(central);
+  banner_->setObjectName("staleBanner");
+  banner_->setWordWrap(true);
+  banner_->setAutoFillBackground(true);
+  banner_->setMargin(6);
+  banner_->setTextFormat(Qt::PlainText);
+  {
+    QPalette p = banner_->palette();
+    const bool light = p.color(QPalette::Window).lightness() > 128;
+    p.setColor(QPalette::Window, light ? QColor(0xFF, 0xE8, 0xD6) : QColor(0x5A, 0x2A, 0x08));
+    p.setColor(QPalette::WindowText, light ? QColor(0x60, 0x20, 0x00) : QColor(0xFF, 0xE0, 0xC8));
+    banner_->setPalette(p);
+  }
+  banner_->hide();
+  layout->addWidget(banner_);
+
+  auto* vertical = new QSplitter(Qt::Vertical, central);
+  vertical->setObjectName("verticalSplitter");
+  auto* horizontal = new QSplitter(Qt::Horizontal, vertical);
+  horizontal->setObjectName("horizontalSplitter");
+
+  forms_ = new QStackedWidget;
+  forms_->setObjectName("formStack");
+  for (int i = 0; i < kSectionCount; ++i) {
+    auto* form = new CaseForm(static_cast<Section>(i), *document_, *units_);
+    formOf_[static_cast<size_t>(i)] = form;
+    forms_->addWidget(form);
+  }
+  auto* scroll = new QScrollArea(horizontal);
+  scroll->setWidgetResizable(true);
+  scroll->setWidget(forms_);
+  scroll->setMinimumWidth(200);
+  horizontal->setSizes({340, 1200});
+  horizontal->addWidget(scroll);
+
+  tsChart_ = new CycleChart(ChartKind::TemperatureEntropy, *units_);
+  pvChart_ = new CycleChart(ChartKind::PressureVolume, *units_);
+  chartHost_ = new QStackedWidget(horizontal);
+  chartSplitter_ = new QSplitter(Qt::Horizontal);
+  chartSplitter_->setObjectName("chartSplitter");
+  chartTabs_ = new QTabWidget;
+  chartTabs_->setObjectName("chartTabs");
+  chartHost_->addWidget(chartSplitter_);
+  chartHost_->addWidget(chartTabs_);
+  horizontal->addWidget(chartHost_);
+  horizontal->setStretchFactor(0, 0);
+  horizontal->setStretchFactor(1, 1);
+
+  auto* bottom = new QSplitter(Qt::Horizontal, vertical);
+  auto* stationBox = new QGroupBox(tr("Stations"), bottom);
+  auto* stationLayout = new QVBoxLayout(stationBox);
+  tableMode_ = new QComboBox(stationBox);
+  tableMode_->setObjectName("tableMode");
+  tableMode_->addItems({tr("With losses"), tr("Ideal"), tr("Difference (with losses − ideal)")});
+  stationLayout->addWidget(tableMode_);
+  stationModel_ = new StationTableModel(*units_, this);
+  stationView_ = new QTableView(stationBox);
+  stationView_->setObjectName("stationTable");
+  stationView_->setModel(stationModel_);
+  stationView_->verticalHeader()->hide();
+  stationView_->horizontalHeader()->setSectionResizeMode(QHeaderView::ResizeToContents);
+  stationView_->setSelectionBehavior(QAbstractItemView::SelectRows);
+  stationView_->setAlternatingRowColors(true);
+  stationView_->verticalHeader()->setDefaultSectionSize(QFontMetrics(stationView_->font()).height() + 6);
+  stationView_->setMinimumHeight(60);
+  stationLayout->addWidget(stationView_);
+  connect(tableMode_, &QComboBox::currentIndexChanged, this,
+          [this](int index) { stationModel_->setMode(static_cast<TableMode>(index)); });
+
+  auto* performanceBox = new QGroupBox(tr("Performance"), bottom);
+  auto* performanceLayout = new QVBoxLayout(performanceBox);
+  performanceModel_ = new PerformanceModel(*units_, this);
+  performanceView_ = new QTableView(performanceBox);
+  performanceView_->setObjectName("performanceTable");
+  performanceView_->setModel(performanceModel_);
+  performanceView_->verticalHeader()->hide();
+  performanceView_->horizontalHeader()->setSectionResizeMode(QHeaderView::ResizeToContents);
+  performanceView_->horizontalHeader()->setStretchLastSection(true);
+  performanceView_->setAlternatingRowColors(true);
+  performanceView_->verticalHeader()->setDefaultSectionSize(QFontMetrics(performanceView_->font()).height() +
+                                                            6);
+  performanceView_->setMinimumHeight(60);
+  performanceLayout->addWidget(performanceView_);
+  bottom->addWidget(stationBox);
+  bottom->addWidget(performanceBox);
+  bottom->setStretchFactor(0, 3);
+  bottom->setStretchFactor(1, 2);
+
+  vertical->addWidget(horizontal);
+  vertical->addWidget(bottom);
+  vertical->setStretchFactor(0, 3);
+  vertical->setStretchFactor(1, 2);
+  vertical->setSizes({600, 330});
+  layout->addWidget(vertical, 1);
+  setCentralWidget(central);
+}
+
+void MainWindow::setChartLayout(ChartLayout chartLayout) {
+  chartLayout_ = chartLayout;
+  if (chartLayout == ChartLayout::Tabbed) {
+    chartTabs_->addTab(tsChart_, tr("Temperature–entropy"));
+    chartTabs_->addTab(pvChart_, tr("Pressure–volume"));
+    chartHost_->setCurrentWidget(chartTabs_);
+    actions_.tabbed->setChecked(true);
+  } else {
+    chartSplitter_->addWidget(tsChart_);
+    chartSplitter_->addWidget(pvChart_);
+    chartHost_->setCurrentWidget(chartSplitter_);
+    actions_.sideBySide->setChecked(true);
+  }
+  tsChart_->show();
+  pvChart_->show();
+  settings_.setChartLayout(chartLayout);
+}
+
+void MainWindow::setUnitSystem(UnitSystem system) {
+  units_->setSystem(system);
+  settings_.setUnitSystem(system);
+}
+
+// ---------------------------------------------------------------------------------------------
+// Selection and results
+
+QSet<QString> MainWindow::stationsOf(Section section) const {
+  QSet<QString> out;
+  if (section == Section::Flight) out.insert("0");
+  if (section == Section::Design) out.insert("2");
+  const auto evaluation = document_->evaluation();
+  const std::string component = sectionComponent(section);
+  if (!evaluation || component.empty()) return out;
+  const auto& cycle = evaluation->actual;
+  const int p = componentPath(cycle, component);
+  if (p < 0) return out;
+  const auto& path = cycle.paths[static_cast<size_t>(p)];
+  bool inside = false;
+  for (const auto& s : cycle.stations) {
+    if (s.id == path.fromStation) inside = true;
+    if (inside) out.insert(QString::fromStdString(s.id));
+    if (s.id == path.toStation) break;
+  }
+  return out;
+}
+
+void MainWindow::routeSelection(Section section) {
+  const int row = static_cast<int>(section);
+  {
+    const QSignalBlocker blocker(strip_);
+    strip_->setCurrentRow(row);
+  }
+  forms_->setCurrentIndex(row);
+  tsChart_->setHighlightedComponent(sectionComponent(section));
+  pvChart_->setHighlightedComponent(sectionComponent(section));
+  stationModel_->setHighlightedStations(stationsOf(section));
+}
+
+void MainWindow::refreshResult() {
+  const auto evaluation = document_->evaluation();
+  const bool stale = document_->isStale();
+  if (evaluation != shown_) {
+    shown_ = evaluation;
+    tsChart_->setEvaluation(evaluation, stale);
+    pvChart_->setEvaluation(evaluation, stale);
+    stationModel_->setEvaluation(evaluation, stale);
+    performanceModel_->setEvaluation(evaluation, stale);
+    stationModel_->setHighlightedStations(stationsOf(router_->current()));
+  } else {
+    tsChart_->setStale(stale);
+    pvChart_->setStale(stale);
+    stationModel_->setStale(stale);
+    performanceModel_->setStale(stale);
+  }
+  updateBanner();
+}
+
+void MainWindow::updateBanner() {
+  if (!document_->isStale()) {
+    banner_->hide();
+    return;
+  }
+  QStringList lines;
+  const engine::Case& c = document_->currentCase();
+  for (const auto& message : document_->entryProblems()) lines << message;
+  for (const auto& problem : document_->problems()) {
+    QString where = QString::fromStdString(problem.path);
+    for (const auto& spec : caseFields())
+      if (spec.path(c) == problem.path)
+        where = sectionName(spec.section) + QStringLiteral(" › ") + fieldLabel(spec);
+    lines << tr("%1: %2 is outside the valid range %3")
+                 .arg(where, QString::fromStdString(problem.value), QString::fromStdString(problem.valid));
+  }
+  if (!document_->failure().isEmpty()) lines << document_->failure();
+  const QString tail = document_->evaluation() ? tr("Charts and tables show the last valid result (stale).")
+                                               : tr("There is no valid result to show yet.");
+  banner_->setText(tr("Stale result. %1\n%2").arg(tail, lines.join(QLatin1Char('\n'))));
+  banner_->show();
+}
+
+void MainWindow::updateStrip() {
+  const bool lit = document_->currentCase().afterburner.enabled;
+  QListWidgetItem* item = strip_->item(static_cast<int>(Section::Afterburner));
+  item->setText(lit ? sectionName(Section::Afterburner)
+                    : tr("%1 (unlit)").arg(sectionName(Section::Afterburner)));
+  item->setSizeHint(
+      QSize(QFontMetrics(strip_->font()).horizontalAdvance(item->text()) + 28, item->sizeHint().height()));
+  item->setForeground(lit ? palette().brush(QPalette::Text)
+                          : palette().brush(QPalette::Disabled, QPalette::Text));
+  for (int i = 0; i < kSectionCount; ++i) {
+    const auto section = static_cast<Section>(i);
+    const QSet<QString> stations = stationsOf(section);
+    QStringList ids(stations.begin(), stations.end());
+    std::sort(ids.begin(), ids.end(),
+              [](const QString& a, const QString& b) { return a.toInt() < b.toInt(); });
+    strip_->item(i)->setToolTip(ids.isEmpty()
+                                    ? sectionName(section)
+                                    : tr("%1: stations %2").arg(sectionName(section), ids.join(", ")));
+  }
+}
+
+// ---------------------------------------------------------------------------------------------
+// Files
+
+QString MainWindow::casePath() const {
+  return document_->filePath();
 }
 
 bool MainWindow::openCase(const QString& path) {
-  QFile file(path);
-  if (!file.open(QIODevice::ReadOnly)) {
-    statusBar()->showMessage(tr("Cannot open %1: %2").arg(path, file.errorString()));
+  engine::Case loaded;
+  try {
+    if (path.startsWith(QLatin1Char(':'))) {
+      QFile file(path);
+      if (!file.open(QIODevice::ReadOnly)) {
+        statusBar()->showMessage(tr("Cannot open %1: %2").arg(path, file.errorString()));
+        return false;
+      }
+      const QByteArray bytes = file.readAll();
+      loaded = io::parseCase(nlohmann::json::parse(bytes.constData(), bytes.constData() + bytes.size()));
+    } else {
+      loaded = io::readCaseFile(QDir::toNativeSeparators(path).toStdString());
+    }
+  } catch (const engine::CaseValidationError& e) {
+    statusBar()->showMessage(tr("%1 is not a valid Cyclewright case file").arg(path));
+    if (isVisible())
+      QMessageBox::warning(this, tr("Cannot open case"),
+                           tr("%1 is not a valid Cyclewright case file:\n%2").arg(path, problemsText(e)));
+    return false;
+  } catch (const std::exception& e) {
+    statusBar()->showMessage(tr("Cannot open %1: %2").arg(path, QString::fromStdString(e.what())));
     return false;
   }
-  QJsonParseError parseError;
-  const QJsonDocument document = QJsonDocument::fromJson(file.readAll(), &parseError);
-  if (document.isNull() || !document.isObject() ||
-      document.object().value("format").toString() != QLatin1String("cyclewright-case")) {
-    statusBar()->showMessage(tr("%1 is not a Cyclewright case file").arg(path));
-    return false;
-  }
-  casePath_ = path;
-  const QString title = document.object().value("title").toString();
-  setWindowTitle(tr("%1 — Cyclewright").arg(QFileInfo(path).fileName()));
+  document_->load(loaded, path);
+  if (!path.startsWith(QLatin1Char(':'))) settings_.addRecentFile(QFileInfo(path).absoluteFilePath());
+  updateTitle();
+  const QString title = QString::fromStdString(loaded.title);
   statusBar()->showMessage(tr("Opened %1").arg(title.isEmpty() ? path : title));
   return true;
 }
 
+bool MainWindow::saveCaseAs(const QString& path) {
+  try {
+    io::writeCaseFile(path.toStdString(), document_->currentCase());
+  } catch (const std::exception& e) {
+    statusBar()->showMessage(tr("Cannot save %1: %2").arg(path, QString::fromStdString(e.what())));
+    if (isVisible()) QMessageBox::warning(this, tr("Cannot save"), QString::fromStdString(e.what()));
+    return false;
+  }
+  document_->markSaved(path);
+  settings_.addRecentFile(QFileInfo(path).absoluteFilePath());
+  removeAutosave();
+  updateTitle();
+  statusBar()->showMessage(tr("Saved %1").arg(path));
+  return true;
+}
+
+void MainWindow::newCase() {
+  if (!maybeSave()) return;
+  document_->load(engine::Case{}, QString());
+  updateTitle();
+}
+
+void MainWindow::open() {
+  if (!maybeSave()) return;
+  const QString path = QFileDialog::getOpenFileName(this, tr("Open Case"), QString(),
+                                                    tr("Cyclewright cases (*.json);;All files (*)"));
+  if (!path.isEmpty()) openCase(path);
+}
+
+bool MainWindow::save() {
+  const QString path = document_->filePath();
+  if (path.isEmpty() || path.startsWith(QLatin1Char(':'))) return saveAs();
+  return saveCaseAs(path);
+}
+
+bool MainWindow::saveAs() {
+  QString suggestion = document_->filePath();
+  if (suggestion.isEmpty() || suggestion.startsWith(QLatin1Char(':')))
+    suggestion = QDir::home().filePath(suggestion.isEmpty() ? QStringLiteral("case.json")
+                                                            : QFileInfo(suggestion).fileName());
+  const QString path =
+      QFileDialog::getSaveFileName(this, tr("Save Case As"), suggestion, tr("Cyclewright cases (*.json)"));
+  return !path.isEmpty() && saveCaseAs(path);
+}
+
+void MainWindow::updateRecentMenu() {
+  recentMenu_->clear();
+  const QStringList files = settings_.recentFiles();
+  for (const QString& file : files) {
+    QAction* action = recentMenu_->addAction(QFileInfo(file).fileName(), this, [this, file] {
+      if (maybeSave()) openCase(file);
+    });
+    action->setToolTip(file);
+  }
+  if (files.isEmpty()) recentMenu_->addAction(tr("No recent files"))->setEnabled(false);
+}
+
+bool MainWindow::maybeSave() {
+  if (!document_->isModified()) return true;
+  const auto answer =
+      QMessageBox::warning(this, tr("Unsaved changes"), tr("The case has unsaved changes. Save them first?"),
+                           QMessageBox::Save | QMessageBox::Discard | QMessageBox::Cancel);
+  if (answer == QMessageBox::Save) return save();
+  return answer == QMessageBox::Discard;
+}
+
+void MainWindow::updateTitle() {
+  const QString path = document_->filePath();
+  const QString name = path.isEmpty() ? tr("Untitled") : QFileInfo(path).fileName();
+  setWindowTitle(tr("%1[*] — Cyclewright").arg(name));
+  setWindowModified(document_->isModified());
+}
+
+void MainWindow::closeEvent(QCloseEvent* event) {
+  if (!maybeSave()) {
+    event->ignore();
+    return;
+  }
+  settings_.setWindowGeometry(saveGeometry());
+  settings_.setWindowState(saveState());
+  removeAutosave();
+  event->accept();
+}
+
+QString MainWindow::autosavePath() {
+  return QDir(QStandardPaths::writableLocation(QStandardPaths::AppLocalDataLocation))
+      .filePath(QStringLiteral("autosave-case.json"));
+}
+
+void MainWindow::scheduleAutosave() {
+  if (document_->isModified() && !autosaveTimer_->isActive())
+    autosaveTimer_->start(settings_.autosaveSeconds() * 1000);
+}
+
+bool MainWindow::autosaveNow() {
+  if (!document_->isModified()) return false;
+  const QString path = autosavePath();
+  QDir().mkpath(QFileInfo(path).absolutePath());
+  try {
+    io::writeCaseFile(path.toStdString(), document_->currentCase());
+  } catch (const std::exception& e) {
+    statusBar()->showMessage(tr("Autosave failed: %1").arg(QString::fromStdString(e.what())));
+    return false;
+  }
+  QSaveFile origin(path + QStringLiteral(".origin"));
+  if (origin.open(QIODevice::WriteOnly)) {
+    origin.write(document_->filePath().toUtf8());
+    origin.commit();
+  }
+  return true;
+}
+
+void MainWindow::removeAutosave() {
+  autosaveTimer_->stop();
+  QFile::remove(autosavePath());
+  QFile::remove(autosavePath() + QStringLiteral(".origin"));
+}
+
+bool MainWindow::recoverFrom(const QString& autosaveFile) {
+  engine::Case recovered;
+  try {
+    recovered = io::readCaseFile(autosaveFile.toStdString());
+  } catch (const std::exception&) {
+    return false;
+  }
+  QString origin;
+  QFile originFile(autosaveFile + QStringLiteral(".origin"));
+  if (originFile.open(QIODevice::ReadOnly)) origin = QString::fromUtf8(originFile.readAll());
+  document_->load(recovered, origin, true);
+  updateTitle();
+  statusBar()->showMessage(tr("Recovered the autosaved case; save it to keep it."));
+  return true;
+}
+
+bool MainWindow::offerRecovery() {
+  const QString path = autosavePath();
+  if (!QFile::exists(path)) return false;
+  const auto answer = QMessageBox::question(
+      this, tr("Recover case"),
+      tr("Cyclewright did not close normally. Recover the case autosaved at %1?")
+          .arg(QLocale().toString(QFileInfo(path).lastModified(), QLocale::ShortFormat)),
+      QMessageBox::Yes | QMessageBox::No, QMessageBox::Yes);
+  const bool recovered = answer == QMessageBox::Yes && recoverFrom(path);
+  if (!recovered) removeAutosave();
+  return recovered;
+}
+
+// ---------------------------------------------------------------------------------------------
+// Exports
+
+bool MainWindow::exportStationCsv(const QString& path) {
+  const auto evaluation = document_->evaluation();
+  if (!evaluation) return false;
+  const auto& cycle = stationModel_->mode() == TableMode::Ideal ? evaluation->ideal : evaluation->actual;
+  QSaveFile file(path);
+  if (!file.open(QIODevice::WriteOnly)) return false;
+  file.write(QByteArray::fromStdString(io::stationTableCsv(cycle)));
+  return file.commit();
+}
+
+bool MainWindow::exportResultJson(const QString& path) {
+  const auto evaluation = document_->evaluation();
+  if (!evaluation) return false;
+  QSaveFile file(path);
+  if (!file.open(QIODevice::WriteOnly)) return false;
+  file.write(QByteArray::fromStdString(io::evaluationToJson(*evaluation).dump(2)));
+  file.write("\n");
+  return file.commit();
+}
+
+void MainWindow::exportChart(CycleChart* chart, const QString& format) {
+  const QString base =
+      chart == tsChart_ ? QStringLiteral("temperature-entropy") : QStringLiteral("pressure-volume");
+  QSize pixels;
+  int dpi = 0;
+  if (format == QLatin1String("png")) {
+    ImageExportDialog dialog(this);
+    if (dialog.exec() != QDialog::Accepted) return;
+    pixels = dialog.pixels();
+    dpi = dialog.dotsPerInch();
+  }
+  const QString filter = format == QLatin1String("png")   ? tr("PNG images (*.png)")
+                         : format == QLatin1String("svg") ? tr("SVG drawings (*.svg)")
+                                                          : tr("PDF documents (*.pdf)");
+  const QString path = QFileDialog::getSaveFileName(
+      this, tr("Export Chart"), QDir::home().filePath(base + QLatin1Char('.') + format), filter);
+  if (path.isEmpty()) return;
+  const bool ok = format == QLatin1String("png")
+                      ? exportChartPng(chart, path, pixels, dpi)
+                      : exportChartDocument(chart, path, format, QSizeF(180.0, 120.0));
+  statusBar()->showMessage(ok ? tr("Exported %1").arg(path) : tr("Cannot write %1").arg(path));
+}
+
+void MainWindow::exportTable(const QString& format) {
+  const bool csv = format == QLatin1String("csv");
+  const QString path = QFileDialog::getSaveFileName(
+      this, csv ? tr("Export Station Table") : tr("Export Results"),
+      QDir::home().filePath(csv ? QStringLiteral("stations.csv") : QStringLiteral("results.json")),
+      csv ? tr("CSV files (*.csv)") : tr("JSON files (*.json)"));
+  if (path.isEmpty()) return;
+  const bool ok = csv ? exportStationCsv(path) : exportResultJson(path);
+  statusBar()->showMessage(ok ? tr("Exported %1 (SI units)").arg(path) : tr("Cannot write %1").arg(path));
+}
+
+void MainWindow::copyChart(CycleChart* chart) {
+  QApplication::clipboard()->setImage(renderChartImage(chart, chart->size() * 2, 192));
+  statusBar()->showMessage(tr("Chart copied to the clipboard"));
+}
+
+void MainWindow::copyTable() {
+  QApplication::clipboard()->setText(stationModel_->toTabSeparated());
+  statusBar()->showMessage(tr("Station table copied as tab-separated text"));
+}
+
+// ---------------------------------------------------------------------------------------------
+
+void MainWindow::showPreferences() {
+  PreferencesDialog dialog(this);
+  dialog.setUnitSystem(units_->system());
+  dialog.setChartLayout(chartLayout_);
+  dialog.setAutosaveSeconds(settings_.autosaveSeconds());
+  if (dialog.exec() != QDialog::Accepted) return;
+  setUnitSystem(dialog.unitSystem());
+  setChartLayout(dialog.chartLayout());
+  settings_.setAutosaveSeconds(dialog.autosaveSeconds());
+}
+
 QString MainWindow::cautionText() {
-  return tr("Results are conceptual-design estimates. For anything that affects flight safety, "
-            "defer to the engine manufacturer's data, your organisation's procedures and "
-            "licensed engineering practice.");
+  return tr(
+      "Results are conceptual-design estimates. For anything that affects flight safety, "
+      "defer to the engine manufacturer's data, your organisation's procedures and "
+      "licensed engineering practice.");
 }
 
 void MainWindow::showAbout() {

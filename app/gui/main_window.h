@@ -1,38 +1,150 @@
 #pragma once
-// The main window of Cyclewright: menu bar, central explorer and status bar.
+// The main window of Cyclewright: the component strip, the form of the selected section, the
+// temperature-entropy and pressure-volume charts, the station table and the performance
+// summary; menus and toolbar (the window owns every action); files, autosave and recovery.
+
+#include "case_fields.h"
+#include "settings.h"
 
 #include <QMainWindow>
+#include <QSet>
 #include <QString>
 
-class QwtPlot;
+#include <array>
+#include <memory>
+
+class QAction;
+class QActionGroup;
+class QComboBox;
+class QLabel;
+class QListWidget;
+class QMenu;
+class QSplitter;
+class QStackedWidget;
+class QTabWidget;
+class QTableView;
+class QTimer;
+
+namespace cw::engine {
+struct Evaluation;
+}
 
 namespace cw::gui {
+
+class CaseDocument;
+class CaseForm;
+class CycleChart;
+class DisplayUnits;
+class PerformanceModel;
+class SelectionRouter;
+class StationTableModel;
 
 class MainWindow : public QMainWindow {
   Q_OBJECT
 
-public:
+ public:
   explicit MainWindow(QWidget* parent = nullptr);
+  ~MainWindow() override;
 
   /// Opens a case file (a path or a Qt resource such as ":/demo/demo-turbojet.json").
   /// Returns false and shows why in the status bar when it cannot be read.
   bool openCase(const QString& path);
+  /// Saves to a path (SI, atomically). Returns false and says why when it cannot.
+  bool saveCaseAs(const QString& path);
 
   /// The file name of the open case, empty when none.
-  QString casePath() const { return casePath_; }
+  QString casePath() const;
 
-  /// The caution text shown in the About box (translated).
+  /// The caution text shown in the About box and carried by every export (translated).
   static QString cautionText();
 
-public slots:
+  CaseDocument& document() const { return *document_; }
+  DisplayUnits& units() const { return *units_; }
+  SelectionRouter& selection() const { return *router_; }
+  CycleChart* temperatureEntropyChart() const { return tsChart_; }
+  CycleChart* pressureVolumeChart() const { return pvChart_; }
+  StationTableModel* stationModel() const { return stationModel_; }
+  PerformanceModel* performanceModel() const { return performanceModel_; }
+  /// The banner that says the result is stale and why.
+  QLabel* staleBanner() const { return banner_; }
+
+  void setChartLayout(ChartLayout layout);
+  ChartLayout chartLayout() const { return chartLayout_; }
+  void setUnitSystem(UnitSystem system);
+
+  // Exports without dialogs (tests and the menu actions).
+  bool exportStationCsv(const QString& path);
+  bool exportResultJson(const QString& path);
+
+  /// Where the autosave goes (QStandardPaths::AppLocalDataLocation).
+  static QString autosavePath();
+  /// Writes the autosave now (when modified). Returns true when written.
+  bool autosaveNow();
+  /// At start: offers the autosaved case after a crash. Returns true when it was recovered.
+  bool offerRecovery();
+  /// Loads an autosaved case as a modified, unsaved case.
+  bool recoverFrom(const QString& autosaveFile);
+
+ public slots:
   void showAbout();
+  void newCase();
+  void open();
+  bool save();
+  bool saveAs();
+  void showPreferences();
 
-private:
+ protected:
+  void closeEvent(QCloseEvent* event) override;
+
+ private:
+  void createActions();
   void createMenus();
-  QwtPlot* createTemperatureEntropyChart();
+  void createToolBar();
+  void createCentralWidget();
+  void updateRecentMenu();
+  bool maybeSave();
+  void updateTitle();
+  void refreshResult();
+  void updateBanner();
+  void updateStrip();
+  void routeSelection(Section section);
+  QSet<QString> stationsOf(Section section) const;
+  void exportChart(CycleChart* chart, const QString& format);
+  void exportTable(const QString& format);
+  void copyChart(CycleChart* chart);
+  void copyTable();
+  void scheduleAutosave();
+  void removeAutosave();
 
-  QString casePath_;
-  QwtPlot* temperatureEntropyChart_ = nullptr;
+  AppSettings settings_;
+  DisplayUnits* units_ = nullptr;
+  CaseDocument* document_ = nullptr;
+  SelectionRouter* router_ = nullptr;
+  std::shared_ptr<const engine::Evaluation> shown_;
+
+  QListWidget* strip_ = nullptr;
+  QStackedWidget* forms_ = nullptr;
+  std::array<CaseForm*, kSectionCount> formOf_{};
+  QLabel* banner_ = nullptr;
+  CycleChart* tsChart_ = nullptr;
+  CycleChart* pvChart_ = nullptr;
+  QStackedWidget* chartHost_ = nullptr;
+  QSplitter* chartSplitter_ = nullptr;
+  QTabWidget* chartTabs_ = nullptr;
+  ChartLayout chartLayout_ = ChartLayout::SideBySide;
+  QTableView* stationView_ = nullptr;
+  StationTableModel* stationModel_ = nullptr;
+  QComboBox* tableMode_ = nullptr;
+  QTableView* performanceView_ = nullptr;
+  PerformanceModel* performanceModel_ = nullptr;
+  QMenu* recentMenu_ = nullptr;
+  QTimer* autosaveTimer_ = nullptr;
+
+  struct Actions {
+    QAction *newCase, *open, *save, *saveAs, *preferences, *quit, *undo, *redo, *resetZoom, *logAxes,
+        *sideBySide, *tabbed, *about, *copyTs, *copyPv, *copyTable;
+    QActionGroup* layoutGroup;
+  } actions_{};
 };
 
 }  // namespace cw::gui

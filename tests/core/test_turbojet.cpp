@@ -2,6 +2,7 @@
 #include "analysis/ideal_twin.h"
 #include "common/error.h"
 #include "engine/evaluate.h"
+#include "engine/isobars.h"
 #include "engine/turbojet.h"
 
 #include <QTest>
@@ -231,6 +232,38 @@ class TestTurbojet : public QObject {
                    std::string(e.what()).find("no jet") != std::string::npos,
                e.what());
     }
+  }
+
+  // Isobars through the station pressures: p fixed, ds/dT = cp/T along them (Gibbs relation at
+  // constant pressure; common practice), and the one through station 3 passes through its state.
+  void isobarsThroughStations() {
+    Case c;
+    const CycleResult r = Turbojet(c).evaluate();
+    const auto isobars = stationIsobars(r, 250.0, 1600.0, 40);
+    QVERIFY(isobars.size() >= 5);
+    const Station& s3 = r.station("3");
+    bool foundStation3 = false;
+    for (const auto& isobar : isobars) {
+      for (std::size_t k = 1; k < isobar.states.size(); ++k) {
+        const auto &a = isobar.states[k - 1], &b = isobar.states[k];
+        QCOMPARE(b.pressure, isobar.pressure);
+        QVERIFY(b.entropy > a.entropy);
+      }
+      if (isobar.station != "3") continue;
+      foundStation3 = true;
+      QCOMPARE(isobar.pressure, s3.totalPressure);
+      // Trapezoidal integral of cp/T from 250 K to T3 on the station's gas against the isobar's entropy rise.
+      const auto& first = isobar.states.front();
+      double integral = 0.0;
+      const int n = 4000;
+      for (int i = 0; i < n; ++i) {
+        const double t0 = first.temperature + (s3.totalTemperature - first.temperature) * i / n;
+        const double t1 = first.temperature + (s3.totalTemperature - first.temperature) * (i + 1) / n;
+        integral += 0.5 * (s3.gas->cp(t0) / t0 + s3.gas->cp(t1) / t1) * (t1 - t0);
+      }
+      QVERIFY(std::abs(first.entropy + integral - s3.entropy) < 1e-4);
+    }
+    QVERIFY(foundStation3);
   }
 
   // A thrust requirement fixes the air mass flow: F_n reached to 1e-9.

@@ -1,0 +1,37 @@
+#pragma once
+// Export of a chart: PNG at a chosen size and resolution, SVG and PDF through QwtPlotRenderer,
+// and an image for the clipboard. Every export carries the caution as the chart's footer.
+// No dialogs here, so tests call these directly.
+
+#include <QImage>
+#include <QSize>
+#include <QSizeF>
+#include <QString>
+
+class QwtPlot;
+
+namespace cw::gui {
+
+/// Renders the chart into an image of the given size [px] at the given resolution [dots per inch].
+QImage renderChartImage(QwtPlot* plot, QSize pixels, int dotsPerInch);
+
+/// Writes a PNG of the given size and resolution. False when the file cannot be written.
+bool exportChartPng(QwtPlot* plot, const QString& fileName, QSize pixels, int dotsPerInch);
+
+/// Writes an SVG or PDF (by format "svg" or "pdf") of the given size [mm] at 85 dpi for
+/// raster parts. False when the file cannot be written.
+bool exportChartDocument(QwtPlot* plot, const QString& fileName, const QString& format, QSizeF millimetres);
+
+/// Sets the caution as the plot's footer for its lifetime (exports only).
+class CautionFooter {
+ public:
+  explicit CautionFooter(QwtPlot* plot);
+  ~CautionFooter();
+  CautionFooter(const CautionFooter&) = delete;
+  CautionFooter& operator=(const CautionFooter&) = delete;
+
+ private:
+  QwtPlot* plot_;
+};
+
+}  // namespace cw::gui

@@ -1,0 +1,513 @@
+#include "charts/cycle_chart.h"
+
+#include "charts/log_scale_engine.h"
+
+#include "engine/isobars.h"
+
+#include <qwt_legend.h>
+#include <qwt_picker_machine.h>
+#include <qwt_plot_canvas.h>
+#include <qwt_plot_curve.h>
+#include <qwt_plot_grid.h>
+#include <qwt_plot_legenditem.h>
+#include <qwt_plot_marker.h>
+#include <qwt_plot_panner.h>
+#include <qwt_plot_picker.h>
+#include <qwt_plot_textlabel.h>
+#include <qwt_plot_zoomer.h>
+#include <qwt_scale_engine.h>
+#include <qwt_scale_map.h>
+#include <qwt_symbol.h>
+#include <qwt_text.h>
+
+#include <QCoreApplication>
+
+#include <algorithm>
+#include <cmath>
+#include <limits>
+
+namespace cw::gui {
+
+namespace {
+
+// Okabe-Ito palette (Okabe and Ito, "Color Universal Design", 2008).
+const QColor kBlue(0x00, 0x72, 0xB2);
+const QColor kOrange(0xE6, 0x9F, 0x00);
+const QColor kVermillion(0xD5, 0x5E, 0x00);
+
+QColor isobarColour(const QPalette& palette) {
+  return palette.color(QPalette::Base).lightness() > 128 ? QColor(0xC8, 0xC8, 0xC8)
+                                                         : QColor(0x60, 0x60, 0x60);
+}
+
+QColor inkColour(const QPalette& palette) {
+  // Near-black on a light background; the palette's text colour on a dark one.
+  return palette.color(QPalette::Base).lightness() > 128 ? QColor(0x20, 0x20, 0x20)
+                                                         : palette.color(QPalette::Text);
+}
+
+QString componentName(const std::string& component) {
+  if (component == "inlet") return QCoreApplication::translate("CaseFields", "Inlet");
+  if (component == "compressor") return QCoreApplication::translate("CaseFields", "Compressor");
+  if (component == "burner") return QCoreApplication::translate("CaseFields", "Burner");
+  if (component == "turbine") return QCoreApplication::translate("CaseFields", "Turbine");
+  if (component == "jet_pipe") return QCoreApplication::translate("CaseFields", "Jet pipe");
+  if (component == "afterburner") return QCoreApplication::translate("CaseFields", "Afterburner");
+  if (component == "nozzle") return QCoreApplication::translate("CaseFields", "Nozzle");
+  if (component == "closure") return QCoreApplication::translate("cw::gui::CycleChart", "Closure to ambient");
+  return QString::fromStdString(component);
+}
+
+}  // namespace
+
+/// A picker whose tracker shows the state of the path point nearest the cursor.
+class StateReadoutPicker : public QwtPlotPicker {
+ public:
+  explicit StateReadoutPicker(CycleChart* chart)
+      : QwtPlotPicker(QwtAxis::XBottom, QwtAxis::YLeft, QwtPicker::NoRubberBand, QwtPicker::AlwaysOn,
+                      chart->canvas()),
+        chart_(chart) {
+    setStateMachine(new QwtPickerTrackerMachine);
+  }
+
+ protected:
+  QwtText trackerText(const QPoint& position) const override {
+    QwtText text(chart_->readoutAt(position));
+    QColor background = chart_->palette().color(QPalette::ToolTipBase);
+    background.setAlpha(230);
+    text.setBackgroundBrush(background);
+    text.setColor(chart_->palette().color(QPalette::ToolTipText));
+    text.setRenderFlags(Qt::AlignLeft);
+    return text;
+  }
+
+ private:
+  CycleChart* chart_;
+};
+
+CycleChart::CycleChart(ChartKind kind, DisplayUnits& units, QWidget* parent)
+    : QwtPlot(parent), kind_(kind), units_(units) {
+  setObjectName(kind == ChartKind::TemperatureEntropy ? "temperatureEntropyChart" : "pressureVolumeChart");
+  setAutoReplot(false);
+  setMinimumSize(240, 180);
+  setCanvasBackground(palette().color(QPalette::Base));
+  if (auto* canvas = qobject_cast<QwtPlotCanvas*>(this->canvas()))
+    canvas->setFrameStyle(QFrame::Box | QFrame::Plain);
+
+  auto* grid = new QwtPlotGrid;
+  QColor gridColour = palette().color(QPalette::Mid);
+  gridColour.setAlpha(90);
+  grid->setMajorPen(gridColour, 0.0, Qt::DotLine);
+  grid->attach(this);
+
+  // The legend: inside the canvas of the temperature-entropy chart, in the corner the cycle
+  // leaves free; below the pressure-volume chart, whose corners the cycle fills.
+  auto* legend = new QwtPlotLegendItem;
+  legend->setMaxColumns(1);
+  legend->setAlignmentInCanvas(kind == ChartKind::TemperatureEntropy ? Qt::AlignTop | Qt::AlignLeft
+                                                                     : Qt::AlignBottom | Qt::AlignLeft);
+  QColor legendBackground = palette().color(QPalette::Base);
+  legendBackground.setAlpha(215);
+  legend->setBackgroundBrush(legendBackground);
+  legend->setBorderPen(QPen(palette().color(QPalette::Mid), 1.0));
+  legend->setBorderRadius(3);
+  legend->setMargin(4);
+  legend->setSpacing(2);
+  legend->setItemMargin(1);
+  legend->setTextPen(QPen(palette().color(QPalette::Text)));
+  QFont legendFont = font();
+  legendFont.setPointSizeF(legendFont.pointSizeF() * 0.85);
+  legend->setFont(legendFont);
+  legend->setZ(90);
+  if (kind == ChartKind::TemperatureEntropy) {
+    legend->attach(this);
+  } else {
+    delete legend;
+    auto* below = new QwtLegend;
+    below->setMaxColumns(3);
+    below->setFont(legendFont);
+    insertLegend(below, QwtPlot::BottomLegend);
+  }
+
+  const QColor ink = inkColour(palette());
+  auto makeCurve = [this](const QPen& pen, double z) {
+    auto* curve = new QwtPlotCurve;
+    curve->setPen(pen);
+    curve->setRenderHint(QwtPlotItem::RenderAntialiased, true);
+    // The legend shows each line's style, so that it reads in greyscale too.
+    curve->setLegendAttribute(QwtPlotCurve::LegendShowLine, true);
+    curve->setLegendIconSize(QSize(28, 10));
+    curve->setZ(z);
+    curve->attach(this);
+    return curve;
+  };
+  QPen highlightPen(kVermillion, 7.0);
+  highlightPen.setCapStyle(Qt::RoundCap);
+  highlight_ = makeCurve(highlightPen, 15);
+  idealHighlight_ = makeCurve(highlightPen, 15);
+  idealHighlight_->setItemAttribute(QwtPlotItem::Legend, false);
+  isobarLegend_ = makeCurve(QPen(isobarColour(palette()), 1.0), 5);
+  actualClosure_ = makeCurve(QPen(kBlue, 1.0, Qt::DashDotLine), 18);
+  idealClosure_ = makeCurve(QPen(kOrange, 1.0, Qt::DotLine), 18);
+  QPen idealPen(kOrange, 2.0, Qt::DashLine);
+  ideal_ = makeCurve(idealPen, 19);
+  actual_ = makeCurve(QPen(kBlue, 2.0, Qt::SolidLine), 20);
+  ideal_->setSymbol(new QwtSymbol(QwtSymbol::NoSymbol));
+  Q_UNUSED(ink);
+
+  staleLabel_ = new QwtPlotTextLabel;
+  staleLabel_->setZ(100);
+  staleLabel_->attach(this);
+
+  zoomer_ = new QwtPlotZoomer(QwtAxis::XBottom, QwtAxis::YLeft, canvas());
+  zoomer_->setTrackerMode(QwtPicker::AlwaysOff);
+  zoomer_->setRubberBandPen(QPen(palette().color(QPalette::Text), 1.0, Qt::DashLine));
+  panner_ = new QwtPlotPanner(canvas());
+  panner_->setMouseButton(Qt::MiddleButton);
+  picker_ = new StateReadoutPicker(this);
+
+  retranslateUi();
+  connect(&units_, &DisplayUnits::changed, this, [this] {
+    retranslateUi();
+    rebuild();
+  });
+}
+
+CycleChart::~CycleChart() = default;
+
+StateValue CycleChart::xValue() const {
+  return kind_ == ChartKind::TemperatureEntropy ? StateValue::Entropy : StateValue::SpecificVolume;
+}
+StateValue CycleChart::yValue() const {
+  return kind_ == ChartKind::TemperatureEntropy ? StateValue::Temperature : StateValue::Pressure;
+}
+Quantity CycleChart::xQuantity() const {
+  return kind_ == ChartKind::TemperatureEntropy ? Quantity::Entropy : Quantity::SpecificVolume;
+}
+Quantity CycleChart::yQuantity() const {
+  return kind_ == ChartKind::TemperatureEntropy ? Quantity::Temperature : Quantity::Pressure;
+}
+double CycleChart::xScale() const {
+  return units_.factor(xQuantity());
+}
+double CycleChart::yScale() const {
+  return units_.factor(yQuantity());
+}
+
+void CycleChart::retranslateUi() {
+  if (kind_ == ChartKind::TemperatureEntropy) {
+    setTitle(tr("Temperature–entropy"));
+    setAxisTitle(
+        QwtAxis::XBottom,
+        units_.withUnit(tr("Specific entropy s (0 at the free-stream static state)"), Quantity::Entropy));
+    setAxisTitle(QwtAxis::YLeft, units_.withUnit(tr("Temperature T"), Quantity::Temperature));
+  } else {
+    setTitle(tr("Pressure–volume"));
+    setAxisTitle(QwtAxis::XBottom, units_.withUnit(tr("Specific volume v"), Quantity::SpecificVolume));
+    setAxisTitle(QwtAxis::YLeft, units_.withUnit(tr("Pressure p"), Quantity::Pressure));
+  }
+  actual_->setTitle(tr("Cycle with losses"));
+  ideal_->setTitle(tr("Ideal cycle"));
+  actualClosure_->setTitle(tr("Closure to ambient, with losses"));
+  idealClosure_->setTitle(tr("Closure to ambient, ideal"));
+  isobarLegend_->setTitle(tr("Isobars through station pressures"));
+  highlight_->setTitle(highlighted_.empty() ? tr("Selected component")
+                                            : tr("Selected: %1").arg(componentName(highlighted_)));
+  QwtText stale(tr("Stale: showing the last valid result"));
+  stale.setRenderFlags(Qt::AlignHCenter | Qt::AlignTop);
+  QFont font = stale.font();
+  font.setBold(true);
+  stale.setFont(font);
+  stale.setColor(kVermillion);
+  QColor background = palette().color(QPalette::Base);
+  background.setAlpha(220);
+  stale.setBackgroundBrush(background);
+  stale.setBorderRadius(3);
+  staleLabel_->setText(stale);
+  staleLabel_->setVisible(stale_);
+}
+
+void CycleChart::clearDynamicItems() {
+  for (auto* c : isobars_) {
+    c->detach();
+    delete c;
+  }
+  isobars_.clear();
+  for (auto* m : markers_) {
+    m->detach();
+    delete m;
+  }
+  markers_.clear();
+}
+
+void CycleChart::setEvaluation(std::shared_ptr<const engine::Evaluation> evaluation, bool stale) {
+  evaluation_ = std::move(evaluation);
+  stale_ = stale;
+  rebuild();
+}
+
+void CycleChart::rebuild() {
+  clearDynamicItems();
+  const double xs = xScale(), ys = yScale();
+  const StateValue xv = xValue(), yv = yValue();
+  if (!evaluation_) {
+    for (auto* c : {actual_, ideal_, actualClosure_, idealClosure_, highlight_, idealHighlight_})
+      c->setSamples(QVector<QPointF>());
+    updateStalePens();
+    replot();
+    return;
+  }
+  const auto& actual = evaluation_->actual;
+  const auto& ideal = evaluation_->ideal;
+  actual_->setData(new PathSeries(evaluation_, false, cyclePaths(actual, false), xv, yv, xs, ys));
+  ideal_->setData(new PathSeries(evaluation_, true, cyclePaths(ideal, false), xv, yv, xs, ys));
+  actualClosure_->setData(new PathSeries(evaluation_, false, cyclePaths(actual, true), xv, yv, xs, ys));
+  idealClosure_->setData(new PathSeries(evaluation_, true, cyclePaths(ideal, true), xv, yv, xs, ys));
+
+  // Isobars: along T on the T-s chart, horizontal lines on the p-v chart.
+  double tLow = std::numeric_limits<double>::max(), tHigh = 0.0;
+  for (const auto* cycle : {&actual, &ideal})
+    for (const auto& path : cycle->paths)
+      for (const auto& s : path.states) {
+        tLow = std::min(tLow, s.temperature);
+        tHigh = std::max(tHigh, s.temperature);
+      }
+  const std::vector<engine::Isobar> isobars = engine::stationIsobars(actual, 0.85 * tLow, 1.08 * tHigh);
+  const QPen isobarPen(isobarColour(palette()), 1.0, Qt::SolidLine);
+  QFont small = font();
+  small.setPointSizeF(small.pointSizeF() * 0.8);
+  const QColor labelColour =
+      palette().color(QPalette::Base).lightness() > 128 ? QColor(0x70, 0x70, 0x70) : QColor(0xA0, 0xA0, 0xA0);
+  std::vector<double> labelled;
+  for (const auto& isobar : isobars) {
+    // One label per group of pressures within 15 %, so that close isobars stay readable.
+    const bool label = std::none_of(labelled.begin(), labelled.end(),
+                                    [&](double p) { return std::fabs(p - isobar.pressure) < 0.15 * p; });
+    if (label) labelled.push_back(isobar.pressure);
+    QwtText text(label ? QStringLiteral("p%1 = %2")
+                             .arg(QString::fromStdString(isobar.station),
+                                  units_.format(isobar.pressure, Quantity::Pressure, 4))
+                       : QString());
+    text.setFont(small);
+    text.setColor(labelColour);
+    if (kind_ == ChartKind::PressureVolume) {
+      // An isobar is a horizontal line; its label sits at the right edge of the canvas.
+      auto* line = new QwtPlotMarker;
+      line->setLineStyle(QwtPlotMarker::HLine);
+      line->setLinePen(isobarPen);
+      line->setYValue(isobar.pressure / ys);
+      line->setLabel(text);
+      line->setLabelAlignment(Qt::AlignLeft | Qt::AlignTop);
+      line->setItemAttribute(QwtPlotItem::AutoScale, false);
+      line->setZ(5);
+      line->attach(this);
+      markers_.push_back(line);
+      continue;
+    }
+    auto* curve = new QwtPlotCurve;
+    curve->setPen(isobarPen);
+    curve->setZ(5);
+    curve->setItemAttribute(QwtPlotItem::Legend, false);
+    curve->setItemAttribute(QwtPlotItem::AutoScale, false);
+    QVector<QPointF> points;
+    for (const auto& st : isobar.states) points.append({st.entropy / xs, st.temperature / ys});
+    curve->setSamples(points);
+    curve->attach(this);
+    isobars_.push_back(curve);
+    if (!label) continue;
+    // The label where the isobar reaches the cycle's highest temperature.
+    QPointF at = points.back();
+    for (const auto& point : points)
+      if (point.y() * ys >= tHigh) {
+        at = point;
+        break;
+      }
+    auto* marker = new QwtPlotMarker;
+    marker->setValue(at);
+    marker->setLabel(text);
+    marker->setLabelAlignment(Qt::AlignRight | Qt::AlignVCenter);
+    marker->setItemAttribute(QwtPlotItem::AutoScale, false);
+    marker->setZ(6);
+    marker->attach(this);
+    markers_.push_back(marker);
+  }
+
+  // Station markers: labelled with their SAE numbers (cycle with losses), plain for the ideal cycle.
+  const QColor ink = inkColour(palette());
+  for (const auto* cycle : {&actual, &ideal}) {
+    const bool isIdeal = cycle == &ideal;
+    for (const auto& station : cycle->stations) {
+      engine::PathState state;
+      if (!stationState(*cycle, station, state)) continue;
+      auto* marker = new QwtPlotMarker;
+      marker->setValue(stateValue(state, xv) / xs, stateValue(state, yv) / ys);
+      if (isIdeal) {
+        marker->setSymbol(
+            new QwtSymbol(QwtSymbol::Diamond, Qt::NoBrush, QPen(kOrange.darker(130), 1.0), QSize(6, 6)));
+        marker->setZ(21);
+      } else {
+        marker->setSymbol(new QwtSymbol(QwtSymbol::Ellipse, QBrush(ink), QPen(ink, 1.0), QSize(7, 7)));
+        QwtText label(QString::fromStdString(station.id));
+        QFont bold = font();
+        bold.setBold(true);
+        label.setFont(bold);
+        label.setColor(ink);
+        QColor halo = palette().color(QPalette::Base);
+        halo.setAlpha(200);
+        label.setBackgroundBrush(halo);
+        marker->setLabel(label);
+        // Alternate sides so that close stations (7, 8, 9) stay readable.
+        const bool left = station.id == "0" || station.id == "3" || station.id == "8" || station.id == "6";
+        const bool below = station.id == "5";
+        marker->setLabelAlignment((left ? Qt::AlignLeft : Qt::AlignRight) |
+                                  (below ? Qt::AlignBottom : Qt::AlignTop));
+        marker->setSpacing(4);
+        marker->setZ(22);
+      }
+      marker->setItemAttribute(QwtPlotItem::AutoScale, false);
+      marker->attach(this);
+      markers_.push_back(marker);
+    }
+  }
+  updateHighlight();
+  updateStalePens();
+  if (!zoomer_ || zoomer_->zoomRectIndex() == 0) rescale();
+  replot();
+}
+
+void CycleChart::rescale() {
+  QRectF box;
+  for (const QwtPlotCurve* c : {actual_, ideal_, actualClosure_, idealClosure_})
+    if (c->dataSize() > 0) box = box.isNull() ? c->boundingRect() : box.united(c->boundingRect());
+  if (box.isNull() || !box.isValid()) {
+    if (box.width() <= 0 && box.height() <= 0) return;
+  }
+  double x0 = box.left(), x1 = box.right(), y0 = box.top(), y1 = box.bottom();
+  if (logAxes_) {
+    x0 = std::max(x0, 1e-12) / 1.25;
+    x1 = x1 * 1.25;
+    y0 = std::max(y0, 1e-12) / 1.25;
+    y1 = y1 * 1.25;
+  } else {
+    const double dx = std::max(x1 - x0, 1e-9), dy = std::max(y1 - y0, 1e-9);
+    x0 -= 0.06 * dx;
+    x1 += 0.10 * dx;
+    y0 -= 0.05 * dy;
+    y1 += 0.08 * dy;
+    if (kind_ == ChartKind::PressureVolume) {
+      x0 = std::max(0.0, x0);
+      y0 = std::max(0.0, y0);
+    }
+  }
+  setAxisScale(QwtAxis::XBottom, x0, x1);
+  setAxisScale(QwtAxis::YLeft, y0, y1);
+  updateAxes();
+  zoomer_->setZoomBase(false);
+}
+
+void CycleChart::setStale(bool stale) {
+  if (stale == stale_) return;
+  stale_ = stale;
+  updateStalePens();
+  replot();
+}
+
+void CycleChart::updateStalePens() {
+  const int alpha = stale_ ? 80 : 255;
+  for (auto* c : {actual_, ideal_, actualClosure_, idealClosure_, highlight_, idealHighlight_}) {
+    QPen pen = c->pen();
+    QColor colour = pen.color();
+    colour.setAlpha(c == highlight_ || c == idealHighlight_ ? (stale_ ? 40 : 110) : alpha);
+    pen.setColor(colour);
+    c->setPen(pen);
+  }
+  staleLabel_->setVisible(stale_);
+}
+
+void CycleChart::setHighlightedComponent(const std::string& component) {
+  if (component == highlighted_) return;
+  highlighted_ = component;
+  updateHighlight();
+  retranslateUi();
+  replot();
+}
+
+void CycleChart::updateHighlight() {
+  highlight_->setVisible(false);
+  idealHighlight_->setVisible(false);
+  highlight_->setSamples(QVector<QPointF>());
+  idealHighlight_->setSamples(QVector<QPointF>());
+  if (!evaluation_ || highlighted_.empty()) return;
+  const int a = componentPath(evaluation_->actual, highlighted_);
+  const int i = componentPath(evaluation_->ideal, highlighted_);
+  if (a >= 0) {
+    highlight_->setData(new PathSeries(evaluation_, false, {a}, xValue(), yValue(), xScale(), yScale()));
+    highlight_->setVisible(true);
+  }
+  if (i >= 0) {
+    idealHighlight_->setData(new PathSeries(evaluation_, true, {i}, xValue(), yValue(), xScale(), yScale()));
+    idealHighlight_->setVisible(true);
+  }
+}
+
+void CycleChart::setLogAxes(bool on) {
+  if (on == logAxes_) return;
+  logAxes_ = on;
+  for (auto axis : {QwtAxis::XBottom, QwtAxis::YLeft}) {
+    if (on)
+      setAxisScaleEngine(axis, new OneTwoFiveLogScaleEngine);
+    else
+      setAxisScaleEngine(axis, new QwtLinearScaleEngine);
+  }
+  rescale();
+  zoomer_->setZoomBase(false);
+  replot();
+}
+
+void CycleChart::resetZoom() {
+  zoomer_->zoom(0);
+  rescale();
+  replot();
+}
+
+QString CycleChart::readoutAt(const QPoint& position) const {
+  const QwtScaleMap xMap = canvasMap(QwtAxis::XBottom);
+  const QwtScaleMap yMap = canvasMap(QwtAxis::YLeft);
+  const PathSeries* best = nullptr;
+  size_t bestIndex = 0;
+  double bestDistance = 30.0 * 30.0;  // pixels squared: a state must be this near to be read
+  bool bestIdeal = false;
+  for (const QwtPlotCurve* curve : {actual_, ideal_, actualClosure_, idealClosure_}) {
+    const auto* series = dynamic_cast<const PathSeries*>(curve->data());
+    if (!series) continue;
+    for (size_t k = 0; k < series->size(); ++k) {
+      const QPointF p = series->sample(k);
+      const double dx = xMap.transform(p.x()) - position.x(), dy = yMap.transform(p.y()) - position.y();
+      if (dx * dx + dy * dy < bestDistance) {
+        bestDistance = dx * dx + dy * dy;
+        best = series;
+        bestIndex = k;
+        bestIdeal = curve == ideal_ || curve == idealClosure_;
+      }
+    }
+  }
+  if (!best) {
+    const double x = xMap.invTransform(position.x()), y = yMap.invTransform(position.y());
+    return QStringLiteral("%1 = %2\n%3 = %4")
+        .arg(kind_ == ChartKind::TemperatureEntropy ? QStringLiteral("s") : QStringLiteral("v"),
+             units_.format(x * xScale(), xQuantity(), 4),
+             kind_ == ChartKind::TemperatureEntropy ? QStringLiteral("T") : QStringLiteral("p"),
+             units_.format(y * yScale(), yQuantity(), 4));
+  }
+  const engine::PathState& s = best->state(bestIndex);
+  const auto& cycle = bestIdeal ? evaluation_->ideal : evaluation_->actual;
+  const auto& path = cycle.paths[static_cast<size_t>(best->pathOf(bestIndex))];
+  const QString which = bestIdeal ? tr("Ideal") : tr("With losses");
+  return tr("%1, %2 (%3 → %4)\nT = %5   s = %6\np = %7   v = %8")
+      .arg(which, componentName(path.component), QString::fromStdString(path.fromStation),
+           QString::fromStdString(path.toStation), units_.format(s.temperature, Quantity::Temperature, 5),
+           units_.format(s.entropy, Quantity::Entropy, 4), units_.format(s.pressure, Quantity::Pressure, 5),
+           units_.format(s.specificVolume, Quantity::SpecificVolume, 4));
+}
+
+}  // namespace cw::gui

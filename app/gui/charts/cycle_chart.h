@@ -1,0 +1,109 @@
+#pragma once
+// A chart of the cycle in one thermodynamic plane, built like Qwt's own examples: the plot
+// builds itself (grid, legend, axis titles with units), its items are attached and owned by
+// it, data come from adapters over the core's result, redraws are batched (one replot per
+// update), and a zoomer, a panner and a picker with a state readout handle the mouse.
+//
+// Items: the cycle with losses (blue #0072B2, solid, 2 px), its ideal twin (orange #E69F00,
+// dashed, 2 px), each closure to ambient thin (dash-dot and dotted), isobars through the
+// station pressures (light grey, thin), station markers with their SAE numbers, and the
+// selected component's path in vermillion #D55E00 (a wide band under the curves).
+
+#include "charts/path_series.h"
+#include "units.h"
+
+#include <qwt_plot.h>
+
+#include <memory>
+#include <string>
+#include <vector>
+
+class QwtPlotCurve;
+class QwtPlotMarker;
+class QwtPlotPanner;
+class QwtPlotTextLabel;
+class QwtPlotZoomer;
+class QwtPlotPicker;
+
+namespace cw::gui {
+
+class StateReadoutPicker;
+
+enum class ChartKind { TemperatureEntropy, PressureVolume };
+
+class CycleChart : public QwtPlot {
+  Q_OBJECT
+
+ public:
+  CycleChart(ChartKind kind, DisplayUnits& units, QWidget* parent = nullptr);
+  ~CycleChart() override;
+
+  ChartKind kind() const { return kind_; }
+
+  /// Shows an evaluation (null clears the chart); stale greys it and says so. One replot.
+  void setEvaluation(std::shared_ptr<const engine::Evaluation> evaluation, bool stale);
+  void setStale(bool stale);
+  bool isStale() const { return stale_; }
+  /// Highlights a component's path ("compressor"; empty for none). One replot.
+  void setHighlightedComponent(const std::string& component);
+  const std::string& highlightedComponent() const { return highlighted_; }
+
+  /// Logarithmic axes (the pressure-volume chart); rescales and resets the zoom.
+  void setLogAxes(bool on);
+  bool logAxes() const { return logAxes_; }
+
+  /// Back to the whole cycle.
+  void resetZoom();
+
+  /// The readout for a point of the canvas (pixels): the nearest path state's T, s, p, v
+  /// with units, or the cursor's coordinates when no state is near.
+  QString readoutAt(const QPoint& canvasPosition) const;
+
+  /// Axis titles, legend and labels in the current language and units.
+  void retranslateUi();
+
+  // For tests and exports.
+  const QwtPlotCurve* actualCurve() const { return actual_; }
+  const QwtPlotCurve* idealCurve() const { return ideal_; }
+  const QwtPlotCurve* actualClosureCurve() const { return actualClosure_; }
+  const QwtPlotCurve* highlightCurve() const { return highlight_; }
+  int isobarCount() const { return static_cast<int>(isobars_.size()); }
+  int markerCount() const { return static_cast<int>(markers_.size()); }
+  QwtPlotZoomer* zoomer() const { return zoomer_; }
+
+ private:
+  StateValue xValue() const;
+  StateValue yValue() const;
+  Quantity xQuantity() const;
+  Quantity yQuantity() const;
+  double xScale() const;
+  double yScale() const;
+  void rebuild();
+  void updateHighlight();
+  void updateStalePens();
+  void rescale();
+  void clearDynamicItems();
+
+  ChartKind kind_;
+  DisplayUnits& units_;
+  std::shared_ptr<const engine::Evaluation> evaluation_;
+  bool stale_ = false;
+  bool logAxes_ = false;
+  std::string highlighted_;
+
+  QwtPlotCurve* actual_ = nullptr;
+  QwtPlotCurve* ideal_ = nullptr;
+  QwtPlotCurve* actualClosure_ = nullptr;
+  QwtPlotCurve* idealClosure_ = nullptr;
+  QwtPlotCurve* highlight_ = nullptr;
+  QwtPlotCurve* idealHighlight_ = nullptr;
+  QwtPlotCurve* isobarLegend_ = nullptr;  ///< an empty curve carrying the isobars' legend entry
+  std::vector<QwtPlotCurve*> isobars_;
+  std::vector<QwtPlotMarker*> markers_;
+  QwtPlotTextLabel* staleLabel_ = nullptr;
+  QwtPlotZoomer* zoomer_ = nullptr;
+  QwtPlotPanner* panner_ = nullptr;
+  StateReadoutPicker* picker_ = nullptr;
+};
+
+}  // namespace cw::gui

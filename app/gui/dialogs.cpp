@@ -1,0 +1,98 @@
+#include "dialogs.h"
+
+#include <QComboBox>
+#include <QDialogButtonBox>
+#include <QFormLayout>
+#include <QSpinBox>
+#include <QVBoxLayout>
+
+namespace cw::gui {
+
+namespace {
+QDialogButtonBox* addButtons(QDialog* dialog, QVBoxLayout* layout) {
+  auto* buttons = new QDialogButtonBox(QDialogButtonBox::Ok | QDialogButtonBox::Cancel, dialog);
+  QObject::connect(buttons, &QDialogButtonBox::accepted, dialog, &QDialog::accept);
+  QObject::connect(buttons, &QDialogButtonBox::rejected, dialog, &QDialog::reject);
+  layout->addWidget(buttons);
+  return buttons;
+}
+}  // namespace
+
+PreferencesDialog::PreferencesDialog(QWidget* parent) : QDialog(parent) {
+  setObjectName("preferencesDialog");
+  setWindowTitle(tr("Preferences"));
+  auto* layout = new QVBoxLayout(this);
+  auto* form = new QFormLayout;
+  units_ = new QComboBox(this);
+  units_->setObjectName("unitSystem");
+  units_->addItem(tr("SI (K, kPa, kg/s, N)"));
+  units_->addItem(tr("U.S. customary (°R, psia, lbm/s, lbf)"));
+  units_->setToolTip(tr("Units for display and entry. Case files always store SI values."));
+  form->addRow(tr("&Units:"), units_);
+  layout_ = new QComboBox(this);
+  layout_->setObjectName("chartLayout");
+  layout_->addItem(tr("Side by side"));
+  layout_->addItem(tr("Tabbed"));
+  form->addRow(tr("&Charts:"), layout_);
+  autosave_ = new QSpinBox(this);
+  autosave_->setObjectName("autosaveSeconds");
+  autosave_->setRange(5, 3600);
+  autosave_->setSuffix(tr(" s"));
+  autosave_->setToolTip(tr("Seconds after a change until the case is saved for recovery after a crash."));
+  form->addRow(tr("&Autosave after:"), autosave_);
+  layout->addLayout(form);
+  addButtons(this, layout);
+}
+
+UnitSystem PreferencesDialog::unitSystem() const {
+  return units_->currentIndex() == 1 ? UnitSystem::USCustomary : UnitSystem::SI;
+}
+void PreferencesDialog::setUnitSystem(UnitSystem system) {
+  units_->setCurrentIndex(system == UnitSystem::USCustomary ? 1 : 0);
+}
+ChartLayout PreferencesDialog::chartLayout() const {
+  return layout_->currentIndex() == 1 ? ChartLayout::Tabbed : ChartLayout::SideBySide;
+}
+void PreferencesDialog::setChartLayout(ChartLayout layout) {
+  layout_->setCurrentIndex(layout == ChartLayout::Tabbed ? 1 : 0);
+}
+int PreferencesDialog::autosaveSeconds() const {
+  return autosave_->value();
+}
+void PreferencesDialog::setAutosaveSeconds(int seconds) {
+  autosave_->setValue(seconds);
+}
+
+ImageExportDialog::ImageExportDialog(QWidget* parent) : QDialog(parent) {
+  setObjectName("imageExportDialog");
+  setWindowTitle(tr("Export as PNG"));
+  auto* layout = new QVBoxLayout(this);
+  auto* form = new QFormLayout;
+  width_ = new QSpinBox(this);
+  width_->setRange(200, 10000);
+  width_->setValue(2400);
+  width_->setSuffix(tr(" px"));
+  height_ = new QSpinBox(this);
+  height_->setRange(150, 10000);
+  height_->setValue(1600);
+  height_->setSuffix(tr(" px"));
+  dpi_ = new QSpinBox(this);
+  dpi_->setRange(50, 1200);
+  dpi_->setValue(200);
+  dpi_->setSuffix(tr(" dpi"));
+  dpi_->setToolTip(tr("Resolution: sets the size of text and lines in pixels."));
+  form->addRow(tr("&Width:"), width_);
+  form->addRow(tr("&Height:"), height_);
+  form->addRow(tr("&Resolution:"), dpi_);
+  layout->addLayout(form);
+  addButtons(this, layout);
+}
+
+QSize ImageExportDialog::pixels() const {
+  return {width_->value(), height_->value()};
+}
+int ImageExportDialog::dotsPerInch() const {
+  return dpi_->value();
+}
+
+}  // namespace cw::gui

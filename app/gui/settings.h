@@ -1,0 +1,46 @@
+#pragma once
+// One typed wrapper over QSettings: every key the application stores, with its default.
+
+#include "units.h"
+
+#include <QByteArray>
+#include <QSettings>
+#include <QStringList>
+
+namespace cw::gui {
+
+enum class ChartLayout { SideBySide, Tabbed };
+
+class AppSettings {
+ public:
+  AppSettings() = default;
+
+  QByteArray windowGeometry() const;
+  void setWindowGeometry(const QByteArray& geometry);
+  QByteArray windowState() const;
+  void setWindowState(const QByteArray& state);
+
+  UnitSystem unitSystem() const;
+  void setUnitSystem(UnitSystem system);
+
+  ChartLayout chartLayout() const;
+  void setChartLayout(ChartLayout layout);
+
+  bool pressureVolumeLogAxes() const;
+  void setPressureVolumeLogAxes(bool on);
+
+  /// Seconds between a change and its autosave, in [5, 3600].
+  int autosaveSeconds() const;
+  void setAutosaveSeconds(int seconds);
+
+  /// Most recent first, at most kMaxRecentFiles.
+  QStringList recentFiles() const;
+  void setRecentFiles(const QStringList& files);
+  void addRecentFile(const QString& file);
+  static constexpr int kMaxRecentFiles = 8;
+
+ private:
+  mutable QSettings settings_;
+};
+
+}  // namespace cw::gui

@@ -1,0 +1,43 @@
+// One edit-to-redraw cycle: a compressor-efficiency edit as the user types it, one evaluation,
+// both charts replotted and the station table and summary repainted. Goal: under 16 ms.
+#include "case_document.h"
+#include "charts/cycle_chart.h"
+#include "main_window.h"
+
+#include <qwt_plot_canvas.h>
+
+#include <QLineEdit>
+#include <QTableView>
+#include <QTest>
+
+class BenchEditRedraw : public QObject {
+  Q_OBJECT
+
+ private slots:
+  void editToRedraw() {
+    QLocale::setDefault(QLocale::c());
+    cw::gui::MainWindow window;
+    QVERIFY(window.openCase(":/demo/demo-turbojet.json"));
+    window.resize(1600, 1000);
+    window.show();
+    QVERIFY(QTest::qWaitForWindowExposed(&window));
+    auto* field = window.findChild<QLineEdit*>("compressor.efficiency");
+    auto* stations = window.findChild<QTableView*>("stationTable");
+    auto* summary = window.findChild<QTableView*>("performanceTable");
+    QVERIFY(field && stations && summary);
+    int k = 0;
+    QBENCHMARK {
+      const QString text = (k++ % 2) ? QStringLiteral("0.85") : QStringLiteral("0.86");
+      field->setText(text);
+      emit field->textEdited(text);
+      window.temperatureEntropyChart()->canvas()->repaint();
+      window.pressureVolumeChart()->canvas()->repaint();
+      stations->viewport()->repaint();
+      summary->viewport()->repaint();
+    }
+    QVERIFY(!window.document().isStale());
+  }
+};
+
+QTEST_MAIN(BenchEditRedraw)
+#include "bench_edit_redraw.moc"
