@@ -684,10 +684,15 @@ bool MainWindow::offerRecovery() {
 bool MainWindow::exportStationCsv(const QString& path) {
   const auto evaluation = document_->evaluation();
   if (!evaluation) return false;
-  const auto& cycle = stationModel_->mode() == TableMode::Ideal ? evaluation->ideal : evaluation->actual;
+  // The table as shown: with losses, ideal twin, or their difference.
+  const TableMode mode = stationModel_->mode();
+  const std::string csv =
+      mode == TableMode::Difference
+          ? io::stationDifferenceCsv(evaluation->actual, evaluation->ideal)
+          : io::stationTableCsv(mode == TableMode::Ideal ? evaluation->ideal : evaluation->actual);
   QSaveFile file(path);
   if (!file.open(QIODevice::WriteOnly)) return false;
-  file.write(QByteArray::fromStdString(io::stationTableCsv(cycle)));
+  file.write(QByteArray::fromStdString(csv));
   return file.commit();
 }
 

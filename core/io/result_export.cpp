@@ -3,6 +3,7 @@
 #include "common/error.h"
 #include "common/version.h"
 
+#include <algorithm>
 #include <sstream>
 
 namespace cw::io {
@@ -97,21 +98,50 @@ nlohmann::json evaluationToJson(const engine::Evaluation& e, bool withPaths) {
   return j;
 }
 
-std::string stationTableCsv(const engine::CycleResult& r) {
-  std::ostringstream out;
-  out << "# " << kCaution << '\n';
+namespace {
+
+/// The caution line and the header of a station table; `note` follows the caution.
+void writeTableHead(std::ostringstream& out, const std::string& note) {
+  out << "# " << kCaution << note << '\n';
   const auto& columns = stationColumns();
   for (std::size_t i = 0; i < columns.size(); ++i) out << (i ? "," : "") << columns[i];
   out << '\n';
-  for (const auto& s : r.stations) {
-    const nlohmann::json j = stationToJson(s);
-    for (std::size_t i = 0; i < columns.size(); ++i) {
-      if (i) out << ',';
-      if (!j.contains(columns[i])) continue;  // area where not defined: empty cell
-      const auto& v = j[columns[i]];
-      out << (v.is_string() ? v.get<std::string>() : formatNumber(v.get<double>()));
-    }
-    out << '\n';
+}
+
+/// One row from a station's JSON object (id first, an absent area as an empty cell).
+void writeRow(std::ostringstream& out, const nlohmann::json& row) {
+  const auto& columns = stationColumns();
+  for (std::size_t i = 0; i < columns.size(); ++i) {
+    if (i) out << ',';
+    if (!row.contains(columns[i])) continue;
+    const auto& v = row[columns[i]];
+    out << (v.is_string() ? v.get<std::string>() : formatNumber(v.get<double>()));
+  }
+  out << '\n';
+}
+
+}  // namespace
+
+std::string stationTableCsv(const engine::CycleResult& r) {
+  std::ostringstream out;
+  writeTableHead(out, "");
+  for (const auto& s : r.stations) writeRow(out, stationToJson(s));
+  return out.str();
+}
+
+std::string stationDifferenceCsv(const engine::CycleResult& actual, const engine::CycleResult& ideal) {
+  std::ostringstream out;
+  writeTableHead(out, " Values: with losses minus ideal twin.");
+  for (const auto& a : actual.stations) {
+    const auto twin = std::find_if(ideal.stations.begin(), ideal.stations.end(),
+                                   [&](const engine::Station& s) { return s.id == a.id; });
+    if (twin == ideal.stations.end()) continue;
+    const nlohmann::json ja = stationToJson(a), ji = stationToJson(*twin);
+    nlohmann::json row = {{"id", a.id}};
+    for (const auto& column : stationColumns())
+      if (column != "id" && ja.contains(column) && ji.contains(column))
+        row[column] = ja[column].get<double>() - ji[column].get<double>();
+    writeRow(out, row);
   }
   return out.str();
 }

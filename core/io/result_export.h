@@ -24,6 +24,10 @@ nlohmann::json evaluationToJson(const engine::Evaluation& evaluation, bool withP
 /// The station table as CSV: a "# " caution line, a header with units, one row per station.
 std::string stationTableCsv(const engine::CycleResult& result);
 
+/// The station table of the difference actual - ideal, station by station (stations that only
+/// one of the two has, such as 6, are left out; areas where either lacks one are empty).
+std::string stationDifferenceCsv(const engine::CycleResult& actual, const engine::CycleResult& ideal);
+
 /// Column names of the station table, in order (the CSV header and the JSON keys).
 const std::vector<std::string>& stationColumns();
 

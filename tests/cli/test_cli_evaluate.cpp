@@ -1,6 +1,7 @@
 // cyclewright-cli evaluate: JSON, CSV and text output, --set overrides and exit statuses.
 #include "engine/evaluate.h"
 #include "io/case_file.h"
+#include "io/result_export.h"
 
 #include <QJsonArray>
 #include <QJsonDocument>
@@ -68,6 +69,19 @@ class TestCliEvaluate : public QObject {
     QVERIFY(lines[1].startsWith("id,Tt_K,pt_Pa,Ts_K,ps_Pa,mach,V_m_per_s,W_kg_per_s"));
     QCOMPARE(lines.size(), 2 + 9);
     QVERIFY(lines[5].startsWith("4,1500,"));
+  }
+  void differenceTableIsActualMinusIdeal() {
+    const auto e = cw::engine::evaluateCase(cw::io::readCaseFile(kExample.toStdString()));
+    const QList<QByteArray> lines =
+        QByteArray::fromStdString(cw::io::stationDifferenceCsv(e.actual, e.ideal)).trimmed().split('\n');
+    QVERIFY(lines[0].contains("with losses minus ideal twin"));
+    // One row per station that both cycles have (here all nine: both burn in the afterburner).
+    QCOMPARE(lines.size(), 2 + int(e.ideal.stations.size()));
+    const QList<QByteArray> row4 = lines[5].split(',');
+    QCOMPARE(row4[0], QByteArray("4"));
+    QCOMPARE(row4[1].toDouble(), 0.0);  // same Tt4 by construction of the twin
+    const double dpt4 = e.actual.station("4").totalPressure - e.ideal.station("4").totalPressure;
+    QCOMPARE(row4[2].toDouble(), dpt4);
   }
   void setOverridesAnInput() {
     const Run base = runCli({"evaluate", kExample, "--format", "json"});
