@@ -2,7 +2,7 @@
 
 #include "atmosphere/standard_atmosphere.h"
 #include "common/error.h"
-#include "components/burner.h"
+#include "components/heat_addition.h"
 #include "components/compressor.h"
 #include "components/duct.h"
 #include "components/inlet.h"

@@ -1,5 +1,6 @@
 #pragma once
-// Burner (combustor), stations 3 -> 4; the afterburner uses the same heat addition.
+// Heat addition by burning fuel: the burner (combustor, stations 3 -> 4) and the lit
+// afterburner (6 -> 7) are both this class.
 //
 // Energy balance per unit of the stream's air, entry fuel-air ratio f1, fuel added df:
 //   (1 + f1) h_in(T_in) + df [h_fuel - (1 - eta_b) LHV] = (1 + f1 + df) h_p(T_out; f1 + df)

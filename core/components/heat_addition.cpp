@@ -1,4 +1,4 @@
-#include "components/burner.h"
+#include "components/heat_addition.h"
 
 #include "common/error.h"
 
