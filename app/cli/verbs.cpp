@@ -14,9 +14,11 @@ Verb atmosphereVerb();
 Verb flowVerb();
 Verb evaluateVerb();
 Verb propertiesVerb();
+Verb auditVerb();
 
 const std::vector<Verb>& allVerbs() {
-  static const std::vector<Verb> verbs = {atmosphereVerb(), flowVerb(), evaluateVerb(), propertiesVerb()};
+  static const std::vector<Verb> verbs = {atmosphereVerb(), flowVerb(), evaluateVerb(), auditVerb(),
+                                          propertiesVerb()};
   return verbs;
 }
 
