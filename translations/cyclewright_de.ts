@@ -505,6 +505,26 @@ Valid range: %2</source>
         <translation>%1
 Gültiger Bereich: %2</translation>
     </message>
+    <message>
+        <source>Title</source>
+        <translation>Titel</translation>
+    </message>
+    <message>
+        <source>A short name for the case; saved in the case file.</source>
+        <translation>Ein kurzer Name für den Fall; wird in der Falldatei gespeichert.</translation>
+    </message>
+    <message>
+        <source>Notes</source>
+        <translation>Notizen</translation>
+    </message>
+    <message>
+        <source>Free text about the case: what it is for, where its inputs come from; saved in the case file.</source>
+        <translation>Freier Text zum Fall: wozu er dient, woher seine Eingaben stammen; wird in der Falldatei gespeichert.</translation>
+    </message>
+    <message>
+        <source>Case</source>
+        <translation>Fall</translation>
+    </message>
 </context>
 <context>
     <name>cw::gui::CaseDocument</name>

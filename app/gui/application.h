@@ -6,6 +6,7 @@
 #include <QStringList>
 
 class QApplication;
+class QPalette;
 
 namespace cw::gui {
 
@@ -18,6 +19,13 @@ struct StartOptions {
 
 /// Returns true when argv asks for an offscreen render (--screenshot), before QApplication exists.
 bool wantsScreenshot(int argc, char** argv);
+
+/// A dark palette (window #202124, base #2b2b2b, white text), for `--palette dark` and tests.
+QPalette darkPalette();
+
+/// Applies a named palette to the application: "dark" (Fusion style with darkPalette()) or
+/// "system" (left as it is). Returns false for any other name.
+bool applyPaletteNamed(QApplication& app, const QString& name);
 
 /// Installs the translator for options.language (or the system locale). Returns the language used.
 QString installTranslation(QApplication& app, const QString& language);

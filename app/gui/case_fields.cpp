@@ -67,8 +67,38 @@ std::vector<FieldSpec> buildFields() {
     f.push_back(std::move(s));
   };
   auto fixed = [](const char* p) { return [p](const Case&) { return std::string(p); }; };
+  auto text = [&](FieldKind kind, const char* key, const char* label, const char* tip, const char* path,
+                  std::function<std::string(const Case&)> get,
+                  std::function<void(Case&, const std::string&)> set) {
+    FieldSpec s;
+    s.id = nextId++;
+    s.section = Section::Case;
+    s.kind = kind;
+    s.key = key;
+    s.label = label;
+    s.toolTip = tip;
+    s.path = [path](const Case&) { return std::string(path); };
+    s.visible = always;
+    s.get = [](const Case&) { return 0.0; };
+    s.set = [](Case&, double) {};
+    s.getText = std::move(get);
+    s.setText = std::move(set);
+    f.push_back(std::move(s));
+  };
   auto stdAtm = [](const Case& c) { return holds<StandardAtmosphereAmbient>(c.flight.ambient); };
   auto givenAtm = [](const Case& c) { return holds<GivenAmbient>(c.flight.ambient); };
+
+  // The case's own description: inputs too, saved in the file, no effect on the cycle.
+  text(
+      FieldKind::Text, "case.title", QT_TRANSLATE_NOOP("CaseFields", "Title"),
+      QT_TRANSLATE_NOOP("CaseFields", "A short name for the case; saved in the case file."), "/title",
+      [](const Case& c) { return c.title; }, [](Case& c, const std::string& v) { c.title = v; });
+  text(
+      FieldKind::Notes, "case.notes", QT_TRANSLATE_NOOP("CaseFields", "Notes"),
+      QT_TRANSLATE_NOOP("CaseFields",
+                        "Free text about the case: what it is for, where its inputs come from; "
+                        "saved in the case file."),
+      "/notes", [](const Case& c) { return c.notes; }, [](Case& c, const std::string& v) { c.notes = v; });
 
   // Flight condition.
   choice(
@@ -522,6 +552,8 @@ std::string sectionComponent(Section section) {
 
 QString sectionName(Section section) {
   switch (section) {
+    case Section::Case:
+      return QCoreApplication::translate("CaseFields", "Case");
     case Section::Flight:
       return QCoreApplication::translate("CaseFields", "Flight");
     case Section::Design:
@@ -549,8 +581,8 @@ QString sectionName(Section section) {
 }
 
 QString sectionKey(Section section) {
-  static const char* keys[] = {"flight", "design",  "fuel",    "gasModel",    "inlet", "compressor",
-                               "burner", "turbine", "jetPipe", "afterburner", "nozzle"};
+  static const char* keys[] = {"case",       "flight", "design",  "fuel",    "gasModel",    "inlet",
+                               "compressor", "burner", "turbine", "jetPipe", "afterburner", "nozzle"};
   return QString::fromLatin1(keys[static_cast<int>(section)]);
 }
 

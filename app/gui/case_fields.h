@@ -12,8 +12,10 @@
 
 namespace cw::gui {
 
-/// The selectable items of the component strip, in flow order after the operating inputs.
+/// The selectable items of the component strip: the case's own description (title, notes),
+/// then the operating inputs, then the components in flow order.
 enum class Section {
+  Case,
   Flight,
   Design,
   Fuel,
@@ -26,17 +28,18 @@ enum class Section {
   Afterburner,
   Nozzle,
 };
-inline constexpr int kSectionCount = 11;
+inline constexpr int kSectionCount = 12;
 
 /// The component name the core uses for a section's process path ("inlet", ...); empty for
-/// sections that are no component (flight, design, fuel, gas model).
+/// sections that are no component (case, flight, design, fuel, gas model).
 std::string sectionComponent(Section section);
 /// The section's translated display name.
 QString sectionName(Section section);
 /// A stable object name, e.g. "compressor".
 QString sectionKey(Section section);
 
-enum class FieldKind { Number, Choice, Flag };
+/// Text: one line of free text; Notes: several lines.
+enum class FieldKind { Number, Choice, Flag, Text, Notes };
 
 struct FieldSpec {
   int id = 0;  ///< unique; the undo merge id
@@ -54,6 +57,8 @@ struct FieldSpec {
   std::function<bool(const engine::Case&)> visible;      ///< shown for the case's current choices
   std::function<double(const engine::Case&)> get;        ///< SI value, choice index or 0/1
   std::function<void(engine::Case&, double)> set;
+  std::function<std::string(const engine::Case&)> getText;  ///< Text and Notes fields (UTF-8)
+  std::function<void(engine::Case&, const std::string&)> setText;
 };
 
 /// The whole table, in form order.

@@ -10,6 +10,7 @@
 #include <QLabel>
 #include <QLineEdit>
 #include <QLocale>
+#include <QPlainTextEdit>
 #include <QSignalBlocker>
 #include <QVBoxLayout>
 
@@ -123,6 +124,30 @@ CaseForm::CaseForm(Section section, CaseDocument& document, DisplayUnits& units,
         row.label->setBuddy(check);
         break;
       }
+      case FieldKind::Text: {
+        auto* edit = new QLineEdit(this);
+        edit->setObjectName(QString::fromLatin1(spec.key));
+        connect(edit, &QLineEdit::textEdited, this,
+                [this, &spec](const QString& text) { textEdited(spec, text); });
+        row.editor = edit;
+        layout_->addRow(row.label, edit);
+        row.label->setBuddy(edit);
+        break;
+      }
+      case FieldKind::Notes: {
+        auto* edit = new QPlainTextEdit(this);
+        edit->setObjectName(QString::fromLatin1(spec.key));
+        edit->setTabChangesFocus(true);
+        // Undo is the document's: one stack for every input.
+        edit->setUndoRedoEnabled(false);
+        edit->setMinimumHeight(QFontMetrics(edit->font()).height() * 6);
+        connect(edit, &QPlainTextEdit::textChanged, this,
+                [this, &spec, edit] { textEdited(spec, edit->toPlainText()); });
+        row.editor = edit;
+        layout_->addRow(row.label, edit);
+        row.label->setBuddy(edit);
+        break;
+      }
     }
     rows_.push_back(row);
   }
@@ -160,7 +185,15 @@ void CaseForm::refresh() {
     if (!visible) continue;
     const QSignalBlocker blocker(row.editor);
     const engine::CaseProblem* problem = document_.problemAt(spec.path(c));
-    if (auto* edit = qobject_cast<QLineEdit*>(row.editor)) {
+    if (spec.kind == FieldKind::Text || spec.kind == FieldKind::Notes) {
+      // Rewrite only when the model differs (undo, file load), so that the cursor stays put.
+      const QString text = QString::fromStdString(spec.getText(c));
+      if (auto* line = qobject_cast<QLineEdit*>(row.editor); line && line->text() != text)
+        line->setText(text);
+      if (auto* notes = qobject_cast<QPlainTextEdit*>(row.editor); notes && notes->toPlainText() != text)
+        notes->setPlainText(text);
+      markInvalid(row.editor, problem != nullptr);
+    } else if (auto* edit = qobject_cast<QLineEdit*>(row.editor)) {
       const bool entryProblem = document_.entryProblems().contains(spec.id);
       const double si = spec.get(c);
       // Leave the user's text alone when it already stands for the model's value.
@@ -235,6 +268,13 @@ void CaseForm::choiceActivated(const FieldSpec& spec, int index) {
   engine::Case edited = document_.currentCase();
   spec.set(edited, index);
   document_.applyEdit(-1, tr("Change %1").arg(fieldLabel(spec)), edited);
+}
+
+void CaseForm::textEdited(const FieldSpec& spec, const QString& text) {
+  engine::Case edited = document_.currentCase();
+  spec.setText(edited, text.toStdString());
+  // Merge id = field id: typing into one field is one undoable step.
+  document_.applyEdit(spec.id, tr("Change %1").arg(fieldLabel(spec)), edited);
 }
 
 void CaseForm::flagToggled(const FieldSpec& spec, bool on) {

@@ -43,6 +43,7 @@ class CaseForm : public QWidget {
   void numberEdited(const FieldSpec& spec, const QString& text);
   void choiceActivated(const FieldSpec& spec, int index);
   void flagToggled(const FieldSpec& spec, bool on);
+  void textEdited(const FieldSpec& spec, const QString& text);
 
   void showProblem(const Row& row, const QString& message);
 

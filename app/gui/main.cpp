@@ -32,13 +32,20 @@ int main(int argc, char** argv) {
                           "1600x1000");
   QCommandLineOption language("language", "User-interface language, e.g. en or de (default: the system's).",
                               "CODE");
+  QCommandLineOption palette("palette", "Colour palette: system (default) or dark.", "NAME", "system");
   parser.addOption(screenshot);
+  parser.addOption(palette);
   parser.addOption(size);
   parser.addOption(language);
   parser.addPositionalArgument("case", "Case file to open (default: the demo case).", "[case.json]");
   parser.process(app);
 
   cw::gui::installTranslation(app, parser.value(language));
+  if (!cw::gui::applyPaletteNamed(app, parser.value(palette))) {
+    std::fprintf(stderr, "cyclewright: --palette = %s is not one of system, dark\n",
+                 qPrintable(parser.value(palette)));
+    return 2;
+  }
 
   QSize pictureSize(1600, 1000);
   {

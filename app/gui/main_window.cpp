@@ -280,13 +280,7 @@ void MainWindow::createCentralWidget() {
   banner_->setAutoFillBackground(true);
   banner_->setMargin(6);
   banner_->setTextFormat(Qt::PlainText);
-  {
-    QPalette p = banner_->palette();
-    const bool light = p.color(QPalette::Window).lightness() > 128;
-    p.setColor(QPalette::Window, light ? QColor(0xFF, 0xE8, 0xD6) : QColor(0x5A, 0x2A, 0x08));
-    p.setColor(QPalette::WindowText, light ? QColor(0x60, 0x20, 0x00) : QColor(0xFF, 0xE0, 0xC8));
-    banner_->setPalette(p);
-  }
+  applyBannerPalette();
   banner_->hide();
   layout->addWidget(banner_);
 
@@ -469,6 +463,27 @@ void MainWindow::updateBanner() {
                                                : tr("There is no valid result to show yet.");
   banner_->setText(tr("Stale result. %1\n%2").arg(tail, lines.join(QLatin1Char('\n'))));
   banner_->show();
+}
+
+void MainWindow::applyBannerPalette() {
+  // Vermillion (the stale colour) mixed into the window colour; the window's text on it.
+  QPalette p = palette();
+  const QColor window = p.color(QPalette::Window);
+  const QColor vermillion(0xD5, 0x5E, 0x00);
+  const float t = 0.22f;
+  p.setColor(QPalette::Window, QColor::fromRgbF(window.redF() * (1 - t) + vermillion.redF() * t,
+                                                window.greenF() * (1 - t) + vermillion.greenF() * t,
+                                                window.blueF() * (1 - t) + vermillion.blueF() * t));
+  p.setColor(QPalette::WindowText, palette().color(QPalette::WindowText));
+  banner_->setPalette(p);
+}
+
+void MainWindow::changeEvent(QEvent* event) {
+  QMainWindow::changeEvent(event);
+  if (event->type() == QEvent::PaletteChange && banner_) {
+    applyBannerPalette();
+    updateStrip();
+  }
 }
 
 void MainWindow::updateStrip() {

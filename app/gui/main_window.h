@@ -95,6 +95,7 @@ class MainWindow : public QMainWindow {
 
  protected:
   void closeEvent(QCloseEvent* event) override;
+  void changeEvent(QEvent* event) override;
 
  private:
   void createActions();
@@ -106,6 +107,8 @@ class MainWindow : public QMainWindow {
   void updateTitle();
   void refreshResult();
   void updateBanner();
+  /// The stale banner's colours from the window's palette (light or dark).
+  void applyBannerPalette();
   void updateStrip();
   void routeSelection(Section section);
   QSet<QString> stationsOf(Section section) const;

@@ -167,9 +167,14 @@ QVariant StationTableModel::data(const QModelIndex& index, int role) const {
       return {};
     case Qt::BackgroundRole:
       if (highlighted) {
-        QColor c(0xD5, 0x5E, 0x00);
-        c.setAlpha(60);
-        return QBrush(c);
+        // The selected component's vermillion, mixed into the palette's base (light or dark), so
+        // that the palette's text colour stays readable on it.
+        const QColor base = QApplication::palette().color(QPalette::Base);
+        const QColor vermillion(0xD5, 0x5E, 0x00);
+        const float t = 0.28f;
+        return QBrush(QColor::fromRgbF(base.redF() * (1 - t) + vermillion.redF() * t,
+                                       base.greenF() * (1 - t) + vermillion.greenF() * t,
+                                       base.blueF() * (1 - t) + vermillion.blueF() * t));
       }
       return {};
     case Qt::ForegroundRole:

@@ -5,6 +5,7 @@
 #include "case_document.h"
 #include "charts/chart_export.h"
 #include "charts/cycle_chart.h"
+#include "charts/isobar_labels.h"
 #include "main_window.h"
 #include "performance_model.h"
 #include "selection_router.h"
@@ -15,23 +16,30 @@
 #include "io/case_file.h"
 
 #include <qwt_plot_curve.h>
+#include <qwt_plot_marker.h>
+#include <qwt_plot_zoomer.h>
 #include <qwt_scale_map.h>
 #include <qwt_series_data.h>
 #include <qwt_text.h>
 
+#include <QAbstractButton>
 #include <QApplication>
 #include <QFile>
 #include <QJsonDocument>
 #include <QJsonObject>
 #include <QLabel>
 #include <QLineEdit>
+#include <QMessageBox>
+#include <QPlainTextEdit>
 #include <QSignalSpy>
 #include <QStandardPaths>
 #include <QSvgRenderer>
 #include <QTemporaryDir>
 #include <QTest>
+#include <QTimer>
 #include <QUndoStack>
 
+#include <algorithm>
 #include <cmath>
 
 using cw::gui::MainWindow;
@@ -58,6 +66,39 @@ int stationRow(const cw::gui::StationTableModel* model, const QString& id) {
   for (int r = 0; r < model->rowCount(); ++r)
     if (model->index(r, 0).data().toString() == id) return r;
   return -1;
+}
+
+/// Answers the next message box the window opens (polled from a timer, as a user would click).
+/// Returns the timer; *text receives the box's text once it was answered.
+QTimer* answerNextMessageBox(MainWindow& window, QMessageBox::StandardButton answer, QString* text) {
+  auto* timer = new QTimer(&window);
+  timer->setInterval(20);
+  QObject::connect(timer, &QTimer::timeout, &window, [&window, timer, answer, text] {
+    auto* box = qobject_cast<QMessageBox*>(QApplication::activeModalWidget());
+    if (!box) box = window.findChild<QMessageBox*>();
+    if (!box || !box->isVisible()) return;
+    timer->stop();
+    *text = box->text();
+    QAbstractButton* button = box->button(answer);
+    if (button)
+      button->click();
+    else
+      box->reject();
+  });
+  timer->start();
+  return timer;
+}
+
+/// Edits the demo case, autosaves it and drops the window without closing it (as a crash
+/// would). Returns the autosaved case.
+cw::engine::Case crashWithAutosave() {
+  QFile::remove(MainWindow::autosavePath());
+  MainWindow window;
+  if (!window.openCase(kDemo)) return {};
+  typeInto(window.findChild<QLineEdit*>("compressor.pressureRatio"), "9.5");
+  typeInto(window.findChild<QLineEdit*>("case.title"), "Before the crash");
+  if (!window.autosaveNow()) return {};
+  return window.document().currentCase();
 }
 
 }  // namespace
@@ -344,6 +385,173 @@ class TestExplorer : public QObject {
     QVERIFY(recovered.document().currentCase() == edited);
     QVERIFY(recovered.document().isModified());
     QFile::remove(MainWindow::autosavePath());
+  }
+
+  void isobarLabelsDoNotOverlap() {
+    // Stations 5 to 8 of the afterburning example have pressures within 10 % of each other.
+    MainWindow window;
+    QVERIFY(window.openCase(QStringLiteral(CYCLEWRIGHT_SOURCE_DIR) +
+                            "/resources/examples/supersonic-afterburning-two-gamma.json"));
+    window.resize(1400, 900);
+    window.show();
+    QVERIFY(QTest::qWaitForWindowExposed(&window));
+    const int stations = static_cast<int>(window.document().evaluation()->actual.stations.size());
+    for (cw::gui::CycleChart* chart : {window.temperatureEntropyChart(), window.pressureVolumeChart()}) {
+      const QString name = chart->objectName();
+      chart->grab();  // one paint places the labels for this size
+      const cw::gui::IsobarLabels* labels = chart->isobarLabels();
+      const auto& placed = labels->placedRects();
+      // Every isobar is drawn and has a label to place; crowded ones moved or left out.
+      QVERIFY(labels->labelCount() >= 7);
+      QVERIFY2(labels->movedCount() + labels->skippedCount() > 0, qPrintable(name));
+      QCOMPARE(static_cast<int>(placed.size()) + labels->skippedCount(), labels->labelCount());
+      QVERIFY2(placed.size() >= 4, qPrintable(name));
+      if (chart->kind() == cw::gui::ChartKind::TemperatureEntropy)
+        QCOMPARE(chart->isobarCount(), labels->labelCount());
+      else
+        QCOMPARE(static_cast<int>(std::count_if(
+                     chart->markers().begin(), chart->markers().end(),
+                     [](const QwtPlotMarker* m) { return m->lineStyle() == QwtPlotMarker::HLine; })),
+                 labels->labelCount());
+      QVERIFY(labels->labelCount() <= stations);
+      const QRectF canvas = chart->canvas()->contentsRect();
+      for (std::size_t i = 0; i < placed.size(); ++i) {
+        QVERIFY2(canvas.contains(placed[i]), qPrintable(name));
+        for (std::size_t j = i + 1; j < placed.size(); ++j)
+          QVERIFY2(!placed[i].intersects(placed[j]),
+                   qPrintable(name + QString(": labels %1 and %2").arg(i).arg(j)));
+        for (const QRectF& obstacle : labels->obstacleRects())
+          QVERIFY2(!placed[i].intersects(obstacle),
+                   qPrintable(name + ": a label covers a station or the legend"));
+      }
+    }
+    // Zooming in on the crowded stations makes room: more of their labels are shown.
+    cw::gui::CycleChart* ts = window.temperatureEntropyChart();
+    auto crowdedShown = [ts] {
+      ts->grab();
+      int n = 0;
+      for (const QString& text : ts->isobarLabels()->placedTexts())
+        for (const char* station : {"p5 ", "p6 ", "p7 ", "p8 "}) n += text.startsWith(station) ? 1 : 0;
+      return n;
+    };
+    const int before = crowdedShown();
+    QVERIFY(before < 4);  // they do not all fit at this size
+    const auto& s7 = window.document().evaluation()->actual.station("7");
+    ts->zoomer()->zoom(
+        QRectF(QPointF(s7.entropy - 150.0, s7.totalTemperature - 300.0), QSizeF(300.0, 400.0)));
+    const int after = crowdedShown();
+    QVERIFY2(after > before,
+             qPrintable(QString("%1 labels of p5 to p8 before zooming, %2 after").arg(before).arg(after)));
+    for (std::size_t i = 0; i < ts->isobarLabels()->placedRects().size(); ++i)
+      for (std::size_t j = i + 1; j < ts->isobarLabels()->placedRects().size(); ++j)
+        QVERIFY(!ts->isobarLabels()->placedRects()[i].intersects(ts->isobarLabels()->placedRects()[j]));
+  }
+
+  void placeLabelsPicksTheFirstFreeCandidate() {
+    const QRectF bounds(0, 0, 100, 100);
+    const QRectF a(10, 10, 30, 10), b(20, 15, 30, 10), b2(20, 40, 30, 10), outside(90, 90, 30, 10);
+    const std::vector<int> chosen =
+        cw::gui::placeLabels({{a}, {b, b2}, {outside}, {b2, a}}, {QRectF(60, 60, 10, 10)}, bounds);
+    QCOMPARE(chosen, (std::vector<int>{0, 1, -1, -1}));
+    // An obstacle blocks its place too.
+    QCOMPARE(cw::gui::placeLabels({{a, b2}}, {QRectF(0, 0, 15, 15)}, bounds), std::vector<int>{1});
+  }
+
+  void titleAndNotesAreEditableUndoableAndSaved() {
+    QTemporaryDir dir;
+    const QString path = dir.filePath("described.json");
+    MainWindow window;
+    QVERIFY(window.openCase(kDemo));
+    const cw::engine::Case original = window.document().currentCase();
+    QVERIFY(!original.notes.empty());  // so that undo has something to restore
+    window.selection().select(cw::gui::Section::Case);
+    auto* form = window.findChild<QWidget*>("caseForm");
+    QVERIFY(form && form->isVisibleTo(window.findChild<QWidget*>("formStack")));
+    auto* title = window.findChild<QLineEdit*>("case.title");
+    auto* notes = window.findChild<QPlainTextEdit*>("case.notes");
+    QVERIFY(title && notes);
+    QCOMPARE(title->text(), QString::fromStdString(original.title));
+    QCOMPARE(notes->toPlainText(), QString::fromStdString(original.notes));
+
+    typeInto(title, "Hot day, 35 °C");
+    notes->setFocus();
+    notes->selectAll();
+    QTest::keyClicks(notes, "First line");
+    QTest::keyClick(notes, Qt::Key_Return);
+    QTest::keyClicks(notes, "Second line");
+    QCOMPARE(window.document().currentCase().title, std::string("Hot day, 35 °C"));
+    QCOMPARE(window.document().currentCase().notes, std::string("First line\nSecond line"));
+    QCOMPARE(window.document().undoStack()->count(), 2);  // one step per field, keystrokes merged
+    QVERIFY(window.document().isModified());
+    QVERIFY(!window.document().isStale());  // a description is no physics input
+
+    // Saved to the file and read back equal.
+    QVERIFY(window.saveCaseAs(path));
+    const cw::engine::Case edited = window.document().currentCase();
+    QVERIFY(cw::io::readCaseFile(path.toStdString()) == edited);
+    {
+      MainWindow reopened;
+      QVERIFY(reopened.openCase(path));
+      QVERIFY(reopened.document().currentCase() == edited);
+      QCOMPARE(reopened.findChild<QLineEdit*>("case.title")->text(), QString("Hot day, 35 °C"));
+      QCOMPARE(reopened.findChild<QPlainTextEdit*>("case.notes")->toPlainText(),
+               QString("First line\nSecond line"));
+    }
+
+    // Undo: the notes first, then the title; form and case back to the original.
+    window.document().undoStack()->undo();
+    QCOMPARE(window.document().currentCase().notes, original.notes);
+    QCOMPARE(notes->toPlainText(), QString::fromStdString(original.notes));
+    QCOMPARE(window.document().currentCase().title, std::string("Hot day, 35 °C"));
+    window.document().undoStack()->undo();
+    QVERIFY(window.document().currentCase() == original);
+    QCOMPARE(title->text(), QString::fromStdString(original.title));
+    window.document().undoStack()->redo();
+    QCOMPARE(title->text(), QString("Hot day, 35 °C"));
+  }
+
+  void startUpOffersRecoveryAndYesRecovers() {
+    const cw::engine::Case autosaved = crashWithAutosave();
+    QCOMPARE(autosaved.title, std::string("Before the crash"));
+    QVERIFY(QFile::exists(MainWindow::autosavePath()));
+    MainWindow window;  // as at start: the demo, then the offer
+    QVERIFY(window.openCase(kDemo));
+    window.show();
+    QString asked;
+    answerNextMessageBox(window, QMessageBox::Yes, &asked);
+    QVERIFY(window.offerRecovery());
+    QVERIFY2(asked.contains("did not close normally"), qPrintable(asked));
+    QVERIFY(window.document().currentCase() == autosaved);
+    QCOMPARE(window.findChild<QLineEdit*>("case.title")->text(), QString("Before the crash"));
+    QCOMPARE(window.findChild<QLineEdit*>("compressor.pressureRatio")->text(), QString("9.5"));
+    QVERIFY(window.document().isModified());  // recovered, not yet saved
+    QCOMPARE(window.casePath(), kDemo);       // the file it came from
+    QFile::remove(MainWindow::autosavePath());
+    QFile::remove(MainWindow::autosavePath() + ".origin");
+  }
+
+  void startUpOffersRecoveryAndNoRemovesTheAutosave() {
+    QVERIFY(crashWithAutosave().title == "Before the crash");
+    MainWindow window;
+    QVERIFY(window.openCase(kDemo));
+    const cw::engine::Case demo = window.document().currentCase();
+    window.show();
+    QString asked;
+    answerNextMessageBox(window, QMessageBox::No, &asked);
+    QVERIFY(!window.offerRecovery());
+    QVERIFY(!asked.isEmpty());  // it did ask
+    QVERIFY(!QFile::exists(MainWindow::autosavePath()));
+    QVERIFY(!QFile::exists(MainWindow::autosavePath() + ".origin"));
+    QVERIFY(window.document().currentCase() == demo);
+    QVERIFY(!window.document().isModified());
+
+    // Without an autosave the start asks nothing.
+    QString again;
+    QTimer* timer = answerNextMessageBox(window, QMessageBox::Yes, &again);
+    QVERIFY(!window.offerRecovery());
+    QTest::qWait(100);
+    QVERIFY(again.isEmpty());
+    timer->stop();
   }
 };
 

@@ -16,7 +16,7 @@
 
 class TestMainWindow : public QObject {
   Q_OBJECT
-private slots:
+ private slots:
   void hasFileAndHelpMenus() {
     cw::gui::MainWindow window;
     QVERIFY(window.menuBar()->findChild<QMenu*>("fileMenu") != nullptr);
@@ -57,6 +57,27 @@ private slots:
     const QImage image(file);
     QVERIFY(!image.isNull());
     QCOMPARE(image.size(), QSize(1024, 700));
+  }
+  void paletteOptionRendersDark() {
+    QTemporaryDir dir;
+    const QString file = dir.filePath("dark.png");
+    QProcess app;
+    app.start(CYCLEWRIGHT_GUI_PATH, {"--palette", "dark", "--screenshot", file, "--size", "800x600"});
+    QVERIFY(app.waitForFinished(30000));
+    QCOMPARE(app.exitCode(), 0);
+    const QImage image(file);
+    QCOMPARE(image.size(), QSize(800, 600));
+    // Mostly dark: the window (#202124) and the canvases (#2b2b2b) cover most of the picture.
+    int dark = 0;
+    for (int y = 0; y < image.height(); y += 4)
+      for (int x = 0; x < image.width(); x += 4) dark += image.pixelColor(x, y).lightness() < 64 ? 1 : 0;
+    QVERIFY2(dark > (image.width() / 4) * (image.height() / 4) * 6 / 10, qPrintable(QString::number(dark)));
+    QCOMPARE(image.pixelColor(700, 592), QColor("#202124"));  // the status bar's background
+    QProcess wrong;
+    wrong.start(CYCLEWRIGHT_GUI_PATH, {"--palette", "purple", "--screenshot", file});
+    QVERIFY(wrong.waitForFinished(30000));
+    QCOMPARE(wrong.exitCode(), 2);
+    QVERIFY(QString::fromUtf8(wrong.readAllStandardError()).contains("--palette"));
   }
   void germanTranslationIsPickedByLanguage() {
     auto* app = qobject_cast<QApplication*>(QCoreApplication::instance());

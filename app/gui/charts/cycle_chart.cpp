@@ -1,5 +1,6 @@
 #include "charts/cycle_chart.h"
 
+#include "charts/isobar_labels.h"
 #include "charts/log_scale_engine.h"
 
 #include "engine/isobars.h"
@@ -21,6 +22,7 @@
 #include <qwt_text.h>
 
 #include <QCoreApplication>
+#include <QEvent>
 
 #include <algorithm>
 #include <cmath>
@@ -35,15 +37,32 @@ const QColor kBlue(0x00, 0x72, 0xB2);
 const QColor kOrange(0xE6, 0x9F, 0x00);
 const QColor kVermillion(0xD5, 0x5E, 0x00);
 
+/// A colour between the canvas (Base) and the text on it: t = 0 is the canvas, 1 the text.
+QColor between(const QPalette& palette, double t) {
+  const QColor a = palette.color(QPalette::Base), b = palette.color(QPalette::Text);
+  return QColor::fromRgbF(static_cast<float>(a.redF() * (1 - t) + b.redF() * t),
+                          static_cast<float>(a.greenF() * (1 - t) + b.greenF() * t),
+                          static_cast<float>(a.blueF() * (1 - t) + b.blueF() * t));
+}
+
+bool darkCanvas(const QPalette& palette) {
+  return palette.color(QPalette::Base).lightness() <= 128;
+}
+
 QColor isobarColour(const QPalette& palette) {
-  return palette.color(QPalette::Base).lightness() > 128 ? QColor(0xC8, 0xC8, 0xC8)
-                                                         : QColor(0x60, 0x60, 0x60);
+  return between(palette, 0.22);
+}
+
+QColor gridColour(const QPalette& palette) {
+  return between(palette, 0.3);
+}
+
+QColor isobarLabelColour(const QPalette& palette) {
+  return between(palette, 0.62);
 }
 
 QColor inkColour(const QPalette& palette) {
-  // Near-black on a light background; the palette's text colour on a dark one.
-  return palette.color(QPalette::Base).lightness() > 128 ? QColor(0x20, 0x20, 0x20)
-                                                         : palette.color(QPalette::Text);
+  return palette.color(QPalette::Text);
 }
 
 QString componentName(const std::string& component) {
@@ -90,15 +109,11 @@ CycleChart::CycleChart(ChartKind kind, DisplayUnits& units, QWidget* parent)
   setObjectName(kind == ChartKind::TemperatureEntropy ? "temperatureEntropyChart" : "pressureVolumeChart");
   setAutoReplot(false);
   setMinimumSize(240, 180);
-  setCanvasBackground(palette().color(QPalette::Base));
   if (auto* canvas = qobject_cast<QwtPlotCanvas*>(this->canvas()))
     canvas->setFrameStyle(QFrame::Box | QFrame::Plain);
 
-  auto* grid = new QwtPlotGrid;
-  QColor gridColour = palette().color(QPalette::Mid);
-  gridColour.setAlpha(90);
-  grid->setMajorPen(gridColour, 0.0, Qt::DotLine);
-  grid->attach(this);
+  grid_ = new QwtPlotGrid;
+  grid_->attach(this);
 
   // The legend: inside the canvas of the temperature-entropy chart, in the corner the cycle
   // leaves free; below the pressure-volume chart, whose corners the cycle fills.
@@ -106,21 +121,17 @@ CycleChart::CycleChart(ChartKind kind, DisplayUnits& units, QWidget* parent)
   legend->setMaxColumns(1);
   legend->setAlignmentInCanvas(kind == ChartKind::TemperatureEntropy ? Qt::AlignTop | Qt::AlignLeft
                                                                      : Qt::AlignBottom | Qt::AlignLeft);
-  QColor legendBackground = palette().color(QPalette::Base);
-  legendBackground.setAlpha(215);
-  legend->setBackgroundBrush(legendBackground);
-  legend->setBorderPen(QPen(palette().color(QPalette::Mid), 1.0));
   legend->setBorderRadius(3);
   legend->setMargin(4);
   legend->setSpacing(2);
   legend->setItemMargin(1);
-  legend->setTextPen(QPen(palette().color(QPalette::Text)));
   QFont legendFont = font();
   legendFont.setPointSizeF(legendFont.pointSizeF() * 0.85);
   legend->setFont(legendFont);
   legend->setZ(90);
   if (kind == ChartKind::TemperatureEntropy) {
     legend->attach(this);
+    legendItem_ = legend;
   } else {
     delete legend;
     auto* below = new QwtLegend;
@@ -129,7 +140,6 @@ CycleChart::CycleChart(ChartKind kind, DisplayUnits& units, QWidget* parent)
     insertLegend(below, QwtPlot::BottomLegend);
   }
 
-  const QColor ink = inkColour(palette());
   auto makeCurve = [this](const QPen& pen, double z) {
     auto* curve = new QwtPlotCurve;
     curve->setPen(pen);
@@ -146,14 +156,17 @@ CycleChart::CycleChart(ChartKind kind, DisplayUnits& units, QWidget* parent)
   highlight_ = makeCurve(highlightPen, 15);
   idealHighlight_ = makeCurve(highlightPen, 15);
   idealHighlight_->setItemAttribute(QwtPlotItem::Legend, false);
-  isobarLegend_ = makeCurve(QPen(isobarColour(palette()), 1.0), 5);
+  isobarLegend_ = makeCurve(QPen(Qt::gray, 1.0), 5);
   actualClosure_ = makeCurve(QPen(kBlue, 1.0, Qt::DashDotLine), 18);
   idealClosure_ = makeCurve(QPen(kOrange, 1.0, Qt::DotLine), 18);
   QPen idealPen(kOrange, 2.0, Qt::DashLine);
   ideal_ = makeCurve(idealPen, 19);
   actual_ = makeCurve(QPen(kBlue, 2.0, Qt::SolidLine), 20);
   ideal_->setSymbol(new QwtSymbol(QwtSymbol::NoSymbol));
-  Q_UNUSED(ink);
+
+  isobarLabels_ = new IsobarLabels;
+  isobarLabels_->setLegend(legendItem_);
+  isobarLabels_->attach(this);
 
   staleLabel_ = new QwtPlotTextLabel;
   staleLabel_->setZ(100);
@@ -161,11 +174,11 @@ CycleChart::CycleChart(ChartKind kind, DisplayUnits& units, QWidget* parent)
 
   zoomer_ = new QwtPlotZoomer(QwtAxis::XBottom, QwtAxis::YLeft, canvas());
   zoomer_->setTrackerMode(QwtPicker::AlwaysOff);
-  zoomer_->setRubberBandPen(QPen(palette().color(QPalette::Text), 1.0, Qt::DashLine));
   panner_ = new QwtPlotPanner(canvas());
   panner_->setMouseButton(Qt::MiddleButton);
   picker_ = new StateReadoutPicker(this);
 
+  applyPalette();
   retranslateUi();
   connect(&units_, &DisplayUnits::changed, this, [this] {
     retranslateUi();
@@ -174,6 +187,31 @@ CycleChart::CycleChart(ChartKind kind, DisplayUnits& units, QWidget* parent)
 }
 
 CycleChart::~CycleChart() = default;
+
+void CycleChart::applyPalette() {
+  const QPalette& p = palette();
+  setCanvasBackground(p.color(QPalette::Base));
+  grid_->setMajorPen(gridColour(p), 0.0, Qt::DotLine);
+  if (legendItem_) {
+    QColor background = p.color(QPalette::Base);
+    background.setAlpha(215);
+    legendItem_->setBackgroundBrush(background);
+    legendItem_->setBorderPen(QPen(between(p, 0.4), 1.0));
+    legendItem_->setTextPen(QPen(p.color(QPalette::Text)));
+  }
+  isobarLegend_->setPen(QPen(isobarColour(p), 1.0));
+  zoomer_->setRubberBandPen(QPen(p.color(QPalette::Text), 1.0, Qt::DashLine));
+}
+
+void CycleChart::changeEvent(QEvent* event) {
+  QwtPlot::changeEvent(event);
+  if (event->type() != QEvent::PaletteChange || applyingPalette_ || !zoomer_) return;
+  applyingPalette_ = true;
+  applyPalette();
+  retranslateUi();
+  rebuild();
+  applyingPalette_ = false;
+}
 
 StateValue CycleChart::xValue() const {
   return kind_ == ChartKind::TemperatureEntropy ? StateValue::Entropy : StateValue::SpecificVolume;
@@ -238,6 +276,8 @@ void CycleChart::clearDynamicItems() {
     delete m;
   }
   markers_.clear();
+  isobarLabels_->setLabels({});
+  isobarLabels_->setStations({});
 }
 
 void CycleChart::setEvaluation(std::shared_ptr<const engine::Evaluation> evaluation, bool stale) {
@@ -276,32 +316,31 @@ void CycleChart::rebuild() {
   const QPen isobarPen(isobarColour(palette()), 1.0, Qt::SolidLine);
   QFont small = font();
   small.setPointSizeF(small.pointSizeF() * 0.8);
-  const QColor labelColour =
-      palette().color(QPalette::Base).lightness() > 128 ? QColor(0x70, 0x70, 0x70) : QColor(0xA0, 0xA0, 0xA0);
-  std::vector<double> labelled;
+  QColor halo = palette().color(QPalette::Base);
+  halo.setAlpha(170);
+  std::vector<IsobarLabels::Label> labels;
   for (const auto& isobar : isobars) {
-    // One label per group of pressures within 15 %, so that close isobars stay readable.
-    const bool label = std::none_of(labelled.begin(), labelled.end(),
-                                    [&](double p) { return std::fabs(p - isobar.pressure) < 0.15 * p; });
-    if (label) labelled.push_back(isobar.pressure);
-    QwtText text(label ? QStringLiteral("p%1 = %2")
+    // Every isobar gets a label; IsobarLabels places them on screen clear of each other.
+    IsobarLabels::Label label;
+    label.text = QwtText(QStringLiteral("p%1 = %2")
                              .arg(QString::fromStdString(isobar.station),
-                                  units_.format(isobar.pressure, Quantity::Pressure, 4))
-                       : QString());
-    text.setFont(small);
-    text.setColor(labelColour);
+                                  units_.format(isobar.pressure, Quantity::Pressure, 4)));
+    label.text.setFont(small);
+    label.text.setColor(isobarLabelColour(palette()));
+    label.text.setBackgroundBrush(halo);
     if (kind_ == ChartKind::PressureVolume) {
-      // An isobar is a horizontal line; its label sits at the right edge of the canvas.
+      // An isobar is a horizontal line; its label sits above it, from the left edge.
       auto* line = new QwtPlotMarker;
       line->setLineStyle(QwtPlotMarker::HLine);
       line->setLinePen(isobarPen);
       line->setYValue(isobar.pressure / ys);
-      line->setLabel(text);
-      line->setLabelAlignment(Qt::AlignLeft | Qt::AlignTop);
       line->setItemAttribute(QwtPlotItem::AutoScale, false);
       line->setZ(5);
       line->attach(this);
       markers_.push_back(line);
+      label.horizontal = true;
+      label.along = {QPointF(0.0, isobar.pressure / ys)};
+      labels.push_back(std::move(label));
       continue;
     }
     auto* curve = new QwtPlotCurve;
@@ -314,26 +353,22 @@ void CycleChart::rebuild() {
     curve->setSamples(points);
     curve->attach(this);
     isobars_.push_back(curve);
-    if (!label) continue;
-    // The label where the isobar reaches the cycle's highest temperature.
-    QPointF at = points.back();
-    for (const auto& point : points)
-      if (point.y() * ys >= tHigh) {
-        at = point;
+    if (points.isEmpty()) continue;
+    // The label prefers where the isobar reaches the cycle's highest temperature.
+    label.along.assign(points.begin(), points.end());
+    label.preferred = label.along.size() - 1;
+    for (std::size_t k = 0; k < label.along.size(); ++k)
+      if (label.along[k].y() * ys >= tHigh) {
+        label.preferred = k;
         break;
       }
-    auto* marker = new QwtPlotMarker;
-    marker->setValue(at);
-    marker->setLabel(text);
-    marker->setLabelAlignment(Qt::AlignRight | Qt::AlignVCenter);
-    marker->setItemAttribute(QwtPlotItem::AutoScale, false);
-    marker->setZ(6);
-    marker->attach(this);
-    markers_.push_back(marker);
+    labels.push_back(std::move(label));
   }
+  isobarLabels_->setLabels(std::move(labels));
 
   // Station markers: labelled with their SAE numbers (cycle with losses), plain for the ideal cycle.
   const QColor ink = inkColour(palette());
+  std::vector<IsobarLabels::Station> stations;
   for (const auto* cycle : {&actual, &ideal}) {
     const bool isIdeal = cycle == &ideal;
     for (const auto& station : cycle->stations) {
@@ -342,9 +377,10 @@ void CycleChart::rebuild() {
       auto* marker = new QwtPlotMarker;
       marker->setValue(stateValue(state, xv) / xs, stateValue(state, yv) / ys);
       if (isIdeal) {
-        marker->setSymbol(
-            new QwtSymbol(QwtSymbol::Diamond, Qt::NoBrush, QPen(kOrange.darker(130), 1.0), QSize(6, 6)));
+        const QColor edge = darkCanvas(palette()) ? kOrange : kOrange.darker(130);
+        marker->setSymbol(new QwtSymbol(QwtSymbol::Diamond, Qt::NoBrush, QPen(edge, 1.0), QSize(6, 6)));
         marker->setZ(21);
+        stations.push_back({marker->value(), QSizeF(6, 6), QSizeF(), Qt::AlignCenter, 0.0});
       } else {
         marker->setSymbol(new QwtSymbol(QwtSymbol::Ellipse, QBrush(ink), QPen(ink, 1.0), QSize(7, 7)));
         QwtText label(QString::fromStdString(station.id));
@@ -363,12 +399,15 @@ void CycleChart::rebuild() {
                                   (below ? Qt::AlignBottom : Qt::AlignTop));
         marker->setSpacing(4);
         marker->setZ(22);
+        stations.push_back({marker->value(), QSizeF(7, 7), label.textSize(bold), marker->labelAlignment(),
+                            double(marker->spacing())});
       }
       marker->setItemAttribute(QwtPlotItem::AutoScale, false);
       marker->attach(this);
       markers_.push_back(marker);
     }
   }
+  isobarLabels_->setStations(std::move(stations));
   updateHighlight();
   updateStalePens();
   if (!zoomer_ || zoomer_->zoomRectIndex() == 0) rescale();

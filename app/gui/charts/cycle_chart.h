@@ -6,8 +6,12 @@
 //
 // Items: the cycle with losses (blue #0072B2, solid, 2 px), its ideal twin (orange #E69F00,
 // dashed, 2 px), each closure to ambient thin (dash-dot and dotted), isobars through the
-// station pressures (light grey, thin), station markers with their SAE numbers, and the
+// station pressures (thin, between the palette's base and text colours) with labels placed
+// clear of each other (IsobarLabels), station markers with their SAE numbers, and the
 // selected component's path in vermillion #D55E00 (a wide band under the curves).
+//
+// Canvas, grid, legend, markers and labels take their colours from the widget's palette
+// (light or dark, and again when it changes); only the Okabe-Ito line colours are fixed.
 
 #include "charts/path_series.h"
 #include "units.h"
@@ -19,6 +23,8 @@
 #include <vector>
 
 class QwtPlotCurve;
+class QwtPlotGrid;
+class QwtPlotLegendItem;
 class QwtPlotMarker;
 class QwtPlotPanner;
 class QwtPlotTextLabel;
@@ -27,6 +33,7 @@ class QwtPlotPicker;
 
 namespace cw::gui {
 
+class IsobarLabels;
 class StateReadoutPicker;
 
 enum class ChartKind { TemperatureEntropy, PressureVolume };
@@ -69,9 +76,16 @@ class CycleChart : public QwtPlot {
   const QwtPlotCurve* highlightCurve() const { return highlight_; }
   int isobarCount() const { return static_cast<int>(isobars_.size()); }
   int markerCount() const { return static_cast<int>(markers_.size()); }
+  const std::vector<QwtPlotMarker*>& markers() const { return markers_; }
+  const IsobarLabels* isobarLabels() const { return isobarLabels_; }
   QwtPlotZoomer* zoomer() const { return zoomer_; }
 
+ protected:
+  void changeEvent(QEvent* event) override;
+
  private:
+  /// Colours of the canvas, grid, legend and rubber band from the palette.
+  void applyPalette();
   StateValue xValue() const;
   StateValue yValue() const;
   Quantity xQuantity() const;
@@ -100,6 +114,10 @@ class CycleChart : public QwtPlot {
   QwtPlotCurve* isobarLegend_ = nullptr;  ///< an empty curve carrying the isobars' legend entry
   std::vector<QwtPlotCurve*> isobars_;
   std::vector<QwtPlotMarker*> markers_;
+  IsobarLabels* isobarLabels_ = nullptr;
+  QwtPlotGrid* grid_ = nullptr;
+  QwtPlotLegendItem* legendItem_ = nullptr;  ///< the T-s chart's legend inside the canvas
+  bool applyingPalette_ = false;
   QwtPlotTextLabel* staleLabel_ = nullptr;
   QwtPlotZoomer* zoomer_ = nullptr;
   QwtPlotPanner* panner_ = nullptr;
