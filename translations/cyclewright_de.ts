@@ -527,6 +527,314 @@ Gültiger Bereich: %2</translation>
     </message>
 </context>
 <context>
+    <name>LossNames</name>
+    <message>
+        <source>Inlet pressure recovery</source>
+        <translation>Druckrückgewinn im Einlauf</translation>
+    </message>
+    <message>
+        <source>Inlet</source>
+        <translation>Einlauf</translation>
+    </message>
+    <message>
+        <source>Compressor efficiency</source>
+        <translation>Verdichterwirkungsgrad</translation>
+    </message>
+    <message>
+        <source>Compressor</source>
+        <translation>Verdichter</translation>
+    </message>
+    <message>
+        <source>Burner pressure loss</source>
+        <translation>Druckverlust der Brennkammer</translation>
+    </message>
+    <message>
+        <source>Burner Δp</source>
+        <translation>Brennkammer-Δp</translation>
+    </message>
+    <message>
+        <source>Combustion efficiency</source>
+        <translation>Ausbrenngrad</translation>
+    </message>
+    <message>
+        <source>Combustion</source>
+        <translation>Ausbrand</translation>
+    </message>
+    <message>
+        <source>Turbine efficiency</source>
+        <translation>Turbinenwirkungsgrad</translation>
+    </message>
+    <message>
+        <source>Turbine</source>
+        <translation>Turbine</translation>
+    </message>
+    <message>
+        <source>Mechanical efficiency</source>
+        <translation>Mechanischer Wirkungsgrad</translation>
+    </message>
+    <message>
+        <source>Shaft</source>
+        <translation>Welle</translation>
+    </message>
+    <message>
+        <source>Jet pipe pressure loss</source>
+        <translation>Druckverlust im Strahlrohr</translation>
+    </message>
+    <message>
+        <source>Jet pipe</source>
+        <translation>Strahlrohr</translation>
+    </message>
+    <message>
+        <source>Afterburner losses</source>
+        <translation>Nachbrennerverluste</translation>
+    </message>
+    <message>
+        <source>Afterburner</source>
+        <translation>Nachbrenner</translation>
+    </message>
+    <message>
+        <source>Nozzle velocity coefficient</source>
+        <translation>Geschwindigkeitsbeiwert der Düse</translation>
+    </message>
+    <message>
+        <source>Nozzle Cv</source>
+        <translation>Düse Cv</translation>
+    </message>
+    <message>
+        <source>Nozzle discharge coefficient</source>
+        <translation>Durchflussbeiwert der Düse</translation>
+    </message>
+    <message>
+        <source>Nozzle Cd</source>
+        <translation>Düse Cd</translation>
+    </message>
+    <message>
+        <source>Incomplete nozzle expansion</source>
+        <translation>Unvollständige Expansion in der Düse</translation>
+    </message>
+    <message>
+        <source>Expansion</source>
+        <translation>Expansion</translation>
+    </message>
+    <message>
+        <source>Compressor bleed</source>
+        <translation>Zapfluft am Verdichter</translation>
+    </message>
+    <message>
+        <source>Bleed</source>
+        <translation>Zapfluft</translation>
+    </message>
+    <message>
+        <source>Shaft power offtake</source>
+        <translation>Wellenleistungsentnahme</translation>
+    </message>
+    <message>
+        <source>Offtake</source>
+        <translation>Entnahme</translation>
+    </message>
+    <message>
+        <source>point of efficiency (0.01)</source>
+        <translation>Punkt Wirkungsgrad (0,01)</translation>
+    </message>
+    <message>
+        <source>percent of pressure-loss fraction (0.01)</source>
+        <translation>Prozent relativer Druckverlust (0,01)</translation>
+    </message>
+    <message>
+        <source>point of recovery or ram efficiency (0.01)</source>
+        <translation>Punkt Druckrückgewinn oder Stauwirkungsgrad (0,01)</translation>
+    </message>
+    <message>
+        <source>point of velocity coefficient or nozzle efficiency (0.01)</source>
+        <translation>Punkt Geschwindigkeitsbeiwert oder Düsenwirkungsgrad (0,01)</translation>
+    </message>
+    <message>
+        <source>point of discharge coefficient (0.01)</source>
+        <translation>Punkt Durchflussbeiwert (0,01)</translation>
+    </message>
+    <message>
+        <source>percent of bleed (0.01)</source>
+        <translation>Prozent Zapfluft (0,01)</translation>
+    </message>
+    <message>
+        <source>kW of offtake (1000 W)</source>
+        <translation>kW Entnahme (1000 W)</translation>
+    </message>
+    <message>
+        <source>Burner</source>
+        <translation>Brennkammer</translation>
+    </message>
+    <message>
+        <source>Nozzle</source>
+        <translation>Schubdüse</translation>
+    </message>
+</context>
+<context>
+    <name>cw::gui::AuditChart</name>
+    <message>
+        <source>Ideal twin</source>
+        <translation>Idealer Zwilling</translation>
+    </message>
+    <message>
+        <source>With losses</source>
+        <translation>Mit Verlusten</translation>
+    </message>
+    <message>
+        <source>TSFC</source>
+        <translation>Spez. Verbrauch</translation>
+    </message>
+    <message>
+        <source>Specific thrust F_s</source>
+        <translation>Spezifischer Schub F_s</translation>
+    </message>
+    <message>
+        <source>Stale: showing the last valid result</source>
+        <translation>Veraltet: letztes gültiges Ergebnis</translation>
+    </message>
+    <message>
+        <source>Waterfall of TSFC</source>
+        <translation>Wasserfall des spezifischen Verbrauchs</translation>
+    </message>
+    <message>
+        <source>Waterfall of specific thrust</source>
+        <translation>Wasserfall des spezifischen Schubs</translation>
+    </message>
+</context>
+<context>
+    <name>cw::gui::AuditPanel</name>
+    <message>
+        <source>Figure:</source>
+        <translation>Größe:</translation>
+    </message>
+    <message>
+        <source>Specific thrust</source>
+        <translation>Spezifischer Schub</translation>
+    </message>
+    <message>
+        <source>TSFC</source>
+        <translation>Spez. Verbrauch</translation>
+    </message>
+    <message>
+        <source>Table:</source>
+        <translation>Tabelle:</translation>
+    </message>
+    <message>
+        <source>Each loss removed alone</source>
+        <translation>Jeder Verlust einzeln entfernt</translation>
+    </message>
+    <message>
+        <source>Waterfall steps</source>
+        <translation>Wasserfallstufen</translation>
+    </message>
+    <message>
+        <source>Sensitivities per unit</source>
+        <translation>Empfindlichkeiten je Einheit</translation>
+    </message>
+    <message>
+        <source>Exergy destroyed</source>
+        <translation>Exergievernichtung</translation>
+    </message>
+</context>
+<context>
+    <name>cw::gui::AuditTableModel</name>
+    <message>
+        <source>Loss removed alone</source>
+        <translation>Einzeln entfernter Verlust</translation>
+    </message>
+    <message>
+        <source>ΔF_s [%1]</source>
+        <translation>ΔF_s [%1]</translation>
+    </message>
+    <message>
+        <source>ΔTSFC [%1]</source>
+        <translation>Δ spez. Verbrauch [%1]</translation>
+    </message>
+    <message>
+        <source>Step</source>
+        <translation>Stufe</translation>
+    </message>
+    <message>
+        <source>Loss added to the ideal twin</source>
+        <translation>Dem idealen Zwilling hinzugefügter Verlust</translation>
+    </message>
+    <message>
+        <source>F_s step [%1]</source>
+        <translation>F_s-Stufe [%1]</translation>
+    </message>
+    <message>
+        <source>TSFC step [%1]</source>
+        <translation>Verbrauchsstufe [%1]</translation>
+    </message>
+    <message>
+        <source>Loss</source>
+        <translation>Verlust</translation>
+    </message>
+    <message>
+        <source>Per</source>
+        <translation>Je</translation>
+    </message>
+    <message>
+        <source>F_s per unit [%1]</source>
+        <translation>F_s je Einheit [%1]</translation>
+    </message>
+    <message>
+        <source>TSFC per unit [%1]</source>
+        <translation>Spez. Verbrauch je Einheit [%1]</translation>
+    </message>
+    <message>
+        <source>Difference</source>
+        <translation>Differenz</translation>
+    </message>
+    <message>
+        <source>Component</source>
+        <translation>Komponente</translation>
+    </message>
+    <message>
+        <source>Exergy destroyed [%1]</source>
+        <translation>Vernichtete Exergie [%1]</translation>
+    </message>
+    <message>
+        <source>Share of fuel exergy [%]</source>
+        <translation>Anteil an der Kraftstoffexergie [%]</translation>
+    </message>
+    <message>
+        <source>Ideal twin</source>
+        <translation>Idealer Zwilling</translation>
+    </message>
+    <message>
+        <source>With losses</source>
+        <translation>Mit Verlusten</translation>
+    </message>
+    <message>
+        <source>Sum of the steps (with losses − ideal)</source>
+        <translation>Summe der Stufen (mit Verlusten − ideal)</translation>
+    </message>
+    <message>
+        <source>central</source>
+        <translation>zentral</translation>
+    </message>
+    <message>
+        <source>forward</source>
+        <translation>vorwärts</translation>
+    </message>
+    <message>
+        <source>backward</source>
+        <translation>rückwärts</translation>
+    </message>
+    <message>
+        <source>All components</source>
+        <translation>Alle Komponenten</translation>
+    </message>
+    <message>
+        <source>Fuel exergy</source>
+        <translation>Kraftstoffexergie</translation>
+    </message>
+    <message>
+        <source>Closure (residual / fuel exergy)</source>
+        <translation>Bilanzschluss (Rest / Kraftstoffexergie)</translation>
+    </message>
+</context>
+<context>
     <name>cw::gui::CaseDocument</name>
     <message>
         <source>No solution for these inputs: %1</source>
@@ -1023,6 +1331,26 @@ p = %7   v = %8</translation>
     <message>
         <source>Station table copied as tab-separated text</source>
         <translation>Stationstabelle als tabulatorgetrennter Text kopiert</translation>
+    </message>
+    <message>
+        <source>Loss Audit Chart as %1</source>
+        <translation>Verlustanalyse-Diagramm als %1</translation>
+    </message>
+    <message>
+        <source>Loss Audit Table as CSV…</source>
+        <translation>Verlustanalyse-Tabelle als CSV…</translation>
+    </message>
+    <message>
+        <source>Loss audit</source>
+        <translation>Verlustanalyse</translation>
+    </message>
+    <message>
+        <source>&amp;Loss Audit</source>
+        <translation>&amp;Verlustanalyse</translation>
+    </message>
+    <message>
+        <source>Export Loss Audit</source>
+        <translation>Verlustanalyse exportieren</translation>
     </message>
 </context>
 <context>

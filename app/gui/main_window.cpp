@@ -1,7 +1,9 @@
 #include "main_window.h"
 
+#include "audit_panel.h"
 #include "case_document.h"
 #include "case_form.h"
+#include "charts/audit_chart.h"
 #include "charts/chart_export.h"
 #include "charts/cycle_chart.h"
 #include "charts/path_series.h"
@@ -23,6 +25,7 @@
 #include <QCloseEvent>
 #include <QComboBox>
 #include <QDir>
+#include <QDockWidget>
 #include <QFile>
 #include <QFileDialog>
 #include <QFileInfo>
@@ -193,16 +196,22 @@ void MainWindow::createMenus() {
   for (const auto& [format, text] : formats) {
     const QString f = format;
     exportMenu->addAction(tr("Temperature–Entropy Chart as %1").arg(text), this,
-                          [this, f] { exportChart(tsChart_, f); });
+                          [this, f] { exportChart(tsChart_, QStringLiteral("temperature-entropy"), f); });
   }
   for (const auto& [format, text] : formats) {
     const QString f = format;
     exportMenu->addAction(tr("Pressure–Volume Chart as %1").arg(text), this,
-                          [this, f] { exportChart(pvChart_, f); });
+                          [this, f] { exportChart(pvChart_, QStringLiteral("pressure-volume"), f); });
+  }
+  for (const auto& [format, text] : formats) {
+    const QString f = format;
+    exportMenu->addAction(tr("Loss Audit Chart as %1").arg(text), this,
+                          [this, f] { exportChart(auditPanel_->chart(), QStringLiteral("loss-audit"), f); });
   }
   exportMenu->addSeparator();
   exportMenu->addAction(tr("Station Table as CSV…"), this, [this] { exportTable("csv"); });
   exportMenu->addAction(tr("Results as JSON…"), this, [this] { exportTable("json"); });
+  exportMenu->addAction(tr("Loss Audit Table as CSV…"), this, [this] { exportTable("audit"); });
   fileMenu->addSeparator();
   fileMenu->addAction(actions_.preferences);
   fileMenu->addSeparator();
@@ -219,6 +228,7 @@ void MainWindow::createMenus() {
 
   QMenu* viewMenu = menuBar()->addMenu(tr("&View"));
   viewMenu->setObjectName("viewMenu");
+  viewMenu_ = viewMenu;
   viewMenu->addAction(actions_.sideBySide);
   viewMenu->addAction(actions_.tabbed);
   viewMenu->addSeparator();
@@ -363,6 +373,23 @@ void MainWindow::createCentralWidget() {
   vertical->setSizes({600, 330});
   layout->addWidget(vertical, 1);
   setCentralWidget(central);
+
+  // The loss audit beside the charts, in a dock: its place and visibility are kept with the
+  // window state (settings).
+  auditPanel_ = new AuditPanel(*units_, *router_);
+  auditDock_ = new QDockWidget(tr("Loss audit"), this);
+  auditDock_->setObjectName("auditDock");
+  auditDock_->setWidget(auditPanel_);
+  auditDock_->setFeatures(QDockWidget::DockWidgetClosable | QDockWidget::DockWidgetMovable |
+                          QDockWidget::DockWidgetFloatable);
+  addDockWidget(Qt::RightDockWidgetArea, auditDock_);
+  resizeDocks({auditDock_}, {440}, Qt::Horizontal);
+  auditDock_->hide();  // until the user shows it (View › Loss Audit); the window state keeps it
+  QAction* toggle = auditDock_->toggleViewAction();
+  toggle->setObjectName("auditDockAction");
+  toggle->setText(tr("&Loss Audit"));
+  viewMenu_->addSeparator();
+  viewMenu_->addAction(toggle);
 }
 
 void MainWindow::setChartLayout(ChartLayout chartLayout) {
@@ -439,6 +466,7 @@ void MainWindow::refreshResult() {
     stationModel_->setStale(stale);
     performanceModel_->setStale(stale);
   }
+  auditPanel_->update(document_->currentCase(), evaluation, stale);
   updateBanner();
 }
 
@@ -721,9 +749,11 @@ bool MainWindow::exportResultJson(const QString& path) {
   return file.commit();
 }
 
-void MainWindow::exportChart(CycleChart* chart, const QString& format) {
-  const QString base =
-      chart == tsChart_ ? QStringLiteral("temperature-entropy") : QStringLiteral("pressure-volume");
+bool MainWindow::exportAuditCsv(const QString& path) {
+  return auditPanel_->exportCsv(path);
+}
+
+void MainWindow::exportChart(QwtPlot* chart, const QString& base, const QString& format) {
   QSize pixels;
   int dpi = 0;
   if (format == QLatin1String("png")) {
@@ -745,6 +775,15 @@ void MainWindow::exportChart(CycleChart* chart, const QString& format) {
 }
 
 void MainWindow::exportTable(const QString& format) {
+  if (format == QLatin1String("audit")) {
+    const QString path = QFileDialog::getSaveFileName(this, tr("Export Loss Audit"),
+                                                      QDir::home().filePath(QStringLiteral("loss-audit.csv")),
+                                                      tr("CSV files (*.csv)"));
+    if (path.isEmpty()) return;
+    const bool ok = exportAuditCsv(path);
+    statusBar()->showMessage(ok ? tr("Exported %1 (SI units)").arg(path) : tr("Cannot write %1").arg(path));
+    return;
+  }
   const bool csv = format == QLatin1String("csv");
   const QString path = QFileDialog::getSaveFileName(
       this, csv ? tr("Export Station Table") : tr("Export Results"),

@@ -16,6 +16,7 @@
 class QAction;
 class QActionGroup;
 class QComboBox;
+class QDockWidget;
 class QLabel;
 class QListWidget;
 class QMenu;
@@ -24,6 +25,7 @@ class QStackedWidget;
 class QTabWidget;
 class QTableView;
 class QTimer;
+class QwtPlot;
 
 namespace cw::engine {
 struct Evaluation;
@@ -31,6 +33,7 @@ struct Evaluation;
 
 namespace cw::gui {
 
+class AuditPanel;
 class CaseDocument;
 class CaseForm;
 class CycleChart;
@@ -65,6 +68,9 @@ class MainWindow : public QMainWindow {
   CycleChart* pressureVolumeChart() const { return pvChart_; }
   StationTableModel* stationModel() const { return stationModel_; }
   PerformanceModel* performanceModel() const { return performanceModel_; }
+  /// The loss-audit panel (in a dock beside the charts; shown or hidden as the user left it).
+  AuditPanel* auditPanel() const { return auditPanel_; }
+  QDockWidget* auditDock() const { return auditDock_; }
   /// The banner that says the result is stale and why.
   QLabel* staleBanner() const { return banner_; }
 
@@ -75,6 +81,7 @@ class MainWindow : public QMainWindow {
   // Exports without dialogs (tests and the menu actions).
   bool exportStationCsv(const QString& path);
   bool exportResultJson(const QString& path);
+  bool exportAuditCsv(const QString& path);
 
   /// Where the autosave goes (QStandardPaths::AppLocalDataLocation).
   static QString autosavePath();
@@ -112,7 +119,7 @@ class MainWindow : public QMainWindow {
   void updateStrip();
   void routeSelection(Section section);
   QSet<QString> stationsOf(Section section) const;
-  void exportChart(CycleChart* chart, const QString& format);
+  void exportChart(QwtPlot* chart, const QString& baseName, const QString& format);
   void exportTable(const QString& format);
   void copyChart(CycleChart* chart);
   void copyTable();
@@ -140,6 +147,9 @@ class MainWindow : public QMainWindow {
   QComboBox* tableMode_ = nullptr;
   QTableView* performanceView_ = nullptr;
   PerformanceModel* performanceModel_ = nullptr;
+  AuditPanel* auditPanel_ = nullptr;
+  QDockWidget* auditDock_ = nullptr;
+  QMenu* viewMenu_ = nullptr;
   QMenu* recentMenu_ = nullptr;
   QTimer* autosaveTimer_ = nullptr;
 

@@ -1,0 +1,217 @@
+// The loss-audit panel, offscreen: its waterfall bars are cw::analysis::auditCase's steps on the
+// same case (and telescope from the ideal twin to the actual figure), an edit changes them, an
+// invalid value keeps the last bars marked stale, a click on a bar selects its component in the
+// strip, and the chart and table exports write a PNG, an SVG and a CSV that read back.
+#include "audit_panel.h"
+#include "audit_table_model.h"
+#include "case_document.h"
+#include "charts/audit_chart.h"
+#include "charts/chart_export.h"
+#include "main_window.h"
+#include "selection_router.h"
+
+#include "analysis/loss_audit.h"
+#include "common/version.h"
+
+#include <qwt_text.h>
+
+#include <QComboBox>
+#include <QDockWidget>
+#include <QFile>
+#include <QImage>
+#include <QLineEdit>
+#include <QListWidget>
+#include <QStandardPaths>
+#include <QSvgRenderer>
+#include <QTemporaryDir>
+#include <QTest>
+
+#include <cmath>
+
+using cw::gui::AuditChart;
+using cw::gui::MainWindow;
+
+namespace {
+
+const QString kDemo = QStringLiteral(":/demo/demo-turbojet.json");
+
+void typeInto(QLineEdit* field, const QString& text) {
+  field->setFocus();
+  field->selectAll();
+  QTest::keyClick(field, Qt::Key_Backspace);
+  QTest::keyClicks(field, text);
+}
+
+bool near(double a, double b) {
+  return std::fabs(a - b) <= 1e-9 * std::max(1.0, std::fabs(b));
+}
+
+}  // namespace
+
+class TestLossAudit : public QObject {
+  Q_OBJECT
+
+ private slots:
+  void initTestCase() {
+    QLocale::setDefault(QLocale::c());
+    QStandardPaths::setTestModeEnabled(true);
+    QCoreApplication::setOrganizationName("CyclewrightTest");
+    QCoreApplication::setApplicationName("CyclewrightTest");
+  }
+
+  void barsEqualTheCoreAudit() {
+    MainWindow window;
+    QVERIFY(window.openCase(kDemo));
+    const cw::analysis::LossAudit reference = cw::analysis::auditCase(window.document().currentCase());
+    const AuditChart* chart = window.auditPanel()->chart();
+    const auto& bars = chart->bars();
+    QCOMPARE(bars.size(), reference.waterfall.size() + 2);
+    QVERIFY(bars.front().loss.empty() && bars.back().loss.empty());
+    QVERIFY(near(bars.front().to, reference.ideal.specificThrust));
+    QVERIFY(near(bars.back().to, reference.actual.specificThrust));
+    double sum = 0.0;
+    for (size_t i = 0; i < reference.waterfall.size(); ++i) {
+      const auto& bar = bars[i + 1];
+      QCOMPARE(bar.loss, reference.waterfall[i].loss);  // in the audit's order
+      QVERIFY(near(bar.to - bar.from, reference.waterfall[i].deltaSpecificThrust));
+      sum += bar.to - bar.from;
+    }
+    // The steps telescope: actual minus ideal (loss_audit.h).
+    QVERIFY(std::fabs(sum - (reference.actual.specificThrust - reference.ideal.specificThrust)) <
+            1e-9 * 1000.0);
+    QVERIFY(std::fabs(bars[bars.size() - 2].to - reference.actual.specificThrust) < 1e-9 * 1000.0);
+
+    // The same waterfall in TSFC.
+    window.auditPanel()->figureBox()->setCurrentIndex(1);
+    QCOMPARE(chart->figure(), cw::gui::AuditFigure::Tsfc);
+    for (size_t i = 0; i < reference.waterfall.size(); ++i)
+      QVERIFY(near(chart->bars()[i + 1].to - chart->bars()[i + 1].from, reference.waterfall[i].deltaTsfc));
+    QVERIFY(near(chart->bars().back().to, reference.actual.thrustSpecificFuelConsumption));
+    QVERIFY(chart->axisTitle(QwtAxis::YLeft).text().contains("g/(kN·s)"));
+
+    // The table's views: waterfall rows are ideal, steps, sum, actual; the exergy view ends with the closure.
+    auto* model = window.auditPanel()->model();
+    model->setView(cw::gui::AuditView::Waterfall);
+    QCOMPARE(model->rowCount(), static_cast<int>(reference.waterfall.size()) + 3);
+    QVERIFY(model->headerData(2, Qt::Horizontal).toString().contains("N·s/kg"));
+    model->setView(cw::gui::AuditView::Sensitivities);
+    QCOMPARE(model->rowCount(), static_cast<int>(reference.sensitivities.size()));
+    model->setView(cw::gui::AuditView::Exergy);
+    QCOMPARE(model->rowCount(), static_cast<int>(reference.exergy.components.size()) + 3);
+    QVERIFY(model->index(model->rowCount() - 1, 0).data().toString().contains("Closure"));
+  }
+
+  void editChangesTheBarsAndInvalidKeepsThemStale() {
+    MainWindow window;
+    QVERIFY(window.openCase(kDemo));
+    window.show();
+    const auto before = window.auditPanel()->chart()->bars();
+    auto* field = window.findChild<QLineEdit*>("compressor.efficiency");
+    QVERIFY(field);
+    typeInto(field, "0.9");
+    const auto after = window.auditPanel()->chart()->bars();
+    QCOMPARE(after.size(), before.size());
+    QVERIFY(!near(after.back().to, before.back().to));
+    const auto reference = cw::analysis::auditCase(window.document().currentCase());
+    QVERIFY(near(after.back().to, reference.actual.specificThrust));
+    QVERIFY(!window.auditPanel()->isStale());
+
+    typeInto(field, "0");  // outside (0, 1]
+    QVERIFY(window.document().isStale());
+    QVERIFY(window.auditPanel()->isStale());
+    QVERIFY(window.auditPanel()->chart()->isStale());
+    QVERIFY(window.auditPanel()->model()->isStale());
+    const auto kept = window.auditPanel()->chart()->bars();
+    QCOMPARE(kept.size(), after.size());
+    for (size_t i = 0; i < kept.size(); ++i) QCOMPARE(kept[i].to, after[i].to);
+
+    typeInto(field, "0.88");
+    QVERIFY(!window.auditPanel()->isStale());
+  }
+
+  void clickingABarSelectsItsComponent() {
+    MainWindow window;
+    QVERIFY(window.openCase(kDemo));
+    window.resize(1600, 1000);
+    window.show();
+    QVERIFY(QTest::qWaitForWindowExposed(&window));
+    window.selection().select(cw::gui::Section::Flight);
+    AuditChart* chart = window.auditPanel()->chart();
+    chart->replot();
+    int turbine = -1;
+    for (size_t i = 0; i < chart->bars().size(); ++i)
+      if (chart->bars()[i].loss == "turbine_efficiency") turbine = static_cast<int>(i);
+    QVERIFY(turbine > 0);
+    const QPoint centre = chart->barCentre(turbine);
+    QCOMPARE(chart->barAt(centre), turbine);
+    QTest::mouseClick(chart->canvas(), Qt::LeftButton, Qt::NoModifier, centre);
+    QCOMPARE(window.selection().current(), cw::gui::Section::Turbine);
+    auto* strip = window.findChild<QListWidget*>("componentStrip");
+    QCOMPARE(strip->currentRow(), static_cast<int>(cw::gui::Section::Turbine));
+    // A total bar selects nothing.
+    QTest::mouseClick(chart->canvas(), Qt::LeftButton, Qt::NoModifier, chart->barCentre(0));
+    QCOMPARE(window.selection().current(), cw::gui::Section::Turbine);
+  }
+
+  void exportsReadBack() {
+    MainWindow window;
+    QVERIFY(window.openCase(kDemo));
+    QTemporaryDir dir;
+    QVERIFY(dir.isValid());
+    AuditChart* chart = window.auditPanel()->chart();
+    const QString png = dir.filePath("audit.png"), svg = dir.filePath("audit.svg"),
+                  csv = dir.filePath("audit.csv");
+    QVERIFY(cw::gui::exportChartPng(chart, png, QSize(900, 600), 96));
+    const QImage image(png);
+    QCOMPARE(image.size(), QSize(900, 600));
+    QVERIFY(cw::gui::exportChartDocument(chart, svg, "svg", QSizeF(180.0, 120.0)));
+    QSvgRenderer renderer(svg);
+    QVERIFY(renderer.isValid());
+    QFile svgFile(svg);
+    QVERIFY(svgFile.open(QIODevice::ReadOnly));
+    QVERIFY(svgFile.readAll().contains("conceptual-design estimates"));  // the caution footer
+
+    QVERIFY(window.exportAuditCsv(csv));
+    QFile file(csv);
+    QVERIFY(file.open(QIODevice::ReadOnly | QIODevice::Text));
+    const QStringList lines = QString::fromUtf8(file.readAll()).split('\n', Qt::SkipEmptyParts);
+    QVERIFY(lines.front().startsWith("# caution: "));
+    QVERIFY(lines.front().contains(QString::fromLatin1(cw::kCaution)));
+    int header = -1;
+    for (int i = 0; i < lines.size(); ++i)
+      if (!lines[i].startsWith('#')) {
+        header = i;
+        break;
+      }
+    QVERIFY(header > 0);
+    const QStringList columns = lines[header].split(',');
+    QCOMPARE(columns.front(), QString("view"));
+    const auto reference = cw::analysis::auditCase(window.document().currentCase());
+    double sum = 0.0;
+    int waterfallRows = 0;
+    for (int i = header + 1; i < lines.size(); ++i) {
+      QVERIFY2(!lines[i].contains('"'), qPrintable(lines[i]));  // no cell here needs quoting
+      const QStringList cells = lines[i].split(',');
+      QCOMPARE(cells.size(), columns.size());
+      if (cells[0] == "waterfall") {
+        bool ok = false;
+        sum += cells[2].toDouble(&ok);
+        QVERIFY(ok);
+        ++waterfallRows;
+      }
+    }
+    QCOMPARE(waterfallRows, static_cast<int>(reference.waterfall.size()));
+    QVERIFY(std::fabs(sum - (reference.actual.specificThrust - reference.ideal.specificThrust)) < 1e-6);
+  }
+
+  void dockIsListedInTheViewMenuAndRemembered() {
+    MainWindow window;
+    QDockWidget* dock = window.auditDock();
+    QVERIFY(dock);
+    QCOMPARE(dock->objectName(), QString("auditDock"));  // saveState needs the name
+    QVERIFY(window.findChild<QAction*>("auditDockAction"));
+  }
+};
+
+QTEST_MAIN(TestLossAudit)
+#include "test_loss_audit.moc"
