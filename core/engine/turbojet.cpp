@@ -2,9 +2,9 @@
 
 #include "atmosphere/standard_atmosphere.h"
 #include "common/error.h"
-#include "components/heat_addition.h"
 #include "components/compressor.h"
 #include "components/duct.h"
+#include "components/heat_addition.h"
 #include "components/inlet.h"
 #include "components/nozzle.h"
 #include "components/turbine.h"

@@ -25,7 +25,10 @@ double solveIncreasing(F f, DF dfdT, double target, double lo, double hi, double
   for (int i = 0; i < kMaxIterations; ++i) {
     residual = f(T) - target;
     if (residual == 0.0) return T;
-    if (residual > 0) hi = T; else lo = T;
+    if (residual > 0)
+      hi = T;
+    else
+      lo = T;
     const double slope = dfdT(T);
     double next = (slope > 0) ? T - residual / slope : 0.5 * (lo + hi);
     if (!(next > lo && next < hi)) next = 0.5 * (lo + hi);
@@ -43,7 +46,8 @@ void Gas::checkTemperature(double temperature, const char* where) const {
 }
 
 double Gas::entropy(double temperature, double pressure) const {
-  if (!std::isfinite(pressure) || pressure <= 0.0) throw InvalidInput("pressure", pressure, "Pa", "(0, inf) Pa");
+  if (!std::isfinite(pressure) || pressure <= 0.0)
+    throw InvalidInput("pressure", pressure, "Pa", "(0, inf) Pa");
   return standardEntropy(temperature) - gasConstant() * std::log(pressure / kReferencePressure);
 }
 
@@ -64,20 +68,22 @@ double Gas::temperatureFromEnthalpy(double h) const {
   // First guess from a constant cp at a temperature inside the range.
   const double base = std::clamp(300.0, lo, hi);
   const double guess = base + (h - enthalpy(base)) / cp(base);
-  return solveIncreasing([this](double T) { return enthalpy(T); }, [this](double T) { return cp(T); }, h, lo, hi,
-                         guess, "temperature from enthalpy");
+  return solveIncreasing([this](double T) { return enthalpy(T); }, [this](double T) { return cp(T); }, h, lo,
+                         hi, guess, "temperature from enthalpy");
 }
 
 double Gas::temperatureFromEntropy(double s, double pressure) const {
-  if (!std::isfinite(pressure) || pressure <= 0.0) throw InvalidInput("pressure", pressure, "Pa", "(0, inf) Pa");
+  if (!std::isfinite(pressure) || pressure <= 0.0)
+    throw InvalidInput("pressure", pressure, "Pa", "(0, inf) Pa");
   // s°(T) = s + R ln(p/p_ref); ds°/dT = cp/T.
   const double target = s + gasConstant() * std::log(pressure / kReferencePressure);
   const double lo = minimumTemperature(), hi = maximumTemperature();
   if (!std::isfinite(target) || target < standardEntropy(lo) || target > standardEntropy(hi))
     throw OutOfRange("temperature from entropy", s, "J/(kg K)",
                      "the entropies of " + temperatureRange(*this) + " at " + formatNumber(pressure) + " Pa");
-  return solveIncreasing([this](double T) { return standardEntropy(T); }, [this](double T) { return cp(T) / T; },
-                         target, lo, hi, 0.5 * (lo + hi), "temperature from entropy");
+  return solveIncreasing([this](double T) { return standardEntropy(T); },
+                         [this](double T) { return cp(T) / T; }, target, lo, hi, 0.5 * (lo + hi),
+                         "temperature from entropy");
 }
 
 double Gas::isentropicTemperature(double temperature1, double pressure1, double pressure2) const {

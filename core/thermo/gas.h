@@ -20,7 +20,7 @@ inline constexpr double kReferencePressure = 1.0e5;  // Pa
 inline constexpr double kMolarGasConstant = 8.314462618;  // J/(mol K)
 
 class Gas {
-public:
+ public:
   virtual ~Gas() = default;
 
   /// A short description, e.g. "air (thermally perfect)" or "products, f = 0.02".
@@ -63,7 +63,7 @@ public:
   double polytropicTemperature(double temperature1, double pressure1, double pressure2,
                                double polytropicEfficiency) const;
 
-protected:
+ protected:
   /// Throws cw::OutOfRange when T is outside the model's range (or not finite).
   void checkTemperature(double temperature, const char* where) const;
 };

@@ -23,7 +23,7 @@
 namespace cw::thermo {
 
 class GasModel {
-public:
+ public:
   virtual ~GasModel() = default;
 
   /// The model's kind as written in case files: "constant-cp", "two-gamma", "thermally-perfect".

@@ -11,7 +11,7 @@ namespace cw::thermo {
 /// The case's gas model for its fuel and the air's specific humidity [kg/kg]. Gas models are
 /// immutable; the last thermally perfect model built on each thread is reused when the fuel
 /// and humidity are the same (building one costs more than a design point).
-std::shared_ptr<const GasModel> makeGasModel(const engine::GasModelInputs& gasModel, const engine::FuelInputs& fuel,
-                                       double specificHumidity);
+std::shared_ptr<const GasModel> makeGasModel(const engine::GasModelInputs& gasModel,
+                                             const engine::FuelInputs& fuel, double specificHumidity);
 
 }  // namespace cw::thermo

@@ -22,8 +22,12 @@
 namespace {
 
 using Run = cw::test::CliRun;
-Run run(const std::vector<std::string>& words) { return cw::test::runCli(words); }
-QJsonObject json(const Run& r) { return cw::test::jsonOf(r); }
+Run run(const std::vector<std::string>& words) {
+  return cw::test::runCli(words);
+}
+QJsonObject json(const Run& r) {
+  return cw::test::jsonOf(r);
+}
 
 bool near(double actual, double expected, double tolerance) {
   return std::abs(actual - expected) <= tolerance;

@@ -11,7 +11,7 @@
 
 class TestCliBasics : public QObject {
   Q_OBJECT
-private slots:
+ private slots:
   void versionPrintsProjectVersion() {
     QProcess cli;
     cli.start(CYCLEWRIGHT_CLI_PATH, {"--version"});

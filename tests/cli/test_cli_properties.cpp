@@ -23,8 +23,12 @@
 namespace {
 
 using Run = cw::test::CliRun;
-Run run(const std::vector<std::string>& words) { return cw::test::runCli(words); }
-QJsonObject json(const Run& r) { return cw::test::jsonOf(r); }
+Run run(const std::vector<std::string>& words) {
+  return cw::test::runCli(words);
+}
+QJsonObject json(const Run& r) {
+  return cw::test::jsonOf(r);
+}
 
 bool relNear(double actual, double expected, double relative) {
   return std::abs(actual - expected) <= relative * std::abs(expected);

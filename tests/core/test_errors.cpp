@@ -7,16 +7,18 @@
 
 class TestErrors : public QObject {
   Q_OBJECT
-private slots:
+ private slots:
   void invalidInputNamesFieldValueAndRange() {
     const cw::InvalidInput e("compressor.pressure_ratio", 0.5, "", "[1, 100]");
-    QCOMPARE(std::string(e.what()), std::string("compressor.pressure_ratio = 0.5 is outside the valid range [1, 100]"));
+    QCOMPARE(std::string(e.what()),
+             std::string("compressor.pressure_ratio = 0.5 is outside the valid range [1, 100]"));
     QCOMPARE(e.where(), std::string("compressor.pressure_ratio"));
     QCOMPARE(e.code(), cw::ErrorCode::InvalidInput);
   }
   void outOfRangeCarriesUnit() {
     const cw::OutOfRange e("--temperature-K", 7000.0, "K", "[200, 6000] K");
-    QCOMPARE(std::string(e.what()), std::string("--temperature-K = 7000 K is outside the valid range [200, 6000] K"));
+    QCOMPARE(std::string(e.what()),
+             std::string("--temperature-K = 7000 K is outside the valid range [200, 6000] K"));
     QCOMPARE(e.code(), cw::ErrorCode::OutOfRange);
   }
   void notConvergedAndNoSolution() {
