@@ -734,6 +734,18 @@ Gültiger Bereich: %2</translation>
         <source>Exergy destroyed</source>
         <translation>Exergievernichtung</translation>
     </message>
+    <message>
+        <source>&amp;Order…</source>
+        <translation>&amp;Reihenfolge…</translation>
+    </message>
+    <message>
+        <source>The order in which the waterfall adds the losses to the ideal cycle</source>
+        <translation>Die Reihenfolge, in der der Wasserfall die Verluste zum idealen Kreisprozess hinzufügt</translation>
+    </message>
+    <message>
+        <source>The waterfall steps depend on the order in which the losses are added, because the losses interact; their sum does not.</source>
+        <translation>Die Wasserfallstufen hängen von der Reihenfolge ab, in der die Verluste hinzugefügt werden, weil die Verluste zusammenwirken; ihre Summe nicht.</translation>
+    </message>
 </context>
 <context>
     <name>cw::gui::AuditTableModel</name>
@@ -984,6 +996,25 @@ p = %7   v = %8</translation>
     <message>
         <source>&amp;Resolution:</source>
         <translation>&amp;Auflösung:</translation>
+    </message>
+</context>
+<context>
+    <name>cw::gui::LossOrderDialog</name>
+    <message>
+        <source>Waterfall Order</source>
+        <translation>Reihenfolge des Wasserfalls</translation>
+    </message>
+    <message>
+        <source>Drag the losses into the order in which the waterfall adds them to the ideal cycle. The steps depend on the order; their sum does not.</source>
+        <translation>Ziehen Sie die Verluste in die Reihenfolge, in der der Wasserfall sie zum idealen Kreisprozess hinzufügt. Die Stufen hängen von der Reihenfolge ab, ihre Summe nicht.</translation>
+    </message>
+    <message>
+        <source>&amp;Flow order</source>
+        <translation>&amp;Strömungsreihenfolge</translation>
+    </message>
+    <message>
+        <source>The losses in the order the flow meets them</source>
+        <translation>Die Verluste in der Reihenfolge, in der die Strömung sie durchläuft</translation>
     </message>
 </context>
 <context>
@@ -1351,6 +1382,10 @@ p = %7   v = %8</translation>
     <message>
         <source>Export Loss Audit</source>
         <translation>Verlustanalyse exportieren</translation>
+    </message>
+    <message>
+        <source>Stations and performance</source>
+        <translation>Stationen und Leistung</translation>
     </message>
 </context>
 <context>

@@ -3,19 +3,26 @@
 #include "audit_csv.h"
 #include "audit_table_model.h"
 #include "charts/audit_chart.h"
+#include "dialogs.h"
 #include "loss_names.h"
 #include "selection_router.h"
+
+#include "analysis/loss_catalogue.h"
 
 #include <QComboBox>
 #include <QHBoxLayout>
 #include <QHeaderView>
 #include <QLabel>
+#include <QPushButton>
 #include <QSaveFile>
 #include <QSplitter>
 #include <QTableView>
 #include <QVBoxLayout>
 
+#include <algorithm>
 #include <exception>
+#include <string>
+#include <vector>
 
 namespace cw::gui {
 
@@ -43,11 +50,28 @@ AuditPanel::AuditPanel(DisplayUnits& units, SelectionRouter& router, QWidget* pa
   controls->addSpacing(12);
   controls->addWidget(viewLabel);
   controls->addWidget(view_, 1);
+  orderButton_ = new QPushButton(tr("&Order…"), this);
+  orderButton_->setObjectName("auditOrderButton");
+  orderButton_->setEnabled(false);  // until there is an audit
+  orderButton_->setToolTip(tr("The order in which the waterfall adds the losses to the ideal cycle"));
+  controls->addWidget(orderButton_);
   layout->addLayout(controls);
 
-  auto* split = new QSplitter(Qt::Vertical, this);
-  chart_ = new AuditChart(units, split);
+  split_ = new QSplitter(Qt::Vertical, this);
+  auto* split = split_;
+  auto* chartBox = new QWidget(split);
+  auto* chartLayout = new QVBoxLayout(chartBox);
+  chartLayout->setContentsMargins(0, 0, 0, 0);
+  chartLayout->setSpacing(2);
+  chart_ = new AuditChart(units, chartBox);
   chart_->setMinimumHeight(200);
+  note_ = new QLabel(tr("The waterfall steps depend on the order in which the losses are added, because "
+                        "the losses interact; their sum does not."),
+                     chartBox);
+  note_->setObjectName("auditOrderNote");
+  note_->setWordWrap(true);
+  chartLayout->addWidget(chart_, 1);
+  chartLayout->addWidget(note_);
   model_ = new AuditTableModel(units, this);
   model_->setView(AuditView::Waterfall);
   table_ = new QTableView(split);
@@ -58,7 +82,7 @@ AuditPanel::AuditPanel(DisplayUnits& units, SelectionRouter& router, QWidget* pa
   table_->horizontalHeader()->setStretchLastSection(true);
   table_->setAlternatingRowColors(true);
   table_->verticalHeader()->setDefaultSectionSize(QFontMetrics(table_->font()).height() + 6);
-  split->addWidget(chart_);
+  split->addWidget(chartBox);
   split->addWidget(table_);
   split->setStretchFactor(0, 3);
   split->setStretchFactor(1, 2);
@@ -69,6 +93,7 @@ AuditPanel::AuditPanel(DisplayUnits& units, SelectionRouter& router, QWidget* pa
   });
   connect(view_, &QComboBox::currentIndexChanged, this,
           [this](int index) { model_->setView(static_cast<AuditView>(index)); });
+  connect(orderButton_, &QPushButton::clicked, this, &AuditPanel::editOrder);
   connect(chart_, &AuditChart::lossClicked, this,
           [this](const QString& loss) { router_.select(lossSection(loss.toStdString())); });
   connect(&router_, &SelectionRouter::selected, chart_, &AuditChart::setHighlightedSection);
@@ -79,24 +104,70 @@ void AuditPanel::update(const engine::Case& inputs,
                         const std::shared_ptr<const engine::Evaluation>& evaluation, bool stale) {
   if (evaluation != audited_) {
     audited_ = evaluation;
-    failed_ = false;
-    if (!evaluation) {
-      audit_.reset();
-    } else {
-      try {
-        audit_ = std::make_shared<const analysis::LossAudit>(analysis::auditCase(inputs));
-      } catch (const std::exception&) {
-        failed_ = true;  // a variant had no cycle: keep the last audit, marked stale
-      }
-    }
-    stale_ = stale || failed_;
-    chart_->setAudit(audit_, stale_);
-    model_->setAudit(audit_, stale_);
+    inputs_ = inputs;
+    documentStale_ = stale;
+    runAudit();
     return;
   }
+  documentStale_ = stale;
   stale_ = stale || failed_;
   chart_->setStale(stale_);
   model_->setStale(stale_);
+}
+
+void AuditPanel::runAudit() {
+  failed_ = false;
+  if (!audited_) {
+    audit_.reset();
+  } else {
+    std::vector<std::string> order;
+    for (const QString& key : order_) order.push_back(key.toStdString());
+    try {
+      audit_ = std::make_shared<const analysis::LossAudit>(analysis::auditCase(inputs_, order));
+    } catch (const std::exception&) {
+      failed_ = true;  // a variant had no cycle: keep the last audit, marked stale
+    }
+  }
+  stale_ = documentStale_ || failed_;
+  orderButton_->setEnabled(audited_ != nullptr);
+  chart_->setAudit(audit_, stale_);
+  model_->setAudit(audit_, stale_);
+}
+
+void AuditPanel::setOrder(const QStringList& keys) {
+  QStringList known;
+  for (const QString& key : keys) {
+    const bool valid =
+        std::any_of(analysis::lossCatalogue().begin(), analysis::lossCatalogue().end(),
+                    [&](const analysis::LossDefinition& l) { return l.key == key.toStdString(); });
+    if (valid && !known.contains(key)) known << key;
+  }
+  if (known == order_) return;
+  order_ = known;
+  if (audited_) runAudit();
+  emit orderChanged(order_);
+}
+
+void AuditPanel::editOrder() {
+  // The losses of this case: as audited now, and in flow order.
+  QStringList current, flow;
+  std::vector<std::string> asked;
+  for (const QString& key : order_) asked.push_back(key.toStdString());
+  try {
+    for (const auto& key : analysis::waterfallOrderOf(inputs_, asked)) current << QString::fromStdString(key);
+    for (const auto& key : analysis::waterfallOrderOf(inputs_, {})) flow << QString::fromStdString(key);
+  } catch (const std::exception&) {
+    return;  // setOrder keeps only valid keys, so this does not happen
+  }
+  LossOrderDialog dialog(current, flow, this);
+  if (dialog.exec() != QDialog::Accepted) return;
+  const QStringList chosen = dialog.order();
+  setOrder(chosen == flow ? QStringList() : chosen);
+}
+
+void AuditPanel::setSideBySide(bool sideBySide) {
+  split_->setOrientation(sideBySide ? Qt::Horizontal : Qt::Vertical);
+  chart_->setMinimumHeight(sideBySide ? 40 : 200);  // low: it must not squeeze the cycle charts
 }
 
 bool AuditPanel::exportCsv(const QString& path) const {

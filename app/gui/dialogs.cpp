@@ -1,8 +1,13 @@
 #include "dialogs.h"
 
+#include "loss_names.h"
+
 #include <QComboBox>
 #include <QDialogButtonBox>
 #include <QFormLayout>
+#include <QLabel>
+#include <QListWidget>
+#include <QPushButton>
 #include <QSpinBox>
 #include <QVBoxLayout>
 
@@ -93,6 +98,49 @@ QSize ImageExportDialog::pixels() const {
 }
 int ImageExportDialog::dotsPerInch() const {
   return dpi_->value();
+}
+
+LossOrderDialog::LossOrderDialog(const QStringList& order, const QStringList& flowOrder, QWidget* parent)
+    : QDialog(parent), flowOrder_(flowOrder) {
+  setObjectName("lossOrderDialog");
+  setWindowTitle(tr("Waterfall Order"));
+  auto* layout = new QVBoxLayout(this);
+  auto* hint = new QLabel(tr("Drag the losses into the order in which the waterfall adds them to the ideal "
+                             "cycle. The steps depend on the order; their sum does not."),
+                          this);
+  hint->setWordWrap(true);
+  layout->addWidget(hint);
+  list_ = new QListWidget(this);
+  list_->setObjectName("lossOrderList");
+  list_->setDragDropMode(QAbstractItemView::InternalMove);
+  list_->setDefaultDropAction(Qt::MoveAction);
+  list_->setSelectionMode(QAbstractItemView::SingleSelection);
+  layout->addWidget(list_, 1);
+  fill(order);
+  auto* buttons = addButtons(this, layout);
+  QPushButton* flow = buttons->addButton(tr("&Flow order"), QDialogButtonBox::ResetRole);
+  flow->setObjectName("flowOrderButton");
+  flow->setToolTip(tr("The losses in the order the flow meets them"));
+  connect(flow, &QPushButton::clicked, this, &LossOrderDialog::resetToFlowOrder);
+}
+
+void LossOrderDialog::fill(const QStringList& keys) {
+  list_->clear();
+  for (const QString& key : keys) {
+    auto* item = new QListWidgetItem(lossName(key.toStdString()), list_);
+    item->setData(Qt::UserRole, key);
+    item->setFlags(Qt::ItemIsEnabled | Qt::ItemIsSelectable | Qt::ItemIsDragEnabled);
+  }
+}
+
+QStringList LossOrderDialog::order() const {
+  QStringList keys;
+  for (int i = 0; i < list_->count(); ++i) keys << list_->item(i)->data(Qt::UserRole).toString();
+  return keys;
+}
+
+void LossOrderDialog::resetToFlowOrder() {
+  fill(flowOrder_);
 }
 
 }  // namespace cw::gui

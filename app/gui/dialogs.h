@@ -1,12 +1,15 @@
 #pragma once
-// The small dialogs of the main window: preferences and the PNG export size.
+// The small dialogs of the main window: preferences, the PNG export size and the order of the
+// loss audit's waterfall.
 
 #include "settings.h"
 
 #include <QDialog>
 #include <QSize>
+#include <QStringList>
 
 class QComboBox;
+class QListWidget;
 class QSpinBox;
 
 namespace cw::gui {
@@ -43,6 +46,26 @@ class ImageExportDialog : public QDialog {
   QSpinBox* width_ = nullptr;
   QSpinBox* height_ = nullptr;
   QSpinBox* dpi_ = nullptr;
+};
+
+/// Reorders the waterfall's losses by drag and drop (keys of core/analysis/loss_catalogue.h,
+/// shown by their names); "Flow order" puts them back in the given flow order.
+class LossOrderDialog : public QDialog {
+  Q_OBJECT
+
+ public:
+  LossOrderDialog(const QStringList& order, const QStringList& flowOrder, QWidget* parent = nullptr);
+
+  /// The keys in the order shown.
+  QStringList order() const;
+  QListWidget* list() const { return list_; }
+  void resetToFlowOrder();
+
+ private:
+  void fill(const QStringList& keys);
+
+  QListWidget* list_ = nullptr;
+  QStringList flowOrder_;
 };
 
 }  // namespace cw::gui

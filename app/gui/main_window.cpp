@@ -97,6 +97,10 @@ MainWindow::MainWindow(QWidget* parent) : QMainWindow(parent) {
   actions_.logAxes->setChecked(settings_.pressureVolumeLogAxes());
   restoreGeometry(settings_.windowGeometry());
   restoreState(settings_.windowState());
+  placeAudit();
+  auditPanel_->setOrder(settings_.auditOrder());
+  connect(auditPanel_, &AuditPanel::orderChanged, this,
+          [this](const QStringList& keys) { settings_.setAuditOrder(keys); });
 
   router_->select(Section::Compressor);
   refreshResult();
@@ -326,7 +330,7 @@ void MainWindow::createCentralWidget() {
   horizontal->setStretchFactor(0, 0);
   horizontal->setStretchFactor(1, 1);
 
-  auto* bottom = new QSplitter(Qt::Horizontal, vertical);
+  auto* bottom = new QSplitter(Qt::Horizontal);
   auto* stationBox = new QGroupBox(tr("Stations"), bottom);
   auto* stationLayout = new QVBoxLayout(stationBox);
   tableMode_ = new QComboBox(stationBox);
@@ -366,26 +370,39 @@ void MainWindow::createCentralWidget() {
   bottom->setStretchFactor(0, 3);
   bottom->setStretchFactor(1, 2);
 
+  // The tables and the loss audit share the bottom area, in tabs, so that the audit is in sight
+  // from the start without taking room from the charts. View › Loss Audit moves it into a dock
+  // of its own (placeAudit).
+  bottomTabs_ = new QTabWidget(vertical);
+  bottomTabs_->setObjectName("bottomTabs");
+  bottomTabs_->setDocumentMode(true);
+  bottomTabs_->addTab(bottom, tr("Stations and performance"));
+  auditPanel_ = new AuditPanel(*units_, *router_);
+  auditPanel_->setSideBySide(true);
+  bottomTabs_->addTab(auditPanel_, tr("Loss audit"));
+
   vertical->addWidget(horizontal);
-  vertical->addWidget(bottom);
+  vertical->addWidget(bottomTabs_);
   vertical->setStretchFactor(0, 3);
   vertical->setStretchFactor(1, 2);
   vertical->setSizes({600, 330});
   layout->addWidget(vertical, 1);
   setCentralWidget(central);
 
-  // The loss audit beside the charts, in a dock: its place and visibility are kept with the
-  // window state (settings).
-  auditPanel_ = new AuditPanel(*units_, *router_);
+  // The loss audit beside the charts, in a dock, when the user asks for it (View › Loss Audit):
+  // its place and visibility are kept with the window state (settings). While the dock is
+  // hidden the audit is a tab of the bottom area.
   auditDock_ = new QDockWidget(tr("Loss audit"), this);
   auditDock_->setObjectName("auditDock");
-  auditDock_->setWidget(auditPanel_);
   auditDock_->setFeatures(QDockWidget::DockWidgetClosable | QDockWidget::DockWidgetMovable |
                           QDockWidget::DockWidgetFloatable);
   addDockWidget(Qt::RightDockWidgetArea, auditDock_);
   resizeDocks({auditDock_}, {440}, Qt::Horizontal);
   auditDock_->hide();  // until the user shows it (View › Loss Audit); the window state keeps it
   QAction* toggle = auditDock_->toggleViewAction();
+  // Triggered: after the dock has shown or hidden itself; toggled: also its close button.
+  connect(toggle, &QAction::triggered, this, &MainWindow::placeAudit);
+  connect(toggle, &QAction::toggled, this, &MainWindow::placeAudit);
   toggle->setObjectName("auditDockAction");
   toggle->setText(tr("&Loss Audit"));
   viewMenu_->addSeparator();
@@ -408,6 +425,19 @@ void MainWindow::setChartLayout(ChartLayout chartLayout) {
   tsChart_->show();
   pvChart_->show();
   settings_.setChartLayout(chartLayout);
+}
+
+void MainWindow::placeAudit() {
+  const bool docked = !auditDock_->isHidden();
+  if (docked && auditDock_->widget() != auditPanel_) {
+    bottomTabs_->removeTab(bottomTabs_->indexOf(auditPanel_));
+    auditPanel_->setSideBySide(false);
+    auditDock_->setWidget(auditPanel_);
+  } else if (!docked && auditDock_->widget() == auditPanel_) {
+    auditDock_->setWidget(nullptr);
+    auditPanel_->setSideBySide(true);
+    bottomTabs_->addTab(auditPanel_, tr("Loss audit"));
+  }
 }
 
 void MainWindow::setUnitSystem(UnitSystem system) {

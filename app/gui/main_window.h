@@ -68,15 +68,22 @@ class MainWindow : public QMainWindow {
   CycleChart* pressureVolumeChart() const { return pvChart_; }
   StationTableModel* stationModel() const { return stationModel_; }
   PerformanceModel* performanceModel() const { return performanceModel_; }
-  /// The loss-audit panel (in a dock beside the charts; shown or hidden as the user left it).
+  /// The loss-audit panel: a tab beside the station table and performance summary, or in its
+  /// dock beside the charts when the user shows that (View › Loss Audit; kept with the window
+  /// state).
   AuditPanel* auditPanel() const { return auditPanel_; }
   QDockWidget* auditDock() const { return auditDock_; }
+  /// The tabs of the bottom area: the station table with the performance summary and, while
+  /// not in its dock, the audit.
+  QTabWidget* bottomTabs() const { return bottomTabs_; }
   /// The banner that says the result is stale and why.
   QLabel* staleBanner() const { return banner_; }
 
   void setChartLayout(ChartLayout layout);
   ChartLayout chartLayout() const { return chartLayout_; }
   void setUnitSystem(UnitSystem system);
+  /// Puts the audit panel in its dock when the dock is shown, else in the bottom tabs.
+  void placeAudit();
 
   // Exports without dialogs (tests and the menu actions).
   bool exportStationCsv(const QString& path);
@@ -147,6 +154,7 @@ class MainWindow : public QMainWindow {
   QComboBox* tableMode_ = nullptr;
   QTableView* performanceView_ = nullptr;
   PerformanceModel* performanceModel_ = nullptr;
+  QTabWidget* bottomTabs_ = nullptr;
   AuditPanel* auditPanel_ = nullptr;
   QDockWidget* auditDock_ = nullptr;
   QMenu* viewMenu_ = nullptr;

@@ -41,6 +41,13 @@ void AppSettings::setPressureVolumeLogAxes(bool on) {
   settings_.setValue("charts/pv_log_axes", on);
 }
 
+QStringList AppSettings::auditOrder() const {
+  return settings_.value("audit/waterfall_order").toStringList();
+}
+void AppSettings::setAuditOrder(const QStringList& keys) {
+  settings_.setValue("audit/waterfall_order", keys);
+}
+
 int AppSettings::autosaveSeconds() const {
   return std::clamp(settings_.value("files/autosave_seconds", 30).toInt(), 5, 3600);
 }

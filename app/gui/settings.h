@@ -29,6 +29,10 @@ class AppSettings {
   bool pressureVolumeLogAxes() const;
   void setPressureVolumeLogAxes(bool on);
 
+  /// The loss audit's waterfall order (loss keys); empty for the flow order.
+  QStringList auditOrder() const;
+  void setAuditOrder(const QStringList& keys);
+
   /// Seconds between a change and its autosave, in [5, 3600].
   int autosaveSeconds() const;
   void setAutosaveSeconds(int seconds);

@@ -1,12 +1,16 @@
 // The loss-audit panel, offscreen: its waterfall bars are cw::analysis::auditCase's steps on the
 // same case (and telescope from the ideal twin to the actual figure), an edit changes them, an
 // invalid value keeps the last bars marked stale, a click on a bar selects its component in the
-// strip, and the chart and table exports write a PNG, an SVG and a CSV that read back.
+// strip, and the chart and table exports write a PNG, an SVG and a CSV that read back. The
+// waterfall follows an order set through the panel or its dialog; the audit starts as a tab
+// beside the tables and View › Loss Audit moves it into its dock and back.
 #include "audit_panel.h"
 #include "audit_table_model.h"
 #include "case_document.h"
 #include "charts/audit_chart.h"
 #include "charts/chart_export.h"
+#include "charts/cycle_chart.h"
+#include "dialogs.h"
 #include "main_window.h"
 #include "selection_router.h"
 
@@ -19,12 +23,17 @@
 #include <QDockWidget>
 #include <QFile>
 #include <QImage>
+#include <QLabel>
 #include <QLineEdit>
 #include <QListWidget>
+#include <QPushButton>
+#include <QSettings>
 #include <QStandardPaths>
 #include <QSvgRenderer>
+#include <QTabWidget>
 #include <QTemporaryDir>
 #include <QTest>
+#include <QTimer>
 
 #include <cmath>
 
@@ -44,6 +53,30 @@ void typeInto(QLineEdit* field, const QString& text) {
 
 bool near(double a, double b) {
   return std::fabs(a - b) <= 1e-9 * std::max(1.0, std::fabs(b));
+}
+
+std::vector<std::string> keysOf(const QStringList& keys) {
+  std::vector<std::string> out;
+  for (const QString& key : keys) out.push_back(key.toStdString());
+  return out;
+}
+
+// The chart's loss bars are the core's waterfall in that order, and telescope.
+void checkBarsFollow(const AuditChart* chart, const cw::analysis::LossAudit& reference,
+                     const std::vector<std::string>& order) {
+  const auto& bars = chart->bars();
+  QCOMPARE(bars.size(), order.size() + 2);
+  QCOMPARE(reference.waterfallOrder, order);
+  double sum = 0.0;
+  for (size_t i = 0; i < order.size(); ++i) {
+    QCOMPARE(bars[i + 1].loss, order[i]);
+    QCOMPARE(reference.waterfall[i].loss, order[i]);
+    QVERIFY(near(bars[i + 1].to - bars[i + 1].from, reference.waterfall[i].deltaSpecificThrust));
+    sum += bars[i + 1].to - bars[i + 1].from;
+  }
+  QVERIFY(std::fabs(sum - (reference.actual.specificThrust - reference.ideal.specificThrust)) <
+          1e-9 * 1000.0);
+  QVERIFY(near(bars.back().to, reference.actual.specificThrust));
 }
 
 }  // namespace
@@ -210,6 +243,124 @@ class TestLossAudit : public QObject {
     QVERIFY(dock);
     QCOMPARE(dock->objectName(), QString("auditDock"));  // saveState needs the name
     QVERIFY(window.findChild<QAction*>("auditDockAction"));
+  }
+
+  void orderSetThroughThePanelAndItsDialog() {
+    QSettings().remove("audit/waterfall_order");
+    MainWindow window;
+    QVERIFY(window.openCase(kDemo));
+    cw::gui::AuditPanel* panel = window.auditPanel();
+    const AuditChart* chart = panel->chart();
+    QVERIFY(panel->orderButton()->isEnabled());
+    QVERIFY(panel->orderNote()->text().contains("order"));
+    const auto& c = window.document().currentCase();
+    const std::vector<std::string> flow = cw::analysis::auditCase(c).waterfallOrder;
+    QVERIFY(flow.size() >= 4);
+
+    // Through the public API: the reversed flow order.
+    QStringList reversed;
+    for (auto it = flow.rbegin(); it != flow.rend(); ++it) reversed << QString::fromStdString(*it);
+    QStringList emitted;
+    connect(panel, &cw::gui::AuditPanel::orderChanged, this, [&](const QStringList& k) { emitted = k; });
+    panel->setOrder(reversed);
+    QCOMPARE(panel->order(), reversed);
+    QCOMPARE(emitted, reversed);
+    checkBarsFollow(chart, cw::analysis::auditCase(c, keysOf(reversed)), keysOf(reversed));
+    QCOMPARE(panel->audit()->waterfallOrder, keysOf(reversed));
+    // The table follows too: its first step row is the first loss of the order.
+    panel->model()->setView(cw::gui::AuditView::Waterfall);
+    QCOMPARE(panel->model()->rowCount(), static_cast<int>(flow.size()) + 3);
+    // The order is remembered.
+    QCOMPARE(QSettings().value("audit/waterfall_order").toStringList(), reversed);
+    {
+      MainWindow again;
+      QCOMPARE(again.auditPanel()->order(), reversed);
+      QVERIFY(again.openCase(kDemo));
+      QCOMPARE(again.auditPanel()->audit()->waterfallOrder, keysOf(reversed));
+    }
+
+    // Unknown and repeated keys are dropped; a partial order puts the rest in flow order.
+    panel->setOrder({"no_such_loss", "nozzle_expansion", "nozzle_expansion"});
+    QCOMPARE(panel->order(), QStringList{"nozzle_expansion"});
+    std::vector<std::string> partial{"nozzle_expansion"};
+    for (const auto& key : flow)
+      if (key != "nozzle_expansion") partial.push_back(key);
+    checkBarsFollow(chart, cw::analysis::auditCase(c, {"nozzle_expansion"}), partial);
+
+    // Through the dialog's list: move the last loss to the top.
+    std::vector<std::string> moved = partial;
+    std::rotate(moved.rbegin(), moved.rbegin() + 1, moved.rend());
+    bool seen = false;
+    QTimer::singleShot(0, [&] {
+      auto* dialog = panel->findChild<cw::gui::LossOrderDialog*>("lossOrderDialog");
+      QVERIFY(dialog);
+      QListWidget* list = dialog->list();
+      QCOMPARE(list->dragDropMode(), QAbstractItemView::InternalMove);
+      QCOMPARE(keysOf(dialog->order()), partial);  // opens on the order shown
+      list->insertItem(0, list->takeItem(list->count() - 1));
+      QCOMPARE(keysOf(dialog->order()), moved);
+      seen = true;
+      dialog->accept();
+    });
+    QTest::mouseClick(panel->orderButton(), Qt::LeftButton);
+    QVERIFY(seen);
+    QCOMPARE(keysOf(panel->order()), moved);
+    checkBarsFollow(chart, cw::analysis::auditCase(c, moved), moved);
+
+    // "Flow order" in the dialog puts the losses back, stored as the default (empty) order.
+    seen = false;
+    QTimer::singleShot(0, [&] {
+      auto* dialog = panel->findChild<cw::gui::LossOrderDialog*>("lossOrderDialog");
+      QVERIFY(dialog);
+      auto* reset = dialog->findChild<QPushButton*>("flowOrderButton");
+      QVERIFY(reset);
+      QTest::mouseClick(reset, Qt::LeftButton);
+      QCOMPARE(keysOf(dialog->order()), flow);
+      seen = true;
+      dialog->accept();
+    });
+    panel->editOrder();
+    QVERIFY(seen);
+    QVERIFY(panel->order().isEmpty());
+    checkBarsFollow(chart, cw::analysis::auditCase(c), flow);
+    QVERIFY(QSettings().value("audit/waterfall_order").toStringList().isEmpty());
+  }
+
+  void auditStartsAsATabAndMovesIntoItsDock() {
+    QSettings().remove("window/state");
+    MainWindow window;
+    QVERIFY(window.openCase(kDemo));
+    window.resize(1600, 1000);
+    window.show();
+    QVERIFY(QTest::qWaitForWindowExposed(&window));
+    QTabWidget* tabs = window.bottomTabs();
+    QVERIFY(tabs);
+    QVERIFY(window.auditDock()->isHidden());
+    QCOMPARE(tabs->count(), 2);
+    QCOMPARE(tabs->currentIndex(), 0);  // the tables first, the audit in sight
+    QCOMPARE(tabs->widget(1), static_cast<QWidget*>(window.auditPanel()));
+    QCOMPARE(tabs->tabText(1), QString("Loss audit"));
+    // Showing the audit costs the cycle charts nothing: they keep their size, and the audit tab
+    // does not raise the bottom area's minimum height (which squeezes the charts in a small window).
+    QVERIFY(window.auditPanel()->minimumSizeHint().height() <= tabs->widget(0)->minimumSizeHint().height());
+    const QSize ts = window.temperatureEntropyChart()->size(), pv = window.pressureVolumeChart()->size();
+    tabs->setCurrentIndex(1);
+    QVERIFY(window.auditPanel()->chart()->isVisible());
+    QVERIFY(window.auditPanel()->orderNote()->isVisible());
+    QCOMPARE(window.temperatureEntropyChart()->size(), ts);
+    QCOMPARE(window.pressureVolumeChart()->size(), pv);
+
+    QAction* toggle = window.findChild<QAction*>("auditDockAction");
+    toggle->trigger();
+    QVERIFY(!window.auditDock()->isHidden());
+    QCOMPARE(window.auditDock()->widget(), static_cast<QWidget*>(window.auditPanel()));
+    QCOMPARE(tabs->count(), 1);
+    QVERIFY(window.auditPanel()->chart()->isVisible());
+    window.auditDock()->close();  // its close button
+    QVERIFY(window.auditDock()->isHidden());
+    QVERIFY(!toggle->isChecked());
+    QCOMPARE(tabs->count(), 2);
+    QCOMPARE(tabs->widget(1), static_cast<QWidget*>(window.auditPanel()));
   }
 };
 
