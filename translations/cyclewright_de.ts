@@ -527,6 +527,13 @@ Gültiger Bereich: %2</translation>
     </message>
 </context>
 <context>
+    <name>CycleChart</name>
+    <message>
+        <source>Stale: showing the last valid result</source>
+        <translation type="unfinished">Veraltet: letztes gültiges Ergebnis</translation>
+    </message>
+</context>
+<context>
     <name>LossNames</name>
     <message>
         <source>Inlet pressure recovery</source>
@@ -686,10 +693,6 @@ Gültiger Bereich: %2</translation>
     <message>
         <source>Specific thrust F_s</source>
         <translation>Spezifischer Schub F_s</translation>
-    </message>
-    <message>
-        <source>Stale: showing the last valid result</source>
-        <translation>Veraltet: letztes gültiges Ergebnis</translation>
     </message>
     <message>
         <source>Waterfall of TSFC</source>
@@ -945,10 +948,6 @@ Gültiger Bereich: %2</translation>
     <message>
         <source>Selected: %1</source>
         <translation>Gewählt: %1</translation>
-    </message>
-    <message>
-        <source>Stale: showing the last valid result</source>
-        <translation>Veraltet: letztes gültiges Ergebnis</translation>
     </message>
     <message>
         <source>Ideal</source>

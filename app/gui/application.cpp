@@ -1,5 +1,7 @@
 #include "application.h"
 
+#include "colours.h"
+
 #include <QApplication>
 #include <QLocale>
 #include <QPalette>
@@ -33,7 +35,7 @@ QPalette darkPalette() {
   p.setColor(QPalette::Mid, QColor(0x5F, 0x63, 0x68));
   p.setColor(QPalette::Dark, QColor(0x14, 0x14, 0x16));
   p.setColor(QPalette::Shadow, QColor(0x00, 0x00, 0x00));
-  p.setColor(QPalette::Highlight, QColor(0x00, 0x72, 0xB2));  // Okabe-Ito blue
+  p.setColor(QPalette::Highlight, kOkabeItoBlue);
   p.setColor(QPalette::HighlightedText, white);
   p.setColor(QPalette::Link, QColor(0x56, 0xB4, 0xE9));  // Okabe-Ito sky blue
   p.setColor(QPalette::ToolTipBase, QColor(0x30, 0x31, 0x34));

@@ -1,5 +1,7 @@
 #include "main_window.h"
 
+#include "colours.h"
+
 #include "audit_panel.h"
 #include "case_document.h"
 #include "case_form.h"
@@ -526,12 +528,7 @@ void MainWindow::updateBanner() {
 void MainWindow::applyBannerPalette() {
   // Vermillion (the stale colour) mixed into the window colour; the window's text on it.
   QPalette p = palette();
-  const QColor window = p.color(QPalette::Window);
-  const QColor vermillion(0xD5, 0x5E, 0x00);
-  const float t = 0.22f;
-  p.setColor(QPalette::Window, QColor::fromRgbF(window.redF() * (1 - t) + vermillion.redF() * t,
-                                                window.greenF() * (1 - t) + vermillion.greenF() * t,
-                                                window.blueF() * (1 - t) + vermillion.blueF() * t));
+  p.setColor(QPalette::Window, mixColours(p.color(QPalette::Window), kOkabeItoVermillion, 0.22));
   p.setColor(QPalette::WindowText, palette().color(QPalette::WindowText));
   banner_->setPalette(p);
 }

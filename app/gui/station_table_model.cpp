@@ -1,5 +1,7 @@
 #include "station_table_model.h"
 
+#include "colours.h"
+
 #include "main_window.h"
 #include "units.h"
 
@@ -169,12 +171,7 @@ QVariant StationTableModel::data(const QModelIndex& index, int role) const {
       if (highlighted) {
         // The selected component's vermillion, mixed into the palette's base (light or dark), so
         // that the palette's text colour stays readable on it.
-        const QColor base = QApplication::palette().color(QPalette::Base);
-        const QColor vermillion(0xD5, 0x5E, 0x00);
-        const float t = 0.28f;
-        return QBrush(QColor::fromRgbF(base.redF() * (1 - t) + vermillion.redF() * t,
-                                       base.greenF() * (1 - t) + vermillion.greenF() * t,
-                                       base.blueF() * (1 - t) + vermillion.blueF() * t));
+        return QBrush(mixColours(QApplication::palette().color(QPalette::Base), kOkabeItoVermillion, 0.28));
       }
       return {};
     case Qt::ForegroundRole:

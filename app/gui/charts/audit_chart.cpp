@@ -1,4 +1,6 @@
 #include "charts/audit_chart.h"
+#include "charts/stale_banner.h"
+#include "colours.h"
 
 #include "loss_names.h"
 
@@ -23,19 +25,16 @@ namespace cw::gui {
 
 namespace {
 
-// Okabe-Ito palette (Okabe and Ito, "Color Universal Design", 2008).
-const QColor kBlue(0x00, 0x72, 0xB2);
-const QColor kOrange(0xE6, 0x9F, 0x00);
-const QColor kVermillion(0xD5, 0x5E, 0x00);
-const QColor kGreen(0x00, 0x9E, 0x73);
+// The Okabe-Ito palette (colours.h), under this file's short names.
+const QColor& kBlue = kOkabeItoBlue;
+const QColor& kOrange = kOkabeItoOrange;
+const QColor& kVermillion = kOkabeItoVermillion;
+const QColor& kGreen = kOkabeItoGreen;
 
 constexpr double kHalfWidth = 0.36;  // half a bar's width [bar pitch]
 
 QColor between(const QPalette& palette, double t) {
-  const QColor a = palette.color(QPalette::Base), b = palette.color(QPalette::Text);
-  return QColor::fromRgbF(static_cast<float>(a.redF() * (1 - t) + b.redF() * t),
-                          static_cast<float>(a.greenF() * (1 - t) + b.greenF() * t),
-                          static_cast<float>(a.blueF() * (1 - t) + b.blueF() * t));
+  return mixColours(palette.color(QPalette::Base), palette.color(QPalette::Text), t);
 }
 
 /// The loss names under the bars, at the integer positions.
@@ -181,17 +180,7 @@ void AuditChart::retranslateUi() {
   setAxisTitle(QwtAxis::YLeft, figure_ == AuditFigure::Tsfc
                                    ? units_.withUnit(tr("TSFC"), Quantity::Tsfc)
                                    : units_.withUnit(tr("Specific thrust F_s"), Quantity::SpecificThrust));
-  QwtText stale(tr("Stale: showing the last valid result"));
-  stale.setRenderFlags(Qt::AlignHCenter | Qt::AlignTop);
-  QFont font = stale.font();
-  font.setBold(true);
-  stale.setFont(font);
-  stale.setColor(kVermillion);
-  QColor background = palette().color(QPalette::Base);
-  background.setAlpha(220);
-  stale.setBackgroundBrush(background);
-  stale.setBorderRadius(3);
-  staleLabel_->setText(stale);
+  staleLabel_->setText(staleBannerText(palette()));
   staleLabel_->setVisible(stale_);
 }
 

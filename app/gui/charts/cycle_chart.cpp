@@ -1,4 +1,6 @@
 #include "charts/cycle_chart.h"
+#include "charts/stale_banner.h"
+#include "colours.h"
 
 #include "charts/isobar_labels.h"
 #include "charts/log_scale_engine.h"
@@ -32,17 +34,14 @@ namespace cw::gui {
 
 namespace {
 
-// Okabe-Ito palette (Okabe and Ito, "Color Universal Design", 2008).
-const QColor kBlue(0x00, 0x72, 0xB2);
-const QColor kOrange(0xE6, 0x9F, 0x00);
-const QColor kVermillion(0xD5, 0x5E, 0x00);
+// The Okabe-Ito palette (colours.h), under this file's short names.
+const QColor& kBlue = kOkabeItoBlue;
+const QColor& kOrange = kOkabeItoOrange;
+const QColor& kVermillion = kOkabeItoVermillion;
 
 /// A colour between the canvas (Base) and the text on it: t = 0 is the canvas, 1 the text.
 QColor between(const QPalette& palette, double t) {
-  const QColor a = palette.color(QPalette::Base), b = palette.color(QPalette::Text);
-  return QColor::fromRgbF(static_cast<float>(a.redF() * (1 - t) + b.redF() * t),
-                          static_cast<float>(a.greenF() * (1 - t) + b.greenF() * t),
-                          static_cast<float>(a.blueF() * (1 - t) + b.blueF() * t));
+  return mixColours(palette.color(QPalette::Base), palette.color(QPalette::Text), t);
 }
 
 bool darkCanvas(const QPalette& palette) {
@@ -251,17 +250,7 @@ void CycleChart::retranslateUi() {
   isobarLegend_->setTitle(tr("Isobars through station pressures"));
   highlight_->setTitle(highlighted_.empty() ? tr("Selected component")
                                             : tr("Selected: %1").arg(componentName(highlighted_)));
-  QwtText stale(tr("Stale: showing the last valid result"));
-  stale.setRenderFlags(Qt::AlignHCenter | Qt::AlignTop);
-  QFont font = stale.font();
-  font.setBold(true);
-  stale.setFont(font);
-  stale.setColor(kVermillion);
-  QColor background = palette().color(QPalette::Base);
-  background.setAlpha(220);
-  stale.setBackgroundBrush(background);
-  stale.setBorderRadius(3);
-  staleLabel_->setText(stale);
+  staleLabel_->setText(staleBannerText(palette()));
   staleLabel_->setVisible(stale_);
 }
 

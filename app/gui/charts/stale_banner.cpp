@@ -1,0 +1,25 @@
+#include "charts/stale_banner.h"
+
+#include "colours.h"
+
+#include <QCoreApplication>
+#include <QFont>
+#include <QPalette>
+
+namespace cw::gui {
+
+QwtText staleBannerText(const QPalette& palette) {
+  QwtText stale(QCoreApplication::translate("CycleChart", "Stale: showing the last valid result"));
+  stale.setRenderFlags(Qt::AlignHCenter | Qt::AlignTop);
+  QFont font = stale.font();
+  font.setBold(true);
+  stale.setFont(font);
+  stale.setColor(kOkabeItoVermillion);
+  QColor background = palette.color(QPalette::Base);
+  background.setAlpha(220);
+  stale.setBackgroundBrush(background);
+  stale.setBorderRadius(3);
+  return stale;
+}
+
+}  // namespace cw::gui
