@@ -530,7 +530,7 @@ Gültiger Bereich: %2</translation>
     <name>CycleChart</name>
     <message>
         <source>Stale: showing the last valid result</source>
-        <translation type="unfinished">Veraltet: letztes gültiges Ergebnis</translation>
+        <translation>Veraltet: letztes gültiges Ergebnis</translation>
     </message>
 </context>
 <context>
