@@ -5,6 +5,7 @@
 #include "case_document.h"
 #include "charts/cycle_chart.h"
 #include "charts/isobar_labels.h"
+#include "gui_test_support.h"
 #include "main_window.h"
 #include "selection_router.h"
 #include "station_table_model.h"
@@ -40,12 +41,7 @@ class TestDarkPalette : public QObject {
   Q_OBJECT
 
  private slots:
-  void initTestCase() {
-    QLocale::setDefault(QLocale::c());
-    QStandardPaths::setTestModeEnabled(true);
-    QCoreApplication::setOrganizationName("CyclewrightTest");
-    QCoreApplication::setApplicationName("CyclewrightTestDark");
-  }
+  void initTestCase() { cw::test::isolateGuiTest("CyclewrightTestDark"); }
 
   void everythingReadsOnADarkPalette() {
     auto* app = qobject_cast<QApplication*>(QCoreApplication::instance());

@@ -6,6 +6,7 @@
 #include "charts/chart_export.h"
 #include "charts/cycle_chart.h"
 #include "charts/isobar_labels.h"
+#include "gui_test_support.h"
 #include "main_window.h"
 #include "performance_model.h"
 #include "selection_router.h"
@@ -107,12 +108,7 @@ class TestExplorer : public QObject {
   Q_OBJECT
 
  private slots:
-  void initTestCase() {
-    QLocale::setDefault(QLocale::c());
-    QStandardPaths::setTestModeEnabled(true);
-    QCoreApplication::setOrganizationName("CyclewrightTest");
-    QCoreApplication::setApplicationName("CyclewrightTest");
-  }
+  void initTestCase() { cw::test::isolateGuiTest("CyclewrightTest"); }
 
   void editingALossRedrawsChartsTableAndSummary() {
     MainWindow window;

@@ -11,6 +11,7 @@
 #include "charts/chart_export.h"
 #include "charts/cycle_chart.h"
 #include "dialogs.h"
+#include "gui_test_support.h"
 #include "main_window.h"
 #include "selection_router.h"
 
@@ -85,12 +86,7 @@ class TestLossAudit : public QObject {
   Q_OBJECT
 
  private slots:
-  void initTestCase() {
-    QLocale::setDefault(QLocale::c());
-    QStandardPaths::setTestModeEnabled(true);
-    QCoreApplication::setOrganizationName("CyclewrightTest");
-    QCoreApplication::setApplicationName("CyclewrightTest");
-  }
+  void initTestCase() { cw::test::isolateGuiTest("CyclewrightTest"); }
 
   void barsEqualTheCoreAudit() {
     MainWindow window;
