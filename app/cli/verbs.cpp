@@ -15,10 +15,11 @@ Verb flowVerb();
 Verb evaluateVerb();
 Verb propertiesVerb();
 Verb auditVerb();
+Verb sweepVerb();
 
 const std::vector<Verb>& allVerbs() {
-  static const std::vector<Verb> verbs = {atmosphereVerb(), flowVerb(), evaluateVerb(), auditVerb(),
-                                          propertiesVerb()};
+  static const std::vector<Verb> verbs = {atmosphereVerb(), flowVerb(),  evaluateVerb(),
+                                          auditVerb(),      sweepVerb(), propertiesVerb()};
   return verbs;
 }
 

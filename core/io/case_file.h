@@ -24,6 +24,11 @@ inline constexpr int kCaseVersion = 1;
 /// The case a document describes; throws engine::CaseValidationError (where() = "case").
 engine::Case parseCase(const nlohmann::json& document);
 
+/// The case a document describes, checked for structure only (unknown keys, types, choices,
+/// applicability, "exactly one of", required keys; every problem as one CaseValidationError)
+/// but not for value ranges: a trade study checks the ranges of each of its points on its own.
+engine::Case parseCaseStructure(const nlohmann::json& document);
+
 /// Reads and parses a case file. A file that cannot be read or is not JSON throws
 /// cw::InvalidInput naming the path; duplicate keys and every problem of parseCase throw
 /// one engine::CaseValidationError (where() = the path).

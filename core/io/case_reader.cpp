@@ -118,6 +118,12 @@ engine::Case parseCase(const json& document) {
   return parseWithProblems(document, {}, "case");
 }
 
+engine::Case parseCaseStructure(const json& document) {
+  const CaseStructureCheck structure(document);
+  if (!structure.problems().empty()) throw engine::CaseValidationError("case", structure.problems());
+  return buildCase(structure.clean());
+}
+
 json readCaseDocument(const std::string& path) {
   std::vector<engine::CaseProblem> duplicates;
   json document = loadDocument(path, duplicates);
