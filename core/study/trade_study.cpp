@@ -156,7 +156,7 @@ TradeStudy runTradeStudy(const TradeStudySpec& spec, std::stop_token stop, const
   study.withAudit = spec.withAudit;
 
   // --- the design point: the case as given -----------------------------------------------------
-  {
+  try {
     const engine::Case given = io::parseCaseStructure(spec.document);
     study.designPoint = evaluatePoint(given, spec.withAudit);
     const json written = io::caseToJson(given);
@@ -166,6 +166,9 @@ TradeStudy runTradeStudy(const TradeStudySpec& spec, std::stop_token stop, const
         study.designPointOnAxis[k] = true;
       }
     }
+  } catch (const Error& e) {
+    // A case that is complete only with the axes set has no design point of its own.
+    fail(study.designPoint, PointStatus::InvalidInput, e);
   }
 
   // --- the grid --------------------------------------------------------------------------------

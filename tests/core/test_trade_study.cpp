@@ -199,6 +199,20 @@ class TestTradeStudy : public QObject {
     QVERIFY(point.compressor.efficiency.basis == engine::EfficiencyBasis::Polytropic);
   }
 
+  // A case completed only by its axes (here the ambient pressure) still runs; it has no design point.
+  void aCaseCompletedByItsAxesHasNoDesignPoint() {
+    study::TradeStudySpec spec;
+    spec.document = demoDocument();
+    spec.document["flight"] = {{"ambient_temperature_K", 250.0}, {"mach", 0.8}};
+    spec.axes = {{"flight.ambient_pressure_Pa", 40000.0, 80000.0, 3}};
+    const study::TradeStudy s = study::runTradeStudy(spec);
+    QCOMPARE(s.count(study::PointStatus::Solved), std::size_t(3));
+    QVERIFY(s.designPoint.status == study::PointStatus::InvalidInput);
+    QVERIFY2(s.designPoint.reason.find("/flight/ambient_pressure_Pa") != std::string::npos,
+             s.designPoint.reason.c_str());
+    QVERIFY(!s.designPointOnAxis[0]);
+  }
+
   void auditPerPointEqualsTheLossAudit() {
     study::TradeStudySpec spec;
     spec.document = demoDocument();
