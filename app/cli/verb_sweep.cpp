@@ -15,6 +15,7 @@
 
 #include <pthread.h>
 #include <signal.h>
+#include <atomic>
 #include <chrono>
 #include <csignal>
 #include <iostream>
@@ -28,17 +29,20 @@ namespace {
 
 constexpr int kExitStopped = 130;  // 128 + SIGINT, the shell's convention
 
-volatile std::sig_atomic_t interrupted = 0;
+// Set by the handler, read by the watcher thread: a lock-free atomic is safe in both roles
+// (a volatile sig_atomic_t would only be safe within the interrupted thread).
+std::atomic<bool> interrupted{false};
+static_assert(std::atomic<bool>::is_always_lock_free);
 
 extern "C" void onInterrupt(int) {
-  interrupted = 1;
+  interrupted.store(true, std::memory_order_relaxed);
 }
 
 /// Turns Ctrl+C into a stop request while it lives (a signal handler may only set a flag).
 class InterruptToStop {
  public:
   InterruptToStop() : previous_(std::signal(SIGINT, onInterrupt)) {
-    interrupted = 0;
+    interrupted.store(false);
     // A parent may start us with SIGINT blocked (the mask is inherited); we handle it, so take it.
     sigset_t interrupt;
     sigemptyset(&interrupt);
@@ -46,7 +50,7 @@ class InterruptToStop {
     pthread_sigmask(SIG_UNBLOCK, &interrupt, nullptr);
     watcher_ = std::jthread([this](std::stop_token done) {
       while (!done.stop_requested()) {
-        if (interrupted) source_.request_stop();
+        if (interrupted.load(std::memory_order_relaxed)) source_.request_stop();
         std::this_thread::sleep_for(std::chrono::milliseconds(50));
       }
     });
