@@ -8,15 +8,16 @@ Compressor::Result Compressor::exit(const engine::TotalState& entry) const {
   engine::TotalState& out = result.exit;
   out.gas = entry.gas;
   out.pressure = entry.pressure * inputs_.pressureRatio;
-  out.temperature = exitTemperature(gas, entry.temperature, entry.pressure, out.pressure,
+  const Change compression = change(gas, entry.temperature, entry.pressure, out.pressure,
                                     inputs_.efficiency.basis, inputs_.efficiency.value);
+  out.temperature = compression.exitTemperature;
   out.enthalpy = gas.enthalpy(out.temperature);
   out.fuelAirRatio = entry.fuelAirRatio;
   result.bleedMassFlow = inputs_.bleedFraction * entry.massFlow;
   out.massFlow = entry.massFlow - result.bleedMassFlow;
   result.specificWork = out.enthalpy - entry.enthalpy;
   result.power = entry.massFlow * result.specificWork;
-  result.efficiency = efficiencies(gas, entry.temperature, entry.pressure, out.temperature, out.pressure);
+  result.efficiency = compression.efficiency;
   return result;
 }
 

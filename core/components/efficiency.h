@@ -14,6 +14,8 @@
 #include "engine/case_inputs.h"
 #include "thermo/gas.h"
 
+#include <optional>
+
 namespace cw::components {
 
 using engine::EfficiencyBasis;
@@ -31,9 +33,31 @@ double exitTemperature(const thermo::Gas& gas, double temperature1, double press
 /// Both efficiencies of a change from (T1, p1) to (T2, p2); unit efficiencies for p2 = p1.
 EfficiencyPair efficiencies(const thermo::Gas& gas, double temperature1, double pressure1,
                             double temperature2, double pressure2);
+/// As above, given the isentropic exit temperature T2s at p2 that the caller has already found
+/// (saves the inversion s°(T2s) = s°(T1) + R ln(p2/p1)). [K]
+EfficiencyPair efficiencies(const thermo::Gas& gas, double temperature1, double pressure1,
+                            double temperature2, double pressure2, double isentropicTemperature2);
+
+/// A compression or expansion to p2: its exit temperature and both efficiencies, as
+/// exitTemperature() and efficiencies() give them, with the isentropic exit state found once.
+struct Change {
+  double exitTemperature = 0.0;  ///< T2 [K]
+  EfficiencyPair efficiency;     ///< [-]
+};
+Change change(const thermo::Gas& gas, double temperature1, double pressure1, double pressure2,
+              EfficiencyBasis basis, double efficiency);
 
 /// Exit pressure of an expansion from (T1, p1) that ends at temperature T2 < T1. [Pa]
 double expansionExitPressure(const thermo::Gas& gas, double temperature1, double pressure1,
                              double temperature2, EfficiencyBasis basis, double efficiency);
+
+/// An expansion from (T1, p1) to T2 < T1: expansionExitPressure() and, on the isentropic basis,
+/// the isentropic exit temperature T2s it found on the way (for efficiencies()).
+struct Expansion {
+  double exitPressure = 0.0;                    ///< p2 [Pa]
+  std::optional<double> isentropicTemperature;  ///< T2s at p2 (isentropic basis only) [K]
+};
+Expansion expansion(const thermo::Gas& gas, double temperature1, double pressure1, double temperature2,
+                    EfficiencyBasis basis, double efficiency);
 
 }  // namespace cw::components

@@ -73,7 +73,12 @@ Nozzle::Result Nozzle::expand(const engine::TotalState& entry, double ambientPre
     }
   }
 
-  auto makeStation = [&](const std::string& id, double pressure) {
+  struct Section {
+    engine::Station station;
+    double effectiveArea;          ///< W / (rho V) [m^2]
+    double isentropicTemperature;  ///< of the ideal expansion to the section's pressure [K]
+  };
+  auto makeSection = [&](const char* id, double pressure) {
     const IdealExpansion ideal = idealExpansion(entry, pressure);
     engine::Station st;
     st.id = id;
@@ -94,17 +99,22 @@ Nozzle::Result Nozzle::expand(const engine::TotalState& entry, double ambientPre
     const double density = pressure / (gas.gasConstant() * st.staticTemperature);
     const double effectiveArea = entry.massFlow / (density * st.velocity);
     st.area = effectiveArea / inputs_.dischargeCoefficient;
-    return std::pair{st, effectiveArea};
+    return Section{std::move(st), effectiveArea, ideal.temperature};
   };
-  auto [throat, throatEffectiveArea] = makeStation("8", throatPressure);
-  auto [exit, exitEffectiveArea] = makeStation("9", exitPressure);
-  (void)throatEffectiveArea;
-  result.throat = throat;
-  result.exit = exit;
-  result.grossThrust =
-      exit.massFlow * exit.velocity + (exit.staticPressure - ambientPressure) * exitEffectiveArea;
-  result.efficiency =
-      efficiencies(gas, entry.temperature, entry.pressure, exit.staticTemperature, exitPressure);
+  // A convergent nozzle (or an unchoked one) exits at its throat: the same state, computed once.
+  Section exit = makeSection("9", exitPressure);
+  if (exitPressure == throatPressure) {
+    result.throat = exit.station;
+    result.throat.id = "8";
+  } else {
+    result.throat = makeSection("8", throatPressure).station;
+  }
+  result.exit = std::move(exit.station);
+  result.grossThrust = result.exit.massFlow * result.exit.velocity +
+                       (result.exit.staticPressure - ambientPressure) * exit.effectiveArea;
+  // The isentropic exit state of the efficiencies is the ideal expansion to p9.
+  result.efficiency = efficiencies(gas, entry.temperature, entry.pressure, result.exit.staticTemperature,
+                                   exitPressure, exit.isentropicTemperature);
   return result;
 }
 

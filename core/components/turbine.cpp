@@ -21,9 +21,12 @@ Turbine::Result Turbine::exit(const engine::TotalState& entry, double compressor
   out.gas = entry.gas;
   out.enthalpy = exitEnthalpy;
   out.temperature = gas.temperatureFromEnthalpy(exitEnthalpy);
+  std::optional<double> isentropicTemperature;  // T5s, when the basis finds it on the way
   try {
-    out.pressure = expansionExitPressure(gas, entry.temperature, entry.pressure, out.temperature,
-                                         inputs_.efficiency.basis, inputs_.efficiency.value);
+    const Expansion e = expansion(gas, entry.temperature, entry.pressure, out.temperature,
+                                  inputs_.efficiency.basis, inputs_.efficiency.value);
+    out.pressure = e.exitPressure;
+    isentropicTemperature = e.isentropicTemperature;
   } catch (const OutOfRange&) {
     throw NoSolution("turbine", std::string(why) + ": the isentropic expansion for " +
                                     formatNumber(specificWork) + " J/kg leaves the range of the gas data");
@@ -35,7 +38,11 @@ Turbine::Result Turbine::exit(const engine::TotalState& entry, double compressor
   out.fuelAirRatio = entry.fuelAirRatio;
   result.specificWork = specificWork;
   result.power = entry.massFlow * specificWork;
-  result.efficiency = efficiencies(gas, entry.temperature, entry.pressure, out.temperature, out.pressure);
+  result.efficiency =
+      isentropicTemperature
+          ? efficiencies(gas, entry.temperature, entry.pressure, out.temperature, out.pressure,
+                         *isentropicTemperature)
+          : efficiencies(gas, entry.temperature, entry.pressure, out.temperature, out.pressure);
   return result;
 }
 

@@ -4,6 +4,7 @@
 #include "engine/case_validation_error.h"
 
 #include <string>
+#include <string_view>
 #include <utility>
 
 namespace cw::engine {
@@ -54,10 +55,12 @@ constexpr Interval kExitTemperature = closed(300.0, 2500.0);
 
 class Checker {
  public:
-  void check(const std::string& path, double value, const Interval& range, const std::string& unit = "") {
+  // Paths and units as plain text: a valid value costs one comparison, no string is built.
+  void check(std::string_view path, double value, const Interval& range, std::string_view unit = {}) {
     if (range.contains(value)) return;
-    const std::string valid = range.text() + (unit.empty() ? "" : " " + unit);
-    problems_.push_back({path, formatNumber(value), valid, InvalidInput(path, value, unit, valid).what()});
+    const std::string valid = range.text() + (unit.empty() ? "" : " " + std::string(unit));
+    problems_.push_back({std::string(path), formatNumber(value), valid,
+                         InvalidInput(std::string(path), value, std::string(unit), valid).what()});
   }
   void fail(const std::string& path, const std::string& value, const std::string& valid,
             const std::string& message) {
@@ -113,10 +116,9 @@ void checkGasModel(Checker& c, const GasModelInputs& g) {
   }
 }
 
-void checkEfficiency(Checker& c, const std::string& section, const Efficiency& e) {
-  c.check(section +
-              (e.basis == EfficiencyBasis::Isentropic ? "/isentropic_efficiency" : "/polytropic_efficiency"),
-          e.value, kUnitFraction);
+void checkEfficiency(Checker& c, std::string_view isentropicPath, std::string_view polytropicPath,
+                     const Efficiency& e) {
+  c.check(e.basis == EfficiencyBasis::Isentropic ? isentropicPath : polytropicPath, e.value, kUnitFraction);
 }
 
 void checkComponents(Checker& c, const Case& k) {
@@ -125,7 +127,8 @@ void checkComponents(Checker& c, const Case& k) {
           k.inlet.loss, kUnitFraction);
 
   c.check("/compressor/pressure_ratio", k.compressor.pressureRatio, closed(1.0, 60.0));
-  checkEfficiency(c, "/compressor", k.compressor.efficiency);
+  checkEfficiency(c, "/compressor/isentropic_efficiency", "/compressor/polytropic_efficiency",
+                  k.compressor.efficiency);
   c.check("/compressor/bleed_fraction", k.compressor.bleedFraction, closed(0.0, 0.3));
 
   if (const auto* t = std::get_if<ExitTemperatureSetting>(&k.burner.setting))
@@ -137,7 +140,8 @@ void checkComponents(Checker& c, const Case& k) {
   c.check("/burner/pressure_loss_fraction", k.burner.pressureLossFraction, kLossFraction);
   c.check("/burner/combustion_efficiency", k.burner.combustionEfficiency, kUnitFraction);
 
-  checkEfficiency(c, "/turbine", k.turbine.efficiency);
+  checkEfficiency(c, "/turbine/isentropic_efficiency", "/turbine/polytropic_efficiency",
+                  k.turbine.efficiency);
   c.check("/turbine/mechanical_efficiency", k.turbine.mechanicalEfficiency, kUnitFraction);
   c.check("/turbine/power_offtake_W", k.turbine.powerOfftake, closed(0.0, 5.0e7), "W");
 

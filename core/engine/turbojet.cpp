@@ -43,7 +43,7 @@ Turbojet::Turbojet(const Case& inputs, bool withPaths)
 namespace {
 
 /// A station from a total state with the stream at rest (no area known there).
-Station stationAtRest(const std::string& id, const TotalState& t, double entropyReference) {
+Station stationAtRest(const char* id, const TotalState& t, double entropyReference) {
   Station s;
   s.id = id;
   s.gas = t.gas;
@@ -60,21 +60,48 @@ double entropyRate(const Station& in, const Station& out) {
   return out.massFlow * (out.entropy - in.entropy);
 }
 
-}  // namespace
+/// The evaluation itself, on a case and gas model that the caller keeps alive. The flight
+/// condition's states do not depend on the air mass flow: they are found once, for every at().
+class Assembly {
+ public:
+  Assembly(const Case& inputs, const thermo::GasModel& model, bool withPaths);
+  CycleResult at(double airMassFlow) const;
+  CycleResult design() const;
 
-CycleResult Turbojet::evaluateAt(double airMassFlow) const {
-  const thermo::GasModel& model = *gasModel_;
-  const auto air = model.air();
-  const FreeStream fs = freeStreamOf(inputs_.flight);
-  if (fs.temperature < air->minimumTemperature() || fs.temperature > air->maximumTemperature())
-    throw OutOfRange("/flight (ambient temperature, " + model.kind() + " gas data)", fs.temperature, "K",
-                     "[" + formatNumber(air->minimumTemperature()) + ", " +
-                         formatNumber(air->maximumTemperature()) + "] K");
-  const double entropyReference = air->entropy(fs.temperature, fs.pressure);
+ private:
+  const Case& inputs_;
+  const thermo::GasModel& model_;
+  bool withPaths_;
+  std::shared_ptr<const thermo::Gas> air_;
+  FreeStream fs_;
+  double entropyReference_;  ///< s(T0, p0) of the air [J/(kg K)]
+  flow::FlowState free_;     ///< the free stream, static state (T0, p0) at M0
+};
+
+Assembly::Assembly(const Case& inputs, const thermo::GasModel& model, bool withPaths)
+    : inputs_(inputs),
+      model_(model),
+      withPaths_(withPaths),
+      air_(model.air()),
+      fs_(freeStreamOf(inputs.flight)) {
+  const thermo::Gas& air = *air_;
+  if (fs_.temperature < air.minimumTemperature() || fs_.temperature > air.maximumTemperature())
+    throw OutOfRange(
+        "/flight (ambient temperature, " + model.kind() + " gas data)", fs_.temperature, "K",
+        "[" + formatNumber(air.minimumTemperature()) + ", " + formatNumber(air.maximumTemperature()) + "] K");
+  entropyReference_ = air.entropy(fs_.temperature, fs_.pressure);
+  free_ = flow::fromStatic(air, fs_.temperature, fs_.pressure, fs_.mach);
+}
+
+CycleResult Assembly::at(double airMassFlow) const {
+  const thermo::GasModel& model = model_;
+  const auto& air = air_;
+  const FreeStream& fs = fs_;
+  const double entropyReference = entropyReference_;
+  const flow::FlowState& free = free_;
   CycleResult result;
 
   // 0: free stream.
-  const flow::FlowState free = flow::fromStatic(*air, fs.temperature, fs.pressure, fs.mach);
   Station s0;
   s0.id = "0";
   s0.gas = air;
@@ -106,7 +133,7 @@ CycleResult Turbojet::evaluateAt(double airMassFlow) const {
 
   // 3: compressor exit, after the bleed.
   const components::Compressor::Result compression = components::Compressor(inputs_.compressor).exit(t2);
-  const Station s3 = stationAtRest("3", compression.exit, entropyReference);
+  Station s3 = stationAtRest("3", compression.exit, entropyReference);
 
   // 4: burner exit.
   const components::HeatAddition burner("burner", model, inputs_.burner.pressureLossFraction,
@@ -117,12 +144,12 @@ CycleResult Turbojet::evaluateAt(double airMassFlow) const {
                                      std::get<ExitTemperatureSetting>(inputs_.burner.setting).exitTemperature)
           : burner.withFuelAirRatio(compression.exit,
                                     std::get<FuelAirRatioSetting>(inputs_.burner.setting).fuelAirRatio);
-  const Station s4 = stationAtRest("4", combustion.exit, entropyReference);
+  Station s4 = stationAtRest("4", combustion.exit, entropyReference);
 
   // 5: turbine exit.
   const components::Turbine::Result expansion =
       components::Turbine(inputs_.turbine).exit(combustion.exit, compression.power);
-  const Station s5 = stationAtRest("5", expansion.exit, entropyReference);
+  Station s5 = stationAtRest("5", expansion.exit, entropyReference);
 
   // 7: nozzle entry, through the jet pipe and (when lit) the afterburner.
   TotalState t7 = components::Duct(inputs_.jetPipe.pressureLossFraction).exit(expansion.exit);
@@ -139,11 +166,11 @@ CycleResult Turbojet::evaluateAt(double airMassFlow) const {
   } else if (inputs_.afterburner.pressureLossFractionUnlit > 0.0) {
     t7 = components::Duct(inputs_.afterburner.pressureLossFractionUnlit).exit(t7);
   }
-  const Station s7 = stationAtRest("7", t7, entropyReference);
+  Station s7 = stationAtRest("7", t7, entropyReference);
 
   // 8, 9: nozzle throat and exit.
-  const components::Nozzle::Result jet = components::Nozzle(inputs_.nozzle).expand(t7, fs.pressure);
-  Station s8 = jet.throat, s9 = jet.exit;
+  components::Nozzle::Result jet = components::Nozzle(inputs_.nozzle).expand(t7, fs.pressure);
+  Station s8 = std::move(jet.throat), s9 = std::move(jet.exit);
   s8.entropy = s8.gas->entropy(s8.staticTemperature, s8.staticPressure) - entropyReference;
   s9.entropy = s9.gas->entropy(s9.staticTemperature, s9.staticPressure) - entropyReference;
 
@@ -183,59 +210,66 @@ CycleResult Turbojet::evaluateAt(double airMassFlow) const {
   // Component summaries: shaft power and entropy generated by each loss.
   const double burnerLossEntropy =
       s4.massFlow * s4.gas->gasConstant() * std::log(compression.exit.pressure / combustion.exit.pressure);
-  result.components = {
-      {"inlet", 0.0, std::nullopt, entropyRate(s0, s2)},
-      {"compressor", compression.power, compression.efficiency, s2.massFlow * (s3.entropy - s2.entropy)},
-      {"burner", 0.0, std::nullopt, burnerLossEntropy},
-      {"turbine", -expansion.power, expansion.efficiency, entropyRate(s4, s5)},
-      {"jet_pipe", 0.0, std::nullopt, entropyRate(s5, s6 ? *s6 : s7)},
-      {"nozzle", 0.0, jet.efficiency, entropyRate(s7, s9)},
-  };
+  auto& components = result.components;
+  components.reserve(7);
+  components.push_back({"inlet", 0.0, std::nullopt, entropyRate(s0, s2)});
+  components.push_back(
+      {"compressor", compression.power, compression.efficiency, s2.massFlow * (s3.entropy - s2.entropy)});
+  components.push_back({"burner", 0.0, std::nullopt, burnerLossEntropy});
+  components.push_back({"turbine", -expansion.power, expansion.efficiency, entropyRate(s4, s5)});
+  components.push_back({"jet_pipe", 0.0, std::nullopt, entropyRate(s5, s6 ? *s6 : s7)});
   if (s6) {
     const double abLoss =
         s7.massFlow * s7.gas->gasConstant() * std::log(s6->totalPressure / s7.totalPressure);
-    result.components.insert(result.components.end() - 1, {"afterburner", 0.0, std::nullopt, abLoss});
+    components.push_back({"afterburner", 0.0, std::nullopt, abLoss});
+  }
+  components.push_back({"nozzle", 0.0, jet.efficiency, entropyRate(s7, s9)});
+
+  // Process paths (charts only), while the stations are at hand.
+  if (withPaths_) {
+    auto& paths = result.paths;
+    paths.reserve(8);
+    paths.push_back(pressurePath("inlet", "0", "2", *air, s0.staticTemperature, s0.staticPressure,
+                                 s2.totalTemperature, s2.totalPressure, entropyReference));
+    paths.push_back(pressurePath("compressor", "2", "3", *air, s2.totalTemperature, s2.totalPressure,
+                                 s3.totalTemperature, s3.totalPressure, entropyReference));
+    paths.push_back(heatingPath("burner", "3", "4", *s3.gas, *s4.gas, s3.totalTemperature, s3.totalPressure,
+                                s4.totalTemperature, s4.totalPressure, entropyReference));
+    paths.push_back(pressurePath("turbine", "4", "5", *s4.gas, s4.totalTemperature, s4.totalPressure,
+                                 s5.totalTemperature, s5.totalPressure, entropyReference));
+    const Station& jetPipeEnd = s6 ? *s6 : s7;
+    paths.push_back(pressurePath("jet_pipe", "5", jetPipeEnd.id, *s5.gas, s5.totalTemperature,
+                                 s5.totalPressure, jetPipeEnd.totalTemperature, jetPipeEnd.totalPressure,
+                                 entropyReference));
+    if (s6)
+      paths.push_back(heatingPath("afterburner", "6", "7", *s6->gas, *s7.gas, s6->totalTemperature,
+                                  s6->totalPressure, s7.totalTemperature, s7.totalPressure,
+                                  entropyReference));
+    paths.push_back(pressurePath("nozzle", "7", "9", *s7.gas, s7.totalTemperature, s7.totalPressure,
+                                 s9.staticTemperature, s9.staticPressure, entropyReference));
+    paths.push_back(closurePath(*s9.gas, s9.staticTemperature, s9.staticPressure, fs.temperature, fs.pressure,
+                                entropyReference, *air));
   }
 
-  result.stations = {s0, s2, s3, s4, s5};
-  if (s6) result.stations.push_back(*s6);
-  result.stations.insert(result.stations.end(), {s7, s8, s9});
-  if (!withPaths_) return result;
-
-  // Process paths.
-  auto& paths = result.paths;
-  paths.push_back(pressurePath("inlet", "0", "2", *air, s0.staticTemperature, s0.staticPressure,
-                               s2.totalTemperature, s2.totalPressure, entropyReference));
-  paths.push_back(pressurePath("compressor", "2", "3", *air, s2.totalTemperature, s2.totalPressure,
-                               s3.totalTemperature, s3.totalPressure, entropyReference));
-  paths.push_back(heatingPath("burner", "3", "4", *s3.gas, *s4.gas, s3.totalTemperature, s3.totalPressure,
-                              s4.totalTemperature, s4.totalPressure, entropyReference));
-  paths.push_back(pressurePath("turbine", "4", "5", *s4.gas, s4.totalTemperature, s4.totalPressure,
-                               s5.totalTemperature, s5.totalPressure, entropyReference));
-  const Station& jetPipeEnd = s6 ? *s6 : s7;
-  paths.push_back(pressurePath("jet_pipe", "5", jetPipeEnd.id, *s5.gas, s5.totalTemperature, s5.totalPressure,
-                               jetPipeEnd.totalTemperature, jetPipeEnd.totalPressure, entropyReference));
-  if (s6)
-    paths.push_back(heatingPath("afterburner", "6", "7", *s6->gas, *s7.gas, s6->totalTemperature,
-                                s6->totalPressure, s7.totalTemperature, s7.totalPressure, entropyReference));
-  paths.push_back(pressurePath("nozzle", "7", "9", *s7.gas, s7.totalTemperature, s7.totalPressure,
-                               s9.staticTemperature, s9.staticPressure, entropyReference));
-  paths.push_back(closurePath(*s9.gas, s9.staticTemperature, s9.staticPressure, fs.temperature, fs.pressure,
-                              entropyReference, *air));
+  // The stations, in flow order, moved into the result (each holds a shared gas).
+  auto& stations = result.stations;
+  stations.reserve(9);
+  for (Station* s : {&s0, &s2, &s3, &s4, &s5}) stations.push_back(std::move(*s));
+  if (s6) stations.push_back(std::move(*s6));
+  for (Station* s : {&s7, &s8, &s9}) stations.push_back(std::move(*s));
   return result;
 }
 
-CycleResult Turbojet::evaluate() const {
-  if (const auto* flow = std::get_if<AirMassFlowTarget>(&inputs_.design.target))
-    return evaluateAt(flow->airMassFlow);
+CycleResult Assembly::design() const {
+  if (const auto* flow = std::get_if<AirMassFlowTarget>(&inputs_.design.target)) return at(flow->airMassFlow);
   const double required = std::get<NetThrustTarget>(inputs_.design.target).netThrust;
   // Net thrust rises with air mass flow (linearly but for the fixed power offtake): secant
   // iteration on W2 from a first guess at 10 kg/s, to 1e-12 relative in thrust.
   double w1 = 10.0;
-  CycleResult r1 = evaluateAt(w1);
+  CycleResult r1 = at(w1);
   double w2 = w1 * required / r1.performance.netThrust;
   for (int i = 0; i < 60; ++i) {
-    CycleResult r2 = evaluateAt(w2);
+    CycleResult r2 = at(w2);
     const double f1 = r1.performance.netThrust - required, f2 = r2.performance.netThrust - required;
     if (std::abs(f2) <= 1e-12 * required) return r2;
     const double next = w2 - f2 * (w2 - w1) / (f2 - f1);
@@ -244,6 +278,20 @@ CycleResult Turbojet::evaluate() const {
     w2 = (next > 0.0 && std::isfinite(next)) ? next : 0.5 * w1;
   }
   throw NotConverged("design.required_net_thrust_N: air mass flow", 60, 0.0);
+}
+
+}  // namespace
+
+CycleResult Turbojet::evaluate() const {
+  return Assembly(inputs_, *gasModel_, withPaths_).design();
+}
+
+CycleResult Turbojet::evaluateAt(double airMassFlow) const {
+  return Assembly(inputs_, *gasModel_, withPaths_).at(airMassFlow);
+}
+
+CycleResult evaluateTurbojet(const Case& inputs, const thermo::GasModel& gasModel, bool withPaths) {
+  return Assembly(inputs, gasModel, withPaths).design();
 }
 
 }  // namespace cw::engine

@@ -38,6 +38,11 @@ class Turbojet {
   std::shared_ptr<const thermo::GasModel> gasModel_;
 };
 
+/// The design point of a validated case, as Turbojet(inputs, withPaths).evaluate() gives it, on a gas
+/// model built for the case's gas model inputs, fuel and humidity (thermo::makeGasModel), without
+/// a copy of the case: for callers that evaluate a case and its variants on one gas model.
+CycleResult evaluateTurbojet(const Case& inputs, const thermo::GasModel& gasModel, bool withPaths = true);
+
 /// The free-stream static state and speed of the case's flight condition.
 struct FreeStream {
   double temperature = 0.0;  ///< T0 [K]

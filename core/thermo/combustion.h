@@ -19,9 +19,36 @@
 #include "thermo/composition.h"
 #include "thermo/fuel.h"
 
+#include <cstddef>
 #include <string>
 
 namespace cw::thermo {
+
+/// The element balance of one fuel burning in one air: the air's atoms per kilogram b_e,air and
+/// f_st, worked out once, so that the products at each fuel-air ratio need no look-up by name.
+class CompleteCombustion {
+ public:
+  /// Throws cw::InvalidInput when the air holds an element other than C, H, O, N, Ar or no free
+  /// oxygen.
+  CompleteCombustion(const Composition& air, const HydrocarbonFuel& fuel);
+
+  /// Stoichiometric fuel-air ratio (kg fuel per kg air). [-]
+  double stoichiometricFuelAirRatio() const { return stoichiometric_; }
+
+  /// Products of burning fuelAirRatio kg of fuel per kg of air completely (CO2, H2O, N2, O2, Ar).
+  /// Throws cw::InvalidInput naming `where` unless 0 <= f <= f_st.
+  Composition products(double fuelAirRatio, const std::string& where = "fuel-air ratio") const;
+
+ private:
+  const SpeciesTable* table_;
+  double fuelMolarMass_;                                  ///< [kg/mol]
+  double hydrogenCarbonRatio_;                            ///< [-]
+  double carbon_, hydrogen_, oxygen_, nitrogen_, argon_;  ///< b_e,air [mol/kg air]
+  double stoichiometric_;                                 ///< [-]
+  /// The products' table indices; kAbsent when the table lacks the species (products() throws).
+  static constexpr std::size_t kAbsent = static_cast<std::size_t>(-1);
+  std::size_t co2_, h2o_, n2_, o2_, ar_;
+};
 
 /// Stoichiometric fuel-air ratio (kg fuel per kg air) of the fuel in this air. [-]
 double stoichiometricFuelAirRatio(const Composition& air, const HydrocarbonFuel& fuel);

@@ -44,6 +44,22 @@ Composition Composition::fromMoles(const Amounts& moles, const SpeciesTable& tab
   return Composition(table, std::move(dense));
 }
 
+Composition Composition::fromDenseMoles(const SpeciesTable& table, std::vector<double> moles,
+                                        const char* where) {
+  if (moles.size() != table.size())
+    throw InvalidInput(std::string(where) + ": number of amounts", double(moles.size()), "",
+                       "[" + std::to_string(table.size()) + ", " + std::to_string(table.size()) + "]");
+  double total = 0.0;
+  for (std::size_t i = 0; i < moles.size(); ++i) {
+    if (!std::isfinite(moles[i]) || moles[i] < 0.0)
+      throw InvalidInput(std::string(where) + ": amount of " + table[i].name(), moles[i], "", "[0, inf)");
+    total += moles[i];
+  }
+  if (!(total > 0.0) || !std::isfinite(total))
+    throw InvalidInput(std::string(where) + ": total amount", total, "", "(0, inf)");
+  return Composition(table, std::move(moles));
+}
+
 Composition Composition::fromMasses(const Amounts& masses, const SpeciesTable& table,
                                     const std::string& where) {
   std::vector<double> dense = denseAmounts(masses, table, where);

@@ -29,6 +29,10 @@ class Composition {
   /// From masses in any unit (kg, or mass fractions); normalised. Throws as fromMoles().
   static Composition fromMasses(const Amounts& masses, const SpeciesTable& table = SpeciesTable::standard(),
                                 const std::string& where = "composition");
+  /// From amounts of substance by table index (size() == table.size()); normalised. Throws as
+  /// fromMoles(). For solvers that build many compositions over one table: no look-up by name.
+  static Composition fromDenseMoles(const SpeciesTable& table, std::vector<double> moles,
+                                    const char* where = "composition");
   /// One pure species.
   static Composition pure(const std::string& name, const SpeciesTable& table = SpeciesTable::standard());
 

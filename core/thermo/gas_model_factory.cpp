@@ -14,7 +14,18 @@ std::shared_ptr<const GasModel> makeGasModel(const engine::GasModelInputs& input
                                              const engine::FuelInputs& fuel, double specificHumidity) {
   auto hydrocarbon = [&] { return HydrocarbonFuel(fuel.hydrogenCarbonRatio, fuel.lowerHeatingValue); };
   auto stoichiometricRatio = [&] {
-    return stoichiometricFuelAirRatio(humidAir(specificHumidity), hydrocarbon());
+    // The element balance costs more than a two-gamma design point: keep the last one per thread
+    // (keyed on every input hydrocarbon() checks, so invalid fuel data still throw).
+    thread_local double lastHydrogenCarbonRatio = -1.0, lastHeatingValue = -1.0, lastHumidity = -1.0;
+    thread_local double lastRatio = 0.0;
+    if (fuel.hydrogenCarbonRatio != lastHydrogenCarbonRatio || fuel.lowerHeatingValue != lastHeatingValue ||
+        specificHumidity != lastHumidity) {
+      lastRatio = stoichiometricFuelAirRatio(humidAir(specificHumidity), hydrocarbon());
+      lastHydrogenCarbonRatio = fuel.hydrogenCarbonRatio;
+      lastHeatingValue = fuel.lowerHeatingValue;
+      lastHumidity = specificHumidity;
+    }
+    return lastRatio;
   };
   // The calorically perfect models measure enthalpy from 0 K (h = cp T), the convention of
   // parametric cycle analysis, so that the burner balance is Mattingly's eq. 7.9.

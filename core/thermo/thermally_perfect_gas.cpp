@@ -4,7 +4,6 @@
 
 #include <algorithm>
 #include <cmath>
-#include <set>
 #include <utility>
 
 namespace cw::thermo {
@@ -35,22 +34,35 @@ ThermallyPerfectGas::ThermallyPerfectGas(Composition composition, std::string de
   if (!(maximumTemperature_ > minimumTemperature_))
     throw InvalidInput(description_,
                        "the species' temperature ranges do not overlap (" + composition_.summary() + ")");
-  std::set<double> uppers{maximumTemperature_};
-  for (std::size_t i = 0; i < table.size(); ++i)
-    if (x[i] > 0.0 && table[i].midTemperature() > minimumTemperature_ &&
-        table[i].midTemperature() < maximumTemperature_)
-      uppers.insert(table[i].midTemperature());
+  // Interval uppers: the present species' T_mid inside the range, then the range's top, ascending.
+  std::vector<double> uppers{maximumTemperature_};
+  for (std::size_t i = 0; i < table.size(); ++i) {
+    const double mid = table[i].midTemperature();
+    if (x[i] > 0.0 && mid > minimumTemperature_ && mid < maximumTemperature_ &&
+        std::find(uppers.begin(), uppers.end(), mid) == uppers.end())
+      uppers.push_back(mid);
+  }
+  std::sort(uppers.begin(), uppers.end());
 
   // c_k = sum_i y_i R_i a_{i,k};  c_7 = sum_i y_i R_i (a_{i,7} - ln x_i)   (see the header).
+  struct Present {
+    const SpeciesThermo* species;
+    double weight;       ///< y_i R_i [J/(kg K)]
+    double logFraction;  ///< ln x_i [-]
+  };
+  std::vector<Present> present;
+  present.reserve(table.size());
+  for (std::size_t i = 0; i < table.size(); ++i)
+    if (x[i] > 0.0)
+      present.push_back({&table[i], y[i] * kMolarGasConstant / table[i].molarMass(), std::log(x[i])});
+  intervals_.reserve(uppers.size());
   double lower = minimumTemperature_;
   for (double upper : uppers) {
     std::array<double, 7> c{};
-    for (std::size_t i = 0; i < table.size(); ++i) {
-      if (x[i] <= 0.0) continue;
-      const double weight = y[i] * kMolarGasConstant / table[i].molarMass();  // y_i R_i
-      const auto& a = table[i].rangeAt(0.5 * (lower + upper)).coefficients();
-      for (int k = 0; k < 6; ++k) c[k] += weight * a[k];
-      c[6] += weight * (a[6] - std::log(x[i]));
+    for (const Present& p : present) {
+      const auto& a = p.species->rangeAt(0.5 * (lower + upper)).coefficients();
+      for (int k = 0; k < 6; ++k) c[k] += p.weight * a[k];
+      c[6] += p.weight * (a[6] - p.logFraction);
     }
     intervals_.push_back({upper,
                           {c[0], c[1], c[2], c[3], c[4]},
@@ -68,14 +80,26 @@ ThermallyPerfectGas::ThermallyPerfectGas(Composition composition, std::string de
     intervals_[i].s[0] += entropyOf(intervals_[i - 1], t) - entropyOf(intervals_[i], t);
   }
 
-  // Table of h and s° that brackets the inverses.
+  // Table of h and s° that brackets the inverses. Every gas over the same range has the same node
+  // temperatures: their logarithms are kept per thread for the next gas (a burner makes one per point).
   nodeStep_ = (maximumTemperature_ - minimumTemperature_) / kNodes;
+  struct NodeLogarithms {
+    double minimum = 0.0, maximum = 0.0;
+    std::array<double, kNodes + 1> values{};
+  };
+  thread_local NodeLogarithms logs;
+  const bool sameNodes = logs.minimum == minimumTemperature_ && logs.maximum == maximumTemperature_;
+  std::size_t j = 0;  // intervalAt(t), stepped along with the ascending nodes
   for (int k = 0; k <= kNodes; ++k) {
     const double t = (k == kNodes) ? maximumTemperature_ : minimumTemperature_ + k * nodeStep_;
-    const Interval& in = intervalAt(t);
+    if (!sameNodes) logs.values[k] = std::log(t);
+    while (t > intervals_[j].upper && j + 1 < intervals_.size()) ++j;
+    const Interval& in = intervals_[j];
     enthalpyNodes_[k] = enthalpyOf(in, t);
-    entropyNodes_[k] = entropyOf(in, t);
+    entropyNodes_[k] = entropyOf(in, t, logs.values[k]);
   }
+  logs.minimum = minimumTemperature_;
+  logs.maximum = maximumTemperature_;
 }
 
 // cp = c1 + c2 T + c3 T^2 + c4 T^3 + c5 T^4.
@@ -91,9 +115,9 @@ double ThermallyPerfectGas::enthalpyOf(const Interval& in, double t) {
 }
 
 // s° = c1 ln T + c2 T + c3 T^2/2 + c4 T^3/3 + c5 T^4/4 + c7.
-double ThermallyPerfectGas::entropyOf(const Interval& in, double t) {
+double ThermallyPerfectGas::entropyOf(const Interval& in, double t, double logT) {
   const auto& c = in.s;
-  return c[0] + c[1] * std::log(t) + t * (c[2] + t * (c[3] + t * (c[4] + t * c[5])));
+  return c[0] + c[1] * logT + t * (c[2] + t * (c[3] + t * (c[4] + t * c[5])));
 }
 
 double ThermallyPerfectGas::cp(double temperature) const {
@@ -137,8 +161,10 @@ double ThermallyPerfectGas::solve(Value value, Slope slope, double target, doubl
     if (residual == 0.0) return t;
     const double derivative = slope(in, t);
     double next = t - residual / derivative;
+    // A converged Newton step may land on a bracket end (t itself just became one): accept it
+    // rather than fall back to bisection, which would stop at the tolerance, short of rounding.
+    if (derivative > 0.0 && next >= lo && next <= hi && std::abs(next - t) <= kTolerance * t) return next;
     const bool inside = derivative > 0.0 && next > lo && next < hi;
-    if (inside && std::abs(next - t) <= kTolerance * t) return next;  // converged Newton step
     if (!inside || std::abs(next - t) > 0.5 * previousStep) next = 0.5 * (lo + hi);
     const double step = std::abs(next - t);
     if (step <= kTolerance * t) return next;

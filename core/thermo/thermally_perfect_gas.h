@@ -29,6 +29,7 @@
 #include "thermo/gas.h"
 
 #include <array>
+#include <cmath>
 #include <string>
 #include <vector>
 
@@ -80,7 +81,8 @@ class ThermallyPerfectGas : public Gas {
   }
   static double cpOf(const Interval& in, double t);
   static double enthalpyOf(const Interval& in, double t);
-  static double entropyOf(const Interval& in, double t);
+  static double entropyOf(const Interval& in, double t) { return entropyOf(in, t, std::log(t)); }
+  static double entropyOf(const Interval& in, double t, double logT);
   void requireTemperature(double temperature) const {
     if (!(temperature >= minimumTemperature_ && temperature <= maximumTemperature_))
       checkTemperature(temperature, "temperature");  // throws cw::OutOfRange (also for NaN)

@@ -1,7 +1,6 @@
 #include "thermo/thermally_perfect_model.h"
 
 #include "common/error.h"
-#include "thermo/combustion.h"
 #include "thermo/mixture.h"
 
 #include <utility>
@@ -12,11 +11,12 @@ ThermallyPerfectModel::ThermallyPerfectModel(HydrocarbonFuel fuel, double specif
                                              double fuelTemperature)
     : fuel_(std::move(fuel)),
       airComposition_(humidAir(specificHumidity)),
+      combustion_(airComposition_, fuel_),
       air_(std::make_shared<ThermallyPerfectGas>(airComposition_, "air (thermally perfect)")),
       fuelEnthalpy_(fuel_.enthalpy(fuelTemperature)),
-      stoichiometric_(thermo::stoichiometricFuelAirRatio(airComposition_, fuel_)) {
-  stoichiometricProducts_ = std::make_shared<ThermallyPerfectGas>(
-      completeCombustionProducts(airComposition_, fuel_, stoichiometric_), "stoichiometric products");
+      stoichiometric_(combustion_.stoichiometricFuelAirRatio()) {
+  stoichiometricProducts_ =
+      std::make_shared<ThermallyPerfectGas>(combustion_.products(stoichiometric_), "stoichiometric products");
 }
 
 double ThermallyPerfectModel::productEnthalpyPerUnitAir(double temperature, double fuelAirRatio) const {
@@ -27,11 +27,25 @@ double ThermallyPerfectModel::productEnthalpyPerUnitAir(double temperature, doub
          products * stoichiometricProducts_->enthalpy(temperature);
 }
 
+namespace {
+
+/// Products at one fuel-air ratio, described as "products, f = <f>": the text is formatted when
+/// asked for (messages, exports), not each time a burner makes the gas.
+class ProductsGas final : public ThermallyPerfectGas {
+ public:
+  ProductsGas(Composition composition, double fuelAirRatio)
+      : ThermallyPerfectGas(std::move(composition), "products"), fuelAirRatio_(fuelAirRatio) {}
+  std::string description() const override { return "products, f = " + formatNumber(fuelAirRatio_); }
+
+ private:
+  double fuelAirRatio_;
+};
+
+}  // namespace
+
 std::shared_ptr<const Gas> ThermallyPerfectModel::products(double fuelAirRatio) const {
   if (fuelAirRatio == 0.0) return air_;
-  return std::make_shared<ThermallyPerfectGas>(
-      completeCombustionProducts(airComposition_, fuel_, fuelAirRatio),
-      "products, f = " + formatNumber(fuelAirRatio));
+  return std::make_shared<ProductsGas>(combustion_.products(fuelAirRatio), fuelAirRatio);
 }
 
 }  // namespace cw::thermo

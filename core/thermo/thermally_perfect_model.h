@@ -4,6 +4,7 @@
 // absolute enthalpy scale, so the burner balance of thermo/gas_model.h holds with
 // h_fuel = h_f,fuel + cp_fuel (T_fuel - 298.15 K) (thermo/fuel.h).
 
+#include "thermo/combustion.h"
 #include "thermo/fuel.h"
 #include "thermo/gas_model.h"
 #include "thermo/thermally_perfect_gas.h"
@@ -35,6 +36,7 @@ class ThermallyPerfectModel : public GasModel {
  private:
   HydrocarbonFuel fuel_;
   Composition airComposition_;
+  CompleteCombustion combustion_;
   std::shared_ptr<const ThermallyPerfectGas> air_;
   std::shared_ptr<const ThermallyPerfectGas> stoichiometricProducts_;
   double fuelEnthalpy_;

@@ -132,13 +132,15 @@ class TestCliSweep : public QObject {
   }
 
   // Ctrl+C: the binary stops, writes the points it ran and exits 130. The signal is sent once
-  // the first progress line shows the study is running (no timing involved).
+  // the first progress line shows the study is running (no timing involved); one thread keeps
+  // the study long enough (about 2 s) for the stop to land before its end.
   void interruptStopsTheStudyAndWritesWhatRan() {
     QProcess cli;
-    cli.start(
-        CYCLEWRIGHT_CLI_PATH,
-        {"sweep", QString::fromStdString(kDemo), "--vary", "compressor.pressure_ratio=2:40:500", "--vary",
-         "burner.exit_temperature_K=1200:1800:500", "--progress", "--output-columns", "net_thrust_N"});
+    cli.start(CYCLEWRIGHT_CLI_PATH,
+              {"sweep", QString::fromStdString(kDemo), "--vary", "compressor.pressure_ratio=2:40:500",
+               "--vary", "burner.exit_temperature_K=1200:1800:500", "--progress", "--threads", "1",
+               "--output-columns", "net_thrust_N"});
+    cli.setReadChannel(QProcess::StandardError);  // waitForReadyRead then wakes for stderr
     QVERIFY(cli.waitForStarted(10000));
     QByteArray err;
     while (!err.contains(" of 250000 points") && cli.state() == QProcess::Running) {

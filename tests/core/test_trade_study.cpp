@@ -481,17 +481,25 @@ class TestTradeStudy : public QObject {
   }
 
   void threadPoolPassesTheFirstErrorOn() {
-    cw::ThreadPool pool(2);
+    // One worker: after the failing index no new index starts.
+    cw::ThreadPool single(1);
     std::atomic<int> ran{0};
     const QString error = errorOf([&] {
-      pool.parallelFor(1000, [&](std::size_t i) {
+      single.parallelFor(1000, [&](std::size_t i) {
         ++ran;
         if (i == 10) throw cw::NoSolution("point 10", "test");
       });
     });
     QCOMPARE(error, QString("point 10: no solution: test"));
-    QVERIFY(ran.load() < 1000);
-    // Still usable afterwards.
+    QCOMPARE(ran.load(), 11);
+    // Several workers: the first error is the one passed on, and the pool stays usable.
+    cw::ThreadPool pool(2);
+    QCOMPARE(errorOf([&] {
+               pool.parallelFor(1000, [&](std::size_t i) {
+                 if (i == 10) throw cw::NoSolution("point 10", "test");
+               });
+             }),
+             QString("point 10: no solution: test"));
     std::atomic<int> count{0};
     QCOMPARE(pool.parallelFor(50, [&](std::size_t) { ++count; }), std::size_t(50));
     QCOMPARE(count.load(), 50);
