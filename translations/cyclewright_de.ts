@@ -1386,6 +1386,54 @@ p = %7   v = %8</translation>
         <source>Stations and performance</source>
         <translation>Stationen und Leistung</translation>
     </message>
+    <message>
+        <source>Copy Trade &amp;Study Table</source>
+        <translation>Tabelle der &amp;Parameterstudie kopieren</translation>
+    </message>
+    <message>
+        <source>Trade Study Chart as %1</source>
+        <translation>Parameterstudien-Diagramm als %1</translation>
+    </message>
+    <message>
+        <source>Trade Study as CSV…</source>
+        <translation>Parameterstudie als CSV…</translation>
+    </message>
+    <message>
+        <source>Trade Study as JSON…</source>
+        <translation>Parameterstudie als JSON…</translation>
+    </message>
+    <message>
+        <source>Trade study</source>
+        <translation>Parameterstudie</translation>
+    </message>
+    <message>
+        <source>Trade &amp;Study</source>
+        <translation>&amp;Parameterstudie</translation>
+    </message>
+    <message>
+        <source>There is no trade study to export yet: run one first.</source>
+        <translation>Es gibt noch keine Parameterstudie zum Exportieren: zuerst eine rechnen.</translation>
+    </message>
+    <message>
+        <source>Export Trade Study</source>
+        <translation>Parameterstudie exportieren</translation>
+    </message>
+    <message>
+        <source>Exported %1 (the units are in the column names)</source>
+        <translation>%1 exportiert (die Einheiten stehen in den Spaltennamen)</translation>
+    </message>
+    <message>
+        <source>Cannot write %1: %2</source>
+        <translation>%1 kann nicht geschrieben werden: %2</translation>
+    </message>
+    <message>
+        <source>There is no trade study to copy yet: run one first.</source>
+        <translation>Es gibt noch keine Parameterstudie zum Kopieren: zuerst eine rechnen.</translation>
+    </message>
+    <message>
+        <source>Trade-study table copied as tab-separated text</source>
+        <translation>Tabelle der Parameterstudie als tabulatorgetrennter Text kopiert</translation>
+    </message>
 </context>
 <context>
     <name>cw::gui::PerformanceModel</name>
@@ -1550,6 +1598,421 @@ p = %7   v = %8</translation>
     <message>
         <source>Stations, difference (with losses − ideal)</source>
         <translation>Stationen, Differenz (mit Verlusten − ideal)</translation>
+    </message>
+</context>
+<context>
+    <name>cw::gui::StudyAxisEditor</name>
+    <message>
+        <source>from</source>
+        <translation>von</translation>
+    </message>
+    <message>
+        <source>to</source>
+        <translation>bis</translation>
+    </message>
+    <message>
+        <source>values</source>
+        <translation>Werte</translation>
+    </message>
+    <message>
+        <source>Number of evenly spaced values from start to stop, both included (1 to %1)</source>
+        <translation>Anzahl gleichmäßig verteilter Werte vom Anfang bis zum Ende, beide eingeschlossen (1 bis %1)</translation>
+    </message>
+    <message>
+        <source>Valid range: %1</source>
+        <translation>Gültiger Bereich: %1</translation>
+    </message>
+    <message>
+        <source>First value [%1]. %2</source>
+        <translation>Erster Wert [%1]. %2</translation>
+    </message>
+    <message>
+        <source>Last value [%1]. %2</source>
+        <translation>Letzter Wert [%1]. %2</translation>
+    </message>
+    <message>
+        <source>Start: “%1” is not a number.</source>
+        <translation>Anfang: „%1“ ist keine Zahl.</translation>
+    </message>
+    <message>
+        <source>Stop: “%1” is not a number.</source>
+        <translation>Ende: „%1“ ist keine Zahl.</translation>
+    </message>
+    <message>
+        <source>The case has no numeric input to vary here.</source>
+        <translation>Der Fall hat hier keine Zahleneingabe, die variiert werden kann.</translation>
+    </message>
+    <message>
+        <source>Start = %1 is outside the valid range %2 of %3.</source>
+        <translation>Anfang = %1 liegt außerhalb des gültigen Bereichs %2 von %3.</translation>
+    </message>
+    <message>
+        <source>Stop = %1 is outside the valid range %2 of %3.</source>
+        <translation>Ende = %1 liegt außerhalb des gültigen Bereichs %2 von %3.</translation>
+    </message>
+    <message>
+        <source>One value takes the same start and stop; give 2 values or more for a range.</source>
+        <translation>Ein einzelner Wert braucht gleichen Anfang und gleiches Ende; für einen Bereich 2 oder mehr Werte angeben.</translation>
+    </message>
+    <message>
+        <source>Start and stop are the same: give a different stop, or 1 value.</source>
+        <translation>Anfang und Ende sind gleich: ein anderes Ende oder 1 Wert angeben.</translation>
+    </message>
+</context>
+<context>
+    <name>cw::gui::StudyChangeEditor</name>
+    <message>
+        <source>The value of this input in the second study [%1]. %2</source>
+        <translation>Der Wert dieser Eingabe in der zweiten Studie [%1]. %2</translation>
+    </message>
+    <message>
+        <source>Valid range: %1</source>
+        <translation>Gültiger Bereich: %1</translation>
+    </message>
+    <message>
+        <source>Value: “%1” is not a number.</source>
+        <translation>Wert: „%1“ ist keine Zahl.</translation>
+    </message>
+    <message>
+        <source>The case has no numeric input to set.</source>
+        <translation>Der Fall hat keine Zahleneingabe, die gesetzt werden kann.</translation>
+    </message>
+    <message>
+        <source>%1 = %2 is outside the valid range %3.</source>
+        <translation>%1 = %2 liegt außerhalb des gültigen Bereichs %3.</translation>
+    </message>
+</context>
+<context>
+    <name>cw::gui::StudyChart</name>
+    <message>
+        <source>Ideal twin, no losses (dashed)</source>
+        <translation>Idealer Zwilling, ohne Verluste (gestrichelt)</translation>
+    </message>
+    <message>
+        <source>With %1 (dashed)</source>
+        <translation>Mit %1 (gestrichelt)</translation>
+    </message>
+    <message>
+        <source>Carpet: specific thrust against TSFC</source>
+        <translation>Teppichdiagramm: spezifischer Schub über spez. Verbrauch</translation>
+    </message>
+    <message>
+        <source>%1 against %2</source>
+        <translation>%1 über %2</translation>
+    </message>
+    <message>
+        <source>TSFC</source>
+        <translation>Spez. Verbrauch</translation>
+    </message>
+    <message>
+        <source>Specific thrust F_s</source>
+        <translation>Spezifischer Schub F_s</translation>
+    </message>
+    <message>
+        <source>Stale: the case has changed since this study ran; press Run to redo it</source>
+        <translation>Veraltet: der Fall wurde seit dieser Studie geändert; zum Neurechnen Starten drücken</translation>
+    </message>
+    <message>
+        <source>Design point</source>
+        <translation>Auslegungspunkt</translation>
+    </message>
+    <message>
+        <source>Design point (the case as it is)</source>
+        <translation>Auslegungspunkt (der Fall, wie er ist)</translation>
+    </message>
+    <message>
+        <source>The ideal twin has no figure of its own for this output.</source>
+        <translation>Der ideale Zwilling hat für diese Größe keinen eigenen Wert.</translation>
+    </message>
+    <message>
+        <source>Press Run to compute the comparison.</source>
+        <translation>Zum Berechnen des Vergleichs Starten drücken.</translation>
+    </message>
+    <message>
+        <source>Cycle with losses</source>
+        <translation>Kreisprozess mit Verlusten</translation>
+    </message>
+    <message>
+        <source>Constant %1</source>
+        <translation>Konstant: %1</translation>
+    </message>
+    <message>
+        <source>No study yet: choose the inputs to vary and press Run.</source>
+        <translation>Noch keine Studie: die zu variierenden Eingaben wählen und Starten drücken.</translation>
+    </message>
+    <message>
+        <source>No point of this study has this figure.</source>
+        <translation>Kein Punkt dieser Studie hat diese Größe.</translation>
+    </message>
+</context>
+<context>
+    <name>cw::gui::StudyInputs</name>
+    <message>
+        <source>Pressure recovery pt2/pt0</source>
+        <translation>Druckrückgewinn pt2/pt0</translation>
+    </message>
+    <message>
+        <source>Ram efficiency</source>
+        <translation>Stauwirkungsgrad</translation>
+    </message>
+    <message>
+        <source>Isentropic efficiency</source>
+        <translation>Isentroper Wirkungsgrad</translation>
+    </message>
+    <message>
+        <source>Polytropic efficiency</source>
+        <translation>Polytroper Wirkungsgrad</translation>
+    </message>
+    <message>
+        <source>Velocity coefficient</source>
+        <translation>Geschwindigkeitsbeiwert</translation>
+    </message>
+    <message>
+        <source>Nozzle efficiency</source>
+        <translation>Düsenwirkungsgrad</translation>
+    </message>
+</context>
+<context>
+    <name>cw::gui::StudyNames</name>
+    <message>
+        <source>Net thrust</source>
+        <translation>Nettoschub</translation>
+    </message>
+    <message>
+        <source>Gross thrust</source>
+        <translation>Bruttoschub</translation>
+    </message>
+    <message>
+        <source>Ram drag</source>
+        <translation>Einlaufimpulswiderstand</translation>
+    </message>
+    <message>
+        <source>Specific thrust</source>
+        <translation>Spezifischer Schub</translation>
+    </message>
+    <message>
+        <source>TSFC</source>
+        <translation>Spez. Verbrauch</translation>
+    </message>
+    <message>
+        <source>Fuel flow</source>
+        <translation>Kraftstoffmassenstrom</translation>
+    </message>
+    <message>
+        <source>Fuel-air ratio</source>
+        <translation>Kraftstoff-Luft-Verhältnis</translation>
+    </message>
+    <message>
+        <source>Thermal efficiency</source>
+        <translation>Thermischer Wirkungsgrad</translation>
+    </message>
+    <message>
+        <source>Propulsive efficiency</source>
+        <translation>Vortriebswirkungsgrad</translation>
+    </message>
+    <message>
+        <source>Overall efficiency</source>
+        <translation>Gesamtwirkungsgrad</translation>
+    </message>
+    <message>
+        <source>Jet velocity</source>
+        <translation>Strahlgeschwindigkeit</translation>
+    </message>
+    <message>
+        <source>Nozzle choked (1 yes, 0 no)</source>
+        <translation>Schubdüse kritisch (1 ja, 0 nein)</translation>
+    </message>
+    <message>
+        <source>Air mass flow</source>
+        <translation>Luftmassenstrom</translation>
+    </message>
+    <message>
+        <source>Burner exit temperature</source>
+        <translation>Brennkammeraustrittstemperatur</translation>
+    </message>
+    <message>
+        <source>Inlet capture area</source>
+        <translation>Einlauf-Fangfläche</translation>
+    </message>
+    <message>
+        <source>Engine-face diameter</source>
+        <translation>Durchmesser am Verdichtereintritt</translation>
+    </message>
+    <message>
+        <source>Nozzle throat area</source>
+        <translation>Halsfläche der Schubdüse</translation>
+    </message>
+    <message>
+        <source>Nozzle exit area</source>
+        <translation>Austrittsfläche der Schubdüse</translation>
+    </message>
+    <message>
+        <source>TSFC change without %1</source>
+        <translation>Änderung des spez. Verbrauchs ohne %1</translation>
+    </message>
+    <message>
+        <source>Specific thrust gained without %1</source>
+        <translation>Gewinn an spezifischem Schub ohne %1</translation>
+    </message>
+    <message>
+        <source>Ideal twin: %1</source>
+        <translation>Idealer Zwilling: %1</translation>
+    </message>
+    <message>
+        <source>Cycle</source>
+        <translation>Kreisprozess</translation>
+    </message>
+    <message>
+        <source>Invalid input</source>
+        <translation>Ungültige Eingabe</translation>
+    </message>
+    <message>
+        <source>No cycle</source>
+        <translation>Kein Kreisprozess</translation>
+    </message>
+    <message>
+        <source>Not converged</source>
+        <translation>Nicht konvergiert</translation>
+    </message>
+    <message>
+        <source>Beyond the gas data</source>
+        <translation>Außerhalb der Gasdaten</translation>
+    </message>
+    <message>
+        <source>Not run</source>
+        <translation>Nicht gerechnet</translation>
+    </message>
+</context>
+<context>
+    <name>cw::gui::StudyTableModel</name>
+    <message>
+        <source>Status</source>
+        <translation>Status</translation>
+    </message>
+    <message>
+        <source>Why there is no cycle</source>
+        <translation>Warum es keinen Kreisprozess gibt</translation>
+    </message>
+</context>
+<context>
+    <name>cw::gui::TradeStudyPanel</name>
+    <message>
+        <source>Vary:</source>
+        <translation>Variieren:</translation>
+    </message>
+    <message>
+        <source>And a second input (a carpet):</source>
+        <translation>Und eine zweite Eingabe (ein Teppichdiagramm):</translation>
+    </message>
+    <message>
+        <source>Vary two inputs: every value of the first with every value of the second</source>
+        <translation>Zwei Eingaben variieren: jeder Wert der ersten mit jedem Wert der zweiten</translation>
+    </message>
+    <message>
+        <source>Loss audit at every point</source>
+        <translation>Verlustanalyse in jedem Punkt</translation>
+    </message>
+    <message>
+        <source>Add each point&apos;s one-at-a-time loss audit (its outputs can then be plotted); slower</source>
+        <translation>Die Einzelverlustanalyse jedes Punktes hinzufügen (ihre Größen lassen sich dann auftragen); langsamer</translation>
+    </message>
+    <message>
+        <source>Compare with:</source>
+        <translation>Vergleichen mit:</translation>
+    </message>
+    <message>
+        <source>Nothing</source>
+        <translation>Nichts</translation>
+    </message>
+    <message>
+        <source>Ideal twin (the same points without losses)</source>
+        <translation>Idealer Zwilling (dieselben Punkte ohne Verluste)</translation>
+    </message>
+    <message>
+        <source>One input set differently:</source>
+        <translation>Eine Eingabe anders gesetzt:</translation>
+    </message>
+    <message>
+        <source>&amp;Run</source>
+        <translation>&amp;Starten</translation>
+    </message>
+    <message>
+        <source>Run the study in the background (a running one is cancelled)</source>
+        <translation>Die Studie im Hintergrund rechnen (eine laufende wird abgebrochen)</translation>
+    </message>
+    <message>
+        <source>Cancel</source>
+        <translation>Abbrechen</translation>
+    </message>
+    <message>
+        <source>Stop the running study; the points run so far are shown</source>
+        <translation>Die laufende Studie anhalten; die bis dahin gerechneten Punkte werden gezeigt</translation>
+    </message>
+    <message>
+        <source>Plot:</source>
+        <translation>Auftragen:</translation>
+    </message>
+    <message>
+        <source>The second input must differ from the first.</source>
+        <translation>Die zweite Eingabe muss sich von der ersten unterscheiden.</translation>
+    </message>
+    <message>
+        <source>%1 × %2 = %3 points is more than a study may have (%4).</source>
+        <translation>%1 × %2 = %3 Punkte sind mehr, als eine Studie haben darf (%4).</translation>
+    </message>
+    <message>
+        <source>This input is varied by the study; choose another one to set differently.</source>
+        <translation>Diese Eingabe wird von der Studie variiert; eine andere zum abweichenden Setzen wählen.</translation>
+    </message>
+    <message>
+        <source>Cannot run:
+%1</source>
+        <translation>Kann nicht rechnen:
+%1</translation>
+    </message>
+    <message>
+        <source>The comparison cannot run: %1</source>
+        <translation>Der Vergleich kann nicht gerechnet werden: %1</translation>
+    </message>
+    <message>
+        <source>Running…</source>
+        <translation>Läuft…</translation>
+    </message>
+    <message>
+        <source>The study cannot run: %1</source>
+        <translation>Die Studie kann nicht gerechnet werden: %1</translation>
+    </message>
+    <message>
+        <source>Carpet: specific thrust against TSFC</source>
+        <translation>Teppichdiagramm: spezifischer Schub über spez. Verbrauch</translation>
+    </message>
+    <message>
+        <source>Choose one input to vary (a sweep) or two (a carpet) and press Run.</source>
+        <translation>Eine Eingabe zum Variieren wählen (eine Variation) oder zwei (ein Teppichdiagramm) und Starten drücken.</translation>
+    </message>
+    <message>
+        <source>Stopped after %1 of %2 points.</source>
+        <translation>Angehalten nach %1 von %2 Punkten.</translation>
+    </message>
+    <message>
+        <source>Every point run has a cycle (%1 points).</source>
+        <translation>Jeder gerechnete Punkt hat einen Kreisprozess (%1 Punkte).</translation>
+    </message>
+    <message>
+        <source>%1 of %2 points have no cycle: they leave gaps in the lines; the table gives each reason.</source>
+        <translation>%1 von %2 Punkten haben keinen Kreisprozess: sie lassen Lücken in den Linien; die Tabelle nennt jeweils den Grund.</translation>
+    </message>
+    <message>
+        <source>Comparison: %1 of %2 points have no cycle.</source>
+        <translation>Vergleich: %1 von %2 Punkten haben keinen Kreisprozess.</translation>
+    </message>
+    <message>
+        <source>… and %1 other reasons</source>
+        <translation>… und %1 weitere Gründe</translation>
+    </message>
+    <message>
+        <source>%1 × %2</source>
+        <translation>%1 × %2</translation>
     </message>
 </context>
 </TS>

@@ -18,6 +18,7 @@
 #include "performance_model.h"
 #include "selection_router.h"
 #include "station_table_model.h"
+#include "study_panel.h"
 #include "units.h"
 
 #include <QAction>
@@ -103,6 +104,10 @@ MainWindow::MainWindow(QWidget* parent) : QMainWindow(parent) {
   auditPanel_->setOrder(settings_.auditOrder());
   connect(auditPanel_, &AuditPanel::orderChanged, this,
           [this](const QStringList& keys) { settings_.setAuditOrder(keys); });
+  placeTradeStudy();
+  tradeStudyPanel_->applySetup(settings_.studySetup());
+  connect(tradeStudyPanel_, &TradeStudyPanel::setupChanged, this,
+          [this] { settings_.setStudySetup(tradeStudyPanel_->setup()); });
 
   router_->select(Section::Compressor);
   refreshResult();
@@ -182,6 +187,9 @@ void MainWindow::createActions() {
   actions_.copyTable = new QAction(tr("Copy Station &Table"), this);
   actions_.copyTable->setObjectName("copyTableAction");
   connect(actions_.copyTable, &QAction::triggered, this, &MainWindow::copyTable);
+  actions_.copyStudyTable = new QAction(tr("Copy Trade &Study Table"), this);
+  actions_.copyStudyTable->setObjectName("copyStudyTableAction");
+  connect(actions_.copyStudyTable, &QAction::triggered, this, &MainWindow::copyStudyTable);
 }
 
 void MainWindow::createMenus() {
@@ -214,10 +222,18 @@ void MainWindow::createMenus() {
     exportMenu->addAction(tr("Loss Audit Chart as %1").arg(text), this,
                           [this, f] { exportChart(auditPanel_->chart(), QStringLiteral("loss-audit"), f); });
   }
+  for (const auto& [format, text] : formats) {
+    const QString f = format;
+    exportMenu->addAction(tr("Trade Study Chart as %1").arg(text), this, [this, f] {
+      exportChart(tradeStudyPanel_->chart(), QStringLiteral("trade-study"), f);
+    });
+  }
   exportMenu->addSeparator();
   exportMenu->addAction(tr("Station Table as CSV…"), this, [this] { exportTable("csv"); });
   exportMenu->addAction(tr("Results as JSON…"), this, [this] { exportTable("json"); });
   exportMenu->addAction(tr("Loss Audit Table as CSV…"), this, [this] { exportTable("audit"); });
+  exportMenu->addAction(tr("Trade Study as CSV…"), this, [this] { exportTable("study-csv"); });
+  exportMenu->addAction(tr("Trade Study as JSON…"), this, [this] { exportTable("study-json"); });
   fileMenu->addSeparator();
   fileMenu->addAction(actions_.preferences);
   fileMenu->addSeparator();
@@ -231,6 +247,7 @@ void MainWindow::createMenus() {
   editMenu->addAction(actions_.copyTs);
   editMenu->addAction(actions_.copyPv);
   editMenu->addAction(actions_.copyTable);
+  editMenu->addAction(actions_.copyStudyTable);
 
   QMenu* viewMenu = menuBar()->addMenu(tr("&View"));
   viewMenu->setObjectName("viewMenu");
@@ -382,6 +399,9 @@ void MainWindow::createCentralWidget() {
   auditPanel_ = new AuditPanel(*units_, *router_);
   auditPanel_->setSideBySide(true);
   bottomTabs_->addTab(auditPanel_, tr("Loss audit"));
+  tradeStudyPanel_ = new TradeStudyPanel(*document_, *units_);
+  tradeStudyPanel_->setSideBySide(true);
+  bottomTabs_->addTab(tradeStudyPanel_, tr("Trade study"));
 
   vertical->addWidget(horizontal);
   vertical->addWidget(bottomTabs_);
@@ -409,6 +429,21 @@ void MainWindow::createCentralWidget() {
   toggle->setText(tr("&Loss Audit"));
   viewMenu_->addSeparator();
   viewMenu_->addAction(toggle);
+
+  // The trade study the same way (View › Trade Study), wider: its chart needs the room.
+  tradeStudyDock_ = new QDockWidget(tr("Trade study"), this);
+  tradeStudyDock_->setObjectName("tradeStudyDock");
+  tradeStudyDock_->setFeatures(QDockWidget::DockWidgetClosable | QDockWidget::DockWidgetMovable |
+                               QDockWidget::DockWidgetFloatable);
+  addDockWidget(Qt::RightDockWidgetArea, tradeStudyDock_);
+  resizeDocks({tradeStudyDock_}, {640}, Qt::Horizontal);
+  tradeStudyDock_->hide();
+  QAction* studyToggle = tradeStudyDock_->toggleViewAction();
+  connect(studyToggle, &QAction::triggered, this, &MainWindow::placeTradeStudy);
+  connect(studyToggle, &QAction::toggled, this, &MainWindow::placeTradeStudy);
+  studyToggle->setObjectName("tradeStudyDockAction");
+  studyToggle->setText(tr("Trade &Study"));
+  viewMenu_->addAction(studyToggle);
 }
 
 void MainWindow::setChartLayout(ChartLayout chartLayout) {
@@ -438,7 +473,20 @@ void MainWindow::placeAudit() {
   } else if (!docked && auditDock_->widget() == auditPanel_) {
     auditDock_->setWidget(nullptr);
     auditPanel_->setSideBySide(true);
-    bottomTabs_->addTab(auditPanel_, tr("Loss audit"));
+    bottomTabs_->insertTab(1, auditPanel_, tr("Loss audit"));
+  }
+}
+
+void MainWindow::placeTradeStudy() {
+  const bool docked = !tradeStudyDock_->isHidden();
+  if (docked && tradeStudyDock_->widget() != tradeStudyPanel_) {
+    bottomTabs_->removeTab(bottomTabs_->indexOf(tradeStudyPanel_));
+    tradeStudyPanel_->setSideBySide(false);
+    tradeStudyDock_->setWidget(tradeStudyPanel_);
+  } else if (!docked && tradeStudyDock_->widget() == tradeStudyPanel_) {
+    tradeStudyDock_->setWidget(nullptr);
+    tradeStudyPanel_->setSideBySide(true);
+    bottomTabs_->addTab(tradeStudyPanel_, tr("Trade study"));
   }
 }
 
@@ -679,6 +727,7 @@ void MainWindow::closeEvent(QCloseEvent* event) {
     event->ignore();
     return;
   }
+  tradeStudyPanel_->cancel();  // the panel's runner joins its thread when the window goes
   settings_.setWindowGeometry(saveGeometry());
   settings_.setWindowState(saveState());
   removeAutosave();
@@ -780,6 +829,14 @@ bool MainWindow::exportAuditCsv(const QString& path) {
   return auditPanel_->exportCsv(path);
 }
 
+bool MainWindow::exportStudyCsv(const QString& path) {
+  return tradeStudyPanel_->exportCsv(path);
+}
+
+bool MainWindow::exportStudyJson(const QString& path) {
+  return tradeStudyPanel_->exportJson(path);
+}
+
 void MainWindow::exportChart(QwtPlot* chart, const QString& base, const QString& format) {
   QSize pixels;
   int dpi = 0;
@@ -811,6 +868,24 @@ void MainWindow::exportTable(const QString& format) {
     statusBar()->showMessage(ok ? tr("Exported %1 (SI units)").arg(path) : tr("Cannot write %1").arg(path));
     return;
   }
+  if (format.startsWith(QLatin1String("study-"))) {
+    if (!tradeStudyPanel_->study()) {
+      statusBar()->showMessage(tr("There is no trade study to export yet: run one first."));
+      return;
+    }
+    const bool csv = format == QLatin1String("study-csv");
+    const QString path = QFileDialog::getSaveFileName(
+        this, tr("Export Trade Study"),
+        QDir::home().filePath(csv ? QStringLiteral("trade-study.csv") : QStringLiteral("trade-study.json")),
+        csv ? tr("CSV files (*.csv)") : tr("JSON files (*.json)"));
+    if (path.isEmpty()) return;
+    QString error;
+    const bool ok =
+        csv ? tradeStudyPanel_->exportCsv(path, &error) : tradeStudyPanel_->exportJson(path, &error);
+    statusBar()->showMessage(ok ? tr("Exported %1 (the units are in the column names)").arg(path)
+                                : tr("Cannot write %1: %2").arg(path, error));
+    return;
+  }
   const bool csv = format == QLatin1String("csv");
   const QString path = QFileDialog::getSaveFileName(
       this, csv ? tr("Export Station Table") : tr("Export Results"),
@@ -829,6 +904,16 @@ void MainWindow::copyChart(CycleChart* chart) {
 void MainWindow::copyTable() {
   QApplication::clipboard()->setText(stationModel_->toTabSeparated());
   statusBar()->showMessage(tr("Station table copied as tab-separated text"));
+}
+
+void MainWindow::copyStudyTable() {
+  const QString text = tradeStudyPanel_->tableAsTabSeparated();
+  if (text.isEmpty()) {
+    statusBar()->showMessage(tr("There is no trade study to copy yet: run one first."));
+    return;
+  }
+  QApplication::clipboard()->setText(text);
+  statusBar()->showMessage(tr("Trade-study table copied as tab-separated text"));
 }
 
 // ---------------------------------------------------------------------------------------------

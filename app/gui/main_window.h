@@ -34,6 +34,7 @@ struct Evaluation;
 namespace cw::gui {
 
 class AuditPanel;
+class TradeStudyPanel;
 class CaseDocument;
 class CaseForm;
 class CycleChart;
@@ -73,8 +74,12 @@ class MainWindow : public QMainWindow {
   /// state).
   AuditPanel* auditPanel() const { return auditPanel_; }
   QDockWidget* auditDock() const { return auditDock_; }
+  /// The trade-study panel: a tab beside the loss audit, or in its dock (View › Trade Study; kept
+  /// with the window state).
+  TradeStudyPanel* tradeStudyPanel() const { return tradeStudyPanel_; }
+  QDockWidget* tradeStudyDock() const { return tradeStudyDock_; }
   /// The tabs of the bottom area: the station table with the performance summary and, while
-  /// not in its dock, the audit.
+  /// not in their docks, the audit and the trade study.
   QTabWidget* bottomTabs() const { return bottomTabs_; }
   /// The banner that says the result is stale and why.
   QLabel* staleBanner() const { return banner_; }
@@ -84,11 +89,15 @@ class MainWindow : public QMainWindow {
   void setUnitSystem(UnitSystem system);
   /// Puts the audit panel in its dock when the dock is shown, else in the bottom tabs.
   void placeAudit();
+  /// Puts the trade-study panel in its dock when the dock is shown, else in the bottom tabs.
+  void placeTradeStudy();
 
   // Exports without dialogs (tests and the menu actions).
   bool exportStationCsv(const QString& path);
   bool exportResultJson(const QString& path);
   bool exportAuditCsv(const QString& path);
+  bool exportStudyCsv(const QString& path);
+  bool exportStudyJson(const QString& path);
 
   /// Where the autosave goes (QStandardPaths::AppLocalDataLocation).
   static QString autosavePath();
@@ -130,6 +139,7 @@ class MainWindow : public QMainWindow {
   void exportTable(const QString& format);
   void copyChart(CycleChart* chart);
   void copyTable();
+  void copyStudyTable();
   void scheduleAutosave();
   void removeAutosave();
 
@@ -157,13 +167,15 @@ class MainWindow : public QMainWindow {
   QTabWidget* bottomTabs_ = nullptr;
   AuditPanel* auditPanel_ = nullptr;
   QDockWidget* auditDock_ = nullptr;
+  TradeStudyPanel* tradeStudyPanel_ = nullptr;
+  QDockWidget* tradeStudyDock_ = nullptr;
   QMenu* viewMenu_ = nullptr;
   QMenu* recentMenu_ = nullptr;
   QTimer* autosaveTimer_ = nullptr;
 
   struct Actions {
     QAction *newCase, *open, *save, *saveAs, *preferences, *quit, *undo, *redo, *resetZoom, *logAxes,
-        *sideBySide, *tabbed, *about, *copyTs, *copyPv, *copyTable;
+        *sideBySide, *tabbed, *about, *copyTs, *copyPv, *copyTable, *copyStudyTable;
     QActionGroup* layoutGroup;
   } actions_{};
 };

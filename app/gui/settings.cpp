@@ -48,6 +48,31 @@ void AppSettings::setAuditOrder(const QStringList& keys) {
   settings_.setValue("audit/waterfall_order", keys);
 }
 
+StudySetup AppSettings::studySetup() const {
+  StudySetup s;
+  s.firstInput = settings_.value("study/first_input", s.firstInput).toString();
+  s.firstCount = std::clamp(settings_.value("study/first_count", s.firstCount).toInt(), 1, 1000);
+  s.carpet = settings_.value("study/carpet", s.carpet).toBool();
+  s.secondInput = settings_.value("study/second_input", s.secondInput).toString();
+  s.secondCount = std::clamp(settings_.value("study/second_count", s.secondCount).toInt(), 1, 1000);
+  s.audit = settings_.value("study/audit", s.audit).toBool();
+  s.compare = settings_.value("study/compare", s.compare).toString();
+  s.changedInput = settings_.value("study/changed_input", s.changedInput).toString();
+  s.plot = settings_.value("study/plot", s.plot).toString();
+  return s;
+}
+void AppSettings::setStudySetup(const StudySetup& s) {
+  settings_.setValue("study/first_input", s.firstInput);
+  settings_.setValue("study/first_count", s.firstCount);
+  settings_.setValue("study/carpet", s.carpet);
+  settings_.setValue("study/second_input", s.secondInput);
+  settings_.setValue("study/second_count", s.secondCount);
+  settings_.setValue("study/audit", s.audit);
+  settings_.setValue("study/compare", s.compare);
+  settings_.setValue("study/changed_input", s.changedInput);
+  settings_.setValue("study/plot", s.plot);
+}
+
 int AppSettings::autosaveSeconds() const {
   return std::clamp(settings_.value("files/autosave_seconds", 30).toInt(), 5, 3600);
 }

@@ -11,6 +11,20 @@ namespace cw::gui {
 
 enum class ChartLayout { SideBySide, Tabbed };
 
+/// The trade-study panel's choices kept between sessions (the ranges follow the case, so they are not kept).
+struct StudySetup {
+  QString firstInput = QStringLiteral("compressor.pressure_ratio");
+  int firstCount = 21;
+  bool carpet = true;
+  QString secondInput = QStringLiteral("burner.exit_temperature_K");
+  int secondCount = 6;
+  bool audit = false;
+  QString compare = QStringLiteral("none");  ///< "none", "ideal" or "changed"
+  QString changedInput;                      ///< the input set differently; empty for the default
+  QString plot;                              ///< a study column's name; empty for the carpet
+  bool operator==(const StudySetup&) const = default;
+};
+
 class AppSettings {
  public:
   AppSettings() = default;
@@ -32,6 +46,10 @@ class AppSettings {
   /// The loss audit's waterfall order (loss keys); empty for the flow order.
   QStringList auditOrder() const;
   void setAuditOrder(const QStringList& keys);
+
+  /// The trade-study panel's choices.
+  StudySetup studySetup() const;
+  void setStudySetup(const StudySetup& setup);
 
   /// Seconds between a change and its autosave, in [5, 3600].
   int autosaveSeconds() const;

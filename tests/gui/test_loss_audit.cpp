@@ -332,7 +332,7 @@ class TestLossAudit : public QObject {
     QTabWidget* tabs = window.bottomTabs();
     QVERIFY(tabs);
     QVERIFY(window.auditDock()->isHidden());
-    QCOMPARE(tabs->count(), 2);
+    QCOMPARE(tabs->count(), 3);         // tables, loss audit, trade study
     QCOMPARE(tabs->currentIndex(), 0);  // the tables first, the audit in sight
     QCOMPARE(tabs->widget(1), static_cast<QWidget*>(window.auditPanel()));
     QCOMPARE(tabs->tabText(1), QString("Loss audit"));
@@ -350,12 +350,12 @@ class TestLossAudit : public QObject {
     toggle->trigger();
     QVERIFY(!window.auditDock()->isHidden());
     QCOMPARE(window.auditDock()->widget(), static_cast<QWidget*>(window.auditPanel()));
-    QCOMPARE(tabs->count(), 1);
+    QCOMPARE(tabs->count(), 2);
     QVERIFY(window.auditPanel()->chart()->isVisible());
     window.auditDock()->close();  // its close button
     QVERIFY(window.auditDock()->isHidden());
     QVERIFY(!toggle->isChecked());
-    QCOMPARE(tabs->count(), 2);
+    QCOMPARE(tabs->count(), 3);
     QCOMPARE(tabs->widget(1), static_cast<QWidget*>(window.auditPanel()));
   }
 };
