@@ -99,26 +99,12 @@ void StudyAxisEditor::retranslateUi() {
 void StudyAxisEditor::setCase(const engine::Case& inputs) {
   case_ = inputs;
   std::vector<StudyInput> offered = studyInputs(case_);
-  // Most edits leave the inputs on offer as they are: then the choice is not rebuilt.
-  const bool same = std::equal(
-      offered.begin(), offered.end(), inputs_.begin(), inputs_.end(),
-      [](const StudyInput& a, const StudyInput& b) { return a.field == b.field && a.path == b.path; });
+  const bool same = sameStudyInputs(offered, inputs_);
   inputs_ = std::move(offered);
-  // The input asked for (settings, the user's choice) when the case has it, else the one shown.
-  const std::string keep = input_.path;
-  input_ = {};
-  for (const StudyInput& i : inputs_)
-    if (i.path == keep) input_ = i;
-  if (input_.path != preferred_)
-    for (const StudyInput& i : inputs_)
-      if (i.path == preferred_) {
-        input_ = i;
-        userRange_ = false;
-      }
-  if (!input_.field && !inputs_.empty()) {
-    input_ = inputs_.front();
-    userRange_ = false;  // a new input: its own default range
-  }
+  bool fresh = false;
+  input_ = reselectStudyInput(inputs_, input_.path, preferred_, fresh);
+  if (!input_.field && !inputs_.empty()) input_ = inputs_.front();
+  if (fresh) userRange_ = false;  // another input: its own default range
   if (!same || inputBox_->currentIndex() < 0) fillInputs();
   if (!userRange_) applyDefaultRange();
   validate();

@@ -76,29 +76,17 @@ void StudyChangeEditor::retranslateUi() {
 void StudyChangeEditor::setCase(const engine::Case& inputs) {
   case_ = inputs;
   std::vector<StudyInput> offered = studyInputs(case_);
-  // Most edits leave the inputs on offer as they are: then the choice is not rebuilt.
-  const bool same = std::equal(
-      offered.begin(), offered.end(), inputs_.begin(), inputs_.end(),
-      [](const StudyInput& a, const StudyInput& b) { return a.field == b.field && a.path == b.path; });
+  const bool same = sameStudyInputs(offered, inputs_);
   inputs_ = std::move(offered);
-  // The input asked for (settings, the user's choice) when the case has it, else the one shown.
-  const std::string keep = input_.path;
-  input_ = {};
-  for (const StudyInput& i : inputs_)
-    if (i.path == keep) input_ = i;
-  if (input_.path != preferred_)
-    for (const StudyInput& i : inputs_)
-      if (i.path == preferred_) {
-        input_ = i;
-        userValue_ = false;
-      }
+  bool fresh = false;
+  input_ = reselectStudyInput(inputs_, input_.path, preferred_, fresh);
   if (!input_.field && !inputs_.empty()) {
     // The compressor's efficiency first: the usual "what if this component were worse" question.
     input_ = inputs_.front();
     for (const StudyInput& i : inputs_)
       if (i.path.rfind("compressor.", 0) == 0 && i.path.find("efficiency") != std::string::npos) input_ = i;
-    userValue_ = false;
   }
+  if (fresh) userValue_ = false;
   if (!same || inputBox_->currentIndex() < 0) fillInputs();
   if (!userValue_) applyDefault();
   validate();

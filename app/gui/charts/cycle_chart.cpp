@@ -1,4 +1,5 @@
 #include "charts/cycle_chart.h"
+#include "charts/readout_picker.h"
 #include "charts/stale_banner.h"
 #include "colours.h"
 
@@ -78,31 +79,6 @@ QString componentName(const std::string& component) {
 
 }  // namespace
 
-/// A picker whose tracker shows the state of the path point nearest the cursor.
-class StateReadoutPicker : public QwtPlotPicker {
- public:
-  explicit StateReadoutPicker(CycleChart* chart)
-      : QwtPlotPicker(QwtAxis::XBottom, QwtAxis::YLeft, QwtPicker::NoRubberBand, QwtPicker::AlwaysOn,
-                      chart->canvas()),
-        chart_(chart) {
-    setStateMachine(new QwtPickerTrackerMachine);
-  }
-
- protected:
-  QwtText trackerText(const QPoint& position) const override {
-    QwtText text(chart_->readoutAt(position));
-    QColor background = chart_->palette().color(QPalette::ToolTipBase);
-    background.setAlpha(230);
-    text.setBackgroundBrush(background);
-    text.setColor(chart_->palette().color(QPalette::ToolTipText));
-    text.setRenderFlags(Qt::AlignLeft);
-    return text;
-  }
-
- private:
-  CycleChart* chart_;
-};
-
 CycleChart::CycleChart(ChartKind kind, DisplayUnits& units, QWidget* parent)
     : QwtPlot(parent), kind_(kind), units_(units) {
   setObjectName(kind == ChartKind::TemperatureEntropy ? "temperatureEntropyChart" : "pressureVolumeChart");
@@ -175,7 +151,7 @@ CycleChart::CycleChart(ChartKind kind, DisplayUnits& units, QWidget* parent)
   zoomer_->setTrackerMode(QwtPicker::AlwaysOff);
   panner_ = new QwtPlotPanner(canvas());
   panner_->setMouseButton(Qt::MiddleButton);
-  picker_ = new StateReadoutPicker(this);
+  picker_ = new ReadoutPicker(this, [this](const QPoint& p) { return readoutAt(p); });
 
   applyPalette();
   retranslateUi();

@@ -34,7 +34,7 @@ class QwtPlotPicker;
 namespace cw::gui {
 
 class IsobarLabels;
-class StateReadoutPicker;
+class ReadoutPicker;
 
 enum class ChartKind { TemperatureEntropy, PressureVolume };
 
@@ -121,7 +121,7 @@ class CycleChart : public QwtPlot {
   QwtPlotTextLabel* staleLabel_ = nullptr;
   QwtPlotZoomer* zoomer_ = nullptr;
   QwtPlotPanner* panner_ = nullptr;
-  StateReadoutPicker* picker_ = nullptr;
+  ReadoutPicker* picker_ = nullptr;
 };
 
 }  // namespace cw::gui

@@ -1,6 +1,7 @@
 #include "charts/study_chart.h"
 
 #include "charts/line_end_labels.h"
+#include "charts/readout_picker.h"
 #include "charts/stale_banner.h"
 #include "colours.h"
 #include "study_names.h"
@@ -89,32 +90,6 @@ QPen linePen(StudyChart::Family family, bool overlay, StudyOverlay kind, StudyPl
 
 }  // namespace
 
-/// A picker whose tracker shows the study point nearest the cursor.
-class StudyReadoutPicker : public QwtPlotPicker {
- public:
-  explicit StudyReadoutPicker(StudyChart* chart)
-      : QwtPlotPicker(QwtAxis::XBottom, QwtAxis::YLeft, QwtPicker::NoRubberBand, QwtPicker::AlwaysOn,
-                      chart->canvas()),
-        chart_(chart) {
-    setStateMachine(new QwtPickerTrackerMachine);
-  }
-
- protected:
-  QwtText trackerText(const QPoint& position) const override {
-    QwtText text(chart_->readoutAt(position));
-    if (text.isEmpty()) return text;
-    QColor background = chart_->palette().color(QPalette::ToolTipBase);
-    background.setAlpha(230);
-    text.setBackgroundBrush(background);
-    text.setColor(chart_->palette().color(QPalette::ToolTipText));
-    text.setRenderFlags(Qt::AlignLeft);
-    return text;
-  }
-
- private:
-  StudyChart* chart_;
-};
-
 StudyChart::StudyChart(DisplayUnits& units, QWidget* parent)
     : QwtPlot(parent), units_(units), columns_(study::studyColumns(true)) {
   setObjectName("studyChart");
@@ -157,7 +132,7 @@ StudyChart::StudyChart(DisplayUnits& units, QWidget* parent)
   hintLabel_->setZ(99);
   hintLabel_->attach(this);
 
-  picker_ = new StudyReadoutPicker(this);
+  picker_ = new ReadoutPicker(this, [this](const QPoint& p) { return readoutAt(p); });
 
   applyPalette();
   retranslateUi();

@@ -39,7 +39,7 @@ class QwtPlotTextLabel;
 namespace cw::gui {
 
 class LineEndLabels;
-class StudyReadoutPicker;
+class ReadoutPicker;
 
 enum class StudyPlot { Carpet, Output };
 enum class StudyOverlay { None, IdealTwin, OneInputChanged };
@@ -151,7 +151,7 @@ class StudyChart : public QwtPlot {
   QwtPlotLegendItem* legendItem_ = nullptr;  ///< the legend inside the canvas (compact)
   QwtPlotTextLabel* staleLabel_ = nullptr;
   QwtPlotTextLabel* hintLabel_ = nullptr;
-  StudyReadoutPicker* picker_ = nullptr;
+  ReadoutPicker* picker_ = nullptr;
   bool applyingPalette_ = false;
 };
 
