@@ -39,7 +39,8 @@ static void printTopHelp(std::ostream& out) {
          "Run 'cyclewright-cli VERB --help' for a verb's options.\n"
          "\n"
          "Exit status: 0 success, 2 invalid input (one line on stderr names the argument,\n"
-         "the value and the valid range), 3 no solution for the inputs.\n"
+         "the value and the valid range), 3 no solution for the inputs (for sweep: no point\n"
+         "has a cycle), 130 a sweep stopped by Ctrl+C (the points run are written).\n"
          "\n"
       << kCaution << '\n';
 }
