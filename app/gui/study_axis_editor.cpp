@@ -27,13 +27,15 @@ QColor studyErrorColour(const QPalette& palette) {
 }
 
 StudyAxisEditor::StudyAxisEditor(const QString& name, int defaultCount, DisplayUnits& units, QWidget* parent)
-    : QWidget(parent), units_(units) {
+    : QWidget(parent),
+      units_(units),
+      inputBox_(new QComboBox(this)),
+      choice_(inputBox_, units, [](const std::vector<StudyInput>& offered) { return offered.front(); }) {
   setObjectName(name);
   auto* grid = new QGridLayout(this);
   grid->setContentsMargins(0, 0, 0, 0);
   grid->setHorizontalSpacing(4);
   grid->setVerticalSpacing(2);
-  inputBox_ = new QComboBox(this);
   inputBox_->setObjectName(name + QStringLiteral(".input"));
   inputBox_->setSizeAdjustPolicy(QComboBox::AdjustToMinimumContentsLengthWithIcon);
   inputBox_->setMinimumContentsLength(16);
@@ -91,38 +93,25 @@ void StudyAxisEditor::retranslateUi() {
   countLabel_->setText(tr("values"));
   countBox_->setToolTip(tr("Number of evenly spaced values from start to stop, both included (1 to %1)")
                             .arg(study::kMaxAxisCount));
-  fillInputs();
+  choice_.fill();
   writeRange();
   validate();
 }
 
 void StudyAxisEditor::setCase(const engine::Case& inputs) {
   case_ = inputs;
-  std::vector<StudyInput> offered = studyInputs(case_);
-  const bool same = sameStudyInputs(offered, inputs_);
-  inputs_ = std::move(offered);
-  bool fresh = false;
-  input_ = reselectStudyInput(inputs_, input_.path, preferred_, fresh);
-  if (!input_.field && !inputs_.empty()) input_ = inputs_.front();
-  if (fresh) userRange_ = false;  // another input: its own default range
-  if (!same || inputBox_->currentIndex() < 0) fillInputs();
+  if (choice_.setCase(case_)) userRange_ = false;  // another input: its own default range
   if (!userRange_) applyDefaultRange();
   validate();
 }
 
 bool StudyAxisEditor::setPath(const std::string& path) {
-  preferred_ = path;  // also when this case does not have it: a later one may
-  for (const StudyInput& i : inputs_)
-    if (i.path == path) {
-      input_ = i;
-      userRange_ = false;
-      fillInputs();
-      applyDefaultRange();
-      validate();
-      emit changed();
-      return true;
-    }
-  return false;
+  if (!choice_.ask(path)) return false;
+  userRange_ = false;
+  applyDefaultRange();
+  validate();
+  emit changed();
+  return true;
 }
 
 void StudyAxisEditor::setRange(double start, double stop, int count) {
@@ -144,29 +133,15 @@ void StudyAxisEditor::setCount(int count) {
 }
 
 std::string StudyAxisEditor::path() const {
-  return input_.path;
+  return choice_.input().path;
 }
 
 int StudyAxisEditor::count() const {
   return countBox_->value();
 }
 
-void StudyAxisEditor::fillInputs() {
-  const QSignalBlocker blocker(inputBox_);
-  inputBox_->clear();
-  for (const StudyInput& i : inputs_) {
-    inputBox_->addItem(studyInputLabel(i, units_), QString::fromStdString(i.path));
-    inputBox_->setItemData(inputBox_->count() - 1, fieldToolTip(*i.field, units_), Qt::ToolTipRole);
-  }
-  inputBox_->setCurrentIndex(inputBox_->findData(QString::fromStdString(input_.path)));
-  inputBox_->setToolTip(input_.field ? fieldToolTip(*input_.field, units_) : QString());
-}
-
 void StudyAxisEditor::inputChosen(int index) {
-  if (index < 0 || index >= static_cast<int>(inputs_.size())) return;
-  input_ = inputs_[static_cast<std::size_t>(index)];
-  preferred_ = input_.path;
-  inputBox_->setToolTip(fieldToolTip(*input_.field, units_));
+  if (!choice_.pick(index)) return;
   userRange_ = false;
   applyDefaultRange();
   validate();
@@ -174,8 +149,8 @@ void StudyAxisEditor::inputChosen(int index) {
 }
 
 void StudyAxisEditor::applyDefaultRange() {
-  if (!input_.field) return;
-  const StudyRange range = defaultStudyRange(*input_.field, input_.field->get(case_));
+  if (!choice_.input().field) return;
+  const StudyRange range = defaultStudyRange(*choice_.input().field, choice_.input().field->get(case_));
   start_ = range.start;
   stop_ = range.stop;
   startOk_ = stopOk_ = true;
@@ -183,21 +158,22 @@ void StudyAxisEditor::applyDefaultRange() {
 }
 
 void StudyAxisEditor::writeRange() {
-  const Quantity q = input_.field ? input_.field->quantity : Quantity::Dimensionless;
+  const Quantity q = choice_.input().field ? choice_.input().field->quantity : Quantity::Dimensionless;
   // A field whose text is no number keeps the user's text.
   if (startOk_) startEdit_->setText(typedNumberText(units_.toDisplay(start_, q)));
   if (stopOk_) stopEdit_->setText(typedNumberText(units_.toDisplay(stop_, q)));
   const QString unit = q == Quantity::Dimensionless ? QString() : units_.symbol(q);
   startEdit_->setPlaceholderText(unit);
   stopEdit_->setPlaceholderText(unit);
-  const QString range =
-      input_.field ? tr("Valid range: %1").arg(validRangeText(*input_.field, units_)) : QString();
+  const QString range = choice_.input().field
+                            ? tr("Valid range: %1").arg(validRangeText(*choice_.input().field, units_))
+                            : QString();
   startEdit_->setToolTip(tr("First value [%1]. %2").arg(unit.isEmpty() ? QStringLiteral("–") : unit, range));
   stopEdit_->setToolTip(tr("Last value [%1]. %2").arg(unit.isEmpty() ? QStringLiteral("–") : unit, range));
 }
 
 void StudyAxisEditor::textEdited() {
-  const Quantity q = input_.field ? input_.field->quantity : Quantity::Dimensionless;
+  const Quantity q = choice_.input().field ? choice_.input().field->quantity : Quantity::Dimensionless;
   double shown = 0.0;
   startOk_ = parseTypedNumber(startEdit_->text(), shown);
   if (startOk_) start_ = units_.fromDisplay(shown, q);
@@ -213,11 +189,11 @@ void StudyAxisEditor::validate() {
   bool badStart = !startOk_, badStop = !stopOk_, badCount = false;
   if (!startOk_) ownProblems_ << tr("Start: “%1” is not a number.").arg(startEdit_->text());
   if (!stopOk_) ownProblems_ << tr("Stop: “%1” is not a number.").arg(stopEdit_->text());
-  if (!input_.field) {
+  if (!choice_.input().field) {
     ownProblems_ << tr("The case has no numeric input to vary here.");
   } else {
-    const FieldSpec& f = *input_.field;
-    const QString name = studyInputName(input_);
+    const FieldSpec& f = *choice_.input().field;
+    const QString name = studyInputName(choice_.input());
     if (startOk_ && !inValidRange(f, start_)) {
       badStart = true;
       ownProblems_ << tr("Start = %1 is outside the valid range %2 of %3.")
@@ -271,8 +247,8 @@ QString StudyAxisEditor::problems() const {
 }
 
 std::optional<study::SweepAxis> StudyAxisEditor::axis() const {
-  if (!problems().isEmpty() || !input_.field) return std::nullopt;
-  return study::SweepAxis{input_.path, start_, stop_, count()};
+  if (!problems().isEmpty() || !choice_.input().field) return std::nullopt;
+  return study::SweepAxis{choice_.input().path, start_, stop_, count()};
 }
 
 }  // namespace cw::gui

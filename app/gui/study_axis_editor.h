@@ -6,6 +6,7 @@
 // valid range, or inconsistent with the count turns its field red and says why, naming the valid
 // range; axis() is then empty and the panel's Run button is disabled.
 
+#include "study_input_choice.h"
 #include "study_inputs.h"
 
 #include "engine/case_inputs.h"
@@ -41,7 +42,7 @@ class StudyAxisEditor : public QWidget {
   void setCount(int count);
 
   std::string path() const;
-  StudyInput input() const { return input_; }
+  StudyInput input() const { return choice_.input(); }
   double start() const { return start_; }  ///< [SI]
   double stop() const { return stop_; }    ///< [SI]
   int count() const;
@@ -71,7 +72,6 @@ class StudyAxisEditor : public QWidget {
   void changeEvent(QEvent* event) override;
 
  private:
-  void fillInputs();
   void inputChosen(int index);
   void applyDefaultRange();
   void textEdited();
@@ -80,9 +80,8 @@ class StudyAxisEditor : public QWidget {
 
   DisplayUnits& units_;
   engine::Case case_;
-  std::vector<StudyInput> inputs_;
-  StudyInput input_;
-  std::string preferred_;  ///< the input asked for, chosen whenever the case has it
+  QComboBox* inputBox_;  // before choice_, which works on it
+  StudyInputChoice choice_;
   double start_ = 0.0, stop_ = 0.0;
   bool startOk_ = true, stopOk_ = true;
   bool userRange_ = false;  ///< the user typed a range: it no longer follows the case
@@ -90,7 +89,6 @@ class StudyAxisEditor : public QWidget {
   QStringList ownProblems_;
   QString inputConflict_, countConflict_;
 
-  QComboBox* inputBox_ = nullptr;
   QLineEdit* startEdit_ = nullptr;
   QLineEdit* stopEdit_ = nullptr;
   QSpinBox* countBox_ = nullptr;

@@ -17,13 +17,28 @@
 
 namespace cw::gui {
 
-StudyChangeEditor::StudyChangeEditor(DisplayUnits& units, QWidget* parent) : QWidget(parent), units_(units) {
+namespace {
+
+/// The compressor's efficiency first: the usual "what if this component were worse" question.
+StudyInput compressorEfficiencyFirst(const std::vector<StudyInput>& offered) {
+  StudyInput chosen = offered.front();
+  for (const StudyInput& i : offered)
+    if (i.path.rfind("compressor.", 0) == 0 && i.path.find("efficiency") != std::string::npos) chosen = i;
+  return chosen;
+}
+
+}  // namespace
+
+StudyChangeEditor::StudyChangeEditor(DisplayUnits& units, QWidget* parent)
+    : QWidget(parent),
+      units_(units),
+      inputBox_(new QComboBox(this)),
+      choice_(inputBox_, units, &compressorEfficiencyFirst) {
   setObjectName("studyChange");
   auto* grid = new QGridLayout(this);
   grid->setContentsMargins(0, 0, 0, 0);
   grid->setHorizontalSpacing(4);
   grid->setVerticalSpacing(2);
-  inputBox_ = new QComboBox(this);
   inputBox_->setObjectName("studyChange.input");
   inputBox_->setSizeAdjustPolicy(QComboBox::AdjustToMinimumContentsLengthWithIcon);
   inputBox_->setMinimumContentsLength(16);
@@ -47,9 +62,7 @@ StudyChangeEditor::StudyChangeEditor(DisplayUnits& units, QWidget* parent) : QWi
   grid->setColumnStretch(2, 1);
 
   connect(inputBox_, &QComboBox::activated, this, [this](int index) {
-    if (index < 0 || index >= static_cast<int>(inputs_.size())) return;
-    input_ = inputs_[static_cast<std::size_t>(index)];
-    preferred_ = input_.path;
+    if (!choice_.pick(index)) return;
     userValue_ = false;
     applyDefault();
     validate();
@@ -58,7 +71,8 @@ StudyChangeEditor::StudyChangeEditor(DisplayUnits& units, QWidget* parent) : QWi
   connect(valueEdit_, &QLineEdit::textEdited, this, [this](const QString& text) {
     double shown = 0.0;
     valueOk_ = parseTypedNumber(text, shown);
-    if (valueOk_ && input_.field) value_ = units_.fromDisplay(shown, input_.field->quantity);
+    if (valueOk_ && choice_.input().field)
+      value_ = units_.fromDisplay(shown, choice_.input().field->quantity);
     userValue_ = true;
     validate();
     emit changed();
@@ -68,43 +82,25 @@ StudyChangeEditor::StudyChangeEditor(DisplayUnits& units, QWidget* parent) : QWi
 }
 
 void StudyChangeEditor::retranslateUi() {
-  fillInputs();
+  choice_.fill();
   writeValue();
   validate();
 }
 
 void StudyChangeEditor::setCase(const engine::Case& inputs) {
   case_ = inputs;
-  std::vector<StudyInput> offered = studyInputs(case_);
-  const bool same = sameStudyInputs(offered, inputs_);
-  inputs_ = std::move(offered);
-  bool fresh = false;
-  input_ = reselectStudyInput(inputs_, input_.path, preferred_, fresh);
-  if (!input_.field && !inputs_.empty()) {
-    // The compressor's efficiency first: the usual "what if this component were worse" question.
-    input_ = inputs_.front();
-    for (const StudyInput& i : inputs_)
-      if (i.path.rfind("compressor.", 0) == 0 && i.path.find("efficiency") != std::string::npos) input_ = i;
-  }
-  if (fresh) userValue_ = false;
-  if (!same || inputBox_->currentIndex() < 0) fillInputs();
+  if (choice_.setCase(case_)) userValue_ = false;
   if (!userValue_) applyDefault();
   validate();
 }
 
 bool StudyChangeEditor::setPath(const std::string& path) {
-  preferred_ = path;  // also when this case does not have it: a later one may
-  for (const StudyInput& i : inputs_)
-    if (i.path == path) {
-      input_ = i;
-      userValue_ = false;
-      fillInputs();
-      applyDefault();
-      validate();
-      emit changed();
-      return true;
-    }
-  return false;
+  if (!choice_.ask(path)) return false;
+  userValue_ = false;
+  applyDefault();
+  validate();
+  emit changed();
+  return true;
 }
 
 void StudyChangeEditor::setValue(double si) {
@@ -116,17 +112,9 @@ void StudyChangeEditor::setValue(double si) {
   emit changed();
 }
 
-void StudyChangeEditor::fillInputs() {
-  const QSignalBlocker blocker(inputBox_);
-  inputBox_->clear();
-  for (const StudyInput& i : inputs_)
-    inputBox_->addItem(studyInputLabel(i, units_), QString::fromStdString(i.path));
-  inputBox_->setCurrentIndex(inputBox_->findData(QString::fromStdString(input_.path)));
-}
-
 void StudyChangeEditor::applyDefault() {
-  if (!input_.field) return;
-  const FieldSpec& f = *input_.field;
+  if (!choice_.input().field) return;
+  const FieldSpec& f = *choice_.input().field;
   const double margin = 1e-3 * (f.high - f.low);
   const double low = f.lowOpen ? f.low + margin : f.low, high = f.highOpen ? f.high - margin : f.high;
   value_ = std::clamp(0.95 * f.get(case_), low, high);
@@ -135,25 +123,27 @@ void StudyChangeEditor::applyDefault() {
 }
 
 void StudyChangeEditor::writeValue() {
-  const Quantity q = input_.field ? input_.field->quantity : Quantity::Dimensionless;
+  const Quantity q = choice_.input().field ? choice_.input().field->quantity : Quantity::Dimensionless;
   if (valueOk_) valueEdit_->setText(typedNumberText(units_.toDisplay(value_, q)));
   const QString unit = q == Quantity::Dimensionless ? QStringLiteral("–") : units_.symbol(q);
-  valueEdit_->setToolTip(tr("The value of this input in the second study [%1]. %2")
-                             .arg(unit, input_.field
-                                            ? tr("Valid range: %1").arg(validRangeText(*input_.field, units_))
-                                            : QString()));
+  valueEdit_->setToolTip(
+      tr("The value of this input in the second study [%1]. %2")
+          .arg(unit, choice_.input().field
+                         ? tr("Valid range: %1").arg(validRangeText(*choice_.input().field, units_))
+                         : QString()));
 }
 
 void StudyChangeEditor::validate() {
   ownProblem_.clear();
   if (!valueOk_)
     ownProblem_ = tr("Value: “%1” is not a number.").arg(valueEdit_->text());
-  else if (!input_.field)
+  else if (!choice_.input().field)
     ownProblem_ = tr("The case has no numeric input to set.");
-  else if (!inValidRange(*input_.field, value_))
+  else if (!inValidRange(*choice_.input().field, value_))
     ownProblem_ = tr("%1 = %2 is outside the valid range %3.")
-                      .arg(studyInputName(input_), typedWithUnit(value_, input_.field->quantity, units_),
-                           validRangeText(*input_.field, units_));
+                      .arg(studyInputName(choice_.input()),
+                           typedWithUnit(value_, choice_.input().field->quantity, units_),
+                           validRangeText(*choice_.input().field, units_));
   markInvalid(valueEdit_, !ownProblem_.isEmpty());
   markInvalid(inputBox_, !conflict_.isEmpty());
   const QString text = problems();
@@ -180,14 +170,14 @@ QString StudyChangeEditor::problems() const {
 }
 
 std::optional<std::string> StudyChangeEditor::assignment() const {
-  if (!problems().isEmpty() || !input_.field) return std::nullopt;
-  return input_.path + "=" + cw::formatNumber(value_);
+  if (!problems().isEmpty() || !choice_.input().field) return std::nullopt;
+  return choice_.input().path + "=" + cw::formatNumber(value_);
 }
 
 QString StudyChangeEditor::description() const {
-  if (!input_.field) return {};
-  return QStringLiteral("%1 = %2").arg(studyInputName(input_),
-                                       typedWithUnit(value_, input_.field->quantity, units_));
+  if (!choice_.input().field) return {};
+  return QStringLiteral("%1 = %2").arg(studyInputName(choice_.input()),
+                                       typedWithUnit(value_, choice_.input().field->quantity, units_));
 }
 
 }  // namespace cw::gui

@@ -4,6 +4,7 @@
 // The value starts at 95 % of the case's value, clipped to the valid range; an entry that is no
 // number or outside the valid range turns the field red and says why.
 
+#include "study_input_choice.h"
 #include "study_inputs.h"
 
 #include "engine/case_inputs.h"
@@ -32,8 +33,8 @@ class StudyChangeEditor : public QWidget {
   /// Sets the value [SI] as if typed.
   void setValue(double si);
 
-  std::string path() const { return input_.path; }
-  StudyInput input() const { return input_; }
+  std::string path() const { return choice_.input().path; }
+  StudyInput input() const { return choice_.input(); }
   double value() const { return value_; }  ///< [SI]
   /// The --set assignment of the second study ("compressor.isentropic_efficiency=0.8"), or
   /// nothing while the entry is invalid.
@@ -57,22 +58,19 @@ class StudyChangeEditor : public QWidget {
   void changeEvent(QEvent* event) override;
 
  private:
-  void fillInputs();
   void applyDefault();
   void validate();
   void writeValue();
 
   DisplayUnits& units_;
   engine::Case case_;
-  std::vector<StudyInput> inputs_;
-  StudyInput input_;
-  std::string preferred_;  ///< the input asked for, chosen whenever the case has it
+  QComboBox* inputBox_;  // before choice_, which works on it
+  StudyInputChoice choice_;
   double value_ = 0.0;
   bool valueOk_ = true;
   bool userValue_ = false;
   QString ownProblem_, conflict_;
 
-  QComboBox* inputBox_ = nullptr;
   QLineEdit* valueEdit_ = nullptr;
   QLabel* equals_ = nullptr;
   QLabel* error_ = nullptr;

@@ -125,21 +125,4 @@ StudyRange defaultStudyRange(const FieldSpec& field, double value) {
   return {start, stop};
 }
 
-bool sameStudyInputs(const std::vector<StudyInput>& a, const std::vector<StudyInput>& b) {
-  return std::equal(a.begin(), a.end(), b.begin(), b.end(), [](const StudyInput& x, const StudyInput& y) {
-    return x.field == y.field && x.path == y.path;
-  });
-}
-
-StudyInput reselectStudyInput(const std::vector<StudyInput>& offered, const std::string& shown,
-                              const std::string& preferred, bool& fresh) {
-  StudyInput chosen;
-  for (const StudyInput& i : offered)
-    if (i.path == shown) chosen = i;
-  for (const StudyInput& i : offered)
-    if (i.path == preferred) chosen = i;
-  fresh = chosen.path != shown || !chosen.field;
-  return chosen;
-}
-
 }  // namespace cw::gui

@@ -27,16 +27,6 @@ std::vector<StudyInput> studyInputs(const engine::Case& inputs);
 /// The input at `path` among studyInputs(inputs), or an empty input (field null) when the case has none.
 StudyInput studyInput(const engine::Case& inputs, const std::string& path);
 
-/// Whether two lists offer the same inputs (an edit that leaves them so need not rebuild a choice).
-bool sameStudyInputs(const std::vector<StudyInput>& a, const std::vector<StudyInput>& b);
-
-/// The input to show once the inputs on offer have changed: the preferred one (the user's or the
-/// settings' choice) when offered, else the one shown when still offered, else an empty input
-/// (field null: the caller picks its own default). `fresh` is set when the result is not the
-/// input shown, whose range or value then take their defaults.
-StudyInput reselectStudyInput(const std::vector<StudyInput>& offered, const std::string& shown,
-                              const std::string& preferred, bool& fresh);
-
 /// "Compressor › Pressure ratio pt3/pt2" (translated; no unit).
 QString studyInputName(const StudyInput& input);
 /// The name without the component, e.g. "Pressure ratio pt3/pt2" (translated).
