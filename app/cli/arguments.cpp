@@ -1,21 +1,11 @@
 #include "arguments.h"
 
 #include "common/error.h"
-
-#include <charconv>
-#include <cmath>
+#include "common/number_text.h"
+#include "common/text.h"
+#include "io/case_keys.h"
 
 namespace cw::cli {
-
-std::optional<double> parseNumber(const std::string& text) {
-  double value = 0.0;
-  const char* first = text.data();
-  const char* last = text.data() + text.size();
-  if (first != last && *first == '+') ++first;
-  auto [end, ec] = std::from_chars(first, last, value);
-  if (ec != std::errc() || end != last || !std::isfinite(value)) return std::nullopt;
-  return value;
-}
 
 Arguments::Arguments(const std::vector<std::string>& words, const std::vector<OptionSpec>& specs) {
   for (std::size_t i = 0; i < words.size(); ++i) {
@@ -33,7 +23,15 @@ Arguments::Arguments(const std::vector<std::string>& words, const std::vector<Op
     const OptionSpec* spec = nullptr;
     for (const auto& s : specs)
       if (s.name == name) spec = &s;
-    if (!spec) throw InvalidInput("--" + name, "unknown option (see --help)");
+    if (!spec) {
+      std::vector<std::string_view> names;
+      for (const auto& s : specs) names.push_back(s.name);
+      const std::string suggestion = io::closestName(name, names);
+      throw InvalidInput("--" + name,
+                         "unknown option" +
+                             (suggestion.empty() ? std::string() : " (did you mean --" + suggestion + "?)") +
+                             " (see --help)");
+    }
     if (!spec->takesValue) {
       if (inlineValue) throw InvalidInput("--" + name, "is a switch and takes no value");
       switches_.insert(name);
@@ -64,9 +62,13 @@ std::vector<std::string> Arguments::all(const std::string& name) const {
 double Arguments::number(const std::string& name) const {
   auto value = text(name);
   if (!value) throw InvalidInput("--" + name, "is required");
-  auto parsed = parseNumber(*value);
-  if (!parsed) throw InvalidInput("--" + name, "'" + *value + "' is not a finite number");
-  return *parsed;
+  return parseNumber(*value, "--" + name);
+}
+
+long long Arguments::wholeNumber(const std::string& name, long long minimum, long long maximum,
+                                 long long fallback) const {
+  const auto value = text(name);
+  return value ? parseWholeNumber(*value, "--" + name, minimum, maximum) : fallback;
 }
 
 double Arguments::number(const std::string& name, double fallback) const {

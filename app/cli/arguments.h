@@ -27,10 +27,15 @@ class Arguments {
   bool has(const std::string& name) const;
   /// The option's text, or nullopt when absent.
   std::optional<std::string> text(const std::string& name) const;
-  /// The option as a finite number; throws InvalidInput when absent or not a number.
+  /// The option as a finite number; throws InvalidInput when absent or not a number, saying
+  /// which ("expected a number", "too large", "too close to zero").
   double number(const std::string& name) const;
   /// The option as a finite number, or the fallback when absent.
   double number(const std::string& name, double fallback) const;
+  /// The option as a whole number in [minimum, maximum], or the fallback when absent; throws
+  /// InvalidInput "expected a whole number from MIN to MAX" otherwise.
+  long long wholeNumber(const std::string& name, long long minimum, long long maximum,
+                        long long fallback) const;
   /// Every value given for a repeatable option, in order (e.g. several --set).
   std::vector<std::string> all(const std::string& name) const;
   /// Words that are not options (e.g. a case file).
@@ -41,8 +46,5 @@ class Arguments {
   std::set<std::string> switches_;
   std::vector<std::string> positional_;
 };
-
-/// Parses a whole string as a finite double in the C locale; nullopt otherwise.
-std::optional<double> parseNumber(const std::string& text);
 
 }  // namespace cw::cli

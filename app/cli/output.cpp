@@ -1,6 +1,7 @@
 #include "output.h"
 
 #include "common/error.h"
+#include "common/text.h"
 
 #include <algorithm>
 #include <ostream>
@@ -8,11 +9,25 @@
 
 namespace cw::cli {
 
-Format parseFormat(const std::string& text) {
-  if (text == "text") return Format::Text;
-  if (text == "json") return Format::Json;
-  if (text == "csv") return Format::Csv;
-  throw InvalidInput("--format", "'" + text + "' is not one of text, json, csv");
+std::string formatName(Format format) {
+  switch (format) {
+    case Format::Text:
+      return "text";
+    case Format::Json:
+      return "json";
+    case Format::Csv:
+      return "csv";
+  }
+  return "";
+}
+
+Format parseFormat(const std::string& text, const std::vector<Format>& formats) {
+  std::string names;
+  for (Format format : formats) {
+    if (text == formatName(format)) return format;
+    names += (names.empty() ? "" : ", ") + formatName(format);
+  }
+  throw InvalidInput("--format", "expected one of " + names + ", got \"" + excerpt(text) + "\"");
 }
 
 static void flatten(const nlohmann::json& value, const std::string& prefix,

@@ -7,13 +7,18 @@
 
 #include <iosfwd>
 #include <string>
+#include <vector>
 
 namespace cw::cli {
 
 enum class Format { Text, Json, Csv };
 
-/// Parses "text", "json" or "csv"; throws InvalidInput naming --format otherwise.
-Format parseFormat(const std::string& text);
+/// "text", "json" or "csv".
+std::string formatName(Format format);
+
+/// The format named by text among those a verb writes; throws InvalidInput naming --format and
+/// the verb's formats otherwise.
+Format parseFormat(const std::string& text, const std::vector<Format>& formats);
 
 /// Prints a JSON object: pretty JSON, or "key  value" lines for text (nested objects flattened with '.').
 void printRecord(std::ostream& out, const nlohmann::json& record, Format format);

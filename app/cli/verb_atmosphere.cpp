@@ -9,9 +9,8 @@ namespace cw::cli {
 
 namespace {
 
-int runAtmosphere(const Arguments& args, std::ostream& out) {
+int runAtmosphere(const Arguments& args, Format format, std::ostream& out) {
   using atmosphere::StandardAtmosphere;
-  const Format format = parseFormat(args.text("format").value_or("text"));
   const double altitude = args.number("altitude-m");
   const bool geometric = args.has("geometric");
   const double offset = args.number("isa-offset-K", 0.0);
@@ -44,15 +43,16 @@ Verb atmosphereVerb() {
   return {
       "atmosphere",
       "U.S. Standard Atmosphere 1976 (-5 km to 86 km geometric), with an ISA temperature offset",
-      "--altitude-m H [--geometric] [--isa-offset-K DT] [--format json|text]",
+      "--altitude-m H [--geometric] [--isa-offset-K DT]",
       {
           {"altitude-m", true,
            "altitude in m, geopotential [-5003.9, 84852.0] unless --geometric ([-5000, 86000])"},
           {"geometric", false, "read --altitude-m as geometric altitude (default: geopotential)"},
           {"isa-offset-K", true,
            "temperature offset dT in K, [-100, 100]; T = T_std + dT at the standard pressure (default 0)"},
-          {"format", true, "output format: text (default), json or csv"},
       },
+      {Format::Text, Format::Json, Format::Csv},
+      "text (default), json or csv: one record of the values",
       &runAtmosphere};
 }
 

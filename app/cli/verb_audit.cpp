@@ -172,9 +172,8 @@ void printText(std::ostream& out, const analysis::LossAudit& a) {
   out << '(' << kFrameNote << ")\n\n" << kCaution << '\n';
 }
 
-int runAudit(const Arguments& args, std::ostream& out) {
+int runAudit(const Arguments& args, Format format, std::ostream& out) {
   if (args.positional().size() != 1) throw InvalidInput("CASE", "give exactly one case file");
-  const Format format = parseFormat(args.text("format").value_or("text"));
   std::vector<std::string> order;
   if (const auto text = args.text("order")) order = splitOrder(*text);
   nlohmann::json document = io::readCaseDocument(args.positional().front());
@@ -199,12 +198,13 @@ int runAudit(const Arguments& args, std::ostream& out) {
 Verb auditVerb() {
   return {"audit",
           "what each loss costs: removed alone, waterfall from the ideal twin, sensitivities, exergy",
-          "CASE.json [--set path.to.key=VALUE ...] [--order a,b,c] [--format json|csv|text]",
+          "CASE.json [--set path.to.key=VALUE ...] [--order a,b,c]",
           {{"set", true, "override one input, e.g. --set compressor.pressure_ratio=12 (repeatable)"},
            {"order", true,
             "waterfall order, comma-separated loss keys (the rest follow in flow order): " +
-                analysis::lossKeyList()},
-           {"format", true, "json (all views), csv (the waterfall table) or text"}},
+                analysis::lossKeyList()}},
+          {Format::Text, Format::Json, Format::Csv},
+          "text (default), json (all views) or csv (the waterfall table)",
           &runAudit};
 }
 

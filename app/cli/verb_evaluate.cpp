@@ -50,12 +50,12 @@ void printText(std::ostream& out, const engine::Evaluation& e) {
   out << '\n' << kCaution << '\n';
 }
 
-int runEvaluate(const Arguments& args, std::ostream& out) {
+int runEvaluate(const Arguments& args, Format format, std::ostream& out) {
   if (args.positional().size() != 1) throw InvalidInput("CASE", "give exactly one case file");
-  const Format format = parseFormat(args.text("format").value_or("text"));
-  nlohmann::json document = io::readCaseDocument(args.positional().front());
+  const std::string& path = args.positional().front();
+  nlohmann::json document = io::readCaseDocument(path);
   for (const auto& assignment : args.all("set")) io::applySetOverride(document, assignment);
-  const engine::Evaluation evaluation = engine::evaluateCase(io::parseCase(document));
+  const engine::Evaluation evaluation = engine::evaluateCase(io::parseCase(document, path));
   switch (format) {
     case Format::Json:
       out << io::evaluationToJson(evaluation).dump(2) << '\n';
@@ -73,13 +73,14 @@ int runEvaluate(const Arguments& args, std::ostream& out) {
 }  // namespace
 
 Verb evaluateVerb() {
-  return {
-      "evaluate",
-      "evaluate a design-point case file with losses and its ideal twin",
-      "CASE.json [--set path.to.key=VALUE ...] [--format json|csv|text]",
-      {{"set", true, "override one input, e.g. --set compressor.pressure_ratio=12 (repeatable)"},
-       {"format", true, "json (stations, performance, sizing, ideal, paths), csv (station table) or text"}},
-      &runEvaluate};
+  return {"evaluate",
+          "evaluate a design-point case file with losses and its ideal twin",
+          "CASE.json [--set path.to.key=VALUE ...]",
+          {{"set", true, "override one input, e.g. --set compressor.pressure_ratio=12 (repeatable)"}},
+          {Format::Text, Format::Json, Format::Csv},
+          "text (default: summary and station table), json (stations, performance, sizing, ideal, paths) or "
+          "csv (the station table)",
+          &runEvaluate};
 }
 
 }  // namespace cw::cli

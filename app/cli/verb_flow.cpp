@@ -9,9 +9,8 @@ namespace cw::cli {
 
 namespace {
 
-int runFlow(const Arguments& args, std::ostream& out) {
+int runFlow(const Arguments& args, Format format, std::ostream& out) {
   namespace ideal = flow::ideal;
-  const Format format = parseFormat(args.text("format").value_or("text"));
   const double gamma = args.number("gamma");
   const double mach = args.number("mach");
   const bool shock = args.has("normal-shock");
@@ -44,13 +43,14 @@ int runFlow(const Arguments& args, std::ostream& out) {
 Verb flowVerb() {
   return {"flow",
           "isentropic and normal-shock ratios of a constant-gamma gas (NACA Report 1135)",
-          "--gamma G --mach M [--normal-shock] [--format json|text]",
+          "--gamma G --mach M [--normal-shock]",
           {
               {"gamma", true, "ratio of specific heats, (1, 5/3]"},
               {"mach", true, "Mach number, [0, 50] ([1, 50] with --normal-shock); A/A* is left out at M = 0"},
               {"normal-shock", false, "also print the normal-shock ratios for upstream Mach number M"},
-              {"format", true, "output format: text (default), json or csv"},
           },
+          {Format::Text, Format::Json, Format::Csv},
+          "text (default), json or csv: one record of the ratios",
           &runFlow};
 }
 

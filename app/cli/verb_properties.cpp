@@ -23,9 +23,8 @@ std::string gasNames() {
   return thermo::SpeciesTable::standard().namesList() + ", air, products";
 }
 
-int runProperties(const Arguments& args, std::ostream& out) {
+int runProperties(const Arguments& args, Format format, std::ostream& out) {
   using thermo::Composition;
-  const Format format = parseFormat(args.text("format").value_or("text"));
   const auto name = args.text("gas");
   if (!name) throw InvalidInput("--gas", "is required (one of " + gasNames() + ")");
   const thermo::SpeciesTable& table = thermo::SpeciesTable::standard();
@@ -80,7 +79,7 @@ Verb propertiesVerb() {
   return {
       "properties",
       "thermally perfect properties of a species, dry air or combustion products (NASA TM-4513 data)",
-      "--gas NAME --temperature-K T [--pressure-Pa P] [--fuel-air-ratio F] [--format json|text]",
+      "--gas NAME --temperature-K T [--pressure-Pa P] [--fuel-air-ratio F]",
       {
           {"gas", true,
            "N2, O2, Ar, CO2, H2O, CO, H2, OH, H, O, NO, N; air (dry, U.S. Standard Atmosphere 1976); or "
@@ -89,8 +88,9 @@ Verb propertiesVerb() {
           {"pressure-Pa", true, "pressure in Pa, > 0, for the entropy (default 101325)"},
           {"fuel-air-ratio", true,
            "kg fuel per kg air for --gas products, [0, stoichiometric = 0.0683] (default 0)"},
-          {"format", true, "output format: text (default), json or csv"},
       },
+      {Format::Text, Format::Json, Format::Csv},
+      "text (default), json or csv: one record of the properties",
       &runProperties};
 }
 

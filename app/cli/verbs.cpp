@@ -1,9 +1,12 @@
 #include "verbs.h"
 
 #include "common/error.h"
+#include "common/text.h"
 #include "common/version.h"
+#include "io/case_keys.h"
 
 #include <algorithm>
+#include <new>
 #include <ostream>
 
 namespace cw::cli {
@@ -38,62 +41,104 @@ static void printTopHelp(std::ostream& out) {
   out << "\n"
          "Run 'cyclewright-cli VERB --help' for a verb's options.\n"
          "\n"
-         "Exit status: 0 success, 2 invalid input (one line on stderr names the argument,\n"
-         "the value and the valid range), 3 no solution for the inputs (for sweep: no point\n"
+         "Exit status: 0 success, 1 internal error (out of memory, a fault; one line on\n"
+         "stderr), 2 invalid input (one line on stderr names the argument or file, the\n"
+         "value and the valid range), 3 no solution for the inputs (for sweep: no point\n"
          "has a cycle), 130 a sweep stopped by Ctrl+C (the points run are written).\n"
          "\n"
       << kCaution << '\n';
 }
 
+static std::string formatChoices(const Verb& verb) {
+  std::string text;
+  for (Format format : verb.formats) text += (text.empty() ? "" : "|") + formatName(format);
+  return text;
+}
+
+static std::vector<OptionSpec> optionsOf(const Verb& verb) {
+  std::vector<OptionSpec> options = verb.options;
+  options.push_back({"format", true, verb.formatHelp});
+  return options;
+}
+
 static void printVerbHelp(std::ostream& out, const Verb& verb) {
-  out << "Usage: cyclewright-cli " << verb.name << ' ' << verb.usage << "\n\n"
+  out << "Usage: cyclewright-cli " << verb.name << ' ' << verb.usage << " [--format " << formatChoices(verb)
+      << "]\n\n"
       << verb.summary << "\n\nOptions:\n";
-  for (const auto& option : verb.options)
+  for (const auto& option : optionsOf(verb))
     out << "  --" << option.name << (option.takesValue ? " VALUE" : "") << "\n      " << option.help << '\n';
   out << "  --help\n      show this help\n";
 }
 
+/// One line on stderr, whatever the message holds: lines joined, invalid UTF-8 escaped.
+static void printError(std::ostream& err, const std::string& verb, const std::string& message) {
+  std::string line = message;
+  for (std::size_t at = line.find('\n'); at != std::string::npos; at = line.find('\n', at))
+    line.replace(at, 1, "; ");
+  err << "cyclewright-cli" << (verb.empty() ? "" : " " + verb) << ": " << excerpt(line, 0) << '\n';
+}
+
+static int exitStatusOf(const Error& e) {
+  switch (e.code()) {
+    case ErrorCode::InvalidInput:
+    case ErrorCode::OutOfRange:
+      return kExitInvalidInput;
+    case ErrorCode::NotConverged:
+    case ErrorCode::NoSolution:
+      return kExitNoSolution;
+  }
+  return kExitNoSolution;
+}
+
+static int runVerb(const Verb& verb, const std::vector<std::string>& words, std::ostream& out) {
+  const Arguments args(words, optionsOf(verb));
+  const auto formatText = args.text("format");
+  const Format format = formatText ? parseFormat(*formatText, verb.formats) : verb.formats.front();
+  return verb.run(args, format, out);
+}
+
 int runCommandLine(const std::vector<std::string>& words, std::ostream& out, std::ostream& err) {
-  if (words.empty() || words[0] == "--help" || words[0] == "-h" || words[0] == "help") {
-    printTopHelp(out);
-    return words.empty() ? kExitInvalidInput : kExitOk;
-  }
-  if (words[0] == "--version") {
-    out << "cyclewright-cli " << kVersion << '\n';
-    return kExitOk;
-  }
-  const Verb* verb = nullptr;
-  for (const auto& v : allVerbs())
-    if (v.name == words[0]) verb = &v;
-  if (!verb) {
-    err << "cyclewright-cli: unknown verb '" << words[0] << "' (see cyclewright-cli --help)\n";
-    return kExitInvalidInput;
-  }
-  std::vector<std::string> rest(words.begin() + 1, words.end());
-  for (const auto& word : rest) {
-    if (word == "--help" || word == "-h") {
-      printVerbHelp(out, *verb);
+  std::string verbName;
+  // Nothing escapes: input errors exit 2, failed solves 3, anything else (out of memory, a bug) 1.
+  try {
+    if (words.empty() || words[0] == "--help" || words[0] == "-h" || words[0] == "help") {
+      printTopHelp(out);
+      return words.empty() ? kExitInvalidInput : kExitOk;
+    }
+    if (words[0] == "--version") {
+      out << "cyclewright-cli " << kVersion << '\n';
       return kExitOk;
     }
-  }
-  try {
-    Arguments args(rest, verb->options);
-    return verb->run(args, out);
-  } catch (const Error& e) {
-    // One line on stderr, even when a case file has several problems.
-    std::string message = e.what();
-    for (std::size_t at = message.find('\n'); at != std::string::npos; at = message.find('\n', at))
-      message.replace(at, 1, "; ");
-    err << "cyclewright-cli " << verb->name << ": " << message << '\n';
-    switch (e.code()) {
-      case ErrorCode::InvalidInput:
-      case ErrorCode::OutOfRange:
-        return kExitInvalidInput;
-      case ErrorCode::NotConverged:
-      case ErrorCode::NoSolution:
-        return kExitNoSolution;
+    const Verb* verb = nullptr;
+    for (const auto& v : allVerbs())
+      if (v.name == words[0]) verb = &v;
+    if (!verb) {
+      std::vector<std::string_view> names;
+      for (const auto& v : allVerbs()) names.push_back(v.name);
+      const std::string suggestion = io::closestName(words[0], names);
+      err << "cyclewright-cli: unknown verb \"" << excerpt(words[0]) << "\""
+          << (suggestion.empty() ? "" : " (did you mean " + suggestion + "?)")
+          << " (see cyclewright-cli --help)\n";
+      return kExitInvalidInput;
     }
-    return kExitNoSolution;
+    verbName = verb->name;
+    std::vector<std::string> rest(words.begin() + 1, words.end());
+    for (const auto& word : rest) {
+      if (word == "--help" || word == "-h") {
+        printVerbHelp(out, *verb);
+        return kExitOk;
+      }
+    }
+    return runVerb(*verb, rest, out);
+  } catch (const Error& e) {
+    printError(err, verbName, e.what());
+    return exitStatusOf(e);
+  } catch (const std::bad_alloc&) {
+    printError(err, verbName, "out of memory");
+    return kExitInternal;
+  } catch (const std::exception& e) {
+    printError(err, verbName, std::string("internal error: ") + e.what());
+    return kExitInternal;
   }
 }
 

@@ -5,6 +5,7 @@
 // dispatcher turns that into one line on stderr and an exit status.
 
 #include "arguments.h"
+#include "output.h"
 
 #include <iosfwd>
 #include <string>
@@ -15,6 +16,7 @@ namespace cw::cli {
 /// Exit statuses of cyclewright-cli (documented in --help and docs/cli.md).
 enum ExitStatus : int {
   kExitOk = 0,
+  kExitInternal = 1,      ///< an internal error (out of memory, a bug): one line names it
   kExitInvalidInput = 2,  ///< bad argument, out-of-range value, invalid case file
   kExitNoSolution = 3,    ///< no cycle (or no converged solution) exists for the inputs
 };
@@ -22,9 +24,11 @@ enum ExitStatus : int {
 struct Verb {
   std::string name;
   std::string summary;  ///< one line for the top-level --help
-  std::string usage;    ///< e.g. "--gas NAME --temperature-K T [--pressure-Pa P]"
-  std::vector<OptionSpec> options;
-  int (*run)(const Arguments& args, std::ostream& out);
+  std::string usage;    ///< e.g. "--gas NAME --temperature-K T [--pressure-Pa P]", without --format
+  std::vector<OptionSpec> options;  ///< without --format, which the dispatcher adds from `formats`
+  std::vector<Format> formats;      ///< the output formats the verb writes; the first is the default
+  std::string formatHelp;           ///< what each format holds, e.g. "csv (the station table)"
+  int (*run)(const Arguments& args, Format format, std::ostream& out);
 };
 
 /// All verbs, in the order --help lists them.

@@ -57,7 +57,17 @@ class NoSolution : public Error {
   NoSolution(std::string where, std::string reason);
 };
 
-/// Formats a double for messages: shortest form that round-trips, no locale.
+/// Formats a double for messages: shortest form that round-trips, no locale. For values the user
+/// gave (so that a message quotes them exactly).
 std::string formatNumber(double value);
+
+/// Formats a double for a message: its shortest round-trip form when that has at most 12
+/// significant digits (every value a user types), else 6 significant digits (a computed value:
+/// 15442.25285167574 -> "15442.3"). Every number in an error message goes through this.
+std::string messageNumber(double value);
+
+/// Formats a computed double for messages to `digits` significant digits (default 6), no
+/// locale, no trailing zeros: 412345.678901 -> "412346", 0.000123456789 -> "0.000123457".
+std::string formatSignificant(double value, int digits = 6);
 
 }  // namespace cw

@@ -33,20 +33,20 @@ HeatAddition::Result HeatAddition::toExitTemperature(const engine::TotalState& e
   const double available = model_.stoichiometricFuelAirRatio() - f1;
   if (available <= 0.0)
     throw NoSolution(
-        name_, "the entering gas holds no oxygen left to burn (fuel-air ratio " + formatNumber(f1) + ")");
+        name_, "the entering gas holds no oxygen left to burn (fuel-air ratio " + messageNumber(f1) + ")");
   // Linear in df: two evaluations give the root; secant steps polish it.
   double a = 0.0, b = available;
   double ra = residual(entry, a, exitTemperature), rb = residual(entry, b, exitTemperature);
   double df = a - ra * (b - a) / (rb - ra);
   for (int i = 0; i < 8; ++i) {
     if (!(df >= 0.0)) {
-      throw NoSolution(name_, "the exit temperature " + formatNumber(exitTemperature) +
+      throw NoSolution(name_, "the exit temperature " + messageNumber(exitTemperature) +
                                   " K is below what the entering gas already has; no fuel can be burnt");
     }
     if (df > available) {
-      throw NoSolution(name_, "the exit temperature " + formatNumber(exitTemperature) +
+      throw NoSolution(name_, "the exit temperature " + messageNumber(exitTemperature) +
                                   " K needs more fuel than the stoichiometric fuel-air ratio " +
-                                  formatNumber(model_.stoichiometricFuelAirRatio()) + " allows");
+                                  messageNumber(model_.stoichiometricFuelAirRatio()) + " allows");
     }
     const double r = residual(entry, df, exitTemperature);
     if (std::abs(r) <= 1e-12 * (std::abs(entry.enthalpy) + model_.lowerHeatingValue() * df + 1.0)) break;
@@ -62,8 +62,8 @@ HeatAddition::Result HeatAddition::toExitTemperature(const engine::TotalState& e
 HeatAddition::Result HeatAddition::withFuelAirRatio(const engine::TotalState& entry, double df) const {
   const double f1 = entry.fuelAirRatio;
   if (f1 + df > model_.stoichiometricFuelAirRatio())
-    throw NoSolution(name_, "fuel-air ratio " + formatNumber(f1 + df) + " is above the stoichiometric " +
-                                formatNumber(model_.stoichiometricFuelAirRatio()));
+    throw NoSolution(name_, "fuel-air ratio " + messageNumber(f1 + df) + " is above the stoichiometric " +
+                                messageNumber(model_.stoichiometricFuelAirRatio()));
   const double fuelTerm = model_.fuelEnthalpy() - (1.0 - combustionEfficiency_) * model_.lowerHeatingValue();
   const double exitEnthalpy =
       (massPerAir(model_, f1) * entry.enthalpy + df * fuelTerm) / massPerAir(model_, f1 + df);

@@ -31,8 +31,8 @@ IdealExpansion idealExpansion(const engine::TotalState& entry, double pressure) 
 Nozzle::Result Nozzle::expand(const engine::TotalState& entry, double ambientPressure) const {
   const thermo::Gas& gas = *entry.gas;
   if (!(entry.pressure > ambientPressure))
-    throw NoSolution("nozzle", "the nozzle entry total pressure " + formatNumber(entry.pressure) +
-                                   " Pa is not above the ambient pressure " + formatNumber(ambientPressure) +
+    throw NoSolution("nozzle", "the nozzle entry total pressure " + messageNumber(entry.pressure) +
+                                   " Pa is not above the ambient pressure " + messageNumber(ambientPressure) +
                                    " Pa, so there is no jet");
   Result result;
   result.velocityCoefficient = inputs_.lossBasis == engine::NozzleLossBasis::VelocityCoefficient
@@ -64,8 +64,8 @@ Nozzle::Result Nozzle::expand(const engine::TotalState& entry, double ambientPre
                                     gas.gasConstant()));
       if (fixed->exitToThroatAreaRatio > 1.0 && flux(lowest) > 0.0)
         throw NoSolution("nozzle", "the exit-to-throat area ratio " +
-                                       formatNumber(fixed->exitToThroatAreaRatio) +
-                                       " expands the jet below " + formatNumber(gas.minimumTemperature()) +
+                                       messageNumber(fixed->exitToThroatAreaRatio) +
+                                       " expands the jet below " + messageNumber(gas.minimumTemperature()) +
                                        " K, the lowest temperature of the gas data");
       exitPressure = fixed->exitToThroatAreaRatio == 1.0
                          ? pStar

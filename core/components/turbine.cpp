@@ -13,8 +13,8 @@ Turbine::Result Turbine::exit(const engine::TotalState& entry, double compressor
   const double exitEnthalpy = entry.enthalpy - specificWork;
   const char* why = "the turbine cannot drive the compressor";
   if (!(exitEnthalpy > gas.enthalpy(gas.minimumTemperature())))
-    throw NoSolution("turbine", std::string(why) + ": it would need " + formatNumber(specificWork) +
-                                    " J/kg, more than the gas at " + formatNumber(entry.temperature) +
+    throw NoSolution("turbine", std::string(why) + ": it would need " + messageNumber(specificWork) +
+                                    " J/kg, more than the gas at " + messageNumber(entry.temperature) +
                                     " K holds");
   Result result;
   engine::TotalState& out = result.exit;
@@ -29,11 +29,11 @@ Turbine::Result Turbine::exit(const engine::TotalState& entry, double compressor
     isentropicTemperature = e.isentropicTemperature;
   } catch (const OutOfRange&) {
     throw NoSolution("turbine", std::string(why) + ": the isentropic expansion for " +
-                                    formatNumber(specificWork) + " J/kg leaves the range of the gas data");
+                                    messageNumber(specificWork) + " J/kg leaves the range of the gas data");
   }
   if (!(out.pressure > 0.0) || !std::isfinite(out.pressure))
     throw NoSolution("turbine",
-                     std::string(why) + ": no exit pressure gives " + formatNumber(specificWork) + " J/kg");
+                     std::string(why) + ": no exit pressure gives " + messageNumber(specificWork) + " J/kg");
   out.massFlow = entry.massFlow;
   out.fuelAirRatio = entry.fuelAirRatio;
   result.specificWork = specificWork;

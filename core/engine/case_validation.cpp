@@ -25,7 +25,7 @@ struct Interval {
     return aboveLow && belowHigh;
   }
   std::string text() const {
-    return std::string(lowClosed ? "[" : "(") + formatNumber(low) + ", " + formatNumber(high) +
+    return std::string(lowClosed ? "[" : "(") + messageNumber(low) + ", " + messageNumber(high) +
            (highClosed ? "]" : ")");
   }
 };

@@ -10,7 +10,8 @@
 namespace cw::engine {
 
 /// A case with one or more problems. code() is ErrorCode::InvalidInput, where() names the
-/// source (a file path, or "case"), what() gives the problems' messages one per line.
+/// source (a file path, or "case"), what() gives the problems' messages one per line, the
+/// first prefixed with "<source>: " when the source is a file.
 class CaseValidationError : public Error {
  public:
   CaseValidationError(std::string where, std::vector<CaseProblem> problems);

@@ -86,9 +86,9 @@ Assembly::Assembly(const Case& inputs, const thermo::GasModel& model, bool withP
       fs_(freeStreamOf(inputs.flight)) {
   const thermo::Gas& air = *air_;
   if (fs_.temperature < air.minimumTemperature() || fs_.temperature > air.maximumTemperature())
-    throw OutOfRange(
-        "/flight (ambient temperature, " + model.kind() + " gas data)", fs_.temperature, "K",
-        "[" + formatNumber(air.minimumTemperature()) + ", " + formatNumber(air.maximumTemperature()) + "] K");
+    throw OutOfRange("/flight (ambient temperature, " + model.kind() + " gas data)", fs_.temperature, "K",
+                     "[" + messageNumber(air.minimumTemperature()) + ", " +
+                         messageNumber(air.maximumTemperature()) + "] K");
   entropyReference_ = air.entropy(fs_.temperature, fs_.pressure);
   free_ = flow::fromStatic(air, fs_.temperature, fs_.pressure, fs_.mach);
 }
@@ -180,7 +180,7 @@ CycleResult Assembly::at(double airMassFlow) const {
   perf.ramDrag = airMassFlow * free.velocity;
   perf.netThrust = perf.grossThrust - perf.ramDrag;
   if (!(perf.netThrust > 0.0))
-    throw NoSolution("cycle", "the net thrust " + formatNumber(perf.netThrust) +
+    throw NoSolution("cycle", "the net thrust " + messageNumber(perf.netThrust) +
                                   " N is not positive: the jet is slower than the flight speed");
   perf.specificThrust = perf.netThrust / airMassFlow;
   perf.fuelFlow = combustion.fuelMassFlow + afterburnerFuel;

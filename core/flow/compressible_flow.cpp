@@ -16,9 +16,9 @@ void checkTemperatureIn(const thermo::Gas& gas, double temperature, const char* 
   if (!std::isfinite(temperature) || temperature < gas.minimumTemperature() ||
       temperature > gas.maximumTemperature())
     throw InvalidInput(where, temperature, "K",
-                       "[" + formatNumber(gas.minimumTemperature()) + ", " +
-                           formatNumber(gas.maximumTemperature()) + "] K (the range of " + gas.description() +
-                           ")");
+                       "[" + messageNumber(gas.minimumTemperature()) + ", " +
+                           messageNumber(gas.maximumTemperature()) + "] K (the range of " +
+                           gas.description() + ")");
 }
 
 void checkPressure(double pressure, const char* where) {
@@ -58,8 +58,8 @@ FlowState fromTotal(const thermo::Gas& gas, double Tt, double pt, double mach) {
       const double aMin = gas.speedOfSound(Tmin);
       const double maxMach = std::sqrt(2.0 * (ht - gas.enthalpy(Tmin))) / aMin;
       throw OutOfRange("Mach number", mach, "",
-                       "[0, " + formatNumber(maxMach) + "] at Tt = " + formatNumber(Tt) +
-                           " K (the static temperature would fall below " + formatNumber(Tmin) +
+                       "[0, " + messageNumber(maxMach) + "] at Tt = " + messageNumber(Tt) +
+                           " K (the static temperature would fall below " + messageNumber(Tmin) +
                            " K, the lower limit of " + gas.description() + ")");
     }
     T = findRoot(f, Tmin, Tt, "static temperature from total temperature and Mach number");
@@ -84,8 +84,8 @@ FlowState fromStatic(const thermo::Gas& gas, double T, double p, double mach) {
   if (ht > hMax) {
     const double maxMach = std::sqrt(2.0 * (hMax - gas.enthalpy(T))) / gas.speedOfSound(T);
     throw OutOfRange("Mach number", mach, "",
-                     "[0, " + formatNumber(maxMach) + "] at T = " + formatNumber(T) +
-                         " K (the total temperature would exceed " + formatNumber(gas.maximumTemperature()) +
+                     "[0, " + messageNumber(maxMach) + "] at T = " + messageNumber(T) +
+                         " K (the total temperature would exceed " + messageNumber(gas.maximumTemperature()) +
                          " K, the upper limit of " + gas.description() + ")");
   }
   const double Tt = (mach > 0.0) ? gas.temperatureFromEnthalpy(ht) : T;
@@ -107,7 +107,7 @@ double machFromPressureRatio(const thermo::Gas& gas, double Tt, double ratio) {
     const double maxRatio =
         std::exp((gas.standardEntropy(Tt) - gas.standardEntropy(gas.minimumTemperature())) / R);
     throw OutOfRange("total-to-static pressure ratio", ratio, "",
-                     "[1, " + formatNumber(maxRatio) + "] at Tt = " + formatNumber(Tt) +
+                     "[1, " + messageNumber(maxRatio) + "] at Tt = " + messageNumber(Tt) +
                          " K (the static temperature would fall below the lower limit of " +
                          gas.description() + ")");
   }

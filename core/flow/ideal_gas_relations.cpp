@@ -15,7 +15,7 @@ constexpr double kMaximumLog = 709.0;
 double finiteExp(double logValue, const char* what, double gamma, double mach) {
   if (!(logValue < kMaximumLog))
     throw OutOfRange(std::string(what) + ": Mach number", mach, "",
-                     "values whose result fits in double precision for gamma = " + formatNumber(gamma));
+                     "values whose result fits in double precision for gamma = " + messageNumber(gamma));
   return std::exp(logValue);
 }
 
@@ -78,7 +78,7 @@ double machFromPressureRatio(double gamma, double ratio) {
   if (!std::isfinite(mach) || mach > kMaximumMach)
     throw InvalidInput(
         "total-to-static pressure ratio", ratio, "",
-        "[1, " + formatNumber(1.0 / pressureRatio(gamma, kMaximumMach)) + "] (Mach number up to 50)");
+        "[1, " + messageNumber(1.0 / pressureRatio(gamma, kMaximumMach)) + "] (Mach number up to 50)");
   return mach;
 }
 
@@ -96,7 +96,7 @@ double machFromAreaRatio(double gamma, double ratio, Branch branch) {
   if (f(kMaximumMach) < 0.0)
     throw InvalidInput(
         "area ratio A/A*", ratio, "",
-        "[1, " + formatNumber(areaRatio(gamma, kMaximumMach)) + "] on the supersonic branch (M <= 50)");
+        "[1, " + messageNumber(areaRatio(gamma, kMaximumMach)) + "] on the supersonic branch (M <= 50)");
   return findRoot(f, 1.0, kMaximumMach, "supersonic Mach number from area ratio");
 }
 

@@ -7,12 +7,12 @@
 namespace cw::flow::detail {
 
 void throwNotBracketed(std::string_view where, double lo, double hi) {
-  throw NoSolution(std::string(where), "the search interval [" + formatNumber(lo) + ", " + formatNumber(hi) +
-                                           "] does not bracket a root");
+  throw NoSolution(std::string(where), "the search interval [" + messageNumber(lo) + ", " +
+                                           messageNumber(hi) + "] does not bracket a root");
 }
 
 void throwNotFinite(std::string_view where, double x) {
-  throw NoSolution(std::string(where), "the function is not finite at " + formatNumber(x));
+  throw NoSolution(std::string(where), "the function is not finite at " + messageNumber(x));
 }
 
 void throwNotConverged(std::string_view where, int iterations, double residual) {

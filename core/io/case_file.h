@@ -21,13 +21,14 @@ namespace cw::io {
 inline constexpr std::string_view kCaseFormat = "cyclewright-case";
 inline constexpr int kCaseVersion = 1;
 
-/// The case a document describes; throws engine::CaseValidationError (where() = "case").
-engine::Case parseCase(const nlohmann::json& document);
+/// The case a document describes; throws engine::CaseValidationError (where() = source, the
+/// file the document came from, or "case").
+engine::Case parseCase(const nlohmann::json& document, const std::string& source = "case");
 
 /// The case a document describes, checked for structure only (unknown keys, types, choices,
 /// applicability, "exactly one of", required keys; every problem as one CaseValidationError)
 /// but not for value ranges: a trade study checks the ranges of each of its points on its own.
-engine::Case parseCaseStructure(const nlohmann::json& document);
+engine::Case parseCaseStructure(const nlohmann::json& document, const std::string& source = "case");
 
 /// Reads and parses a case file. A file that cannot be read or is not JSON throws
 /// cw::InvalidInput naming the path; duplicate keys and every problem of parseCase throw

@@ -157,6 +157,10 @@ std::string closestName(std::string_view name, const std::vector<std::string_vie
   std::string best;
   std::size_t bestDistance = 3;
   for (std::string_view candidate : candidates) {
+    // At most two edits apart means at most two characters longer or shorter: skip the rest
+    // unmeasured (a megabyte-long unknown key must not cost a megabyte times every name).
+    const std::size_t longer = std::max(name.size(), candidate.size());
+    if (longer - std::min(name.size(), candidate.size()) >= bestDistance) continue;
     const std::size_t d = editDistance(name, candidate);
     if (d < bestDistance) {
       bestDistance = d;

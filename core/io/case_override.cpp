@@ -1,11 +1,12 @@
 // Command-line overrides of case documents: applySetOverride (declared in io/case_file.h).
 #include "common/error.h"
+#include "common/number_text.h"
+#include "common/text.h"
 #include "io/case_file.h"
 #include "io/case_keys.h"
 
 #include <algorithm>
 #include <charconv>
-#include <cmath>
 
 namespace cw::io {
 
@@ -24,22 +25,6 @@ std::vector<std::string> split(const std::string& text, char separator) {
   }
 }
 
-/// A number in the C locale (std::from_chars ignores the global locale), the whole text, finite.
-bool parseNumber(const std::string& text, double& value) {
-  const char* begin = text.data();
-  const char* end = begin + text.size();
-  if (begin != end && *begin == '+') ++begin;
-  const auto [stop, ec] = std::from_chars(begin, end, value);
-  return ec == std::errc() && stop == end && begin != end && std::isfinite(value);
-}
-
-bool parseInteger(const std::string& text, long long& value) {
-  const char* begin = text.data();
-  const char* end = begin + text.size();
-  const auto [stop, ec] = std::from_chars(begin, end, value);
-  return ec == std::errc() && stop == end && begin != end;
-}
-
 std::string dotted(const CaseSection& section, std::string_view key) {
   return section.name.empty() ? std::string(key) : std::string(section.name) + "." + std::string(key);
 }
@@ -55,20 +40,19 @@ std::string unknownPathMessage(const std::string& path) {
 
 json valueFor(const CaseKey& key, const std::string& path, const std::string& text) {
   switch (key.type) {
-    case CaseKeyType::Number: {
-      double value = 0.0;
-      if (!parseNumber(text, value)) throw InvalidInput(path, "expected a number, got \"" + text + "\"");
-      return value;
-    }
+    case CaseKeyType::Number:
+      return cw::parseNumber(text, path);
     case CaseKeyType::Integer: {
       long long value = 0;
-      if (!parseInteger(text, value)) throw InvalidInput(path, "expected an integer, got \"" + text + "\"");
+      const auto [stop, ec] = std::from_chars(text.data(), text.data() + text.size(), value);
+      if (ec != std::errc() || stop != text.data() + text.size() || text.empty())
+        throw InvalidInput(path, "expected an integer, got \"" + excerpt(text) + "\"");
       return value;
     }
     case CaseKeyType::Boolean:
       if (text == "true") return true;
       if (text == "false") return false;
-      throw InvalidInput(path, "expected true or false, got \"" + text + "\"");
+      throw InvalidInput(path, "expected true or false, got \"" + excerpt(text) + "\"");
     case CaseKeyType::String:
     case CaseKeyType::Choice:
       return text;
@@ -97,6 +81,10 @@ void dropExcluded(const CaseSection& section, std::string_view name, const json&
 }  // namespace
 
 void applySetOverride(json& document, const std::string& assignment) {
+  if (const std::size_t bad = firstInvalidUtf8(assignment); bad != assignment.size())
+    throw InvalidInput("--set " + excerpt(assignment), "is not valid UTF-8 text (byte " +
+                                                           std::to_string(bad + 1) + " of " +
+                                                           std::to_string(assignment.size()) + ")");
   const auto equals = assignment.find('=');
   if (equals == std::string::npos || equals == 0)
     throw InvalidInput(assignment, "expected path.to.key=VALUE, e.g. compressor.pressure_ratio=12");

@@ -1,18 +1,15 @@
 // Reading case files: parseCase and readCaseFile (declared in io/case_file.h).
 #include "common/error.h"
+#include "common/text.h"
 #include "engine/case_validation.h"
 #include "engine/case_validation_error.h"
 #include "io/case_builder.h"
 #include "io/case_file.h"
 #include "io/case_structure_check.h"
+#include "io/json_document.h"
 
-#include <cerrno>
-#include <filesystem>
-#include <fstream>
 #include <functional>
 #include <set>
-#include <sstream>
-#include <system_error>
 
 namespace cw::io {
 
@@ -53,7 +50,7 @@ class DuplicateKeyFinder {
         Frame& frame = frames_.back();
         frame.key = parsed.get<std::string>();
         if (!frame.keys.insert(frame.key).second)
-          problems.push_back({path(), "", "each key once", path() + ": duplicate key"});
+          problems.push_back({path(), "", "each key once", excerpt(path()) + ": duplicate key"});
         break;
       }
       case json::parse_event_t::value:
@@ -81,46 +78,24 @@ class DuplicateKeyFinder {
   std::vector<Frame> frames_;
 };
 
-std::string stripExceptionPrefix(const std::string& text) {
-  // nlohmann's messages begin "[json.exception.parse_error.101] ".
-  const auto end = text.find("] ");
-  return text.rfind("[json.exception.", 0) == 0 && end != std::string::npos ? text.substr(end + 2) : text;
-}
-
 /// The document of a file, and the keys it gives twice.
 json loadDocument(const std::string& path, std::vector<engine::CaseProblem>& duplicateProblems) {
-  std::error_code ec;
-  if (std::filesystem::is_directory(path, ec)) throw InvalidInput(path, "cannot read case file: is a folder");
-  std::ifstream stream(path, std::ios::binary);
-  if (!stream) {
-    const int error = errno;
-    throw InvalidInput(path, "cannot read case file: " + (error != 0 ? std::generic_category().message(error)
-                                                                     : std::string("cannot open")));
-  }
-  std::ostringstream text;
-  text << stream.rdbuf();
-  if (stream.bad()) throw InvalidInput(path, "cannot read case file: read error");
-
+  const std::string text = readDocumentFile(path, "case file");
   DuplicateKeyFinder duplicates;
-  json document;
-  try {
-    document = json::parse(text.str(), std::ref(duplicates));
-  } catch (const json::parse_error& e) {
-    throw InvalidInput(path, "not valid JSON: " + stripExceptionPrefix(e.what()));
-  }
+  json document = parseDocumentText(text, path, std::ref(duplicates));
   duplicateProblems = std::move(duplicates.problems);
   return document;
 }
 
 }  // namespace
 
-engine::Case parseCase(const json& document) {
-  return parseWithProblems(document, {}, "case");
+engine::Case parseCase(const json& document, const std::string& source) {
+  return parseWithProblems(document, {}, source);
 }
 
-engine::Case parseCaseStructure(const json& document) {
+engine::Case parseCaseStructure(const json& document, const std::string& source) {
   const CaseStructureCheck structure(document);
-  if (!structure.problems().empty()) throw engine::CaseValidationError("case", structure.problems());
+  if (!structure.problems().empty()) throw engine::CaseValidationError(source, structure.problems());
   return buildCase(structure.clean());
 }
 

@@ -1,7 +1,9 @@
 #include "io/case_structure_check.h"
 
+#include "common/text.h"
 #include "io/case_file.h"
 #include "io/case_keys.h"
+#include "io/json_document.h"
 
 #include <algorithm>
 
@@ -86,16 +88,9 @@ std::string casePointer(std::string_view section, std::string_view key) {
   return pointer;
 }
 
-std::string shortJson(const json& value) {
-  std::string text = value.dump();
-  if (text.size() > 60) text = text.substr(0, 57) + "...";
-  return text;
-}
-
 CaseStructureCheck::CaseStructureCheck(const json& document) {
   if (!document.is_object()) {
-    add("", shortJson(document), "an object",
-        "the case document: expected a JSON object, got " + shortJson(document));
+    add("", shortJson(document), "an object", "expected a JSON object, got " + shortJson(document));
     return;
   }
   checkTopLevel(document);
@@ -103,7 +98,7 @@ CaseStructureCheck::CaseStructureCheck(const json& document) {
 
 void CaseStructureCheck::add(std::string path, std::string value, std::string valid,
                              const std::string& message) {
-  const std::string line = (path.empty() ? std::string("the case document") : path) + ": " + message;
+  const std::string line = (path.empty() ? std::string("the case document") : excerpt(path)) + ": " + message;
   problems_.push_back({std::move(path), std::move(value), std::move(valid), line});
 }
 

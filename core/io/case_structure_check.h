@@ -38,7 +38,4 @@ class CaseStructureCheck {
 /// "/section/key" (or "/key" at the top level), escaped as RFC 6901 requires.
 std::string casePointer(std::string_view section, std::string_view key);
 
-/// A value as short JSON text for messages.
-std::string shortJson(const nlohmann::json& value);
-
 }  // namespace cw::io

@@ -137,7 +137,7 @@ TradeStudy runTradeStudy(const TradeStudySpec& spec, std::stop_token stop, const
       throw InvalidInput("--vary " + axis.path, "is an alternative of the other varied input (" +
                                                     spec.axes[0].path + " or " + spec.axes[1].path +
                                                     "); vary one of them");
-  engine::Case base = io::parseCaseStructure(document);
+  engine::Case base = io::parseCaseStructure(document, spec.source);
   base.title.clear();  // not needed per point; spares an allocation per copy
   base.notes.clear();
   {
@@ -148,7 +148,7 @@ TradeStudy runTradeStudy(const TradeStudySpec& spec, std::stop_token stop, const
                                       [&](const SweepAxis& a) { return pointerOf(a.path) == problem.path; });
       if (!varied) fixed.push_back(problem);
     }
-    if (!fixed.empty()) throw engine::CaseValidationError("case", std::move(fixed));
+    if (!fixed.empty()) throw engine::CaseValidationError(spec.source, std::move(fixed));
   }
 
   TradeStudy study;

@@ -57,6 +57,7 @@ struct TradeStudySpec {
   /// The case document, --set overrides applied (io/case_file.h); the axes' paths are set on
   /// top of it, as --set would set them.
   nlohmann::json document;
+  std::string source = "case";  ///< where the document came from (a file path), for messages
   std::vector<SweepAxis> axes;  ///< one (a sweep) or two (a carpet)
   bool withAudit = false;       ///< add each point's one-at-a-time loss audit
   unsigned threads = 0;         ///< worker threads; 0 for one per hardware thread

@@ -17,7 +17,7 @@ CaloricallyPerfectModel::CaloricallyPerfectModel(std::string kind, std::shared_p
 
 std::shared_ptr<const Gas> CaloricallyPerfectModel::products(double fuelAirRatio) const {
   if (!(fuelAirRatio >= 0.0 && fuelAirRatio <= stoichiometric_))
-    throw InvalidInput("fuel-air ratio", fuelAirRatio, "", "[0, " + formatNumber(stoichiometric_) + "]");
+    throw InvalidInput("fuel-air ratio", fuelAirRatio, "", "[0, " + messageNumber(stoichiometric_) + "]");
   return hot_;
 }
 

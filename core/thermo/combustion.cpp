@@ -53,7 +53,7 @@ CompleteCombustion::CompleteCombustion(const Composition& air, const Hydrocarbon
 
 Composition CompleteCombustion::products(double fuelAirRatio, const std::string& where) const {
   if (!std::isfinite(fuelAirRatio) || fuelAirRatio < 0.0 || fuelAirRatio > stoichiometric_)
-    throw InvalidInput(where, fuelAirRatio, "", "[0, " + formatNumber(stoichiometric_) + "]");
+    throw InvalidInput(where, fuelAirRatio, "", "[0, " + messageNumber(stoichiometric_) + "]");
   if (co2_ == kAbsent || h2o_ == kAbsent || n2_ == kAbsent || o2_ == kAbsent || ar_ == kAbsent)
     // index() throws cw::InvalidInput naming the first product species the table lacks.
     for (const char* name : {"CO2", "H2O", "N2", "O2", "Ar"}) table_->index(name, "combustion products");

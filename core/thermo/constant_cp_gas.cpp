@@ -20,8 +20,8 @@ double snapToRange(double T) {
 }
 
 std::string temperatureRangeText() {
-  return "[" + formatNumber(ConstantCpGas::kMinimumTemperature) + ", " +
-         formatNumber(ConstantCpGas::kMaximumTemperature) + "] K";
+  return "[" + messageNumber(ConstantCpGas::kMinimumTemperature) + ", " +
+         messageNumber(ConstantCpGas::kMaximumTemperature) + "] K";
 }
 
 }  // namespace
@@ -63,8 +63,8 @@ double ConstantCpGas::temperatureFromEnthalpy(double h) const {
   const double T = snapToRange(enthalpyReference_ + h / cp_);
   if (!std::isfinite(h) || !(T >= kMinimumTemperature && T <= kMaximumTemperature))
     throw OutOfRange("temperature from enthalpy", h, "J/kg",
-                     "[" + formatNumber(enthalpy(kMinimumTemperature)) + ", " +
-                         formatNumber(enthalpy(kMaximumTemperature)) + "] J/kg (temperatures " +
+                     "[" + messageNumber(enthalpy(kMinimumTemperature)) + ", " +
+                         messageNumber(enthalpy(kMaximumTemperature)) + "] J/kg (temperatures " +
                          temperatureRangeText() + ")");
   return T;
 }
@@ -77,7 +77,7 @@ double ConstantCpGas::temperatureFromEntropy(double s, double pressure) const {
   const double T = snapToRange(kReferenceTemperature * std::exp(exponent));
   if (!std::isfinite(s) || !std::isfinite(T) || !(T >= kMinimumTemperature && T <= kMaximumTemperature))
     throw OutOfRange("temperature from entropy", s, "J/(kg K)",
-                     "the entropies of " + temperatureRangeText() + " at " + formatNumber(pressure) + " Pa");
+                     "the entropies of " + temperatureRangeText() + " at " + messageNumber(pressure) + " Pa");
   return T;
 }
 

@@ -19,12 +19,12 @@ HydrocarbonFuel::HydrocarbonFuel(double hydrogenCarbonRatio, double lowerHeating
     : y_(hydrogenCarbonRatio), lowerHeatingValue_(lowerHeatingValue), cp_(cp), table_(&table) {
   if (!std::isfinite(y_) || y_ < 0.0 || y_ > kMaximumHydrogenCarbonRatio)
     throw InvalidInput("fuel hydrogen-carbon ratio", y_, "",
-                       "[0, " + formatNumber(kMaximumHydrogenCarbonRatio) + "]");
+                       "[0, " + messageNumber(kMaximumHydrogenCarbonRatio) + "]");
   if (!std::isfinite(lowerHeatingValue_) || lowerHeatingValue_ < kMinimumHeatingValue ||
       lowerHeatingValue_ > kMaximumHeatingValue)
     throw InvalidInput(
         "fuel lower heating value", lowerHeatingValue_, "J/kg",
-        "[" + formatNumber(kMinimumHeatingValue) + ", " + formatNumber(kMaximumHeatingValue) + "] J/kg");
+        "[" + messageNumber(kMinimumHeatingValue) + ", " + messageNumber(kMaximumHeatingValue) + "] J/kg");
   if (!std::isfinite(cp_) || cp_ <= 0.0 || cp_ > 1.0e4)
     throw InvalidInput("fuel specific heat", cp_, "J/(kg K)", "(0, 10000] J/(kg K)");
   molarMass_ = kCarbonMolarMass + y_ * kHydrogenMolarMass;
@@ -44,7 +44,7 @@ double HydrocarbonFuel::enthalpy(double temperature) const {
   if (!std::isfinite(temperature) || temperature < kMinimumTemperature || temperature > kMaximumTemperature)
     throw OutOfRange(
         "fuel temperature", temperature, "K",
-        "[" + formatNumber(kMinimumTemperature) + ", " + formatNumber(kMaximumTemperature) + "] K");
+        "[" + messageNumber(kMinimumTemperature) + ", " + messageNumber(kMaximumTemperature) + "] K");
   // h_fuel(T) = h_f,fuel + cp_fuel (T - T0), see fuel.h.
   return formationEnthalpy_ + cp_ * (temperature - kReferenceTemperature);
 }

@@ -11,7 +11,8 @@ namespace cw::thermo {
 namespace {
 
 std::string temperatureRange(const Gas& gas) {
-  return "[" + formatNumber(gas.minimumTemperature()) + ", " + formatNumber(gas.maximumTemperature()) + "] K";
+  return "[" + messageNumber(gas.minimumTemperature()) + ", " + messageNumber(gas.maximumTemperature()) +
+         "] K";
 }
 
 /// Solves f(T) = target for T in [lo, hi], f increasing, with Newton steps kept inside
@@ -64,7 +65,7 @@ double Gas::temperatureFromEnthalpy(double h) const {
   const double lo = minimumTemperature(), hi = maximumTemperature();
   if (!std::isfinite(h) || h < enthalpy(lo) || h > enthalpy(hi))
     throw OutOfRange("temperature from enthalpy", h, "J/kg",
-                     "[" + formatNumber(enthalpy(lo)) + ", " + formatNumber(enthalpy(hi)) + "] J/kg");
+                     "[" + messageNumber(enthalpy(lo)) + ", " + messageNumber(enthalpy(hi)) + "] J/kg");
   // First guess from a constant cp at a temperature inside the range.
   const double base = std::clamp(300.0, lo, hi);
   const double guess = base + (h - enthalpy(base)) / cp(base);
@@ -79,8 +80,9 @@ double Gas::temperatureFromEntropy(double s, double pressure) const {
   const double target = s + gasConstant() * std::log(pressure / kReferencePressure);
   const double lo = minimumTemperature(), hi = maximumTemperature();
   if (!std::isfinite(target) || target < standardEntropy(lo) || target > standardEntropy(hi))
-    throw OutOfRange("temperature from entropy", s, "J/(kg K)",
-                     "the entropies of " + temperatureRange(*this) + " at " + formatNumber(pressure) + " Pa");
+    throw OutOfRange(
+        "temperature from entropy", s, "J/(kg K)",
+        "the entropies of " + temperatureRange(*this) + " at " + messageNumber(pressure) + " Pa");
   return solveIncreasing([this](double T) { return standardEntropy(T); },
                          [this](double T) { return cp(T) / T; }, target, lo, hi, 0.5 * (lo + hi),
                          "temperature from entropy");

@@ -16,7 +16,7 @@ Composition humidAir(double specificHumidity, const std::string& where) {
   if (!std::isfinite(specificHumidity) || specificHumidity < 0.0 ||
       specificHumidity > kMaximumSpecificHumidity)
     throw InvalidInput(where, specificHumidity, "kg/kg",
-                       "[0, " + formatNumber(kMaximumSpecificHumidity) + "] kg/kg");
+                       "[0, " + messageNumber(kMaximumSpecificHumidity) + "] kg/kg");
   // y_i = (1 - q) y_i,dry, y_H2O = q.
   return mixByMass(dryAir(), 1.0 - specificHumidity, Composition::pure("H2O"), specificHumidity);
 }

@@ -13,7 +13,7 @@ NasaPolynomial::NasaPolynomial(double minimumTemperature, double maximumTemperat
     throw InvalidInput(where + ": minimum temperature", minimumTemperature, "K", "(0, inf) K");
   if (!std::isfinite(maximumTemperature) || maximumTemperature <= minimumTemperature)
     throw InvalidInput(where + ": maximum temperature", maximumTemperature, "K",
-                       "(" + formatNumber(minimumTemperature) + ", inf) K");
+                       "(" + messageNumber(minimumTemperature) + ", inf) K");
   for (std::size_t i = 0; i < a_.size(); ++i)
     if (!std::isfinite(a_[i]))
       throw InvalidInput(where + ": coefficient a" + std::to_string(i + 1), a_[i], "", "finite numbers");

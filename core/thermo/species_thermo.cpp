@@ -23,12 +23,12 @@ SpeciesThermo::SpeciesThermo(std::string name, double molarMass, std::map<std::s
     if (count <= 0) throw InvalidInput(where + ": atoms of " + element, count, "", "[1, inf)");
   if (low_.maximumTemperature() != high_.minimumTemperature())
     throw InvalidInput(where + ": minimum temperature of the high range", high_.minimumTemperature(), "K",
-                       "[" + formatNumber(low_.maximumTemperature()) + ", " +
-                           formatNumber(low_.maximumTemperature()) + "] K (the low range's maximum)");
+                       "[" + messageNumber(low_.maximumTemperature()) + ", " +
+                           messageNumber(low_.maximumTemperature()) + "] K (the low range's maximum)");
   const Jumps jumps = jumpsAtMidTemperature();
-  const std::string range = "[-" + formatNumber(kContinuityTolerance) + ", " +
-                            formatNumber(kContinuityTolerance) +
-                            "] (continuity at T_mid = " + formatNumber(midTemperature()) + " K)";
+  const std::string range = "[-" + messageNumber(kContinuityTolerance) + ", " +
+                            messageNumber(kContinuityTolerance) +
+                            "] (continuity at T_mid = " + messageNumber(midTemperature()) + " K)";
   if (!(std::abs(jumps.cpOverR) <= kContinuityTolerance))
     throw InvalidInput(where + ": jump of cp/R at T_mid", jumps.cpOverR, "", range);
   if (!(std::abs(jumps.enthalpyOverRT) <= kContinuityTolerance))
@@ -46,7 +46,7 @@ void SpeciesThermo::checkTemperature(double temperature) const {
   if (!std::isfinite(temperature) || temperature < minimumTemperature() || temperature > maximumTemperature())
     throw OutOfRange(
         "species " + name_ + ": temperature", temperature, "K",
-        "[" + formatNumber(minimumTemperature()) + ", " + formatNumber(maximumTemperature()) + "] K");
+        "[" + messageNumber(minimumTemperature()) + ", " + messageNumber(maximumTemperature()) + "] K");
 }
 
 double SpeciesThermo::cpOverR(double temperature) const {

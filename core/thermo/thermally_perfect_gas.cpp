@@ -181,9 +181,10 @@ double ThermallyPerfectGas::temperatureFromEnthalpy(double h) const {
   if (h > enthalpyNodes_.back() && h <= enthalpyNodes_.back() + hSlack) h = enthalpyNodes_.back();
   if (!(h >= enthalpyNodes_.front() && h <= enthalpyNodes_.back()))
     throw OutOfRange("temperature from enthalpy", h, "J/kg",
-                     "[" + formatNumber(enthalpyNodes_.front()) + ", " + formatNumber(enthalpyNodes_.back()) +
-                         "] J/kg (the enthalpies of [" + formatNumber(minimumTemperature_) + ", " +
-                         formatNumber(maximumTemperature_) + "] K)");
+                     "[" + messageNumber(enthalpyNodes_.front()) + ", " +
+                         messageNumber(enthalpyNodes_.back()) + "] J/kg (the enthalpies of [" +
+                         messageNumber(minimumTemperature_) + ", " + messageNumber(maximumTemperature_) +
+                         "] K)");
   // Bracket from the table, first guess by linear interpolation in it.
   const auto k = std::clamp<std::ptrdiff_t>(
       std::upper_bound(enthalpyNodes_.begin(), enthalpyNodes_.end(), h) - enthalpyNodes_.begin() - 1, 0,
@@ -210,8 +211,8 @@ double ThermallyPerfectGas::temperatureFromEntropy(double s, double pressure) co
   if (target > entropyNodes_.back() && target <= entropyNodes_.back() + sSlack) target = entropyNodes_.back();
   if (!(target >= entropyNodes_.front() && target <= entropyNodes_.back()))
     throw OutOfRange("temperature from entropy", s, "J/(kg K)",
-                     "the entropies of [" + formatNumber(minimumTemperature_) + ", " +
-                         formatNumber(maximumTemperature_) + "] K at " + formatNumber(pressure) + " Pa");
+                     "the entropies of [" + messageNumber(minimumTemperature_) + ", " +
+                         messageNumber(maximumTemperature_) + "] K at " + messageNumber(pressure) + " Pa");
   const auto k = std::clamp<std::ptrdiff_t>(
       std::upper_bound(entropyNodes_.begin(), entropyNodes_.end(), target) - entropyNodes_.begin() - 1, 0,
       kNodes - 1);

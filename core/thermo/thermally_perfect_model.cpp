@@ -21,7 +21,7 @@ ThermallyPerfectModel::ThermallyPerfectModel(HydrocarbonFuel fuel, double specif
 
 double ThermallyPerfectModel::productEnthalpyPerUnitAir(double temperature, double fuelAirRatio) const {
   if (!(fuelAirRatio >= 0.0 && fuelAirRatio <= stoichiometric_))
-    throw InvalidInput("fuel-air ratio", fuelAirRatio, "", "[0, " + formatNumber(stoichiometric_) + "]");
+    throw InvalidInput("fuel-air ratio", fuelAirRatio, "", "[0, " + messageNumber(stoichiometric_) + "]");
   const double products = fuelAirRatio * (1.0 + stoichiometric_) / stoichiometric_;
   return (1.0 - fuelAirRatio / stoichiometric_) * air_->enthalpy(temperature) +
          products * stoichiometricProducts_->enthalpy(temperature);
@@ -35,7 +35,7 @@ class ProductsGas final : public ThermallyPerfectGas {
  public:
   ProductsGas(Composition composition, double fuelAirRatio)
       : ThermallyPerfectGas(std::move(composition), "products"), fuelAirRatio_(fuelAirRatio) {}
-  std::string description() const override { return "products, f = " + formatNumber(fuelAirRatio_); }
+  std::string description() const override { return "products, f = " + messageNumber(fuelAirRatio_); }
 
  private:
   double fuelAirRatio_;

@@ -120,7 +120,7 @@ class TestCliAtmosphereFlow : public QObject {
     QTest::newRow("missing gamma") << QStringList{"flow", "--mach", "2"}
                                    << "cyclewright-cli flow: --gamma: is required";
     QTest::newRow("mach not a number") << QStringList{"flow", "--gamma", "1.4", "--mach", "fast"}
-                                       << "cyclewright-cli flow: --mach: 'fast' is not a finite number";
+                                       << "cyclewright-cli flow: --mach: expected a number, got \"fast\"";
     QTest::newRow("altitude too high") << QStringList{"atmosphere", "--altitude-m", "90000", "--geometric"}
                                        << "cyclewright-cli atmosphere: --altitude-m = 90000 m is outside the "
                                           "valid range [-5000.0, 86000.0] m "
@@ -140,7 +140,7 @@ class TestCliAtmosphereFlow : public QObject {
         << QStringList{"atmosphere"} << "cyclewright-cli atmosphere: --altitude-m: is required";
     QTest::newRow("bad format")
         << QStringList{"atmosphere", "--altitude-m", "0", "--format", "xml"}
-        << "cyclewright-cli atmosphere: --format: 'xml' is not one of text, json, csv";
+        << "cyclewright-cli atmosphere: --format: expected one of text, json, csv, got \"xml\"";
   }
   void badInputExitsTwoWithOneLine() {
     QFETCH(QStringList, words);

@@ -1,6 +1,7 @@
 // cyclewright-cli: --version, --help, unknown verbs and exit statuses.
 #include "arguments.h"
 #include "common/error.h"
+#include "common/number_text.h"
 #include "common/version.h"
 #include "verbs.h"
 
@@ -27,13 +28,15 @@ class TestCliBasics : public QObject {
     QCOMPARE(cli.exitCode(), 0);
     const QString text = QString::fromUtf8(cli.readAllStandardOutput());
     QVERIFY(text.startsWith("Usage: cyclewright-cli VERB"));
-    QVERIFY(text.contains("Exit status: 0 success, 2 invalid input"));
+    QVERIFY(text.contains("Exit status: 0 success, 1 internal error"));
+    QVERIFY(text.contains("2 invalid input"));
     QVERIFY(text.contains("conceptual-design estimates"));
   }
   void unknownVerbExitsTwoWithOneLine() {
     std::ostringstream out, err;
     QCOMPARE(cw::cli::runCommandLine({"fly"}, out, err), 2);
-    QCOMPARE(err.str(), std::string("cyclewright-cli: unknown verb 'fly' (see cyclewright-cli --help)\n"));
+    QCOMPARE(err.str(), std::string("cyclewright-cli: unknown verb \"fly\" (did you mean flow?) (see "
+                                    "cyclewright-cli --help)\n"));
     QVERIFY(out.str().empty());
   }
   void argumentsAreStrict() {
@@ -49,12 +52,18 @@ class TestCliBasics : public QObject {
     const cw::cli::Arguments inf({"--mach=inf"}, specs);
     QVERIFY_THROWS_EXCEPTION(cw::InvalidInput, inf.number("mach"));
   }
-  void parseNumberIgnoresLocaleAndRejectsJunk() {
-    QCOMPARE(cw::cli::parseNumber("1.5e3").value(), 1500.0);
-    QCOMPARE(cw::cli::parseNumber("+2").value(), 2.0);
-    QVERIFY(!cw::cli::parseNumber("1,5").has_value());
-    QVERIFY(!cw::cli::parseNumber("nan").has_value());
-    QVERIFY(!cw::cli::parseNumber("").has_value());
+  // Typed numbers: the C locale, the whole text, and each way of being wrong told apart.
+  void readNumberIgnoresLocaleAndTellsProblemsApart() {
+    using cw::NumberTextProblem;
+    QCOMPARE(cw::readNumber("1.5e3").value, 1500.0);
+    QCOMPARE(cw::readNumber("+2").value, 2.0);
+    QCOMPARE(cw::readNumber("-0.25").value, -0.25);
+    for (const char* junk : {"1,5", "nan", "inf", "", " 1", "1 ", "0x10", "++1", "abc", "1e"})
+      QVERIFY2(cw::readNumber(junk).problem == NumberTextProblem::NotANumber, junk);
+    QVERIFY(cw::readNumber("1e400").problem == NumberTextProblem::TooLarge);
+    QVERIFY(cw::readNumber("-1e400").problem == NumberTextProblem::TooLarge);
+    QVERIFY(cw::readNumber("1e-400").problem == NumberTextProblem::TooSmall);
+    QCOMPARE(cw::readNumber("4.9e-324").value, 4.9e-324);  // the smallest subnormal double (IEEE 754)
   }
 };
 

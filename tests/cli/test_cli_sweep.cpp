@@ -105,9 +105,9 @@ class TestCliSweep : public QObject {
                                                    "thrust"}
                                     << "unknown column \"thrust\"";
     QTest::newRow("text format") << QStringList{"--vary", "flight.mach=0:1:3", "--format", "text"}
-                                 << "sweep writes csv or json";
+                                 << "--format: expected one of csv, json, got \"text\"";
     QTest::newRow("threads") << QStringList{"--vary", "flight.mach=0:1:3", "--threads", "1.5"}
-                             << "--threads = 1.5";
+                             << "--threads: expected a whole number from 0 to 256, got \"1.5\"";
     QTest::newRow("fixed input") << QStringList{"--vary", "flight.mach=0:1:3", "--set",
                                                 "turbine.mechanical_efficiency=2"}
                                  << "/turbine/mechanical_efficiency = 2";

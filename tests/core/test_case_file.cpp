@@ -681,8 +681,9 @@ class TestCaseFile : public QObject {
       const bool highClosed = property.contains("maximum");
       const double low = property.value(lowClosed ? "minimum" : "exclusiveMinimum", 0.0);
       const double high = property.value(highClosed ? "maximum" : "exclusiveMaximum", 0.0);
-      const std::string range = std::string(lowClosed ? "[" : "(") + cw::formatNumber(low) + ", " +
-                                cw::formatNumber(high) + (highClosed ? "]" : ")");
+      // Ranges print as messages do: shortest form, or 6 digits for a long one (5/3 as 1.66667).
+      const std::string range = std::string(lowClosed ? "[" : "(") + cw::messageNumber(low) + ", " +
+                                cw::messageNumber(high) + (highClosed ? "]" : ")");
       const double below = lowClosed ? low - 1e-9 * std::max(1.0, std::abs(low)) : low;
       const double above = highClosed ? high + 1e-9 * std::max(1.0, std::abs(high)) : high;
       for (const double value : {below, above}) {
