@@ -130,16 +130,25 @@ int runCommandLine(const std::vector<std::string>& words, std::ostream& out, std
       }
     }
     return runVerb(*verb, rest, out);
+  } catch (...) {
+    return reportFailure(std::current_exception(), verbName, err);
+  }
+}
+
+int reportFailure(std::exception_ptr failure, const std::string& verb, std::ostream& err) {
+  try {
+    std::rethrow_exception(failure);
   } catch (const Error& e) {
-    printError(err, verbName, e.what());
+    printError(err, verb, e.what());
     return exitStatusOf(e);
   } catch (const std::bad_alloc&) {
-    printError(err, verbName, "out of memory");
-    return kExitInternal;
+    printError(err, verb, "out of memory");
   } catch (const std::exception& e) {
-    printError(err, verbName, std::string("internal error: ") + e.what());
-    return kExitInternal;
+    printError(err, verb, std::string("internal error: ") + e.what());
+  } catch (...) {
+    printError(err, verb, "internal error (an exception of unknown type)");
   }
+  return kExitInternal;
 }
 
 }  // namespace cw::cli

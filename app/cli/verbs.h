@@ -7,6 +7,7 @@
 #include "arguments.h"
 #include "output.h"
 
+#include <exception>
 #include <iosfwd>
 #include <string>
 #include <vector>
@@ -35,7 +36,12 @@ struct Verb {
 const std::vector<Verb>& allVerbs();
 
 /// Runs cyclewright-cli with argv-style words (without the program name).
-/// Writes results to out and diagnostics to err; returns the exit status.
+/// Writes results to out and diagnostics to err; returns the exit status. Nothing escapes it.
 int runCommandLine(const std::vector<std::string>& words, std::ostream& out, std::ostream& err);
+
+/// Reports a failure of a verb on err in one line ("cyclewright-cli VERB: ...") and returns its
+/// exit status: cw::Error by its code (2 invalid input or out of range, 3 no solution or not
+/// converged), std::bad_alloc "out of memory" and anything else "internal error: ..." with 1.
+int reportFailure(std::exception_ptr failure, const std::string& verb, std::ostream& err);
 
 }  // namespace cw::cli

@@ -12,6 +12,7 @@
 #include <QProcess>
 #include <QTest>
 
+#include <algorithm>
 #include <csignal>
 #include <sstream>
 
@@ -157,6 +158,48 @@ class TestCliSweep : public QObject {
     QVERIFY(out.contains(",not-run,,"));
     QVERIFY(out.contains(",solved,"));
     QCOMPARE(out.count('\n'), 3 + 250000);
+  }
+
+  // Ctrl+C while the output is written (with --audit that is most of the run): the output stays
+  // whole and the run ends with 130, rather than the process dying mid-row. The signal goes out
+  // the moment the last progress line ("10000 of 10000") shows that the points are done and the
+  // output has begun; the same again part-way through the points.
+  void interruptDuringTheOutputLeavesItWhole_data() {
+    QTest::addColumn<QByteArray>("progressLine");
+    QTest::newRow("output phase") << QByteArray(" 10000 of 10000 points");
+    QTest::newRow("half way") << QByteArray(" 5000 of 10000 points");
+  }
+  void interruptDuringTheOutputLeavesItWhole() {
+    QFETCH(QByteArray, progressLine);
+    QProcess cli;
+    cli.start(CYCLEWRIGHT_CLI_PATH,
+              {"sweep", QString::fromStdString(kDemo), "--vary", "compressor.pressure_ratio=4:40:100",
+               "--vary", "burner.exit_temperature_K=1200:1800:100", "--audit", "--progress"});
+    cli.setReadChannel(QProcess::StandardError);
+    QVERIFY(cli.waitForStarted(10000));
+    QByteArray err, out;
+    while (!err.contains(progressLine) && cli.state() == QProcess::Running) {
+      cli.waitForReadyRead(1000);
+      err += cli.readAllStandardError();
+      out += cli.readAllStandardOutput();
+    }
+    QVERIFY2(err.contains(progressLine), err.right(200).constData());
+    ::kill(static_cast<pid_t>(cli.processId()), SIGINT);
+    QVERIFY(cli.waitForFinished(60000));
+    out += cli.readAllStandardOutput();
+    QCOMPARE(cli.exitStatus(), QProcess::NormalExit);  // not killed by the signal
+    QCOMPARE(cli.exitCode(), 130);
+    // Well-formed: ends with a newline, and every row has as many fields as the column header.
+    QVERIFY(out.endsWith('\n'));
+    const std::vector<std::string> rows = lines(out.toStdString());
+    std::size_t header = 0;
+    while (header < rows.size() && rows[header].rfind("compressor.pressure_ratio,", 0) != 0) ++header;
+    QVERIFY(header < rows.size());
+    const auto fields = std::count(rows[header].begin(), rows[header].end(), ',');
+    std::size_t points = 0;
+    for (std::size_t k = header + 1; k < rows.size(); ++k, ++points)
+      QVERIFY2(std::count(rows[k].begin(), rows[k].end(), ',') == fields, rows[k].c_str());
+    QCOMPARE(points, std::size_t(10000));
   }
 };
 
