@@ -5,6 +5,7 @@
 #  2. builds Qwt 6.3 for Qt 6 into our own prefix when no Qwt for Qt 6 is found.
 #
 # Idempotent: a second run finds everything in place and says so.
+# With --fuzz it also installs clang and libFuzzer for the fuzz preset (scripts/fuzz.sh).
 # Works as root or through sudo. Stops with a message naming the failed step.
 set -euo pipefail
 
@@ -18,6 +19,12 @@ PACKAGES=(
   libeigen3-dev nlohmann-json3-dev
   xvfb xauth fonts-dejavu-core binutils
 )
+if [ "${1:-}" = "--fuzz" ]; then
+  PACKAGES+=(clang libclang-rt-14-dev llvm)  # clang++, libFuzzer and the sanitizers, llvm-symbolizer
+elif [ $# -gt 0 ]; then
+  echo "usage: scripts/setup.sh [--fuzz]" >&2
+  exit 2
+fi
 
 step="start"
 fail() { echo "setup: FAILED at step '${step}'" >&2; exit 1; }

@@ -7,10 +7,14 @@ namespace cw::engine {
 static std::string joinMessages(const std::string& where, const std::vector<CaseProblem>& problems) {
   std::string text = where.empty() || where == "case" ? std::string() : excerpt(where, 200) + ": ";
   const std::size_t prefix = text.size();
-  for (const CaseProblem& problem : problems) {
+  // A hostile file can hold a million problems: the message names the first ones and counts the rest.
+  constexpr std::size_t kMessagesShown = 40;
+  for (std::size_t i = 0; i < problems.size() && i < kMessagesShown; ++i) {
     if (text.size() > prefix) text += '\n';
-    text += problem.message;
+    text += problems[i].message;
   }
+  if (problems.size() > kMessagesShown)
+    text += "\nand " + std::to_string(problems.size() - kMessagesShown) + " more problems";
   return text;
 }
 

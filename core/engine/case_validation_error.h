@@ -11,7 +11,8 @@ namespace cw::engine {
 
 /// A case with one or more problems. code() is ErrorCode::InvalidInput, where() names the
 /// source (a file path, or "case"), what() gives the problems' messages one per line, the
-/// first prefixed with "<source>: " when the source is a file.
+/// first prefixed with "<source>: " when the source is a file (the first 40 problems, then a count
+/// of the rest; problems() holds them all).
 class CaseValidationError : public Error {
  public:
   CaseValidationError(std::string where, std::vector<CaseProblem> problems);

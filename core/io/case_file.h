@@ -30,6 +30,12 @@ engine::Case parseCase(const nlohmann::json& document, const std::string& source
 /// but not for value ranges: a trade study checks the ranges of each of its points on its own.
 engine::Case parseCaseStructure(const nlohmann::json& document, const std::string& source = "case");
 
+/// The case the text of a case file describes, checked as readCaseFile checks a file's text
+/// (io/json_document.h: nesting, NUL bytes, anything after the document; duplicate keys; every
+/// problem of parseCase); source names it in messages. For files held in memory (the GUI's
+/// resources) and for the fuzz harness.
+engine::Case parseCaseText(std::string_view text, const std::string& source);
+
 /// Reads and parses a case file. A file that cannot be read or is not JSON throws
 /// cw::InvalidInput naming the path; duplicate keys and every problem of parseCase throw
 /// one engine::CaseValidationError (where() = the path).

@@ -78,16 +78,26 @@ class DuplicateKeyFinder {
   std::vector<Frame> frames_;
 };
 
-/// The document of a file, and the keys it gives twice.
-json loadDocument(const std::string& path, std::vector<engine::CaseProblem>& duplicateProblems) {
-  const std::string text = readDocumentFile(path, "case file");
+/// The document of a case file's text, and the keys it gives twice.
+json documentOf(std::string_view text, const std::string& where,
+                std::vector<engine::CaseProblem>& duplicateProblems) {
   DuplicateKeyFinder duplicates;
-  json document = parseDocumentText(text, path, std::ref(duplicates));
+  json document = parseDocumentText(text, where, std::ref(duplicates));
   duplicateProblems = std::move(duplicates.problems);
   return document;
 }
 
+json loadDocument(const std::string& path, std::vector<engine::CaseProblem>& duplicateProblems) {
+  return documentOf(readDocumentFile(path, "case file"), path, duplicateProblems);
+}
+
 }  // namespace
+
+engine::Case parseCaseText(std::string_view text, const std::string& source) {
+  std::vector<engine::CaseProblem> duplicates;
+  const json document = documentOf(text, source, duplicates);
+  return parseWithProblems(document, std::move(duplicates), source);
+}
 
 engine::Case parseCase(const json& document, const std::string& source) {
   return parseWithProblems(document, {}, source);
