@@ -1,6 +1,7 @@
 // The main window opens offscreen with its menus, the demo case and an About box
 // carrying the caution; --screenshot writes a PNG of the requested size.
 #include "application.h"
+#include "gui_test_support.h"
 #include "main_window.h"
 
 #include <QApplication>
@@ -17,6 +18,8 @@
 class TestMainWindow : public QObject {
   Q_OBJECT
  private slots:
+  void initTestCase() { cw::test::isolateGuiTest("CyclewrightTestMainWindow"); }
+
   void hasFileAndHelpMenus() {
     cw::gui::MainWindow window;
     QVERIFY(window.menuBar()->findChild<QMenu*>("fileMenu") != nullptr);
@@ -48,10 +51,10 @@ class TestMainWindow : public QObject {
     QVERIFY(informative.contains("engine manufacturer's data"));
   }
   void screenshotWritesPngOfStatedSize() {
-    QTemporaryDir dir;
-    const QString file = dir.filePath("window.png");
+    const cw::test::IsolatedHome home;
+    const QString file = home.path("window.png");
     QProcess app;
-    app.start(CYCLEWRIGHT_GUI_PATH, {"--screenshot", file, "--size", "1024x700"});
+    home.start(app, CYCLEWRIGHT_GUI_PATH, {"--screenshot", file, "--size", "1024x700"});
     QVERIFY(app.waitForFinished(30000));
     QCOMPARE(app.exitCode(), 0);
     const QImage image(file);
@@ -59,10 +62,10 @@ class TestMainWindow : public QObject {
     QCOMPARE(image.size(), QSize(1024, 700));
   }
   void paletteOptionRendersDark() {
-    QTemporaryDir dir;
-    const QString file = dir.filePath("dark.png");
+    const cw::test::IsolatedHome home;
+    const QString file = home.path("dark.png");
     QProcess app;
-    app.start(CYCLEWRIGHT_GUI_PATH, {"--palette", "dark", "--screenshot", file, "--size", "800x600"});
+    home.start(app, CYCLEWRIGHT_GUI_PATH, {"--palette", "dark", "--screenshot", file, "--size", "800x600"});
     QVERIFY(app.waitForFinished(30000));
     QCOMPARE(app.exitCode(), 0);
     const QImage image(file);
@@ -74,7 +77,7 @@ class TestMainWindow : public QObject {
     QVERIFY2(dark > (image.width() / 4) * (image.height() / 4) * 6 / 10, qPrintable(QString::number(dark)));
     QCOMPARE(image.pixelColor(700, 592), QColor("#202124"));  // the status bar's background
     QProcess wrong;
-    wrong.start(CYCLEWRIGHT_GUI_PATH, {"--palette", "purple", "--screenshot", file});
+    home.start(wrong, CYCLEWRIGHT_GUI_PATH, {"--palette", "purple", "--screenshot", file});
     QVERIFY(wrong.waitForFinished(30000));
     QCOMPARE(wrong.exitCode(), 2);
     QVERIFY(QString::fromUtf8(wrong.readAllStandardError()).contains("--palette"));
@@ -92,8 +95,9 @@ class TestMainWindow : public QObject {
     QCOMPARE(english.menuBar()->findChild<QMenu*>("fileMenu")->title(), QString("&File"));
   }
   void versionOption() {
+    const cw::test::IsolatedHome home;
     QProcess app;
-    app.start(CYCLEWRIGHT_GUI_PATH, {"--version"});
+    home.start(app, CYCLEWRIGHT_GUI_PATH, {"--version"});
     QVERIFY(app.waitForFinished(30000));
     QCOMPARE(app.exitCode(), 0);
     QVERIFY(QString::fromUtf8(app.readAllStandardOutput()).contains("Cyclewright 0."));
