@@ -63,10 +63,34 @@ namespace cw::gui {
 
 namespace {
 
-QString problemsText(const engine::CaseValidationError& e) {
+/// The case at a path or a Qt resource; throws as io::readCaseFile does, naming the path.
+engine::Case readCaseAt(const QString& path) {
+  if (!path.startsWith(QLatin1Char(':')))
+    return io::readCaseFile(QDir::toNativeSeparators(path).toStdString());
+  QFile file(path);
+  if (!file.open(QIODevice::ReadOnly))
+    throw InvalidInput(path.toStdString(), "cannot read case file: " + file.errorString().toStdString());
+  const QByteArray bytes = file.readAll();
+  nlohmann::json document;
+  try {
+    document = nlohmann::json::parse(bytes.constData(), bytes.constData() + bytes.size());
+  } catch (const nlohmann::json::parse_error& e) {
+    throw InvalidInput(path.toStdString(), std::string("not valid JSON: ") + e.what());
+  }
+  try {
+    return io::parseCase(document);
+  } catch (const engine::CaseValidationError& e) {
+    throw engine::CaseValidationError(path.toStdString(), e.problems());
+  }
+}
+
+/// Why a case cannot be opened: the core reader's message, naming the file first.
+QString openFailureText(const QString& path, const std::exception& e) {
+  const auto* invalid = dynamic_cast<const engine::CaseValidationError*>(&e);
+  if (!invalid) return QString::fromStdString(e.what());
   QStringList lines;
-  for (const auto& p : e.problems()) lines << QString::fromStdString(p.message);
-  return lines.join(QLatin1Char('\n'));
+  for (const auto& p : invalid->problems()) lines << QString::fromStdString(p.message);
+  return path + QStringLiteral(": ") + lines.join(QLatin1Char('\n'));
 }
 
 }  // namespace
@@ -617,29 +641,12 @@ QString MainWindow::casePath() const {
   return document_->filePath();
 }
 
-bool MainWindow::openCase(const QString& path) {
+bool MainWindow::openCase(const QString& path, QString* error) {
   engine::Case loaded;
   try {
-    if (path.startsWith(QLatin1Char(':'))) {
-      QFile file(path);
-      if (!file.open(QIODevice::ReadOnly)) {
-        statusBar()->showMessage(tr("Cannot open %1: %2").arg(path, file.errorString()));
-        return false;
-      }
-      const QByteArray bytes = file.readAll();
-      loaded = io::parseCase(nlohmann::json::parse(bytes.constData(), bytes.constData() + bytes.size()));
-    } else {
-      loaded = io::readCaseFile(QDir::toNativeSeparators(path).toStdString());
-    }
-  } catch (const engine::CaseValidationError& e) {
-    statusBar()->showMessage(tr("%1 is not a valid Cyclewright case file").arg(path));
-    if (isVisible())
-      QMessageBox::warning(this, tr("Cannot open case"),
-                           tr("%1 is not a valid Cyclewright case file:\n%2").arg(path, problemsText(e)));
-    return false;
+    loaded = readCaseAt(path);
   } catch (const std::exception& e) {
-    statusBar()->showMessage(tr("Cannot open %1: %2").arg(path, QString::fromStdString(e.what())));
-    return false;
+    return refuseToOpen(openFailureText(path, e), error);
   }
   document_->load(loaded, path);
   if (!path.startsWith(QLatin1Char(':'))) settings_.addRecentFile(QFileInfo(path).absoluteFilePath());
@@ -647,6 +654,23 @@ bool MainWindow::openCase(const QString& path) {
   const QString title = QString::fromStdString(loaded.title);
   statusBar()->showMessage(tr("Opened %1").arg(title.isEmpty() ? path : title));
   return true;
+}
+
+bool MainWindow::refuseToOpen(const QString& message, QString* error) {
+  if (error) *error = message;
+  statusBar()->showMessage(tr("Not opened: %1").arg(message.section(QLatin1Char('\n'), 0, 0)));
+  showProblem(QStringLiteral("openFailedBox"), tr("Cannot open case"), message,
+              tr("The case shown is unchanged."));
+  return false;
+}
+
+void MainWindow::showProblem(const QString& objectName, const QString& title, const QString& text,
+                             const QString& detail) {
+  if (!isVisible()) return;
+  QMessageBox box(QMessageBox::Warning, title, text, QMessageBox::Ok, this);
+  box.setObjectName(objectName);
+  box.setInformativeText(detail);
+  box.exec();
 }
 
 bool MainWindow::saveCaseAs(const QString& path) {

@@ -50,9 +50,11 @@ class MainWindow : public QMainWindow {
   explicit MainWindow(QWidget* parent = nullptr);
   ~MainWindow() override;
 
-  /// Opens a case file (a path or a Qt resource such as ":/demo/demo-turbojet.json").
-  /// Returns false and shows why in the status bar when it cannot be read.
-  bool openCase(const QString& path);
+  /// Opens a case file (a path or a Qt resource such as ":/demo/demo-turbojet.json"). When it
+  /// cannot be opened, returns false,
+  /// keeps the open case and says why: the core reader's message naming the file (in *error,
+  /// in the status bar and, while the window is visible, in a dialog named "openFailedBox").
+  bool openCase(const QString& path, QString* error = nullptr);
   /// Saves to a path (SI, atomically). Returns false and says why when it cannot.
   bool saveCaseAs(const QString& path);
 
@@ -142,6 +144,9 @@ class MainWindow : public QMainWindow {
   void copyStudyTable();
   void scheduleAutosave();
   void removeAutosave();
+  bool refuseToOpen(const QString& message, QString* error);
+  void showProblem(const QString& objectName, const QString& title, const QString& text,
+                   const QString& detail);
 
   AppSettings settings_;
   DisplayUnits* units_ = nullptr;

@@ -1,10 +1,13 @@
 // The main window opens offscreen with its menus, the demo case and an About box
-// carrying the caution; --screenshot writes a PNG of the requested size.
+// carrying the caution; --screenshot writes a PNG of the requested size; a case that cannot be
+// opened says why in a dialog and leaves the open case.
 #include "application.h"
+#include "case_document.h"
 #include "gui_test_support.h"
 #include "main_window.h"
 
 #include <QApplication>
+#include <QFile>
 #include <QImage>
 #include <QMenu>
 #include <QMenuBar>
@@ -49,6 +52,55 @@ class TestMainWindow : public QObject {
     window.showAbout();
     QVERIFY(informative.contains("conceptual-design estimates"));
     QVERIFY(informative.contains("engine manufacturer's data"));
+  }
+  void aCaseThatCannotBeOpenedSaysWhyAndKeepsTheOpenCase_data() {
+    QTest::addColumn<QByteArray>("contents");  // empty: no file
+    QTest::addColumn<QString>("expected");     // the core reader's message
+    QTest::newRow("missing") << QByteArray() << "cannot read case file: No such file or directory";
+    QTest::newRow("not JSON") << QByteArray("[1, 2") << "not valid JSON";
+    // [1, 60]: the core's range of the compressor pressure ratio (core/engine/case_validation.cpp).
+    QTest::newRow("invalid value")  // the demo with a pressure ratio of 0.5
+        << QByteArray("demo") << "/compressor/pressure_ratio = 0.5 is outside the valid range [1, 60]";
+  }
+  void aCaseThatCannotBeOpenedSaysWhyAndKeepsTheOpenCase() {
+    QFETCH(QByteArray, contents);
+    QFETCH(QString, expected);
+    cw::gui::MainWindow window;
+    QVERIFY(window.openCase(":/demo/demo-turbojet.json"));
+    QTemporaryDir dir;
+    const QString path = dir.filePath("case.json");
+    if (contents == "demo") {
+      QFile demo(":/demo/demo-turbojet.json");
+      QVERIFY(demo.open(QIODevice::ReadOnly));
+      contents = demo.readAll().replace("\"pressure_ratio\": 8.0", "\"pressure_ratio\": 0.5");
+      QVERIFY(contents.contains("\"pressure_ratio\": 0.5"));
+    }
+    if (!contents.isEmpty()) {
+      QFile file(path);
+      QVERIFY(file.open(QIODevice::WriteOnly));
+      file.write(contents);
+    }
+    const cw::engine::Case demo = window.document().currentCase();
+    window.show();
+    QString title, text;
+    QTimer::singleShot(0, [&] {
+      auto* box = window.findChild<QMessageBox*>("openFailedBox");
+      if (!box) {  // no such dialog: close whatever is modal, so that the test fails instead of waiting
+        if (QWidget* modal = QApplication::activeModalWidget()) modal->close();
+        return;
+      }
+      title = box->windowTitle();
+      text = box->text();
+      box->accept();
+    });
+    QVERIFY(!window.openCase(path));
+    QCOMPARE(title, QString("Cannot open case"));
+    QVERIFY2(text.contains(path) && text.contains(expected), qPrintable(text));
+    // The open case is kept: the demo, its file and its title.
+    QVERIFY(window.document().currentCase() == demo);
+    QCOMPARE(window.casePath(), QString(":/demo/demo-turbojet.json"));
+    QVERIFY(window.windowTitle().startsWith("demo-turbojet.json"));
+    QVERIFY(!window.document().isModified());
   }
   void screenshotWritesPngOfStatedSize() {
     const cw::test::IsolatedHome home;
