@@ -1,5 +1,9 @@
-// The start of cyclewright as a process: a child keeps to its own home.
+// The start of cyclewright as a process: --help and --version need no display; a case that
+// cannot be opened stops a --screenshot with status 2, one line on stderr naming the file and no
+// picture; options of the wrong kind say what they expect; a child keeps to its own home.
 #include "gui_test_support.h"
+
+#include "common/version.h"
 
 #include <QDateTime>
 #include <QFile>
@@ -37,6 +41,26 @@ Run runApp(const cw::test::IsolatedHome& home, const QStringList& arguments) {
   return runApp(home, arguments, home.environment());
 }
 
+/// The lines of our own on stderr (Qt may add its own, e.g. about the platform plugin).
+QStringList ourLines(const QString& err) {
+  QStringList lines;
+  for (const QString& line : err.split(QLatin1Char('\n')))
+    if (line.startsWith(QLatin1String("cyclewright: "))) lines << line;
+  return lines;
+}
+
+/// The demo case with one key's value replaced (invented data; the valid ranges are the core's).
+QByteArray demoWith(const QByteArray& from, const QByteArray& to) {
+  QFile demo(QStringLiteral(CYCLEWRIGHT_SOURCE_DIR "/resources/demo/demo-turbojet.json"));
+  if (!demo.open(QIODevice::ReadOnly)) return {};
+  return demo.readAll().replace(from, to);
+}
+
+bool writeFile(const QString& path, const QByteArray& bytes) {
+  QFile file(path);
+  return file.open(QIODevice::WriteOnly) && file.write(bytes) == bytes.size();
+}
+
 struct FileState {
   bool exists = false;
   qint64 size = -1;
@@ -65,6 +89,110 @@ class TestStartUp : public QObject {
 
  private slots:
   void initTestCase() { cw::test::isolateGuiTest("CyclewrightTestStartUp"); }
+
+  void helpAndVersionNeedNoDisplay_data() {
+    QTest::addColumn<QString>("option");
+    QTest::addColumn<QString>("expected");
+    QTest::newRow("--help") << "--help"
+                            << "--screenshot <FILE>";
+    QTest::newRow("-h") << "-h"
+                        << "--study-vary <PATH=START:STOP:COUNT>";
+    QTest::newRow("--version") << "--version" << QString("Cyclewright %1").arg(cw::kVersion);
+    QTest::newRow("-v") << "-v" << QString("Cyclewright %1").arg(cw::kVersion);
+  }
+  void helpAndVersionNeedNoDisplay() {
+    QFETCH(QString, option);
+    QFETCH(QString, expected);
+    const cw::test::IsolatedHome home;
+    const QProcessEnvironment environment = home.environmentWithoutDisplay();
+    QVERIFY(!environment.contains("DISPLAY") && !environment.contains("QT_QPA_PLATFORM"));
+    const Run run = runApp(home, {option}, environment);
+    QVERIFY2(run.status == 0, qPrintable(QString("exit %1: %2").arg(run.status).arg(run.err)));
+    QVERIFY2(run.out.contains(expected), qPrintable(run.out));
+    QVERIFY2(!run.err.contains("platform plugin"), qPrintable(run.err));
+  }
+
+  void screenshotOfACaseThatCannotBeOpened_data() {
+    QTest::addColumn<QString>("name");
+    QTest::addColumn<QByteArray>("contents");  // empty: no file; "folder": a folder of that name
+    QTest::addColumn<QStringList>("extra");
+    QTest::addColumn<QString>("expected");  // the core reader's message
+    const QStringList none;
+    const QStringList study = {"--screenshot-of", "trade-study", "--study-vary",
+                               "compressor.pressure_ratio=4:12:3"};
+    QTest::newRow("missing") << "missing.json" << QByteArray() << none
+                             << "cannot read case file: No such file or directory";
+    QTest::newRow("a folder") << "folder.json" << QByteArray("folder") << none
+                              << "cannot read case file: is a folder";
+    QTest::newRow("not JSON") << "broken.json" << QByteArray("{\"format\": \"cyclewright-case\",") << none
+                              << "not valid JSON";
+    // [1, 60]: the core's range of the compressor pressure ratio (core/engine/case_validation.cpp).
+    QTest::newRow("invalid value") << "invalid.json"
+                                   << demoWith("\"pressure_ratio\": 8.0", "\"pressure_ratio\": 0.5") << none
+                                   << "/compressor/pressure_ratio = 0.5 is outside the valid range [1, 60]";
+    QTest::newRow("missing, with a study")
+        << "missing.json" << QByteArray() << study << "cannot read case file: No such file or directory";
+  }
+  void screenshotOfACaseThatCannotBeOpened() {
+    QFETCH(QString, name);
+    QFETCH(QByteArray, contents);
+    QFETCH(QStringList, extra);
+    QFETCH(QString, expected);
+    const cw::test::IsolatedHome home;
+    const QString casePath = home.path(name);
+    if (contents == "folder")
+      QVERIFY(QDir().mkpath(casePath));
+    else if (!contents.isEmpty())
+      QVERIFY(writeFile(casePath, contents));
+    const QString picture = home.path("window.png");
+    const Run run = runApp(home, QStringList{"--screenshot", picture} + extra + QStringList{casePath});
+    QCOMPARE(run.status, 2);
+    const QStringList lines = ourLines(run.err);
+    QVERIFY2(lines.size() == 1, qPrintable(run.err));
+    QVERIFY2(lines.first().contains(casePath), qPrintable(lines.first()));
+    QVERIFY2(lines.first().contains(expected), qPrintable(lines.first()));
+    QVERIFY(!QFile::exists(picture));
+  }
+
+  void optionsOfTheWrongKindSayWhatIsExpected_data() {
+    QTest::addColumn<QStringList>("arguments");
+    QTest::addColumn<QString>("expected");
+    const QStringList vary = {"--study-vary", "compressor.pressure_ratio=4:12:3"};
+    QTest::newRow("size, no size")
+        << QStringList{"--size", "abc"}
+        << "cyclewright: --size: expected WxH in pixels, e.g. 1600x1000, each from "
+           "200x150 to 8000x8000; got \"abc\"";
+    QTest::newRow("size, too small") << QStringList{"--size", "100x100"}
+                                     << "cyclewright: --size = 100x100 is outside the valid range 200x150 to "
+                                        "8000x8000";
+    QTest::newRow("language") << QStringList{"--language", "xx"}
+                              << "cyclewright: --language: no translation for \"xx\"; available: de, en";
+    QTest::newRow("palette") << QStringList{"--palette", "purple"}
+                             << "cyclewright: --palette: expected system or dark, got \"purple\"";
+    QTest::newRow("study input")
+        << QStringList{"--study-vary", "compressor.presure_ratio=4:12:3"}
+        << "cyclewright: --study-vary compressor.presure_ratio: not a numeric input of this case (did you "
+           "mean compressor.pressure_ratio?)";
+    QTest::newRow("compared input")
+        << vary + QStringList{"--study-compare", "compressor.isentropic_eficiency=0.8"}
+        << "cyclewright: --study-compare compressor.isentropic_eficiency: not a numeric input of this case "
+           "(did you mean compressor.isentropic_efficiency?)";
+    QTest::newRow("plotted column") << vary + QStringList{"--study-plot", "specific_thrust_N_s_per_kgg"}
+                                    << "cyclewright: --study-plot specific_thrust_N_s_per_kgg: not an output "
+                                       "column (did you mean specific_thrust_N_s_per_kg?)";
+  }
+  void optionsOfTheWrongKindSayWhatIsExpected() {
+    QFETCH(QStringList, arguments);
+    QFETCH(QString, expected);
+    const cw::test::IsolatedHome home;
+    const QString picture = home.path("window.png");
+    const Run run = runApp(home, QStringList{"--screenshot", picture} + arguments);
+    QCOMPARE(run.status, 2);
+    const QStringList lines = ourLines(run.err);
+    QVERIFY2(lines.size() == 1, qPrintable(run.err));
+    QCOMPARE(lines.first(), expected);
+    QVERIFY(!QFile::exists(picture));
+  }
 
   void childrenKeepToTheirOwnHome() {
     // The settings file and data folder a child would use with the real environment.
