@@ -1,6 +1,7 @@
 // cyclewright: the desktop application.
 #include "application.h"
 #include "case_document.h"
+#include "guarded_application.h"
 #include "guarded_main.h"
 #include "main_window.h"
 #include "start_options.h"
@@ -9,7 +10,6 @@
 
 #include "common/error.h"
 
-#include <QApplication>
 #include <QCommandLineParser>
 #include <QDockWidget>
 #include <QPixmap>
@@ -79,7 +79,7 @@ int runApplication(int argc, char** argv) {
   if (cw::gui::wantsScreenshot(argc, argv) && std::getenv("QT_QPA_PLATFORM") == nullptr)
     setenv("QT_QPA_PLATFORM", "offscreen", 1);
 
-  QApplication app(argc, argv);
+  cw::gui::GuardedApplication app(argc, argv);
   cw::gui::nameApplication();
   QCommandLineParser parser;
   const cw::gui::StartOptions options;

@@ -1,22 +1,112 @@
-// No exception escapes main(): runGuarded() turns one escaping main()'s work into one line on
-// stderr and an exit status.
+// No exception escapes: GuardedApplication::notify() catches one thrown by an event handler or
+// a slot, shows it in the main window's status bar and a warning dialog and keeps running;
+// runGuarded() turns one escaping main()'s work into one line on stderr and an exit status.
+// The suite runs on a GuardedApplication of its own (see main() below).
+#include "guarded_application.h"
 #include "guarded_main.h"
 #include "gui_test_support.h"
 
 #include "common/error.h"
 
+#include <QEvent>
+#include <QLabel>
+#include <QMainWindow>
+#include <QMessageBox>
 #include <QProcess>
+#include <QStatusBar>
 #include <QTest>
+#include <QTimer>
 
 #include <new>
 #include <sstream>
 #include <stdexcept>
 
+namespace {
+
+const QEvent::Type kThrowEvent = static_cast<QEvent::Type>(QEvent::User + 1);
+
+/// A widget whose handler of kThrowEvent throws, as a bug in an event handler would.
+class ThrowingWidget : public QLabel {
+ public:
+  using QLabel::QLabel;
+  int handled = 0;
+
+ protected:
+  bool event(QEvent* event) override {
+    if (event->type() != kThrowEvent) return QLabel::event(event);
+    ++handled;
+    throw std::runtime_error("the handler failed on purpose");
+  }
+};
+
+QMessageBox* shownErrorBox(QMainWindow& window) {
+  auto* box = window.findChild<QMessageBox*>("internalErrorBox");
+  return box && box->isVisible() ? box : nullptr;
+}
+
+}  // namespace
+
 class TestGuarded : public QObject {
   Q_OBJECT
 
  private slots:
-  void initTestCase() { cw::test::isolateGuiTest("CyclewrightTestGuarded"); }
+  void initTestCase() {
+    cw::test::isolateGuiTest("CyclewrightTestGuarded");
+    QVERIFY(qobject_cast<cw::gui::GuardedApplication*>(QCoreApplication::instance()));
+  }
+
+  void anEventHandlerThatThrowsIsReportedAndTheApplicationRuns() {
+    QMainWindow window;
+    auto* widget = new ThrowingWidget(QStringLiteral("strip"), &window);
+    window.setCentralWidget(widget);
+    window.show();
+    QVERIFY(QTest::qWaitForWindowExposed(&window));
+    QEvent event(kThrowEvent);
+    QVERIFY(!QCoreApplication::sendEvent(widget, &event));  // caught, not handled
+    QCOMPARE(widget->handled, 1);
+    const QString expected =
+        QStringLiteral("An internal error interrupted the last action: the handler failed on purpose");
+    QCOMPARE(window.statusBar()->currentMessage(), expected);
+    QTRY_VERIFY(shownErrorBox(window));
+    QCOMPARE(shownErrorBox(window)->text(), expected);
+    QCOMPARE(shownErrorBox(window)->windowTitle(), QString("Internal error"));
+    // A second failure while the dialog is up: reported in the status bar, no second dialog.
+    QCoreApplication::postEvent(widget, new QEvent(kThrowEvent));
+    QTRY_COMPARE(widget->handled, 2);
+    QCOMPARE(window.findChildren<QMessageBox*>("internalErrorBox").size(), 1);
+    shownErrorBox(window)->accept();
+    QTRY_VERIFY(window.findChildren<QMessageBox*>("internalErrorBox").isEmpty());
+    // Still running: events and timers keep coming.
+    bool fired = false;
+    QTimer::singleShot(10, &window, [&fired] { fired = true; });
+    QTRY_VERIFY(fired);
+    widget->setText(QStringLiteral("after"));
+    QCOMPARE(widget->text(), QString("after"));
+  }
+
+  void aSlotThatThrowsIsReportedToo() {
+    QMainWindow window;
+    window.show();
+    QVERIFY(QTest::qWaitForWindowExposed(&window));
+    int calls = 0;
+    QTimer::singleShot(0, &window, [&calls] {
+      ++calls;
+      throw std::bad_alloc();
+    });
+    QTRY_COMPARE(calls, 1);
+    QTRY_VERIFY(shownErrorBox(window));
+    QCOMPARE(window.statusBar()->currentMessage(),
+             QString("An internal error interrupted the last action: out of memory"));
+    shownErrorBox(window)->accept();
+  }
+
+  void withoutAWindowOnlyStderrSaysIt() {
+    QObject plain;
+    QTimer::singleShot(0, &plain, [] { throw std::logic_error("no window"); });
+    QTest::qWait(50);
+    const auto boxes = QApplication::topLevelWidgets();
+    for (QWidget* widget : boxes) QVERIFY(widget->objectName() != QLatin1String("internalErrorBox"));
+  }
 
   void runGuardedTurnsEscapingExceptionsIntoOneLine_data() {
     QTest::addColumn<int>("kind");
@@ -80,5 +170,11 @@ class TestGuarded : public QObject {
   }
 };
 
-QTEST_MAIN(TestGuarded)
+int main(int argc, char** argv) {
+  cw::gui::GuardedApplication app(argc, argv);
+  TestGuarded suite;
+  QTEST_SET_MAIN_SOURCE_PATH
+  return QTest::qExec(&suite, argc, argv);
+}
+
 #include "test_guarded.moc"
