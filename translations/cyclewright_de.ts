@@ -967,6 +967,25 @@ p = %7   v = %8</translation>
     </message>
 </context>
 <context>
+    <name>cw::gui::GuardedApplication</name>
+    <message>
+        <source>out of memory</source>
+        <translation>Speicher erschöpft</translation>
+    </message>
+    <message>
+        <source>An internal error interrupted the last action: %1</source>
+        <translation>Ein interner Fehler hat die letzte Aktion abgebrochen: %1</translation>
+    </message>
+    <message>
+        <source>Internal error</source>
+        <translation>Interner Fehler</translation>
+    </message>
+    <message>
+        <source>Cyclewright keeps running. Save your case under a new name to be safe, and please report what you did.</source>
+        <translation>Cyclewright läuft weiter. Speichern Sie Ihren Fall sicherheitshalber unter einem neuen Namen, und melden Sie bitte, was Sie getan haben.</translation>
+    </message>
+</context>
+<context>
     <name>cw::gui::ImageExportDialog</name>
     <message>
         <source>Export as PNG</source>
@@ -1037,10 +1056,6 @@ p = %7   v = %8</translation>
     <message>
         <source>&amp;About Cyclewright</source>
         <translation>Ü&amp;ber Cyclewright</translation>
-    </message>
-    <message>
-        <source>Cannot open %1: %2</source>
-        <translation>%1 kann nicht geöffnet werden: %2</translation>
     </message>
     <message>
         <source>Opened %1</source>
@@ -1233,18 +1248,8 @@ p = %7   v = %8</translation>
         <translation>%1: Stationen %2</translation>
     </message>
     <message>
-        <source>%1 is not a valid Cyclewright case file</source>
-        <translation>%1 ist keine gültige Cyclewright-Falldatei</translation>
-    </message>
-    <message>
         <source>Cannot open case</source>
         <translation>Fall kann nicht geöffnet werden</translation>
-    </message>
-    <message>
-        <source>%1 is not a valid Cyclewright case file:
-%2</source>
-        <translation>%1 ist keine gültige Cyclewright-Falldatei:
-%2</translation>
     </message>
     <message>
         <source>Cannot save %1: %2</source>
@@ -1305,10 +1310,6 @@ p = %7   v = %8</translation>
     <message>
         <source>Recover case</source>
         <translation>Fall wiederherstellen</translation>
-    </message>
-    <message>
-        <source>Cyclewright did not close normally. Recover the case autosaved at %1?</source>
-        <translation>Cyclewright wurde nicht normal beendet. Den um %1 automatisch gespeicherten Fall wiederherstellen?</translation>
     </message>
     <message>
         <source>PNG images (*.png)</source>
@@ -1434,6 +1435,50 @@ p = %7   v = %8</translation>
         <source>Trade-study table copied as tab-separated text</source>
         <translation>Tabelle der Parameterstudie als tabulatorgetrennter Text kopiert</translation>
     </message>
+    <message>
+        <source>Not opened: %1</source>
+        <translation>Nicht geöffnet: %1</translation>
+    </message>
+    <message>
+        <source>The case shown is unchanged.</source>
+        <translation>Der angezeigte Fall bleibt unverändert.</translation>
+    </message>
+    <message>
+        <source>Cannot recover: %1</source>
+        <translation>Wiederherstellen nicht möglich: %1</translation>
+    </message>
+    <message>
+        <source>Cannot recover case</source>
+        <translation>Fall kann nicht wiederhergestellt werden</translation>
+    </message>
+    <message>
+        <source>It was left where it is.</source>
+        <translation>Er wurde an seinem Ort belassen.</translation>
+    </message>
+    <message>
+        <source>It was kept as %1.</source>
+        <translation>Er wurde als %1 aufbewahrt.</translation>
+    </message>
+    <message>
+        <source>An autosaved case cannot be recovered. %1</source>
+        <translation>Ein automatisch gespeicherter Fall kann nicht wiederhergestellt werden. %1</translation>
+    </message>
+    <message>
+        <source>An autosaved case cannot be recovered: %1</source>
+        <translation>Ein automatisch gespeicherter Fall kann nicht wiederhergestellt werden: %1</translation>
+    </message>
+    <message>
+        <source>Cyclewright did not close normally. Recover the untitled case autosaved at %1?</source>
+        <translation>Cyclewright wurde nicht normal beendet. Den um %1 automatisch gespeicherten unbenannten Fall wiederherstellen?</translation>
+    </message>
+    <message>
+        <source>Cyclewright did not close normally. Recover the changes to %1 autosaved at %2?</source>
+        <translation>Cyclewright wurde nicht normal beendet. Die um %2 automatisch gespeicherten Änderungen an %1 wiederherstellen?</translation>
+    </message>
+    <message>
+        <source>No discards this autosave.</source>
+        <translation>„Nein“ verwirft diese automatische Speicherung.</translation>
+    </message>
 </context>
 <context>
     <name>cw::gui::PerformanceModel</name>
@@ -1533,12 +1578,12 @@ p = %7   v = %8</translation>
         <translation> s</translation>
     </message>
     <message>
-        <source>Seconds after a change until the case is saved for recovery after a crash.</source>
-        <translation>Sekunden nach einer Änderung, bis der Fall für die Wiederherstellung nach einem Absturz gespeichert wird.</translation>
+        <source>Unsaved edits are saved for recovery after a crash 2 s after the last edit, and at the latest this many seconds after the first, even while you keep typing.</source>
+        <translation>Ungespeicherte Änderungen werden für die Wiederherstellung nach einem Absturz 2 s nach der letzten Änderung automatisch gespeichert, spätestens aber so viele Sekunden nach der ersten, auch während Sie weitertippen.</translation>
     </message>
     <message>
-        <source>&amp;Autosave after:</source>
-        <translation>&amp;Automatisch speichern nach:</translation>
+        <source>&amp;Autosave edits within:</source>
+        <translation>&amp;Automatisch speichern binnen:</translation>
     </message>
 </context>
 <context>

@@ -2,7 +2,10 @@
 
 #include "colours.h"
 
+#include "common/version.h"
+
 #include <QApplication>
+#include <QDir>
 #include <QLocale>
 #include <QPalette>
 #include <QStyleFactory>
@@ -11,6 +14,12 @@
 #include <cstring>
 
 namespace cw::gui {
+
+void nameApplication() {
+  QCoreApplication::setApplicationName(QStringLiteral("Cyclewright"));
+  QCoreApplication::setOrganizationName(QStringLiteral("Cyclewright"));
+  QCoreApplication::setApplicationVersion(QString::fromLatin1(kVersion));
+}
 
 bool wantsScreenshot(int argc, char** argv) {
   for (int i = 1; i < argc; ++i)
@@ -53,6 +62,23 @@ bool applyPaletteNamed(QApplication& app, const QString& name) {
   QApplication::setPalette(darkPalette());
   Q_UNUSED(app);
   return true;
+}
+
+QStringList availableLanguages() {
+  QStringList languages{QStringLiteral("en")};
+  const QString prefix = QStringLiteral("cyclewright_"), suffix = QStringLiteral(".qm");
+  for (const QString& name : QDir(QStringLiteral(":/i18n")).entryList({prefix + '*' + suffix}, QDir::Files))
+    languages << name.mid(prefix.size(), name.size() - prefix.size() - suffix.size());
+  languages.sort();
+  languages.removeDuplicates();
+  return languages;
+}
+
+bool hasLanguage(const QString& language) {
+  const QLocale locale(language);
+  if (locale.language() == QLocale::English) return true;
+  QTranslator translator;
+  return locale.language() != QLocale::C && translator.load(locale, "cyclewright", "_", ":/i18n");
 }
 
 QString installTranslation(QApplication& app, const QString& language) {

@@ -1,7 +1,7 @@
 #pragma once
-// Start-up of the Cyclewright application: command-line options and translation.
+// Start-up of the Cyclewright application: its names, palette and translation (the command
+// line's options are in start_options.h).
 
-#include <QSize>
 #include <QString>
 #include <QStringList>
 
@@ -10,12 +10,8 @@ class QPalette;
 
 namespace cw::gui {
 
-struct StartOptions {
-  QString casePath;        ///< case to open; the demo case when empty
-  QString screenshotPath;  ///< when set: render the main window to this PNG and exit
-  QSize screenshotSize{1600, 1000};
-  QString language;  ///< e.g. "de"; the system locale when empty
-};
+/// Names the application (organisation, name, version) for QSettings, QStandardPaths and --version.
+void nameApplication();
 
 /// Returns true when argv asks for an offscreen render (--screenshot), before QApplication exists.
 bool wantsScreenshot(int argc, char** argv);
@@ -27,7 +23,15 @@ QPalette darkPalette();
 /// "system" (left as it is). Returns false for any other name.
 bool applyPaletteNamed(QApplication& app, const QString& name);
 
-/// Installs the translator for options.language (or the system locale). Returns the language used.
+/// The user-interface languages there are: "en" (the source texts) and one per translation
+/// compiled into the resources (":/i18n/cyclewright_<code>.qm"), sorted.
+QStringList availableLanguages();
+
+/// Whether `language` (e.g. "de", "de_AT", "en_GB") can be shown: English, or a language with a
+/// translation.
+bool hasLanguage(const QString& language);
+
+/// Installs the translator for `language` (or the system locale when empty). Returns the language used.
 QString installTranslation(QApplication& app, const QString& language);
 
 }  // namespace cw::gui

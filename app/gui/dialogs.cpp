@@ -40,11 +40,13 @@ PreferencesDialog::PreferencesDialog(QWidget* parent) : QDialog(parent) {
   layout_->addItem(tr("Tabbed"));
   form->addRow(tr("&Charts:"), layout_);
   autosave_ = new QSpinBox(this);
-  autosave_->setObjectName("autosaveSeconds");
-  autosave_->setRange(5, 3600);
+  autosave_->setObjectName("autosaveWithinSeconds");
+  autosave_->setRange(AppSettings::kMinAutosaveWithin, AppSettings::kMaxAutosaveWithin);
   autosave_->setSuffix(tr(" s"));
-  autosave_->setToolTip(tr("Seconds after a change until the case is saved for recovery after a crash."));
-  form->addRow(tr("&Autosave after:"), autosave_);
+  autosave_->setToolTip(
+      tr("Unsaved edits are saved for recovery after a crash 2 s after the last edit, and at the latest "
+         "this many seconds after the first, even while you keep typing."));
+  form->addRow(tr("&Autosave edits within:"), autosave_);
   layout->addLayout(form);
   addButtons(this, layout);
 }
@@ -61,10 +63,10 @@ ChartLayout PreferencesDialog::chartLayout() const {
 void PreferencesDialog::setChartLayout(ChartLayout layout) {
   layout_->setCurrentIndex(layout == ChartLayout::Tabbed ? 1 : 0);
 }
-int PreferencesDialog::autosaveSeconds() const {
+int PreferencesDialog::autosaveWithinSeconds() const {
   return autosave_->value();
 }
-void PreferencesDialog::setAutosaveSeconds(int seconds) {
+void PreferencesDialog::setAutosaveWithinSeconds(int seconds) {
   autosave_->setValue(seconds);
 }
 

@@ -24,8 +24,9 @@ class PreferencesDialog : public QDialog {
   void setUnitSystem(UnitSystem system);
   ChartLayout chartLayout() const;
   void setChartLayout(ChartLayout layout);
-  int autosaveSeconds() const;
-  void setAutosaveSeconds(int seconds);
+  /// The autosave's limit after the first unsaved edit [s].
+  int autosaveWithinSeconds() const;
+  void setAutosaveWithinSeconds(int seconds);
 
  private:
   QComboBox* units_ = nullptr;

@@ -3,6 +3,8 @@
 #include "colours.h"
 
 #include "audit_panel.h"
+#include "autosave_store.h"
+#include "autosave_timer.h"
 #include "case_document.h"
 #include "case_form.h"
 #include "charts/audit_chart.h"
@@ -13,6 +15,7 @@
 #include "common/version.h"
 #include "dialogs.h"
 #include "engine/case_validation_error.h"
+#include "io/atomic_file.h"
 #include "io/case_file.h"
 #include "io/result_export.h"
 #include "performance_model.h"
@@ -47,7 +50,6 @@
 #include <QStatusBar>
 #include <QTabWidget>
 #include <QTableView>
-#include <QTimer>
 #include <QToolBar>
 #include <QUndoStack>
 #include <QVBoxLayout>
@@ -63,10 +65,41 @@ namespace cw::gui {
 
 namespace {
 
-QString problemsText(const engine::CaseValidationError& e) {
+/// The case at a path or a Qt resource; throws as io::readCaseFile does, naming the path.
+engine::Case readCaseAt(const QString& path) {
+  if (!path.startsWith(QLatin1Char(':')))
+    return io::readCaseFile(QDir::toNativeSeparators(path).toStdString());
+  QFile file(path);
+  if (!file.open(QIODevice::ReadOnly))
+    throw InvalidInput(path.toStdString(), "cannot read case file: " + file.errorString().toStdString());
+  const QByteArray bytes = file.readAll();
+  nlohmann::json document;
+  try {
+    document = nlohmann::json::parse(bytes.constData(), bytes.constData() + bytes.size());
+  } catch (const nlohmann::json::parse_error& e) {
+    throw InvalidInput(path.toStdString(), std::string("not valid JSON: ") + e.what());
+  }
+  try {
+    return io::parseCase(document);
+  } catch (const engine::CaseValidationError& e) {
+    throw engine::CaseValidationError(path.toStdString(), e.problems());
+  }
+}
+
+/// Why a case cannot be opened: the core reader's message, naming the file first.
+QString openFailureText(const QString& path, const std::exception& e) {
+  const auto* invalid = dynamic_cast<const engine::CaseValidationError*>(&e);
+  if (!invalid) return QString::fromStdString(e.what());
   QStringList lines;
-  for (const auto& p : e.problems()) lines << QString::fromStdString(p.message);
-  return lines.join(QLatin1Char('\n'));
+  for (const auto& p : invalid->problems()) lines << QString::fromStdString(p.message);
+  return path + QStringLiteral(": ") + lines.join(QLatin1Char('\n'));
+}
+
+/// Removes the temporaries interrupted atomic saves of a case file left beside it.
+void removeStaleTemporariesOf(const QString& path) {
+  if (path.isEmpty() || path.startsWith(QLatin1Char(':'))) return;
+  const QFileInfo info(path);
+  io::removeStaleTemporaries(info.absolutePath().toStdString(), info.fileName().toStdString());
 }
 
 }  // namespace
@@ -84,9 +117,13 @@ MainWindow::MainWindow(QWidget* parent) : QMainWindow(parent) {
   createCentralWidget();
   createToolBar();
 
-  autosaveTimer_ = new QTimer(this);
-  autosaveTimer_->setSingleShot(true);
-  connect(autosaveTimer_, &QTimer::timeout, this, &MainWindow::autosaveNow);
+  autosaves_ = std::make_unique<AutosaveStore>();
+  autosaveTimer_ = new AutosaveTimer(this);
+  autosaveTimer_->setLimit(settings_.autosaveWithinSeconds() * 1000);
+  connect(autosaveTimer_, &AutosaveTimer::due, this, &MainWindow::autosaveNow);
+  connect(document_, &CaseDocument::modifiedChanged, this, [this](bool modified) {
+    if (!modified) removeAutosave();  // saved, or back to the file's state: nothing to recover
+  });
 
   connect(document_, &CaseDocument::resultChanged, this, &MainWindow::refreshResult);
   connect(document_, &CaseDocument::caseChanged, this, &MainWindow::updateStrip);
@@ -617,36 +654,37 @@ QString MainWindow::casePath() const {
   return document_->filePath();
 }
 
-bool MainWindow::openCase(const QString& path) {
+bool MainWindow::openCase(const QString& path, QString* error) {
   engine::Case loaded;
   try {
-    if (path.startsWith(QLatin1Char(':'))) {
-      QFile file(path);
-      if (!file.open(QIODevice::ReadOnly)) {
-        statusBar()->showMessage(tr("Cannot open %1: %2").arg(path, file.errorString()));
-        return false;
-      }
-      const QByteArray bytes = file.readAll();
-      loaded = io::parseCase(nlohmann::json::parse(bytes.constData(), bytes.constData() + bytes.size()));
-    } else {
-      loaded = io::readCaseFile(QDir::toNativeSeparators(path).toStdString());
-    }
-  } catch (const engine::CaseValidationError& e) {
-    statusBar()->showMessage(tr("%1 is not a valid Cyclewright case file").arg(path));
-    if (isVisible())
-      QMessageBox::warning(this, tr("Cannot open case"),
-                           tr("%1 is not a valid Cyclewright case file:\n%2").arg(path, problemsText(e)));
-    return false;
+    loaded = readCaseAt(path);
   } catch (const std::exception& e) {
-    statusBar()->showMessage(tr("Cannot open %1: %2").arg(path, QString::fromStdString(e.what())));
-    return false;
+    return refuseToOpen(openFailureText(path, e), error);
   }
+  removeStaleTemporariesOf(path);
   document_->load(loaded, path);
   if (!path.startsWith(QLatin1Char(':'))) settings_.addRecentFile(QFileInfo(path).absoluteFilePath());
   updateTitle();
   const QString title = QString::fromStdString(loaded.title);
   statusBar()->showMessage(tr("Opened %1").arg(title.isEmpty() ? path : title));
   return true;
+}
+
+bool MainWindow::refuseToOpen(const QString& message, QString* error) {
+  if (error) *error = message;
+  statusBar()->showMessage(tr("Not opened: %1").arg(message.section(QLatin1Char('\n'), 0, 0)));
+  showProblem(QStringLiteral("openFailedBox"), tr("Cannot open case"), message,
+              tr("The case shown is unchanged."));
+  return false;
+}
+
+void MainWindow::showProblem(const QString& objectName, const QString& title, const QString& text,
+                             const QString& detail) {
+  if (!isVisible()) return;
+  QMessageBox box(QMessageBox::Warning, title, text, QMessageBox::Ok, this);
+  box.setObjectName(objectName);
+  box.setInformativeText(detail);
+  box.exec();
 }
 
 bool MainWindow::saveCaseAs(const QString& path) {
@@ -658,6 +696,7 @@ bool MainWindow::saveCaseAs(const QString& path) {
     return false;
   }
   document_->markSaved(path);
+  removeStaleTemporariesOf(path);
   settings_.addRecentFile(QFileInfo(path).absoluteFilePath());
   removeAutosave();
   updateTitle();
@@ -734,67 +773,98 @@ void MainWindow::closeEvent(QCloseEvent* event) {
   event->accept();
 }
 
-QString MainWindow::autosavePath() {
-  return QDir(QStandardPaths::writableLocation(QStandardPaths::AppLocalDataLocation))
-      .filePath(QStringLiteral("autosave-case.json"));
+QString MainWindow::autosaveFolder() {
+  return AutosaveStore::defaultFolder();
+}
+
+QString MainWindow::autosaveFile() const {
+  return autosaves_->ownFile();
 }
 
 void MainWindow::scheduleAutosave() {
-  if (document_->isModified() && !autosaveTimer_->isActive())
-    autosaveTimer_->start(settings_.autosaveSeconds() * 1000);
+  if (document_->isModified()) autosaveTimer_->edited();
 }
 
 bool MainWindow::autosaveNow() {
+  autosaveTimer_->stop();
   if (!document_->isModified()) return false;
-  const QString path = autosavePath();
-  QDir().mkpath(QFileInfo(path).absolutePath());
   try {
-    io::writeCaseFile(path.toStdString(), document_->currentCase());
+    autosaves_->write(document_->currentCase(), document_->filePath());
   } catch (const std::exception& e) {
     statusBar()->showMessage(tr("Autosave failed: %1").arg(QString::fromStdString(e.what())));
     return false;
-  }
-  QSaveFile origin(path + QStringLiteral(".origin"));
-  if (origin.open(QIODevice::WriteOnly)) {
-    origin.write(document_->filePath().toUtf8());
-    origin.commit();
   }
   return true;
 }
 
 void MainWindow::removeAutosave() {
   autosaveTimer_->stop();
-  QFile::remove(autosavePath());
-  QFile::remove(autosavePath() + QStringLiteral(".origin"));
+  autosaves_->removeOwn();
 }
 
 bool MainWindow::recoverFrom(const QString& autosaveFile) {
-  engine::Case recovered;
   try {
-    recovered = io::readCaseFile(autosaveFile.toStdString());
-  } catch (const std::exception&) {
+    recover(AutosaveStore::read(autosaveFile));
+  } catch (const std::exception& e) {
+    const QString what = QString::fromStdString(e.what());
+    statusBar()->showMessage(tr("Cannot recover: %1").arg(what));
+    showProblem(QStringLiteral("unreadableAutosaveBox"), tr("Cannot recover case"), what, QString());
     return false;
   }
-  QString origin;
-  QFile originFile(autosaveFile + QStringLiteral(".origin"));
-  if (originFile.open(QIODevice::ReadOnly)) origin = QString::fromUtf8(originFile.readAll());
-  document_->load(recovered, origin, true);
-  updateTitle();
-  statusBar()->showMessage(tr("Recovered the autosaved case; save it to keep it."));
   return true;
 }
 
+void MainWindow::recover(const Autosave& autosave) {
+  document_->load(autosave.inputs, autosave.origin, true);
+  updateTitle();
+  statusBar()->showMessage(tr("Recovered the autosaved case; save it to keep it."));
+}
+
+bool MainWindow::readAutosave(OrphanAutosave& orphan, Autosave& autosave) {
+  try {
+    autosave = AutosaveStore::read(orphan.file);
+    return true;
+  } catch (const std::exception& e) {
+    const QString aside = AutosaveStore::setAside(orphan);
+    const QString kept =
+        aside.isEmpty() ? tr("It was left where it is.") : tr("It was kept as %1.").arg(aside);
+    statusBar()->showMessage(tr("An autosaved case cannot be recovered. %1").arg(kept));
+    showProblem(QStringLiteral("unreadableAutosaveBox"), tr("Cannot recover case"),
+                tr("An autosaved case cannot be recovered: %1").arg(QString::fromStdString(e.what())), kept);
+    return false;
+  }
+}
+
+bool MainWindow::askToRecover(const Autosave& autosave) {
+  const QString when = QLocale().toString(autosave.saved, QLocale::ShortFormat);
+  const QString text =
+      autosave.origin.isEmpty()
+          ? tr("Cyclewright did not close normally. Recover the untitled case autosaved at %1?").arg(when)
+          : tr("Cyclewright did not close normally. Recover the changes to %1 autosaved at %2?")
+                .arg(QDir::toNativeSeparators(autosave.origin), when);
+  QMessageBox box(QMessageBox::Question, tr("Recover case"), text, QMessageBox::Yes | QMessageBox::No, this);
+  box.setObjectName("recoverBox");
+  box.setDefaultButton(QMessageBox::Yes);
+  box.setInformativeText(tr("No discards this autosave."));
+  return box.exec() == QMessageBox::Yes;
+}
+
 bool MainWindow::offerRecovery() {
-  const QString path = autosavePath();
-  if (!QFile::exists(path)) return false;
-  const auto answer = QMessageBox::question(
-      this, tr("Recover case"),
-      tr("Cyclewright did not close normally. Recover the case autosaved at %1?")
-          .arg(QLocale().toString(QFileInfo(path).lastModified(), QLocale::ShortFormat)),
-      QMessageBox::Yes | QMessageBox::No, QMessageBox::Yes);
-  const bool recovered = answer == QMessageBox::Yes && recoverFrom(path);
-  if (!recovered) removeAutosave();
-  return recovered;
+  autosaves_->removeStaleTemporaries();
+  std::vector<OrphanAutosave> orphans = autosaves_->claimOrphans();
+  for (OrphanAutosave& orphan : orphans) {
+    Autosave autosave;
+    if (!readAutosave(orphan, autosave)) continue;
+    if (!askToRecover(autosave)) {
+      AutosaveStore::discard(orphan);
+      continue;
+    }
+    recover(autosave);
+    // The orphan goes only once this window's own autosave holds the case.
+    if (autosaveNow()) AutosaveStore::discard(orphan);
+    return true;
+  }
+  return false;
 }
 
 // ---------------------------------------------------------------------------------------------
@@ -922,11 +992,12 @@ void MainWindow::showPreferences() {
   PreferencesDialog dialog(this);
   dialog.setUnitSystem(units_->system());
   dialog.setChartLayout(chartLayout_);
-  dialog.setAutosaveSeconds(settings_.autosaveSeconds());
+  dialog.setAutosaveWithinSeconds(settings_.autosaveWithinSeconds());
   if (dialog.exec() != QDialog::Accepted) return;
   setUnitSystem(dialog.unitSystem());
   setChartLayout(dialog.chartLayout());
-  settings_.setAutosaveSeconds(dialog.autosaveSeconds());
+  settings_.setAutosaveWithinSeconds(dialog.autosaveWithinSeconds());
+  autosaveTimer_->setLimit(settings_.autosaveWithinSeconds() * 1000);
 }
 
 QString MainWindow::cautionText() {

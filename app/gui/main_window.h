@@ -24,7 +24,6 @@ class QSplitter;
 class QStackedWidget;
 class QTabWidget;
 class QTableView;
-class QTimer;
 class QwtPlot;
 
 namespace cw::engine {
@@ -34,7 +33,11 @@ struct Evaluation;
 namespace cw::gui {
 
 class AuditPanel;
+class AutosaveStore;
+class AutosaveTimer;
 class TradeStudyPanel;
+struct Autosave;
+struct OrphanAutosave;
 class CaseDocument;
 class CaseForm;
 class CycleChart;
@@ -50,9 +53,11 @@ class MainWindow : public QMainWindow {
   explicit MainWindow(QWidget* parent = nullptr);
   ~MainWindow() override;
 
-  /// Opens a case file (a path or a Qt resource such as ":/demo/demo-turbojet.json").
-  /// Returns false and shows why in the status bar when it cannot be read.
-  bool openCase(const QString& path);
+  /// Opens a case file (a path or a Qt resource such as ":/demo/demo-turbojet.json") and removes
+  /// the temporaries interrupted saves left beside it. When it cannot be opened, returns false,
+  /// keeps the open case and says why: the core reader's message naming the file (in *error,
+  /// in the status bar and, while the window is visible, in a dialog named "openFailedBox").
+  bool openCase(const QString& path, QString* error = nullptr);
   /// Saves to a path (SI, atomically). Returns false and says why when it cannot.
   bool saveCaseAs(const QString& path);
 
@@ -99,13 +104,22 @@ class MainWindow : public QMainWindow {
   bool exportStudyCsv(const QString& path);
   bool exportStudyJson(const QString& path);
 
-  /// Where the autosave goes (QStandardPaths::AppLocalDataLocation).
-  static QString autosavePath();
+  /// The folder of the autosaves (QStandardPaths::AppLocalDataLocation; autosave_store.h).
+  static QString autosaveFolder();
+  /// This window's autosave file; empty before its first autosave.
+  QString autosaveFile() const;
+  /// When the next autosave is due (after an edit: 2 s after the last, at most the Preferences'
+  /// limit after the first).
+  AutosaveTimer* autosaveTimer() const { return autosaveTimer_; }
   /// Writes the autosave now (when modified). Returns true when written.
   bool autosaveNow();
-  /// At start: offers the autosaved case after a crash. Returns true when it was recovered.
+  /// At start: removes the temporaries of interrupted autosaves whose process is gone, then
+  /// offers the autosaves no running instance holds, newest first, until one is recovered (Yes)
+  /// or none is left (No discards one). One that cannot be read is set aside with a message.
+  /// Returns true when a case was recovered.
   bool offerRecovery();
-  /// Loads an autosaved case as a modified, unsaved case.
+  /// Loads an autosaved case as a modified, unsaved case of its origin file. Returns false, with
+  /// a message naming the file and what is wrong, when it is not a valid autosave.
   bool recoverFrom(const QString& autosaveFile);
 
  public slots:
@@ -142,6 +156,12 @@ class MainWindow : public QMainWindow {
   void copyStudyTable();
   void scheduleAutosave();
   void removeAutosave();
+  bool refuseToOpen(const QString& message, QString* error);
+  bool askToRecover(const Autosave& autosave);
+  void recover(const Autosave& autosave);
+  bool readAutosave(OrphanAutosave& orphan, Autosave& autosave);
+  void showProblem(const QString& objectName, const QString& title, const QString& text,
+                   const QString& detail);
 
   AppSettings settings_;
   DisplayUnits* units_ = nullptr;
@@ -171,7 +191,8 @@ class MainWindow : public QMainWindow {
   QDockWidget* tradeStudyDock_ = nullptr;
   QMenu* viewMenu_ = nullptr;
   QMenu* recentMenu_ = nullptr;
-  QTimer* autosaveTimer_ = nullptr;
+  AutosaveTimer* autosaveTimer_ = nullptr;
+  std::unique_ptr<AutosaveStore> autosaves_;
 
   struct Actions {
     QAction *newCase, *open, *save, *saveAs, *preferences, *quit, *undo, *redo, *resetZoom, *logAxes,

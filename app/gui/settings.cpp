@@ -73,11 +73,13 @@ void AppSettings::setStudySetup(const StudySetup& s) {
   settings_.setValue("study/plot", s.plot);
 }
 
-int AppSettings::autosaveSeconds() const {
-  return std::clamp(settings_.value("files/autosave_seconds", 30).toInt(), 5, 3600);
+int AppSettings::autosaveWithinSeconds() const {
+  return std::clamp(settings_.value("files/autosave_within_seconds", kDefaultAutosaveWithin).toInt(),
+                    kMinAutosaveWithin, kMaxAutosaveWithin);
 }
-void AppSettings::setAutosaveSeconds(int seconds) {
-  settings_.setValue("files/autosave_seconds", std::clamp(seconds, 5, 3600));
+void AppSettings::setAutosaveWithinSeconds(int seconds) {
+  settings_.setValue("files/autosave_within_seconds",
+                     std::clamp(seconds, kMinAutosaveWithin, kMaxAutosaveWithin));
 }
 
 QStringList AppSettings::recentFiles() const {

@@ -51,9 +51,11 @@ class AppSettings {
   StudySetup studySetup() const;
   void setStudySetup(const StudySetup& setup);
 
-  /// Seconds between a change and its autosave, in [5, 3600].
-  int autosaveSeconds() const;
-  void setAutosaveSeconds(int seconds);
+  /// The autosave's limit: unsaved edits are autosaved 2 s after the last edit, and at the latest
+  /// this many seconds after the first, in [kMinAutosaveWithin, kMaxAutosaveWithin], default 5 [s].
+  int autosaveWithinSeconds() const;
+  void setAutosaveWithinSeconds(int seconds);
+  static constexpr int kMinAutosaveWithin = 2, kMaxAutosaveWithin = 600, kDefaultAutosaveWithin = 5;
 
   /// Most recent first, at most kMaxRecentFiles.
   QStringList recentFiles() const;

@@ -1,11 +1,21 @@
 #pragma once
 // Shared set-up of the GUI suites: the C locale for typed numbers, and settings, autosaves and
 // recent files kept in Qt's test locations under an application name of the suite's own.
+//
+// Child processes (the application run by QProcess) get a home of their own, IsolatedHome:
+// every launch of CYCLEWRIGHT_GUI_PATH or a test helper goes through IsolatedHome::start, so a
+// child never writes the user's real settings, data, cache or state.
 
 #include <QCoreApplication>
+#include <QDir>
+#include <QFile>
 #include <QLocale>
+#include <QProcess>
+#include <QProcessEnvironment>
 #include <QStandardPaths>
 #include <QString>
+#include <QStringList>
+#include <QTemporaryDir>
 
 namespace cw::test {
 
@@ -15,5 +25,64 @@ inline void isolateGuiTest(const QString& applicationName) {
   QCoreApplication::setOrganizationName("CyclewrightTest");
   QCoreApplication::setApplicationName(applicationName);
 }
+
+/// A temporary home for child processes: HOME and the XDG base folders (config, data, cache,
+/// state, runtime) inside one QTemporaryDir, removed with it.
+class IsolatedHome {
+ public:
+  /// The variables a child gets, each a folder under the temporary one.
+  static QStringList variables() {
+    return {"HOME",           "XDG_CONFIG_HOME", "XDG_DATA_HOME",
+            "XDG_CACHE_HOME", "XDG_STATE_HOME",  "XDG_RUNTIME_DIR"};
+  }
+
+  IsolatedHome() {
+    for (const QString& name : variables()) {
+      QDir().mkpath(folderOf(name));
+      // The runtime folder must be private (XDG base directory specification).
+      if (name == QLatin1String("XDG_RUNTIME_DIR"))
+        QFile::setPermissions(folderOf(name), QFile::ReadOwner | QFile::WriteOwner | QFile::ExeOwner);
+    }
+  }
+
+  bool isValid() const { return dir_.isValid(); }
+  /// A path inside the temporary folder.
+  QString path(const QString& relative) const { return dir_.filePath(relative); }
+  /// The folder a variable points to, e.g. folderOf("XDG_CONFIG_HOME").
+  QString folderOf(const QString& variable) const { return dir_.filePath(variable.toLower()); }
+
+  /// The system environment with HOME and the XDG folders pointing into the temporary folder.
+  QProcessEnvironment environment() const {
+    QProcessEnvironment environment = QProcessEnvironment::systemEnvironment();
+    for (const QString& name : variables()) environment.insert(name, folderOf(name));
+    return environment;
+  }
+  /// environment() without a display: no DISPLAY, WAYLAND_DISPLAY or QT_QPA_PLATFORM.
+  QProcessEnvironment environmentWithoutDisplay() const {
+    QProcessEnvironment environment = this->environment();
+    for (const char* name : {"DISPLAY", "WAYLAND_DISPLAY", "QT_QPA_PLATFORM"}) environment.remove(name);
+    return environment;
+  }
+
+  /// Starts a child in this home (in `environment`, by default environment()).
+  void start(QProcess& process, const QString& program, const QStringList& arguments) const {
+    start(process, program, arguments, environment());
+  }
+  void start(QProcess& process, const QString& program, const QStringList& arguments,
+             const QProcessEnvironment& environment) const {
+    process.setProcessEnvironment(environment);
+    process.setWorkingDirectory(folderOf("HOME"));
+    process.start(program, arguments);
+  }
+
+  /// Points this process's own HOME and XDG folders here too (for a suite whose children must
+  /// share its folders, e.g. the autosave folder); QStandardPaths then resolves under it.
+  void applyToThisProcess() const {
+    for (const QString& name : variables()) qputenv(name.toLatin1().constData(), folderOf(name).toUtf8());
+  }
+
+ private:
+  QTemporaryDir dir_;
+};
 
 }  // namespace cw::test

@@ -23,21 +23,17 @@
 #include <qwt_series_data.h>
 #include <qwt_text.h>
 
-#include <QAbstractButton>
 #include <QApplication>
 #include <QFile>
 #include <QJsonDocument>
 #include <QJsonObject>
 #include <QLabel>
 #include <QLineEdit>
-#include <QMessageBox>
 #include <QPlainTextEdit>
 #include <QSignalSpy>
-#include <QStandardPaths>
 #include <QSvgRenderer>
 #include <QTemporaryDir>
 #include <QTest>
-#include <QTimer>
 #include <QUndoStack>
 
 #include <algorithm>
@@ -67,39 +63,6 @@ int stationRow(const cw::gui::StationTableModel* model, const QString& id) {
   for (int r = 0; r < model->rowCount(); ++r)
     if (model->index(r, 0).data().toString() == id) return r;
   return -1;
-}
-
-/// Answers the next message box the window opens (polled from a timer, as a user would click).
-/// Returns the timer; *text receives the box's text once it was answered.
-QTimer* answerNextMessageBox(MainWindow& window, QMessageBox::StandardButton answer, QString* text) {
-  auto* timer = new QTimer(&window);
-  timer->setInterval(20);
-  QObject::connect(timer, &QTimer::timeout, &window, [&window, timer, answer, text] {
-    auto* box = qobject_cast<QMessageBox*>(QApplication::activeModalWidget());
-    if (!box) box = window.findChild<QMessageBox*>();
-    if (!box || !box->isVisible()) return;
-    timer->stop();
-    *text = box->text();
-    QAbstractButton* button = box->button(answer);
-    if (button)
-      button->click();
-    else
-      box->reject();
-  });
-  timer->start();
-  return timer;
-}
-
-/// Edits the demo case, autosaves it and drops the window without closing it (as a crash
-/// would). Returns the autosaved case.
-cw::engine::Case crashWithAutosave() {
-  QFile::remove(MainWindow::autosavePath());
-  MainWindow window;
-  if (!window.openCase(kDemo)) return {};
-  typeInto(window.findChild<QLineEdit*>("compressor.pressureRatio"), "9.5");
-  typeInto(window.findChild<QLineEdit*>("case.title"), "Before the crash");
-  if (!window.autosaveNow()) return {};
-  return window.document().currentCase();
 }
 
 }  // namespace
@@ -364,25 +327,6 @@ class TestExplorer : public QObject {
     window.setUnitSystem(cw::gui::UnitSystem::SI);
   }
 
-  void autosaveAndRecovery() {
-    QFile::remove(MainWindow::autosavePath());
-    cw::engine::Case edited;
-    {
-      MainWindow window;
-      QVERIFY(window.openCase(kDemo));
-      QVERIFY(!window.autosaveNow());  // nothing to save yet
-      typeInto(window.findChild<QLineEdit*>("compressor.pressureRatio"), "9");
-      QVERIFY(window.autosaveNow());
-      QVERIFY(QFile::exists(MainWindow::autosavePath()));
-      edited = window.document().currentCase();
-    }  // destroyed without closing: as after a crash
-    MainWindow recovered;
-    QVERIFY(recovered.recoverFrom(MainWindow::autosavePath()));
-    QVERIFY(recovered.document().currentCase() == edited);
-    QVERIFY(recovered.document().isModified());
-    QFile::remove(MainWindow::autosavePath());
-  }
-
   void isobarLabelsDoNotOverlap() {
     // Stations 5 to 8 of the afterburning example have pressures within 10 % of each other.
     MainWindow window;
@@ -504,50 +448,6 @@ class TestExplorer : public QObject {
     QCOMPARE(title->text(), QString::fromStdString(original.title));
     window.document().undoStack()->redo();
     QCOMPARE(title->text(), QString("Hot day, 35 °C"));
-  }
-
-  void startUpOffersRecoveryAndYesRecovers() {
-    const cw::engine::Case autosaved = crashWithAutosave();
-    QCOMPARE(autosaved.title, std::string("Before the crash"));
-    QVERIFY(QFile::exists(MainWindow::autosavePath()));
-    MainWindow window;  // as at start: the demo, then the offer
-    QVERIFY(window.openCase(kDemo));
-    window.show();
-    QString asked;
-    answerNextMessageBox(window, QMessageBox::Yes, &asked);
-    QVERIFY(window.offerRecovery());
-    QVERIFY2(asked.contains("did not close normally"), qPrintable(asked));
-    QVERIFY(window.document().currentCase() == autosaved);
-    QCOMPARE(window.findChild<QLineEdit*>("case.title")->text(), QString("Before the crash"));
-    QCOMPARE(window.findChild<QLineEdit*>("compressor.pressureRatio")->text(), QString("9.5"));
-    QVERIFY(window.document().isModified());  // recovered, not yet saved
-    QCOMPARE(window.casePath(), kDemo);       // the file it came from
-    QFile::remove(MainWindow::autosavePath());
-    QFile::remove(MainWindow::autosavePath() + ".origin");
-  }
-
-  void startUpOffersRecoveryAndNoRemovesTheAutosave() {
-    QVERIFY(crashWithAutosave().title == "Before the crash");
-    MainWindow window;
-    QVERIFY(window.openCase(kDemo));
-    const cw::engine::Case demo = window.document().currentCase();
-    window.show();
-    QString asked;
-    answerNextMessageBox(window, QMessageBox::No, &asked);
-    QVERIFY(!window.offerRecovery());
-    QVERIFY(!asked.isEmpty());  // it did ask
-    QVERIFY(!QFile::exists(MainWindow::autosavePath()));
-    QVERIFY(!QFile::exists(MainWindow::autosavePath() + ".origin"));
-    QVERIFY(window.document().currentCase() == demo);
-    QVERIFY(!window.document().isModified());
-
-    // Without an autosave the start asks nothing.
-    QString again;
-    QTimer* timer = answerNextMessageBox(window, QMessageBox::Yes, &again);
-    QVERIFY(!window.offerRecovery());
-    QTest::qWait(100);
-    QVERIFY(again.isEmpty());
-    timer->stop();
   }
 };
 

@@ -1,9 +1,13 @@
 // The main window opens offscreen with its menus, the demo case and an About box
-// carrying the caution; --screenshot writes a PNG of the requested size.
+// carrying the caution; --screenshot writes a PNG of the requested size; a case that cannot be
+// opened says why in a dialog and leaves the open case.
 #include "application.h"
+#include "case_document.h"
+#include "gui_test_support.h"
 #include "main_window.h"
 
 #include <QApplication>
+#include <QFile>
 #include <QImage>
 #include <QMenu>
 #include <QMenuBar>
@@ -17,6 +21,8 @@
 class TestMainWindow : public QObject {
   Q_OBJECT
  private slots:
+  void initTestCase() { cw::test::isolateGuiTest("CyclewrightTestMainWindow"); }
+
   void hasFileAndHelpMenus() {
     cw::gui::MainWindow window;
     QVERIFY(window.menuBar()->findChild<QMenu*>("fileMenu") != nullptr);
@@ -47,11 +53,60 @@ class TestMainWindow : public QObject {
     QVERIFY(informative.contains("conceptual-design estimates"));
     QVERIFY(informative.contains("engine manufacturer's data"));
   }
-  void screenshotWritesPngOfStatedSize() {
+  void aCaseThatCannotBeOpenedSaysWhyAndKeepsTheOpenCase_data() {
+    QTest::addColumn<QByteArray>("contents");  // empty: no file
+    QTest::addColumn<QString>("expected");     // the core reader's message
+    QTest::newRow("missing") << QByteArray() << "cannot read case file: No such file or directory";
+    QTest::newRow("not JSON") << QByteArray("[1, 2") << "not valid JSON";
+    // [1, 60]: the core's range of the compressor pressure ratio (core/engine/case_validation.cpp).
+    QTest::newRow("invalid value")  // the demo with a pressure ratio of 0.5
+        << QByteArray("demo") << "/compressor/pressure_ratio = 0.5 is outside the valid range [1, 60]";
+  }
+  void aCaseThatCannotBeOpenedSaysWhyAndKeepsTheOpenCase() {
+    QFETCH(QByteArray, contents);
+    QFETCH(QString, expected);
+    cw::gui::MainWindow window;
+    QVERIFY(window.openCase(":/demo/demo-turbojet.json"));
     QTemporaryDir dir;
-    const QString file = dir.filePath("window.png");
+    const QString path = dir.filePath("case.json");
+    if (contents == "demo") {
+      QFile demo(":/demo/demo-turbojet.json");
+      QVERIFY(demo.open(QIODevice::ReadOnly));
+      contents = demo.readAll().replace("\"pressure_ratio\": 8.0", "\"pressure_ratio\": 0.5");
+      QVERIFY(contents.contains("\"pressure_ratio\": 0.5"));
+    }
+    if (!contents.isEmpty()) {
+      QFile file(path);
+      QVERIFY(file.open(QIODevice::WriteOnly));
+      file.write(contents);
+    }
+    const cw::engine::Case demo = window.document().currentCase();
+    window.show();
+    QString title, text;
+    QTimer::singleShot(0, [&] {
+      auto* box = window.findChild<QMessageBox*>("openFailedBox");
+      if (!box) {  // no such dialog: close whatever is modal, so that the test fails instead of waiting
+        if (QWidget* modal = QApplication::activeModalWidget()) modal->close();
+        return;
+      }
+      title = box->windowTitle();
+      text = box->text();
+      box->accept();
+    });
+    QVERIFY(!window.openCase(path));
+    QCOMPARE(title, QString("Cannot open case"));
+    QVERIFY2(text.contains(path) && text.contains(expected), qPrintable(text));
+    // The open case is kept: the demo, its file and its title.
+    QVERIFY(window.document().currentCase() == demo);
+    QCOMPARE(window.casePath(), QString(":/demo/demo-turbojet.json"));
+    QVERIFY(window.windowTitle().startsWith("demo-turbojet.json"));
+    QVERIFY(!window.document().isModified());
+  }
+  void screenshotWritesPngOfStatedSize() {
+    const cw::test::IsolatedHome home;
+    const QString file = home.path("window.png");
     QProcess app;
-    app.start(CYCLEWRIGHT_GUI_PATH, {"--screenshot", file, "--size", "1024x700"});
+    home.start(app, CYCLEWRIGHT_GUI_PATH, {"--screenshot", file, "--size", "1024x700"});
     QVERIFY(app.waitForFinished(30000));
     QCOMPARE(app.exitCode(), 0);
     const QImage image(file);
@@ -59,10 +114,10 @@ class TestMainWindow : public QObject {
     QCOMPARE(image.size(), QSize(1024, 700));
   }
   void paletteOptionRendersDark() {
-    QTemporaryDir dir;
-    const QString file = dir.filePath("dark.png");
+    const cw::test::IsolatedHome home;
+    const QString file = home.path("dark.png");
     QProcess app;
-    app.start(CYCLEWRIGHT_GUI_PATH, {"--palette", "dark", "--screenshot", file, "--size", "800x600"});
+    home.start(app, CYCLEWRIGHT_GUI_PATH, {"--palette", "dark", "--screenshot", file, "--size", "800x600"});
     QVERIFY(app.waitForFinished(30000));
     QCOMPARE(app.exitCode(), 0);
     const QImage image(file);
@@ -74,7 +129,7 @@ class TestMainWindow : public QObject {
     QVERIFY2(dark > (image.width() / 4) * (image.height() / 4) * 6 / 10, qPrintable(QString::number(dark)));
     QCOMPARE(image.pixelColor(700, 592), QColor("#202124"));  // the status bar's background
     QProcess wrong;
-    wrong.start(CYCLEWRIGHT_GUI_PATH, {"--palette", "purple", "--screenshot", file});
+    home.start(wrong, CYCLEWRIGHT_GUI_PATH, {"--palette", "purple", "--screenshot", file});
     QVERIFY(wrong.waitForFinished(30000));
     QCOMPARE(wrong.exitCode(), 2);
     QVERIFY(QString::fromUtf8(wrong.readAllStandardError()).contains("--palette"));
@@ -92,8 +147,9 @@ class TestMainWindow : public QObject {
     QCOMPARE(english.menuBar()->findChild<QMenu*>("fileMenu")->title(), QString("&File"));
   }
   void versionOption() {
+    const cw::test::IsolatedHome home;
     QProcess app;
-    app.start(CYCLEWRIGHT_GUI_PATH, {"--version"});
+    home.start(app, CYCLEWRIGHT_GUI_PATH, {"--version"});
     QVERIFY(app.waitForFinished(30000));
     QCOMPARE(app.exitCode(), 0);
     QVERIFY(QString::fromUtf8(app.readAllStandardOutput()).contains("Cyclewright 0."));

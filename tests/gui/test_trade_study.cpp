@@ -740,31 +740,26 @@ class TestTradeStudy : public QObject {
 
   void screenshotOfTheStudyPanel() {
     // --study-vary opens the panel, runs the study and --screenshot-of trade-study renders the panel.
-    QTemporaryDir dir;
-    const QString file = dir.filePath("study.png");
-    QProcessEnvironment environment = QProcessEnvironment::systemEnvironment();
-    environment.insert("XDG_CONFIG_HOME", dir.filePath("config"));  // its settings, not the user's
+    const cw::test::IsolatedHome home;  // its settings, not the user's
+    const QString file = home.path("study.png");
     QProcess app;
-    app.setProcessEnvironment(environment);
-    app.start(CYCLEWRIGHT_GUI_PATH,
-              {"--screenshot", file, "--screenshot-of", "trade-study", "--size", "1400x900", "--study-vary",
-               "compressor.pressure_ratio=4:12:5", "--study-vary", "burner.exit_temperature_K=1100:1500:3",
-               "--study-compare", "ideal"});
+    home.start(app, CYCLEWRIGHT_GUI_PATH,
+               {"--screenshot", file, "--screenshot-of", "trade-study", "--size", "1400x900", "--study-vary",
+                "compressor.pressure_ratio=4:12:5", "--study-vary", "burner.exit_temperature_K=1100:1500:3",
+                "--study-compare", "ideal"});
     QVERIFY(app.waitForFinished(120000));
     QCOMPARE(app.exitCode(), 0);
     const QImage image(file);
     QVERIFY(!image.isNull());
     QVERIFY(image.width() > 300 && image.width() < 1400);  // the panel, not the window
     QProcess wrong;
-    wrong.setProcessEnvironment(environment);
-    wrong.start(CYCLEWRIGHT_GUI_PATH,
-                {"--screenshot", file, "--study-vary", "compressor.pressure_ratio=4:12"});
+    home.start(wrong, CYCLEWRIGHT_GUI_PATH,
+               {"--screenshot", file, "--study-vary", "compressor.pressure_ratio=4:12"});
     QVERIFY(wrong.waitForFinished(30000));
     QCOMPARE(wrong.exitCode(), 2);
     QVERIFY(QString::fromUtf8(wrong.readAllStandardError()).contains("--study-vary"));
     QProcess noStudy;
-    noStudy.setProcessEnvironment(environment);
-    noStudy.start(CYCLEWRIGHT_GUI_PATH, {"--screenshot", file, "--screenshot-of", "trade-study"});
+    home.start(noStudy, CYCLEWRIGHT_GUI_PATH, {"--screenshot", file, "--screenshot-of", "trade-study"});
     QVERIFY(noStudy.waitForFinished(30000));
     QCOMPARE(noStudy.exitCode(), 2);
   }

@@ -1,0 +1,219 @@
+// The start of cyclewright as a process: --help and --version need no display; a case that
+// cannot be opened stops a --screenshot with status 2, one line on stderr naming the file and no
+// picture; options of the wrong kind say what they expect; a child keeps to its own home.
+#include "gui_test_support.h"
+
+#include "common/version.h"
+
+#include <QDateTime>
+#include <QFile>
+#include <QFileInfo>
+#include <QProcess>
+#include <QTest>
+
+namespace {
+
+const QString kApp = QStringLiteral(CYCLEWRIGHT_GUI_PATH);
+
+struct Run {
+  int status = -1;
+  QString out;
+  QString err;
+};
+
+Run runApp(const cw::test::IsolatedHome& home, const QStringList& arguments,
+           const QProcessEnvironment& environment) {
+  QProcess process;
+  home.start(process, kApp, arguments, environment);
+  Run run;
+  if (!process.waitForFinished(60000)) {
+    process.kill();
+    process.waitForFinished();
+    return run;
+  }
+  run.status = process.exitStatus() == QProcess::NormalExit ? process.exitCode() : -2;
+  run.out = QString::fromUtf8(process.readAllStandardOutput());
+  run.err = QString::fromUtf8(process.readAllStandardError());
+  return run;
+}
+
+Run runApp(const cw::test::IsolatedHome& home, const QStringList& arguments) {
+  return runApp(home, arguments, home.environment());
+}
+
+/// The lines of our own on stderr (Qt may add its own, e.g. about the platform plugin).
+QStringList ourLines(const QString& err) {
+  QStringList lines;
+  for (const QString& line : err.split(QLatin1Char('\n')))
+    if (line.startsWith(QLatin1String("cyclewright: "))) lines << line;
+  return lines;
+}
+
+/// The demo case with one key's value replaced (invented data; the valid ranges are the core's).
+QByteArray demoWith(const QByteArray& from, const QByteArray& to) {
+  QFile demo(QStringLiteral(CYCLEWRIGHT_SOURCE_DIR "/resources/demo/demo-turbojet.json"));
+  if (!demo.open(QIODevice::ReadOnly)) return {};
+  return demo.readAll().replace(from, to);
+}
+
+bool writeFile(const QString& path, const QByteArray& bytes) {
+  QFile file(path);
+  return file.open(QIODevice::WriteOnly) && file.write(bytes) == bytes.size();
+}
+
+struct FileState {
+  bool exists = false;
+  qint64 size = -1;
+  QDateTime modified;
+  bool operator==(const FileState&) const = default;
+};
+
+FileState stateOf(const QString& path) {
+  const QFileInfo info(path);
+  return {info.exists(), info.exists() ? info.size() : -1, info.exists() ? info.lastModified() : QDateTime()};
+}
+
+/// Where a process with the environment's HOME and XDG variables keeps a file (the XDG base
+/// directory specification's defaults when a variable is unset).
+QString realLocation(const char* variable, const char* fallback, const QString& file) {
+  const QProcessEnvironment system = QProcessEnvironment::systemEnvironment();
+  const QString base = system.value(QString::fromLatin1(variable),
+                                    system.value(QStringLiteral("HOME")) + QLatin1Char('/') + fallback);
+  return base + QLatin1Char('/') + file;
+}
+
+}  // namespace
+
+class TestStartUp : public QObject {
+  Q_OBJECT
+
+ private slots:
+  void initTestCase() { cw::test::isolateGuiTest("CyclewrightTestStartUp"); }
+
+  void helpAndVersionNeedNoDisplay_data() {
+    QTest::addColumn<QString>("option");
+    QTest::addColumn<QString>("expected");
+    QTest::newRow("--help") << "--help"
+                            << "--screenshot <FILE>";
+    QTest::newRow("-h") << "-h"
+                        << "--study-vary <PATH=START:STOP:COUNT>";
+    QTest::newRow("--version") << "--version" << QString("Cyclewright %1").arg(cw::kVersion);
+    QTest::newRow("-v") << "-v" << QString("Cyclewright %1").arg(cw::kVersion);
+  }
+  void helpAndVersionNeedNoDisplay() {
+    QFETCH(QString, option);
+    QFETCH(QString, expected);
+    const cw::test::IsolatedHome home;
+    const QProcessEnvironment environment = home.environmentWithoutDisplay();
+    QVERIFY(!environment.contains("DISPLAY") && !environment.contains("QT_QPA_PLATFORM"));
+    const Run run = runApp(home, {option}, environment);
+    QVERIFY2(run.status == 0, qPrintable(QString("exit %1: %2").arg(run.status).arg(run.err)));
+    QVERIFY2(run.out.contains(expected), qPrintable(run.out));
+    QVERIFY2(!run.err.contains("platform plugin"), qPrintable(run.err));
+  }
+
+  void screenshotOfACaseThatCannotBeOpened_data() {
+    QTest::addColumn<QString>("name");
+    QTest::addColumn<QByteArray>("contents");  // empty: no file; "folder": a folder of that name
+    QTest::addColumn<QStringList>("extra");
+    QTest::addColumn<QString>("expected");  // the core reader's message
+    const QStringList none;
+    const QStringList study = {"--screenshot-of", "trade-study", "--study-vary",
+                               "compressor.pressure_ratio=4:12:3"};
+    QTest::newRow("missing") << "missing.json" << QByteArray() << none
+                             << "cannot read case file: No such file or directory";
+    QTest::newRow("a folder") << "folder.json" << QByteArray("folder") << none
+                              << "cannot read case file: is a folder";
+    QTest::newRow("not JSON") << "broken.json" << QByteArray("{\"format\": \"cyclewright-case\",") << none
+                              << "not valid JSON";
+    // [1, 60]: the core's range of the compressor pressure ratio (core/engine/case_validation.cpp).
+    QTest::newRow("invalid value") << "invalid.json"
+                                   << demoWith("\"pressure_ratio\": 8.0", "\"pressure_ratio\": 0.5") << none
+                                   << "/compressor/pressure_ratio = 0.5 is outside the valid range [1, 60]";
+    QTest::newRow("missing, with a study")
+        << "missing.json" << QByteArray() << study << "cannot read case file: No such file or directory";
+  }
+  void screenshotOfACaseThatCannotBeOpened() {
+    QFETCH(QString, name);
+    QFETCH(QByteArray, contents);
+    QFETCH(QStringList, extra);
+    QFETCH(QString, expected);
+    const cw::test::IsolatedHome home;
+    const QString casePath = home.path(name);
+    if (contents == "folder")
+      QVERIFY(QDir().mkpath(casePath));
+    else if (!contents.isEmpty())
+      QVERIFY(writeFile(casePath, contents));
+    const QString picture = home.path("window.png");
+    const Run run = runApp(home, QStringList{"--screenshot", picture} + extra + QStringList{casePath});
+    QCOMPARE(run.status, 2);
+    const QStringList lines = ourLines(run.err);
+    QVERIFY2(lines.size() == 1, qPrintable(run.err));
+    QVERIFY2(lines.first().contains(casePath), qPrintable(lines.first()));
+    QVERIFY2(lines.first().contains(expected), qPrintable(lines.first()));
+    QVERIFY(!QFile::exists(picture));
+  }
+
+  void optionsOfTheWrongKindSayWhatIsExpected_data() {
+    QTest::addColumn<QStringList>("arguments");
+    QTest::addColumn<QString>("expected");
+    const QStringList vary = {"--study-vary", "compressor.pressure_ratio=4:12:3"};
+    QTest::newRow("size, no size")
+        << QStringList{"--size", "abc"}
+        << "cyclewright: --size: expected WxH in pixels, e.g. 1600x1000, each from "
+           "200x150 to 8000x8000; got \"abc\"";
+    QTest::newRow("size, too small") << QStringList{"--size", "100x100"}
+                                     << "cyclewright: --size = 100x100 is outside the valid range 200x150 to "
+                                        "8000x8000";
+    QTest::newRow("language") << QStringList{"--language", "xx"}
+                              << "cyclewright: --language: no translation for \"xx\"; available: de, en";
+    QTest::newRow("palette") << QStringList{"--palette", "purple"}
+                             << "cyclewright: --palette: expected system or dark, got \"purple\"";
+    QTest::newRow("study input")
+        << QStringList{"--study-vary", "compressor.presure_ratio=4:12:3"}
+        << "cyclewright: --study-vary compressor.presure_ratio: not a numeric input of this case (did you "
+           "mean compressor.pressure_ratio?)";
+    QTest::newRow("compared input")
+        << vary + QStringList{"--study-compare", "compressor.isentropic_eficiency=0.8"}
+        << "cyclewright: --study-compare compressor.isentropic_eficiency: not a numeric input of this case "
+           "(did you mean compressor.isentropic_efficiency?)";
+    QTest::newRow("plotted column") << vary + QStringList{"--study-plot", "specific_thrust_N_s_per_kgg"}
+                                    << "cyclewright: --study-plot specific_thrust_N_s_per_kgg: not an output "
+                                       "column (did you mean specific_thrust_N_s_per_kg?)";
+  }
+  void optionsOfTheWrongKindSayWhatIsExpected() {
+    QFETCH(QStringList, arguments);
+    QFETCH(QString, expected);
+    const cw::test::IsolatedHome home;
+    const QString picture = home.path("window.png");
+    const Run run = runApp(home, QStringList{"--screenshot", picture} + arguments);
+    QCOMPARE(run.status, 2);
+    const QStringList lines = ourLines(run.err);
+    QVERIFY2(lines.size() == 1, qPrintable(run.err));
+    QCOMPARE(lines.first(), expected);
+    QVERIFY(!QFile::exists(picture));
+  }
+
+  void childrenKeepToTheirOwnHome() {
+    // The settings file and data folder a child would use with the real environment.
+    const QString realSettings = realLocation("XDG_CONFIG_HOME", ".config", "Cyclewright/Cyclewright.conf");
+    const QString realData = realLocation("XDG_DATA_HOME", ".local/share", "Cyclewright/Cyclewright");
+    const FileState settingsBefore = stateOf(realSettings), dataBefore = stateOf(realData);
+    const cw::test::IsolatedHome home;
+    const Run run = runApp(home, {"--screenshot", home.path("window.png"), "--size", "640x480"});
+    QCOMPARE(run.status, 0);
+    QVERIFY(QFile::exists(home.path("window.png")));
+    // The child wrote its settings (the chart layout, at least) in its own home...
+    const QString ownSettings = home.folderOf("XDG_CONFIG_HOME") + "/Cyclewright/Cyclewright.conf";
+    QVERIFY2(QFile::exists(ownSettings), qPrintable(ownSettings));
+    QFile settings(ownSettings);
+    QVERIFY(settings.open(QIODevice::ReadOnly));
+    QVERIFY(settings.readAll().contains("layout=side-by-side"));
+    // ...and nothing where the user's own settings and data are.
+    QVERIFY(stateOf(realSettings) == settingsBefore);
+    QVERIFY(stateOf(realData) == dataBefore);
+  }
+};
+
+QTEST_GUILESS_MAIN(TestStartUp)
+#include "test_start_up.moc"
