@@ -18,6 +18,11 @@ namespace cw::cli {
 namespace {
 
 constexpr double kDefaultPressure = 101325.0;  // Pa, one standard atmosphere
+// The pressures the verb accepts: wide enough for any engine or flight condition (the standard
+// atmosphere reaches 0.37 Pa at 86 km), narrow enough that the entropy s = s° - R ln(p / p_ref)
+// is finite and the gas still ideal (well below 1 GPa). [Pa]
+constexpr double kMinimumPressure = 1e-3;
+constexpr double kMaximumPressure = 1e9;
 
 std::string gasNames() {
   return thermo::SpeciesTable::standard().namesList() + ", air, products";
@@ -36,7 +41,8 @@ int runProperties(const Arguments& args, Format format, std::ostream& out) {
 
   const double temperature = args.number("temperature-K");
   const double pressure = args.number("pressure-Pa", kDefaultPressure);
-  if (!(pressure > 0.0)) throw InvalidInput("--pressure-Pa", pressure, "Pa", "(0, inf) Pa");
+  if (!(pressure >= kMinimumPressure && pressure <= kMaximumPressure))
+    throw InvalidInput("--pressure-Pa", pressure, "Pa", "[0.001, 1e9] Pa");
 
   nlohmann::json record;
   record["gas"] = *name;
@@ -85,7 +91,7 @@ Verb propertiesVerb() {
            "N2, O2, Ar, CO2, H2O, CO, H2, OH, H, O, NO, N; air (dry, U.S. Standard Atmosphere 1976); or "
            "products (complete combustion in dry air of a kerosene-like fuel, H/C = 1.9, LHV = 43 MJ/kg)"},
           {"temperature-K", true, "temperature in K, [200, 6000]"},
-          {"pressure-Pa", true, "pressure in Pa, > 0, for the entropy (default 101325)"},
+          {"pressure-Pa", true, "pressure in Pa, [0.001, 1e9], for the entropy (default 101325)"},
           {"fuel-air-ratio", true,
            "kg fuel per kg air for --gas products, [0, stoichiometric = 0.0683] (default 0)"},
       },

@@ -42,16 +42,16 @@ ExergyBalance exergyBalanceOf(const AuditPoint& point) {
   ExergyBalance b;
   b.deadStateTemperature = T0;
   b.deadStatePressure = p0;
-  // Fuel entropy: absolute (third-law) on the thermally perfect model, 0 on the simple models.
-  if (const auto* tp = dynamic_cast<const thermo::ThermallyPerfectModel*>(&model))
-    b.fuelEntropy = kFuelEntropy + tp->fuel().cp() * std::log(inputs.fuel.temperature / 298.15);
-  const double sFuel = b.fuelEntropy;
+  // Fuel entropy: absolute (third-law) on the thermally perfect model; on the simple models the
+  // entropy of the stream the fuel joins (exergy_balance.h).
+  b.fuelEntropy = model.fuelEntropy(sAbs(s3));
 
   // Entropy balances, component by component [W/K].
   auto add = [&](const std::string& name, double sGen) { b.components.push_back({name, sGen, T0 * sGen}); };
   add("inlet", W2 * (sAbs(s2) - sAbs(s0)));
   add("compressor", W3 * sAbs(s3) + bleedFlow * sAbs(s3) - W2 * sAbs(s2));
-  add("burner", s4.massFlow * sAbs(s4) - W3 * sAbs(s3) - burnerFuel * sFuel);
+  add("burner", s4.massFlow * sAbs(s4) - W3 * sAbs(s3) - burnerFuel * b.fuelEntropy);
+  double afterburnerFuelEntropy = 0.0;
   add("turbine", s5.massFlow * (sAbs(s5) - sAbs(s4)));
   const double turbinePower = -summaryOf(r, "turbine").power;
   const double compressorPower = summaryOf(r, "compressor").power;
@@ -60,7 +60,9 @@ ExergyBalance exergyBalanceOf(const AuditPoint& point) {
   if (lit) {
     const engine::Station& s6 = r.station("6");
     add("jet_pipe", s6.massFlow * (sAbs(s6) - sAbs(s5)));
-    add("afterburner", s7.massFlow * sAbs(s7) - s6.massFlow * sAbs(s6) - afterburnerFuel * sFuel);
+    afterburnerFuelEntropy = model.fuelEntropy(sAbs(s6));
+    add("afterburner",
+        s7.massFlow * sAbs(s7) - s6.massFlow * sAbs(s6) - afterburnerFuel * afterburnerFuelEntropy);
   } else if (inputs.afterburner.pressureLossFractionUnlit > 0.0) {
     // The unlit afterburner's duct follows the jet pipe at the same total temperature.
     const double sAfterPipe =
@@ -76,9 +78,10 @@ ExergyBalance exergyBalanceOf(const AuditPoint& point) {
   // Dead-state Gibbs functions g = h - T0 s of the air and of the exhaust gas [J/kg].
   const double gAir0 = air->enthalpy(T0) - T0 * sRef;
   const double gExhaust0 = s9.gas->enthalpy(T0) - T0 * s9.gas->entropy(T0, p0);
-  const double gFuel = model.fuelEnthalpy() - T0 * sFuel;
   b.fuelHeatingPower = fuelFlow * lhv;
-  b.fuelExergy = fuelFlow * gFuel + W3 * gAir0 - W9 * gExhaust0;
+  b.fuelExergy = fuelFlow * model.fuelEnthalpy() -
+                 T0 * (burnerFuel * b.fuelEntropy + afterburnerFuel * afterburnerFuelEntropy) + W3 * gAir0 -
+                 W9 * gExhaust0;
 
   const double V0 = s0.velocity, V9 = s9.velocity;
   b.ramExergy = 0.5 * W2 * V0 * V0;
@@ -87,7 +90,9 @@ ExergyBalance exergyBalanceOf(const AuditPoint& point) {
   b.bleedAir = bleedFlow * ((s3.totalEnthalpy - air->enthalpy(T0)) - T0 * (sAbs(s3) - sRef));
   b.unburntFuel = (1.0 - inputs.burner.combustionEfficiency) * burnerFuel * lhv +
                   (lit ? (1.0 - inputs.afterburner.combustionEfficiency) * afterburnerFuel * lhv : 0.0);
-  const double h9 = s9.totalEnthalpy - 0.5 * V9 * V9;
+  // h9 from the exit's static temperature on its gas: the balance then checks the nozzle's own
+  // energy equation (ht9 = h9 + V9^2/2) instead of restating it.
+  const double h9 = s9.gas->enthalpy(s9.staticTemperature);
   b.exhaustThermal = W9 * ((h9 - s9.gas->enthalpy(T0)) - T0 * (sAbs(s9) - s9.gas->entropy(T0, p0)));
   b.exhaustKinetic = 0.5 * W9 * V9 * V9 - b.ramExergy - b.thrustPower;
 

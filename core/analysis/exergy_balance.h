@@ -20,9 +20,13 @@
 // (W3 = W2 - W_bleed, core air; W9 = W3 + W_f unless the fuel's mass is neglected). Unlike a
 // chemical exergy relative to the environment's composition (about 1.06 LHV for liquid
 // hydrocarbons, Kotas 1985, table of fuels, from memory), it leaves out the work of diffusing
-// the products into the atmosphere. The fuel's entropy: on the thermally perfect model's absolute
-// (third-law) scale that of a liquid hydrocarbon, s_f = kFuelEntropy + cp_f ln(T_f / 298.15 K);
-// on the constant-cp and two-gamma models the fuel is heat, s_f = 0 on their reference.
+// the products into the atmosphere. The fuel's entropy (thermo::GasModel::fuelEntropy): on the
+// thermally perfect model's absolute (third-law) scale that of a liquid hydrocarbon,
+// s_f = s°_f + cp_f ln(T_f / 298.15 K) (thermo::HydrocarbonFuel::entropy); on the constant-cp and
+// two-gamma models the fuel is heat whose mass joins the stream at the burner's (afterburner's)
+// entry state, s_f = s_in, and the two-gamma product gas's entropy scale is joined to the air's at
+// the burner entry (thermo/gas_model.h, productsEntering), so that the second law holds: each
+// heat addition generates W_out (s_out - s_in) >= 0, its heating and its pressure loss.
 //
 // Unburnt fuel: the fraction 1 - eta_b of the heating value not released leaves the model's
 // energy books; it is counted as exergy leaving at its heating value (an approximation).
@@ -44,11 +48,6 @@
 
 namespace cw::analysis {
 
-/// Absolute standard entropy at 298.15 K of the liquid fuel on the thermally perfect model:
-/// that of liquid n-dodecane, 490.7 J/(mol K) / 0.17034 kg/mol (NIST Chemistry WebBook, from
-/// memory), for any C H_y. [J/(kg K)]
-inline constexpr double kFuelEntropy = 2880.0;
-
 struct ComponentExergy {
   std::string component;           ///< "inlet", "compressor", "burner", "turbine", "shaft", ...
   double entropyGeneration = 0.0;  ///< S_gen [W/K]
@@ -60,7 +59,7 @@ struct ExergyBalance {
   double deadStatePressure = 0.0;     ///< p0 [Pa]
   double fuelExergy = 0.0;            ///< E_f [W]
   double fuelHeatingPower = 0.0;      ///< W_f LHV [W]
-  double fuelEntropy = 0.0;           ///< s_f at the delivery temperature [J/(kg K)]
+  double fuelEntropy = 0.0;           ///< s_f of the burner's fuel [J/(kg K)]
   double ramExergy = 0.0;             ///< W2 V0^2 / 2, entering in the engine frame [W]
   double thrustPower = 0.0;           ///< F_n V0 [W]
   double shaftOfftake = 0.0;          ///< P_x [W]

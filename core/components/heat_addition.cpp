@@ -78,7 +78,7 @@ HeatAddition::Result HeatAddition::finish(const engine::TotalState& entry, doubl
   result.addedFuelAirRatio = df;
   result.fuelMassFlow = df * airFlow;
   engine::TotalState& out = result.exit;
-  out.gas = model_.products(f1 + df);
+  out.gas = model_.productsEntering(f1 + df, *entry.gas, entry.temperature, entry.pressure);
   out.temperature = exitTemperature;
   out.enthalpy = out.gas->enthalpy(exitTemperature);
   out.pressure = entry.pressure * (1.0 - pressureLossFraction_);

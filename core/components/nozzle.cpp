@@ -12,18 +12,75 @@ namespace cw::components {
 
 namespace {
 
-/// The ideal (isentropic) static state reached from the entry total state at pressure p.
-struct IdealExpansion {
-  double temperature;  ///< [K]
-  double velocity;     ///< [m/s]
-  double density;      ///< [kg/m^3]
+/// The static state reached from the entry total state at pressure p with the nozzle efficiency:
+/// h = ht - eta_n (ht - h_s(p)), V = C_V V_s(p).
+struct SectionState {
+  double isentropicTemperature;  ///< T_s [K]
+  double temperature;            ///< T [K]
+  double velocity;               ///< V [m/s]
+  double density;                ///< [kg/m^3]
 };
 
-IdealExpansion idealExpansion(const engine::TotalState& entry, double pressure) {
+class Expander {
+ public:
+  Expander(const engine::TotalState& entry, double velocityCoefficient)
+      : entry_(entry), gas_(*entry.gas), cv_(velocityCoefficient) {}
+
+  SectionState at(double pressure) const {
+    const double Ts = gas_.isentropicTemperature(entry_.temperature, entry_.pressure, pressure);
+    const double idealKinetic = std::max(0.0, entry_.enthalpy - gas_.enthalpy(Ts));  // V_s^2 / 2
+    const double velocity = cv_ * std::sqrt(2.0 * idealKinetic);
+    const double T = gas_.temperatureFromEnthalpy(entry_.enthalpy - 0.5 * velocity * velocity);
+    return {Ts, T, velocity, pressure / (gas_.gasConstant() * T)};
+  }
+
+  /// The actual sonic state (see nozzle.h): T* from energy alone, p* from the efficiency. When the
+  /// losses are so large that T*_s lies below the gas data, the nozzle cannot choke at any
+  /// ambient pressure the data cover: p* = 0.
+  struct Sonic {
+    double pressure, temperature, isentropicTemperature, velocity, density;
+  };
+  Sonic sonic() const {
+    const double T = flow::sonicState(gas_, entry_.temperature, entry_.pressure).local.temperature;
+    const double velocity = gas_.speedOfSound(T);
+    const double efficiency = cv_ * cv_;
+    const double hs = entry_.enthalpy - (entry_.enthalpy - gas_.enthalpy(T)) / efficiency;
+    if (!(hs > gas_.enthalpy(gas_.minimumTemperature()))) return {0.0, T, 0.0, velocity, 0.0};
+    const double Ts = gas_.temperatureFromEnthalpy(hs);
+    const double p =
+        entry_.pressure *
+        std::exp((gas_.standardEntropy(Ts) - gas_.standardEntropy(entry_.temperature)) / gas_.gasConstant());
+    return {p, T, Ts, velocity, p / (gas_.gasConstant() * T)};
+  }
+
+ private:
+  const engine::TotalState& entry_;
+  const thermo::Gas& gas_;
+  double cv_;
+};
+
+/// The exit pressure of a fixed area ratio A9/A8 > 1 on the supersonic branch of the actual
+/// expansion: rho9 V9 = rho* V* / (A9/A8), p9 in (p_lowest, p*). The actual mass flux falls
+/// monotonically below p* (its maximum lies at or above p*, at p* only without losses).
+double exitPressureOfAreaRatio(const Expander& expander, const Expander::Sonic& throat, double ratio,
+                               const engine::TotalState& entry) {
   const thermo::Gas& gas = *entry.gas;
-  const double T = gas.isentropicTemperature(entry.temperature, entry.pressure, pressure);
-  const double kinetic = std::max(0.0, entry.enthalpy - gas.enthalpy(T));
-  return {T, std::sqrt(2.0 * kinetic), pressure / (gas.gasConstant() * T)};
+  const double target = throat.density * throat.velocity / ratio;
+  auto flux = [&](double p) {
+    const SectionState e = expander.at(p);
+    return e.density * e.velocity - target;
+  };
+  // The lowest exit pressure the gas data allow: the isentropic expansion to their lowest temperature.
+  const double coldest = gas.minimumTemperature() * (1.0 + 1e-9);
+  const double lowest = std::max(
+      throat.pressure * 1e-6,
+      entry.pressure * std::exp((gas.standardEntropy(coldest) - gas.standardEntropy(entry.temperature)) /
+                                gas.gasConstant()));
+  if (flux(lowest) > 0.0)
+    throw NoSolution("nozzle", "the exit-to-throat area ratio " + messageNumber(ratio) +
+                                   " expands the jet below " + messageNumber(gas.minimumTemperature()) +
+                                   " K, the lowest temperature of the gas data");
+  return flow::findRoot(flux, lowest, throat.pressure, "nozzle: exit pressure for the area ratio");
 }
 
 }  // namespace
@@ -38,81 +95,58 @@ Nozzle::Result Nozzle::expand(const engine::TotalState& entry, double ambientPre
   result.velocityCoefficient = inputs_.lossBasis == engine::NozzleLossBasis::VelocityCoefficient
                                    ? inputs_.loss
                                    : std::sqrt(inputs_.loss);
-  const double cv = result.velocityCoefficient;
-  const double pStar = flow::sonicState(gas, entry.temperature, entry.pressure).local.pressure;
-  result.choked = ambientPressure < pStar;
+  const Expander expander(entry, result.velocityCoefficient);
+  const Expander::Sonic throat = expander.sonic();
+  result.choked = ambientPressure < throat.pressure;
 
-  // Static pressures at throat and exit.
-  double throatPressure = result.choked ? pStar : ambientPressure;
-  double exitPressure = throatPressure;
-  if (result.choked) {
-    if (std::holds_alternative<engine::FullyExpandingNozzle>(inputs_.geometry)) {
-      exitPressure = ambientPressure;
-    } else if (const auto* fixed = std::get_if<engine::FixedAreaRatioNozzle>(&inputs_.geometry)) {
-      // Supersonic branch: rho V (p9) = rho V (p*) / (A9/A8), p9 in (0, p*).
-      const IdealExpansion sonic = idealExpansion(entry, pStar);
-      const double target = sonic.density * sonic.velocity / fixed->exitToThroatAreaRatio;
-      auto flux = [&](double p) {
-        const IdealExpansion e = idealExpansion(entry, p);
-        return e.density * e.velocity - target;
-      };
-      // The lowest exit pressure the gas data allow: the ideal expansion down to their lowest temperature.
-      const double coldest = gas.minimumTemperature() * (1.0 + 1e-9);
-      const double lowest = std::max(
-          pStar * 1e-6,
-          entry.pressure * std::exp((gas.standardEntropy(coldest) - gas.standardEntropy(entry.temperature)) /
-                                    gas.gasConstant()));
-      if (fixed->exitToThroatAreaRatio > 1.0 && flux(lowest) > 0.0)
-        throw NoSolution("nozzle", "the exit-to-throat area ratio " +
-                                       messageNumber(fixed->exitToThroatAreaRatio) +
-                                       " expands the jet below " + messageNumber(gas.minimumTemperature()) +
-                                       " K, the lowest temperature of the gas data");
-      exitPressure = fixed->exitToThroatAreaRatio == 1.0
-                         ? pStar
-                         : flow::findRoot(flux, lowest, pStar, "nozzle: exit pressure for the area ratio");
-    }
-  }
-
-  struct Section {
-    engine::Station station;
-    double effectiveArea;          ///< W / (rho V) [m^2]
-    double isentropicTemperature;  ///< of the ideal expansion to the section's pressure [K]
-  };
-  auto makeSection = [&](const char* id, double pressure) {
-    const IdealExpansion ideal = idealExpansion(entry, pressure);
+  auto makeStation = [&](const char* id, double pressure, double temperature, double velocity) {
     engine::Station st;
     st.id = id;
     st.gas = entry.gas;
     st.totalTemperature = entry.temperature;
     st.totalEnthalpy = entry.enthalpy;
     st.staticPressure = pressure;
-    st.velocity = cv * ideal.velocity;
-    st.staticTemperature = gas.temperatureFromEnthalpy(entry.enthalpy - 0.5 * st.velocity * st.velocity);
+    st.staticTemperature = temperature;
+    st.velocity = velocity;
     // The total pressure that the actual static state and velocity stand for (isentropic stagnation).
     st.totalPressure =
-        pressure *
-        std::exp((gas.standardEntropy(entry.temperature) - gas.standardEntropy(st.staticTemperature)) /
-                 gas.gasConstant());
-    st.mach = st.velocity / gas.speedOfSound(st.staticTemperature);
+        pressure * std::exp((gas.standardEntropy(entry.temperature) - gas.standardEntropy(temperature)) /
+                            gas.gasConstant());
+    st.mach = velocity / gas.speedOfSound(temperature);
     st.massFlow = entry.massFlow;
     st.fuelAirRatio = entry.fuelAirRatio;
-    const double density = pressure / (gas.gasConstant() * st.staticTemperature);
-    const double effectiveArea = entry.massFlow / (density * st.velocity);
-    st.area = effectiveArea / inputs_.dischargeCoefficient;
-    return Section{std::move(st), effectiveArea, ideal.temperature};
+    st.area = entry.massFlow / (pressure / (gas.gasConstant() * temperature) * velocity) /
+              inputs_.dischargeCoefficient;  // geometric = effective / C_D
+    return st;
   };
-  // A convergent nozzle (or an unchoked one) exits at its throat: the same state, computed once.
-  Section exit = makeSection("9", exitPressure);
-  if (exitPressure == throatPressure) {
-    result.throat = exit.station;
-    result.throat.id = "8";
-  } else {
-    result.throat = makeSection("8", throatPressure).station;
+
+  // Throat: sonic when choked (Mach 1 exactly: V* = a(T*)); else the exit at p0.
+  double exitPressure = ambientPressure;
+  SectionState exit = expander.at(ambientPressure);
+  if (result.choked) {
+    result.throat = makeStation("8", throat.pressure, throat.temperature, throat.velocity);
+    if (std::holds_alternative<engine::ConvergentNozzle>(inputs_.geometry)) {
+      exitPressure = throat.pressure;
+      exit = {throat.isentropicTemperature, throat.temperature, throat.velocity, throat.density};
+    } else if (const auto* fixed = std::get_if<engine::FixedAreaRatioNozzle>(&inputs_.geometry)) {
+      if (fixed->exitToThroatAreaRatio == 1.0) {
+        exitPressure = throat.pressure;
+        exit = {throat.isentropicTemperature, throat.temperature, throat.velocity, throat.density};
+      } else {
+        exitPressure = exitPressureOfAreaRatio(expander, throat, fixed->exitToThroatAreaRatio, entry);
+        exit = expander.at(exitPressure);
+      }
+    }
   }
-  result.exit = std::move(exit.station);
+  result.exit = makeStation("9", exitPressure, exit.temperature, exit.velocity);
+  if (!result.choked) {  // the throat is the exit
+    result.throat = result.exit;
+    result.throat.id = "8";
+  }
+  const double effectiveExitArea = *result.exit.area * inputs_.dischargeCoefficient;
   result.grossThrust = result.exit.massFlow * result.exit.velocity +
-                       (result.exit.staticPressure - ambientPressure) * exit.effectiveArea;
-  // The isentropic exit state of the efficiencies is the ideal expansion to p9.
+                       (result.exit.staticPressure - ambientPressure) * effectiveExitArea;
+  // The isentropic exit state of the efficiencies is the isentropic expansion to p9.
   result.efficiency = efficiencies(gas, entry.temperature, entry.pressure, result.exit.staticTemperature,
                                    exitPressure, exit.isentropicTemperature);
   return result;

@@ -1,20 +1,33 @@
 #pragma once
 // Nozzle, stations 7 -> 8 (throat) -> 9 (exit). Adiabatic: ht9 = ht8 = ht7.
 //
-// Ideal expansion from (Tt7, pt7) to a static pressure p: T_s(p) from s(T_s, p) = s(Tt7, pt7),
-// V_s = sqrt(2 (ht7 - h(T_s))). The throat chokes when the ideal velocity reaches the speed
-// of sound, V_s(p*) = a(T_s(p*)), i.e. when p0 < p* (Anderson, Modern Compressible Flow,
-// 3rd ed., sec. 5.4, in its general energy-equation form).
-//   convergent            choked: p9 = p8 = p*; unchoked: p9 = p0
-//   convergent-divergent  full expansion p9 = p0, or the exit pressure of the given A9/A8 on
-//                         the supersonic branch of the ideal expansion (over- or under-expanded);
-//                         unchoked, it expands to p0 like a convergent nozzle
-// Losses: velocity coefficient C_V = V9 / V9s; a nozzle isentropic efficiency eta_n =
-// (ht7 - h9) / (ht7 - h9s) is the same as C_V = sqrt(eta_n). The static pressures stay those
-// of the ideal expansion and the exit temperature follows from h9 = ht7 - V9^2 / 2
-// (Walsh and Fletcher, Gas Turbine Performance, 2nd ed., 2004, sec. 5.13; common practice).
+// Losses: a nozzle isentropic efficiency eta_n = (ht7 - h) / (ht7 - h_s) at every section,
+// where h_s = h(T_s) is the enthalpy of the isentropic expansion from (Tt7, pt7) to the section's
+// static pressure p (s°(T_s) = s°(Tt7) + R ln(p / pt7)). Given instead as a velocity coefficient
+// C_V = V / V_s with V_s = sqrt(2 (ht7 - h_s)); the two are the same input: eta_n = C_V^2.
+// (Saravanamuttoo, Rogers, Cohen and Straznicky, Gas Turbine Theory, sec. 3.1, the nozzle
+// efficiency of a propelling nozzle; edition and equation numbers from memory, not checked.)
+//
+// The throat of a choked nozzle is sonic in the actual flow. The sonic temperature follows from
+// energy alone, ht7 - h(T*) = a(T*)^2 / 2 (for constant cp, T* = 2 Tt7 / (gamma + 1)); the loss
+// lowers the throat's static pressure through the nozzle efficiency:
+//   h(T*_s) = ht7 - (ht7 - h(T*)) / eta_n,   p* = pt7 exp((s°(T*_s) - s°(Tt7)) / R)
+// which for constant cp is the textbook critical pressure ratio with a nozzle efficiency
+//   pt7 / p* = 1 / [1 - (1 / eta_n) (gamma - 1) / (gamma + 1)]^(gamma / (gamma - 1))
+// (Saravanamuttoo et al., sec. 3.1, from memory). The nozzle chokes when p0 < p* (the actual
+// critical pressure; a lossy nozzle needs a higher pressure ratio to choke).
+//   convergent            choked: exit = throat, sonic at p*; unchoked: p9 = p0
+//   convergent-divergent  throat as above; exit at full expansion p9 = p0, or at the pressure
+//                         where the actual mass flux rho9 V9 = rho* V* / (A9/A8) on the
+//                         supersonic branch (A9/A8 the ratio of the effective areas); unchoked
+//                         it expands to p0 like a convergent nozzle
+// At any section below the throat the velocity is C_V times the isentropic velocity to that
+// section's pressure and the temperature follows from h = ht7 - V^2 / 2 (Walsh and Fletcher,
+// Gas Turbine Performance, 2nd ed., 2004, sec. 5.13; common practice).
 // Areas: the flow areas W / (rho V) are effective areas; the geometric areas are effective / C_D.
 // Gross thrust F_g = W9 V9 + (p9 - p0) A9,eff (Mattingly, Elements of Propulsion, 2006, eq. 7.1).
+// With the throat sonic, every loss lowers the thrust: at fixed (Tt7, pt7) the momentum W V* is
+// fixed and the pressure thrust (p* - p0) W R T* / (p* V*) falls with p*.
 
 #include "components/efficiency.h"
 #include "engine/case_inputs.h"

@@ -20,11 +20,12 @@ struct Performance {
   double thrustSpecificFuelConsumption = 0.0;  ///< W_f / F_n [kg/(N s)]; 0 when F_n <= 0
   double fuelFlow = 0.0;                       ///< burner plus afterburner [kg/s]
   double fuelAirRatio = 0.0;                   ///< total fuel per unit of burner air flow W3 [-]
-  double thermalEfficiency = 0.0;              ///< (delta KE + P_x) / (W_f LHV) [-]
-  double propulsiveEfficiency = 0.0;           ///< F_n V0 / delta KE [-]
-  double overallEfficiency = 0.0;              ///< F_n V0 / (W_f LHV) [-]
-  double jetVelocity = 0.0;                    ///< V9 [m/s]
-  double effectiveJetVelocity = 0.0;           ///< F_g / W9 [m/s]
+  /// Earth frame, P_u = F_n V0 + P_x, E_w = (W9/2)(V_e - V0)^2, input W_f (LHV + V0^2/2):
+  double thermalEfficiency = 0.0;     ///< (P_u + E_w) / input [-]
+  double propulsiveEfficiency = 0.0;  ///< P_u / (P_u + E_w), in [0, 1] [-]
+  double overallEfficiency = 0.0;     ///< P_u / input = thermal x propulsive [-]
+  double jetVelocity = 0.0;           ///< V9 [m/s]
+  double effectiveJetVelocity = 0.0;  ///< F_g / W9 [m/s]
   bool nozzleChoked = false;
 };
 
@@ -56,6 +57,11 @@ struct CycleResult {
   /// The station with the given SAE number; throws std::out_of_range when absent.
   const Station& station(const std::string& id) const;
 };
+
+/// Throws cw::NoSolution naming the quantity when any number of the result (performance, sizing,
+/// stations, components, paths) is not finite: no NaN or infinity leaves the core. which names the
+/// result in the message ("cycle with losses", "ideal twin").
+void requireFinite(const CycleResult& result, const std::string& which);
 
 /// An evaluation: the cycle with losses and its ideal twin.
 struct Evaluation {

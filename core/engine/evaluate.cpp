@@ -17,6 +17,8 @@ Evaluation evaluateCase(const Case& inputs, bool withPaths) {
   const Case twin =
       analysis::idealTwinOf(inputs, burnerExitTemperature, evaluation.actual.sizing.airMassFlow);
   evaluation.ideal = evaluateTurbojet(twin, *gasModel, withPaths);
+  requireFinite(evaluation.actual, "cycle with losses");
+  requireFinite(evaluation.ideal, "ideal twin");
   return evaluation;
 }
 

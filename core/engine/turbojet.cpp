@@ -56,6 +56,27 @@ Station stationAtRest(const char* id, const TotalState& t, double entropyReferen
   return s;
 }
 
+/// Thermal, propulsive and overall efficiency in the earth frame (Cumpsty, Jet Propulsion, 2nd
+/// ed. 2003, ch. 1, from memory): the useful power P_u = F_n V0 + P_x (the offtake is delivered
+/// power), the kinetic energy left in the wake E_w = (W9 / 2)(V_e - V0)^2 with the effective jet
+/// velocity V_e = F_g / W9, and the energy input W_f (LHV + V0^2 / 2) (the fuel's kinetic energy
+/// at flight speed; left out with the fuel's mass when the model neglects it):
+///   eta_th = (P_u + E_w) / input,  eta_p = P_u / (P_u + E_w),  eta_o = P_u / input = eta_th eta_p.
+/// eta_p is at most 1 for any jet. With no offtake, P_u + E_w is the jet's kinetic-energy gain in
+/// the engine frame plus the fuel's W_f V0^2 / 2 (the jet's W9 = W2 + W_f), so eta_th is the
+/// textbook thermal efficiency (Mattingly, Elements of Propulsion, 2006, eqs. 1.11-1.13).
+void setEfficiencies(Performance& perf, double jetMassFlow, double flightVelocity, double offtake,
+                     const thermo::GasModel& model) {
+  const double useful = perf.netThrust * flightVelocity + offtake;
+  const double slip = perf.effectiveJetVelocity - flightVelocity;
+  const double wake = 0.5 * jetMassFlow * slip * slip;
+  const double fuelKinetic = model.neglectsFuelMass() ? 0.0 : 0.5 * flightVelocity * flightVelocity;
+  const double input = perf.fuelFlow * (model.lowerHeatingValue() + fuelKinetic);
+  perf.thermalEfficiency = (useful + wake) / input;
+  perf.propulsiveEfficiency = useful + wake > 0.0 ? useful / (useful + wake) : 0.0;
+  perf.overallEfficiency = useful / input;
+}
+
 double entropyRate(const Station& in, const Station& out) {
   return out.massFlow * (out.entropy - in.entropy);
 }
@@ -189,12 +210,7 @@ CycleResult Assembly::at(double airMassFlow) const {
   perf.jetVelocity = s9.velocity;
   perf.effectiveJetVelocity = perf.grossThrust / s9.massFlow;
   perf.nozzleChoked = jet.choked;
-  const double kineticPower = 0.5 * (s9.massFlow * perf.effectiveJetVelocity * perf.effectiveJetVelocity -
-                                     airMassFlow * free.velocity * free.velocity);
-  const double fuelPower = perf.fuelFlow * model.lowerHeatingValue();
-  perf.thermalEfficiency = (kineticPower + inputs_.turbine.powerOfftake) / fuelPower;
-  perf.propulsiveEfficiency = kineticPower > 0.0 ? perf.netThrust * free.velocity / kineticPower : 0.0;
-  perf.overallEfficiency = perf.netThrust * free.velocity / fuelPower;
+  setEfficiencies(perf, s9.massFlow, free.velocity, inputs_.turbine.powerOfftake, model);
 
   // Sizing.
   Sizing& size = result.sizing;

@@ -21,4 +21,13 @@ std::shared_ptr<const Gas> CaloricallyPerfectModel::products(double fuelAirRatio
   return hot_;
 }
 
+std::shared_ptr<const Gas> CaloricallyPerfectModel::productsEntering(double fuelAirRatio, const Gas& entering,
+                                                                     double temperature,
+                                                                     double pressure) const {
+  products(fuelAirRatio);  // checks f
+  const double entropy = entering.entropy(temperature, pressure);
+  if (hot_->entropy(temperature, pressure) == entropy) return hot_;  // constant-cp: one gas, one scale
+  return hot_->withEntropyAt(temperature, pressure, entropy);
+}
+
 }  // namespace cw::thermo

@@ -25,7 +25,13 @@ class CaloricallyPerfectModel : public GasModel {
   std::string kind() const override { return kind_; }
   std::shared_ptr<const Gas> air() const override { return cold_; }
   std::shared_ptr<const Gas> products(double fuelAirRatio) const override;
+  /// The hot gas, its entropy scale joined to the entering gas's at (T, p) (gas_model.h).
+  std::shared_ptr<const Gas> productsEntering(double fuelAirRatio, const Gas& entering, double temperature,
+                                              double pressure) const override;
   double fuelEnthalpy() const override { return lowerHeatingValue_; }
+  double fuelEntropy(double enteringEntropy) const override {
+    return neglectFuelMass_ ? 0.0 : enteringEntropy;
+  }
   double lowerHeatingValue() const override { return lowerHeatingValue_; }
   double stoichiometricFuelAirRatio() const override { return stoichiometric_; }
   bool neglectsFuelMass() const override { return neglectFuelMass_; }

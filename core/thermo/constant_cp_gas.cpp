@@ -27,12 +27,15 @@ std::string temperatureRangeText() {
 }  // namespace
 
 ConstantCpGas::ConstantCpGas(double cp, double gamma, std::string description,
-                             double enthalpyReferenceTemperature)
+                             double enthalpyReferenceTemperature, double entropyOffset)
     : cp_(cp),
       gamma_(gamma),
       gasConstant_(0.0),
       enthalpyReference_(enthalpyReferenceTemperature),
+      entropyOffset_(entropyOffset),
       description_(std::move(description)) {
+  if (!std::isfinite(entropyOffset))
+    throw InvalidInput("entropy offset", entropyOffset, "J/(kg K)", "finite");
   if (!std::isfinite(cp) || cp <= 0.0) throw InvalidInput("cp", cp, "J/(kg K)", "(0, inf) J/(kg K)");
   if (!std::isfinite(gamma) || gamma <= 1.0 || gamma > kMaximumGamma)
     throw InvalidInput("gamma", gamma, "", "(1, 5/3]");
@@ -55,7 +58,13 @@ double ConstantCpGas::enthalpy(double temperature) const {
 
 double ConstantCpGas::standardEntropy(double temperature) const {
   checkTemperature(temperature, "temperature");
-  return cp_ * std::log(temperature / kReferenceTemperature);
+  return cp_ * std::log(temperature / kReferenceTemperature) + entropyOffset_;
+}
+
+std::shared_ptr<const ConstantCpGas> ConstantCpGas::withEntropyAt(double temperature, double pressure,
+                                                                  double entropy) const {
+  const double offset = entropyOffset_ + entropy - this->entropy(temperature, pressure);
+  return std::make_shared<const ConstantCpGas>(cp_, gamma_, description_, enthalpyReference_, offset);
 }
 
 double ConstantCpGas::temperatureFromEnthalpy(double h) const {
@@ -72,8 +81,8 @@ double ConstantCpGas::temperatureFromEnthalpy(double h) const {
 double ConstantCpGas::temperatureFromEntropy(double s, double pressure) const {
   if (!std::isfinite(pressure) || pressure <= 0.0)
     throw InvalidInput("pressure", pressure, "Pa", "(0, inf) Pa");
-  // s = cp ln(T/298.15) - R ln(p/p_ref)  =>  T = 298.15 K exp((s + R ln(p/p_ref)) / cp).
-  const double exponent = (s + gasConstant_ * std::log(pressure / kReferencePressure)) / cp_;
+  // s = cp ln(T/298.15) + s_0 - R ln(p/p_ref)  =>  T = 298.15 K exp((s - s_0 + R ln(p/p_ref)) / cp).
+  const double exponent = (s - entropyOffset_ + gasConstant_ * std::log(pressure / kReferencePressure)) / cp_;
   const double T = snapToRange(kReferenceTemperature * std::exp(exponent));
   if (!std::isfinite(s) || !std::isfinite(T) || !(T >= kMinimumTemperature && T <= kMaximumTemperature))
     throw OutOfRange("temperature from entropy", s, "J/(kg K)",

@@ -40,6 +40,11 @@ HydrocarbonFuel HydrocarbonFuel::keroseneLike() {
   return HydrocarbonFuel(1.9, 43.0e6);
 }
 
+double HydrocarbonFuel::entropy(double temperature) const {
+  enthalpy(temperature);  // checks the range
+  return kStandardEntropy + cp_ * std::log(temperature / kReferenceTemperature);
+}
+
 double HydrocarbonFuel::enthalpy(double temperature) const {
   if (!std::isfinite(temperature) || temperature < kMinimumTemperature || temperature > kMaximumTemperature)
     throw OutOfRange(

@@ -60,6 +60,13 @@ class HydrocarbonFuel {
   double formationEnthalpy() const { return formationEnthalpy_; }
   /// Enthalpy at the delivery temperature; throws cw::OutOfRange outside [200, 1000] K. [J/kg]
   double enthalpy(double temperature) const;
+
+  /// Absolute (third-law) standard entropy of the liquid fuel at 298.15 K: that of liquid
+  /// n-dodecane, 490.7 J/(mol K) / 0.17034 kg/mol (NIST Chemistry WebBook, from memory), for any
+  /// C H_y. [J/(kg K)]
+  static constexpr double kStandardEntropy = 2880.0;
+  /// Entropy at the delivery temperature, kStandardEntropy + cp ln(T / 298.15 K). [J/(kg K)]
+  double entropy(double temperature) const;
   /// Moles of O2 for complete combustion of one kilogram of fuel, (1 + y/4) / M_f. [mol/kg]
   double oxygenDemand() const { return (1.0 + y_ / 4.0) / molarMass_; }
   /// The species table whose enthalpies define the formation enthalpy.

@@ -45,6 +45,24 @@ class GasModel {
   /// Stoichiometric fuel-air ratio of the fuel in this air. [-]
   virtual double stoichiometricFuelAirRatio() const = 0;
 
+  /// The products of burning at fuel-air ratio f in a stream of gas `entering` at (T, p): products(f)
+  /// on a model with absolute entropies (thermally perfect). On the two-gamma model, whose air and
+  /// products are two separate approximations of one working fluid with unrelated entropy scales,
+  /// the products' scale is joined to the entering gas's at (T, p): the switch of gas at the burner
+  /// entry then generates no entropy, and the burner's entropy generation is that of its heating
+  /// and pressure loss on the product gas, cp_t ln(Tt4/Tt3) - R_t ln(pt4/pt3) per unit mass, the
+  /// heat added at the log-mean temperature (Tt4 - Tt3) / ln(Tt4/Tt3) (own definition, no source).
+  virtual std::shared_ptr<const Gas> productsEntering(double fuelAirRatio, const Gas& /*entering*/,
+                                                      double /*temperature*/, double /*pressure*/) const {
+    return products(fuelAirRatio);
+  }
+
+  /// The entropy per unit mass of fuel that the fuel brings into a burner whose stream enters at
+  /// entropy s_in: the model's own fuel entropy (absolute models); on the constant-cp and
+  /// two-gamma models, where the fuel is heat, s_in when its mass joins the stream (at the
+  /// stream's entry state) and 0 when its mass is neglected (own convention, no source). [J/(kg K)]
+  virtual double fuelEntropy(double enteringEntropy) const = 0;
+
   /// True when the fuel's mass is left out of the flow (textbook idealisation; simple models only).
   virtual bool neglectsFuelMass() const { return false; }
 

@@ -14,6 +14,7 @@ ThermallyPerfectModel::ThermallyPerfectModel(HydrocarbonFuel fuel, double specif
       combustion_(airComposition_, fuel_),
       air_(std::make_shared<ThermallyPerfectGas>(airComposition_, "air (thermally perfect)")),
       fuelEnthalpy_(fuel_.enthalpy(fuelTemperature)),
+      fuelEntropy_(fuel_.entropy(fuelTemperature)),
       stoichiometric_(combustion_.stoichiometricFuelAirRatio()) {
   stoichiometricProducts_ =
       std::make_shared<ThermallyPerfectGas>(combustion_.products(stoichiometric_), "stoichiometric products");

@@ -24,6 +24,8 @@ class ThermallyPerfectModel : public GasModel {
   std::shared_ptr<const Gas> air() const override { return air_; }
   std::shared_ptr<const Gas> products(double fuelAirRatio) const override;
   double fuelEnthalpy() const override { return fuelEnthalpy_; }
+  /// The liquid fuel's absolute entropy at its delivery temperature (HydrocarbonFuel::entropy).
+  double fuelEntropy(double /*enteringEntropy*/) const override { return fuelEntropy_; }
   double lowerHeatingValue() const override { return fuel_.lowerHeatingValue(); }
   double stoichiometricFuelAirRatio() const override { return stoichiometric_; }
   /// Lean products at f are a mass blend of (1 - f/f_st) kg of air and f (1 + f_st)/f_st kg of
@@ -40,6 +42,7 @@ class ThermallyPerfectModel : public GasModel {
   std::shared_ptr<const ThermallyPerfectGas> air_;
   std::shared_ptr<const ThermallyPerfectGas> stoichiometricProducts_;
   double fuelEnthalpy_;
+  double fuelEntropy_;
   double stoichiometric_;
 };
 

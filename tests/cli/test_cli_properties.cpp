@@ -111,10 +111,14 @@ class TestCliProperties : public QObject {
                           << "--temperature-K = 150 K is outside the valid range [200, 6000] K";
     QTest::newRow("pressure zero") << QStringList{"--gas", "air",           "--temperature-K",
                                                   "300",   "--pressure-Pa", "0"}
-                                   << "--pressure-Pa = 0 Pa is outside the valid range (0, inf) Pa";
+                                   << "--pressure-Pa = 0 Pa is outside the valid range [0.001, 1e9] Pa";
     QTest::newRow("pressure negative")
         << QStringList{"--gas", "air", "--temperature-K", "300", "--pressure-Pa", "-5"}
-        << "--pressure-Pa = -5 Pa is outside the valid range (0, inf) Pa";
+        << "--pressure-Pa = -5 Pa is outside the valid range [0.001, 1e9] Pa";
+    // 1e-320 Pa: p / p_ref underflows to zero and the entropy would be infinite (printed null).
+    QTest::newRow("pressure subnormal")
+        << QStringList{"--gas", "air", "--temperature-K", "300", "--pressure-Pa", "1e-320"}
+        << "--pressure-Pa = 1e-320 Pa is outside the valid range [0.001, 1e9] Pa";
     QTest::newRow("unknown gas")
         << QStringList{"--gas", "Xe", "--temperature-K", "300"}
         << "--gas: unknown gas 'Xe' (valid: N2, O2, Ar, CO2, H2O, CO, H2, OH, H, O, NO, "
