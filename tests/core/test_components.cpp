@@ -32,9 +32,12 @@
 
 #include <QTest>
 
+#include <algorithm>
 #include <cmath>
 #include <memory>
+#include <random>
 #include <string>
+#include <vector>
 
 using namespace cw;
 using components::EfficiencyBasis;
@@ -597,6 +600,53 @@ class TestComponents : public QObject {
     QCOMPARE(out.fuelAirRatio, in.fuelAirRatio);
     QVERIFY(std::abs(entropyRise(in, out) - hot->gasConstant() * std::log(1.0 / 0.97)) < 1e-9 * 1239.0);
     QCOMPARE(components::Duct(0.0).exit(in).pressure, in.pressure);
+  }
+
+  // ---- derived efficiencies stay physical ------------------------------------------------------
+
+  // The second law bounds both efficiencies by 1, and a unit efficiency on either basis is the
+  // isentropic change (efficiency.h), so the other is exactly 1. Random constant-cp gases with
+  // gamma in (1, 5/3] (half of them within 1e-6 to 1e-1 of 1, where the temperature change is
+  // tiny), pressure ratios from 1.0001 to 60, both bases, compression and expansion, through the
+  // compressor's route (change), the turbine's (expansion, then efficiencies) and the endpoint form.
+  void derivedEfficienciesStayAtOrBelowOne() {
+    std::mt19937 rng(20250611);
+    auto uniform = [&](double a, double b) { return std::uniform_real_distribution<double>(a, b)(rng); };
+    int checked = 0;
+    for (int i = 0; i < 20000; ++i) {
+      const double gamma = (i % 2) ? 1.0 + std::pow(10.0, uniform(-6.0, -1.0))
+                                   : std::min(5.0 / 3.0, 1.0 + uniform(1e-9, 2.0 / 3.0));
+      const ConstantCpGas gas(uniform(300.0, 5000.0), gamma, "random", (i % 3) ? 0.0 : 298.15);
+      const bool compression = (i / 2) % 2 == 0;
+      const auto basis = (i / 4) % 2 ? EfficiencyBasis::Isentropic : EfficiencyBasis::Polytropic;
+      const double given = (i % 5 == 0) ? 1.0 : uniform(0.6, 1.0);
+      const double ratio = std::exp(uniform(std::log(1.0001), std::log(60.0)));
+      const double T1 = compression ? uniform(200.0, 350.0) : uniform(300.0, 2000.0);
+      const double p1 = uniform(1e4, 4e6), p2 = compression ? p1 * ratio : p1 / ratio;
+      const auto c = components::change(gas, T1, p1, p2, basis, given);
+      QCOMPARE(basis == EfficiencyBasis::Isentropic ? c.efficiency.isentropic : c.efficiency.polytropic,
+               given);
+      std::vector<components::EfficiencyPair> pairs = {c.efficiency};
+      pairs.push_back(components::efficiencies(gas, T1, p1, c.exitTemperature, p2));
+      if (!compression) {
+        const auto e = components::expansion(gas, T1, p1, c.exitTemperature, basis, given);
+        pairs.push_back(e.isentropicTemperature
+                            ? components::efficiencies(gas, T1, p1, c.exitTemperature, e.exitPressure,
+                                                       *e.isentropicTemperature)
+                            : components::efficiencies(gas, T1, p1, c.exitTemperature, e.exitPressure));
+      }
+      for (const auto& pair : pairs) {
+        const QByteArray where = QByteArray("gamma ") + QByteArray::number(gamma, 'g', 17) + ", ratio " +
+                                 QByteArray::number(ratio, 'g', 17) + (compression ? " up" : " down") +
+                                 ", given " + QByteArray::number(given, 'g', 17) + ": eta " +
+                                 QByteArray::number(pair.isentropic, 'g', 17) + ", e " +
+                                 QByteArray::number(pair.polytropic, 'g', 17);
+        for (double v : {pair.isentropic, pair.polytropic}) QVERIFY2(v > 0.0 && v <= 1.0 + 1e-12, where);
+        if (given == 1.0) QVERIFY2(pair.isentropic == 1.0 && pair.polytropic == 1.0, where);
+        ++checked;
+      }
+    }
+    QVERIFY(checked > 40000);
   }
 };
 
