@@ -10,6 +10,14 @@
 // Mattingly, Elements of Propulsion: Gas Turbines and Rockets, AIAA 2006, sec. 4.3.4
 // (constant-cp forms eqs. 4.9a-4.10b); the forms above are the same definitions for a
 // thermally perfect gas. A unit efficiency on either basis is the isentropic change.
+//
+// Derived efficiencies: change() reports the given efficiency as given and derives the other.
+// A given 1 is the isentropic change, so the other is exactly 1. On a constant-cp gas the other
+// comes from the given one by the closed forms of eqs. 4.9-4.10 with expm1 and log1p (exact to
+// rounding as gamma -> 1 or p2/p1 -> 1, where differences of h and s° at two temperatures keep
+// little but the rounding of the exit temperature); otherwise from the states as above. Either
+// way a derived efficiency within the rounding of its states of 1 is 1 (the second law bounds
+// it by 1), so derived efficiencies stay in (0, 1].
 
 #include "engine/case_inputs.h"
 #include "thermo/gas.h"
