@@ -345,7 +345,14 @@ class TestExplorer : public QObject {
       QVERIFY(labels->labelCount() >= 7);
       QVERIFY2(labels->movedCount() + labels->skippedCount() > 0, qPrintable(name));
       QCOMPARE(static_cast<int>(placed.size()) + labels->skippedCount(), labels->labelCount());
-      QVERIFY2(placed.size() >= 4, qPrintable(name));
+      // Seven isobars, four of them in two pairs within 3 % of each other (p3/p4, p5-p8): at least
+      // three labels fit (since the two-gamma hot section is joined to the air's entropy scale, the
+      // hot isobars crowd closer to the compressor's).
+      QVERIFY2(placed.size() >= 3, qPrintable(name + QString(": %1 placed, %2 moved, %3 skipped of %4")
+                                                         .arg(placed.size())
+                                                         .arg(labels->movedCount())
+                                                         .arg(labels->skippedCount())
+                                                         .arg(labels->labelCount())));
       if (chart->kind() == cw::gui::ChartKind::TemperatureEntropy)
         QCOMPARE(chart->isobarCount(), labels->labelCount());
       else
