@@ -2,6 +2,7 @@
 
 #include "common/error.h"
 #include "flow/compressible_flow.h"
+#include "flow/normal_shock.h"
 #include "flow/root_finder.h"
 
 #include <algorithm>
@@ -83,6 +84,24 @@ double exitPressureOfAreaRatio(const Expander& expander, const Expander::Sonic& 
   return flow::findRoot(flux, lowest, throat.pressure, "nozzle: exit pressure for the area ratio");
 }
 
+/// A fixed-area-ratio exit must stay supersonic: p0 at most the pressure behind a normal shock
+/// standing at the exit plane (components/nozzle.h); beyond it a shock would stand inside.
+void requireSupersonicExit(const thermo::Gas& gas, const SectionState& exit, double exitPressure,
+                           double ambientPressure, double areaRatio) {
+  const double mach = exit.velocity / gas.speedOfSound(exit.temperature);
+  if (ambientPressure <= exitPressure) return;  // underexpanded (or matched): always supersonic
+  const double behindShock =
+      flow::normalShock(gas, exit.temperature, exitPressure, std::max(1.0, mach)).downstream.local.pressure;
+  if (ambientPressure <= behindShock) return;  // overexpanded, any shocks outside the nozzle
+  throw NoSolution("nozzle", "the ambient pressure " + messageNumber(ambientPressure) + " Pa is above " +
+                                 messageNumber(behindShock) +
+                                 " Pa, the pressure behind a normal shock at the exit of the exit-to-throat "
+                                 "area ratio " +
+                                 messageNumber(areaRatio) +
+                                 ": a shock would stand inside the nozzle, which the model does not cover "
+                                 "(choose a smaller area ratio, full expansion or a convergent nozzle)");
+}
+
 }  // namespace
 
 Nozzle::Result Nozzle::expand(const engine::TotalState& entry, double ambientPressure) const {
@@ -117,35 +136,43 @@ Nozzle::Result Nozzle::expand(const engine::TotalState& entry, double ambientPre
     st.fuelAirRatio = entry.fuelAirRatio;
     st.area = entry.massFlow / (pressure / (gas.gasConstant() * temperature) * velocity) /
               inputs_.dischargeCoefficient;  // geometric = effective / C_D
+    if (!(velocity > 0.0) || !std::isfinite(*st.area))
+      throw NoSolution("nozzle", "the velocity coefficient " + messageNumber(result.velocityCoefficient) +
+                                     " leaves the jet too slow for a finite nozzle area");
     return st;
   };
 
   // Throat: sonic when choked (Mach 1 exactly: V* = a(T*)); else the exit at p0.
   double exitPressure = ambientPressure;
-  SectionState exit = expander.at(ambientPressure);
-  if (result.choked) {
-    result.throat = makeStation("8", throat.pressure, throat.temperature, throat.velocity);
-    if (std::holds_alternative<engine::ConvergentNozzle>(inputs_.geometry)) {
-      exitPressure = throat.pressure;
-      exit = {throat.isentropicTemperature, throat.temperature, throat.velocity, throat.density};
-    } else if (const auto* fixed = std::get_if<engine::FixedAreaRatioNozzle>(&inputs_.geometry)) {
-      if (fixed->exitToThroatAreaRatio == 1.0) {
-        exitPressure = throat.pressure;
-        exit = {throat.isentropicTemperature, throat.temperature, throat.velocity, throat.density};
-      } else {
-        exitPressure = exitPressureOfAreaRatio(expander, throat, fixed->exitToThroatAreaRatio, entry);
-        exit = expander.at(exitPressure);
-      }
-    }
+  SectionState exit{};
+  const SectionState sonicExit{throat.isentropicTemperature, throat.temperature, throat.velocity,
+                               throat.density};
+  const auto* fixed = std::get_if<engine::FixedAreaRatioNozzle>(&inputs_.geometry);
+  if (fixed && fixed->exitToThroatAreaRatio > 1.0) {
+    if (!(throat.pressure > 0.0))
+      throw NoSolution("nozzle",
+                       "the nozzle's losses keep its throat from choking, so its divergent part "
+                       "cannot run supersonic; the model does not cover that regime");
+    result.choked = true;
+    exitPressure = exitPressureOfAreaRatio(expander, throat, fixed->exitToThroatAreaRatio, entry);
+    exit = expander.at(exitPressure);
+    requireSupersonicExit(gas, exit, exitPressure, ambientPressure, fixed->exitToThroatAreaRatio);
+  } else if (result.choked && !std::holds_alternative<engine::FullyExpandingNozzle>(inputs_.geometry)) {
+    exitPressure = throat.pressure;  // convergent, or an area ratio of 1
+    exit = sonicExit;
+  } else {
+    exit = expander.at(ambientPressure);  // unchoked, or fully expanded to p0
   }
+  if (result.choked) result.throat = makeStation("8", throat.pressure, throat.temperature, throat.velocity);
   result.exit = makeStation("9", exitPressure, exit.temperature, exit.velocity);
   if (!result.choked) {  // the throat is the exit
     result.throat = result.exit;
     result.throat.id = "8";
   }
   const double effectiveExitArea = *result.exit.area * inputs_.dischargeCoefficient;
-  result.grossThrust = result.exit.massFlow * result.exit.velocity +
-                       (result.exit.staticPressure - ambientPressure) * effectiveExitArea;
+  result.grossThrust = result.exit.massFlow * result.exit.velocity;
+  if (exitPressure != ambientPressure)  // pressure thrust of an under- or overexpanded exit
+    result.grossThrust += (exitPressure - ambientPressure) * effectiveExitArea;
   // The isentropic exit state of the efficiencies is the isentropic expansion to p9.
   result.efficiency = efficiencies(gas, entry.temperature, entry.pressure, result.exit.staticTemperature,
                                    exitPressure, exit.isentropicTemperature);

@@ -17,10 +17,18 @@
 // (Saravanamuttoo et al., sec. 3.1, from memory). The nozzle chokes when p0 < p* (the actual
 // critical pressure; a lossy nozzle needs a higher pressure ratio to choke).
 //   convergent            choked: exit = throat, sonic at p*; unchoked: p9 = p0
-//   convergent-divergent  throat as above; exit at full expansion p9 = p0, or at the pressure
-//                         where the actual mass flux rho9 V9 = rho* V* / (A9/A8) on the
-//                         supersonic branch (A9/A8 the ratio of the effective areas); unchoked
-//                         it expands to p0 like a convergent nozzle
+//   convergent-divergent, full expansion: the exit area is the one that expands to p9 = p0; when
+//                         p0 >= p* the nozzle needs no divergent part and is a convergent one
+//   convergent-divergent, fixed A9/A8 > 1 (the ratio of the effective areas): throat sonic, exit
+//                         at the pressure where the actual mass flux rho9 V9 = rho* V* / (A9/A8)
+//                         on the supersonic branch, whatever p0 is, as long as the exit flow
+//                         stays supersonic: p0 at most the pressure behind a normal shock at the
+//                         exit (under- or overexpanded, with any shocks outside the nozzle).
+//                         At a higher p0 a normal shock would stand inside the divergent part,
+//                         and higher still the flow would be subsonic throughout (Anderson,
+//                         Modern Compressible Flow, 3rd ed., sec. 5.5, the regimes of a
+//                         convergent-divergent nozzle, from memory): the model does not cover
+//                         these and refuses them as NoSolution.
 // At any section below the throat the velocity is C_V times the isentropic velocity to that
 // section's pressure and the temperature follows from h = ht7 - V^2 / 2 (Walsh and Fletcher,
 // Gas Turbine Performance, 2nd ed., 2004, sec. 5.13; common practice).
