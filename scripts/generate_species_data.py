@@ -1,18 +1,25 @@
 #!/usr/bin/env python3
-"""Writes core/thermo/species_data.cpp from core/thermo/data/nasa7-tm4513.json.
+"""Writes core/thermo/species_data.cpp from core/thermo/data/nasa7-tm4513.json and
+core/thermo/data/cold-extension.json.
 
-The JSON file is the project's reference copy of the NASA TM-4513 coefficients
+The first JSON file is the project's reference copy of the NASA TM-4513 coefficients
 (McBride, Gordon and Reno, 1993); the generated C++ table embeds the same numbers in
 the library. tests/core/test_species.cpp checks the two agree coefficient by coefficient.
+The second gives the air species a range below 200 K, derived here from the rigid-rotor
+harmonic-oscillator model (its "source" says how); the script computes its coefficients.
 Run from the repository root:  python3 scripts/generate_species_data.py
 """
 import json
+import math
 import pathlib
 import shutil
 import subprocess
 
 ROOT = pathlib.Path(__file__).resolve().parent.parent
 DATA = ROOT / "core/thermo/data/nasa7-tm4513.json"
+COLD = ROOT / "core/thermo/data/cold-extension.json"
+C2 = 1.438777  # second radiation constant h c / k [cm K] (CODATA 2018)
+BASE = {"atom": 2.5, "linear": 3.5, "nonlinear": 4.0}  # cp/R of translation and rotation
 OUT = ROOT / "core/thermo/species_data.cpp"
 ORDER = ["N2", "O2", "Ar", "CO2", "H2O", "CO", "H2", "OH", "H", "O", "NO", "N"]
 
@@ -22,8 +29,54 @@ def number(x):
     return repr(float(x))
 
 
+def low_range(a, t):
+    """cp/R, h/R and s/R of a NASA 7-coefficient range at t."""
+    cp = a[0] + t * (a[1] + t * (a[2] + t * (a[3] + t * a[4])))
+    h = t * (a[0] + t * (a[1] / 2 + t * (a[2] / 3 + t * (a[3] / 4 + t * a[4] / 5)))) + a[5]
+    s = a[0] * math.log(t) + t * (a[1] + t * (a[2] / 2 + t * (a[3] / 3 + t * a[4] / 4))) + a[6]
+    return cp, h, s
+
+
+def einstein(x):
+    """Heat capacity of one harmonic oscillator, cv/R = x^2 e^x / (e^x - 1)^2, x = theta / T."""
+    return x * x * math.exp(-x) / (1.0 - math.exp(-x)) ** 2
+
+
+def solve(matrix, rhs):
+    """Gaussian elimination with partial pivoting (small dense systems)."""
+    n = len(rhs)
+    m = [row[:] + [rhs[i]] for i, row in enumerate(matrix)]
+    for c in range(n):
+        p = max(range(c, n), key=lambda r: abs(m[r][c]))
+        m[c], m[p] = m[p], m[c]
+        for r in range(c + 1, n):
+            f = m[r][c] / m[c][c]
+            for k in range(c, n + 1):
+                m[r][k] -= f * m[c][k]
+    x = [0.0] * n
+    for r in range(n - 1, -1, -1):
+        x[r] = (m[r][n] - sum(m[r][k] * x[k] for k in range(r + 1, n))) / m[r][r]
+    return x
+
+
+def cold_range(species, low, t_low, t_join):
+    """a1..a7 on [t_low, t_join]: the model's cp shifted to meet the low range at t_join."""
+    def model(t):
+        return BASE[species["rotation"]] + sum(einstein(C2 * w / t) for w in species["wavenumbers_per_cm"])
+    cp_join, h_join, s_join = low_range(low, t_join)
+    shift = cp_join - model(t_join)
+    # Chebyshev-Lobatto points of [t_low, t_join]: both ends included, so cp meets exactly at t_join.
+    nodes = [t_low + (t_join - t_low) * (1 - math.cos(math.pi * k / 4)) / 2 for k in range(5)]
+    a = solve([[t ** k for k in range(5)] for t in nodes], [model(t) + shift for t in nodes])
+    if all(abs(a[k]) * t_join ** k < 1e-12 * abs(a[0]) for k in range(1, 5)):
+        a = [a[0], 0.0, 0.0, 0.0, 0.0]  # a constant cp (argon): no rounding noise in the other terms
+    _, h, s = low_range(a + [0.0, 0.0], t_join)
+    return a + [h_join - h, s_join - s]
+
+
 def main():
     data = json.loads(DATA.read_text())
+    cold = json.loads(COLD.read_text())
     species = data["species"]
     lines = [
         "// The twelve species of the NASA 7-coefficient data, embedded in the library.",
@@ -35,6 +88,8 @@ def main():
         "// Form: " + data["form"],
         "//",
         "// Units: " + data["units"],
+        "//",
+        "// Below 200 K (air species only; GENERATED from core/thermo/data/cold-extension.json): " + cold["source"],
         '#include "thermo/species_data.h"',
         "",
         "namespace cw::thermo {",
@@ -46,12 +101,19 @@ def main():
     ]
     for name in ORDER:
         s = species[name]
+        if name in cold["species"]:
+            t_cold = cold["T_low_K"]
+            a_cold = cold_range(cold["species"][name], s["low"], t_cold, s["T_low_K"])
+        else:
+            t_cold, a_cold = s["T_low_K"], s["low"]  # no range below T_low: the low range repeated
         elements = list(s["composition"].items())
         elements += [(None, 0)] * (2 - len(elements))
         el = ", ".join(("{\"%s\", %d}" % (e, n)) if e else "{nullptr, 0}" for e, n in elements)
         lines += [
-            "    {\"%s\", \"%s\", %s, %s, %s, %s," % (name, s["note"], number(s["molar_mass_kg_per_mol"]),
-                                                 number(s["T_low_K"]), number(s["T_mid_K"]), number(s["T_high_K"])),
+            "    {\"%s\", \"%s\", %s, %s, %s, %s, %s," % (name, s["note"], number(s["molar_mass_kg_per_mol"]),
+                                                 number(t_cold), number(s["T_low_K"]), number(s["T_mid_K"]),
+                                                 number(s["T_high_K"])),
+            "     {%s}," % ", ".join(number(a) for a in a_cold),
             "     {%s}," % ", ".join(number(a) for a in s["low"]),
             "     {%s}," % ", ".join(number(a) for a in s["high"]),
             "     {{%s}}}," % el,

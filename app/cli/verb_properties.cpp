@@ -90,7 +90,8 @@ Verb propertiesVerb() {
           {"gas", true,
            "N2, O2, Ar, CO2, H2O, CO, H2, OH, H, O, NO, N; air (dry, U.S. Standard Atmosphere 1976); or "
            "products (complete combustion in dry air of a kerosene-like fuel, H/C = 1.9, LHV = 43 MJ/kg)"},
-          {"temperature-K", true, "temperature in K, [200, 6000]"},
+          {"temperature-K", true,
+           "temperature in K, [100, 6000] for air, its species and products, [200, 6000] for the others"},
           {"pressure-Pa", true, "pressure in Pa, [0.001, 1e9], for the entropy (default 101325)"},
           {"fuel-air-ratio", true,
            "kg fuel per kg air for --gas products, [0, stoichiometric = 0.0683] (default 0)"},

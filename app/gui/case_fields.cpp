@@ -277,7 +277,7 @@ std::vector<FieldSpec> buildFields() {
   number(
       Section::GasModel, "gas.hotGamma", QT_TRANSLATE_NOOP("CaseFields", "Hot-section γ"),
       QT_TRANSLATE_NOOP("CaseFields", "Ratio of specific heats of the products after the burner."),
-      Quantity::Dimensionless, 1.0, true, 5.0 / 3.0, false, fixed("/gas_model/hot_gamma"),
+      Quantity::Dimensionless, 1.0, true, 1.4, false, fixed("/gas_model/hot_gamma"),
       [](const Case& c) { return std::get<TwoGammaGasModel>(c.gasModel.model).hotGamma; },
       [](Case& c, double v) { std::get<TwoGammaGasModel>(c.gasModel.model).hotGamma = v; }, twoGamma);
   choice(

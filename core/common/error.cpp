@@ -26,6 +26,9 @@ InvalidInput::InvalidInput(std::string where, double value, std::string unit, st
 InvalidInput::InvalidInput(std::string where, std::string message)
     : Error(ErrorCode::InvalidInput, where, excerpt(where, kWhereCharacters) + ": " + message) {}
 
+OutOfRange::OutOfRange(std::string where, std::string message)
+    : Error(ErrorCode::OutOfRange, where, excerpt(where, kWhereCharacters) + ": " + message) {}
+
 OutOfRange::OutOfRange(std::string where, double value, std::string unit, std::string validRange)
     : Error(ErrorCode::OutOfRange, where, rangeMessage(where, value, unit, validRange)) {}
 

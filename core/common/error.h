@@ -43,6 +43,8 @@ class InvalidInput : public Error {
 class OutOfRange : public Error {
  public:
   OutOfRange(std::string where, double value, std::string unit, std::string validRange);
+  /// A state beyond the data found on the way (e.g. in a component): "<where>: <message>".
+  OutOfRange(std::string where, std::string message);
 };
 
 /// An iterative solver that stopped short of its tolerance.

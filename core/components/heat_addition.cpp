@@ -30,6 +30,7 @@ double HeatAddition::residual(const engine::TotalState& entry, double df, double
 HeatAddition::Result HeatAddition::toExitTemperature(const engine::TotalState& entry,
                                                      double exitTemperature) const {
   const double f1 = entry.fuelAirRatio;
+  requireHeating(entry, exitTemperature);
   const double available = model_.stoichiometricFuelAirRatio() - f1;
   if (available <= 0.0)
     throw NoSolution(
@@ -67,7 +68,18 @@ HeatAddition::Result HeatAddition::withFuelAirRatio(const engine::TotalState& en
   const double fuelTerm = model_.fuelEnthalpy() - (1.0 - combustionEfficiency_) * model_.lowerHeatingValue();
   const double exitEnthalpy =
       (massPerAir(model_, f1) * entry.enthalpy + df * fuelTerm) / massPerAir(model_, f1 + df);
-  return finish(entry, df, model_.products(f1 + df)->temperatureFromEnthalpy(exitEnthalpy));
+  const double exitTemperature = model_.products(f1 + df)->temperatureFromEnthalpy(exitEnthalpy);
+  requireHeating(entry, exitTemperature);
+  return finish(entry, df, exitTemperature);
+}
+
+void HeatAddition::requireHeating(const engine::TotalState& entry, double exitTemperature) const {
+  // Burning heats the stream. On the two-gamma model, whose product gas holds more heat per kelvin
+  // than the air, a small fuel flow could otherwise "burn" to a lower temperature than the entry's.
+  if (!(exitTemperature > entry.temperature))
+    throw NoSolution(name_, "the exit temperature " + messageNumber(exitTemperature) +
+                                " K is not above the entry temperature " + messageNumber(entry.temperature) +
+                                " K; a " + name_ + " only heats the stream");
 }
 
 HeatAddition::Result HeatAddition::finish(const engine::TotalState& entry, double df,

@@ -36,6 +36,8 @@ class HeatAddition {
 
  private:
   double residual(const engine::TotalState& entry, double df, double exitTemperature) const;
+  /// Throws cw::NoSolution unless the exit is hotter than the entry.
+  void requireHeating(const engine::TotalState& entry, double exitTemperature) const;
   Result finish(const engine::TotalState& entry, double df, double exitTemperature) const;
 
   std::string name_;

@@ -50,6 +50,9 @@ constexpr Interval kLossFraction = closed(0.0, 0.3);
 /// Specific heat and ratio of specific heats of the simple gas models.
 constexpr Interval kCp = open(0.0, 1.0e5);
 constexpr Interval kGamma = openClosed(1.0, 5.0 / 3.0);
+/// The two-gamma model's hot gas: combustion products are never stiffer than air (gamma of
+/// diatomic air 1.4; products about 1.3; common practice, no source).
+constexpr Interval kHotGamma = openClosed(1.0, 1.4);
 /// Burner and afterburner exit temperatures.
 constexpr Interval kExitTemperature = closed(300.0, 2500.0);
 
@@ -101,6 +104,25 @@ void checkFuel(Checker& c, const FuelInputs& f) {
   c.check("/fuel/temperature_K", f.temperature, closed(200.0, 1000.0), "K");
 }
 
+/// The hot gas of the two-gamma model stands for the products of burning in the cold gas: its gamma
+/// at most the cold one, its cp at least the cold one (as products against air: more triatomic
+/// molecules, hotter). A stiffer or less heat-holding hot gas makes the model's energy books give
+/// an exhaust colder than the intake and a thermal efficiency above 1. Checked when both
+/// values are in their own ranges (common practice, no source).
+void checkHotGas(Checker& c, const TwoGammaGasModel& g) {
+  if (!kGamma.contains(g.coldGamma) || !kHotGamma.contains(g.hotGamma) || !kCp.contains(g.coldCp) ||
+      !kCp.contains(g.hotCp))
+    return;
+  if (g.hotGamma > g.coldGamma)
+    c.fail("/gas_model/hot_gamma", formatNumber(g.hotGamma), "(1, cold_gamma]",
+           messageNumber(g.hotGamma) + " is above the cold gamma " + messageNumber(g.coldGamma) +
+               ": the products of combustion are never stiffer than the air they come from");
+  if (g.hotCp < g.coldCp)
+    c.fail("/gas_model/hot_cp_J_per_kg_K", formatNumber(g.hotCp), "[cold_cp_J_per_kg_K, 1e5) J/(kg K)",
+           messageNumber(g.hotCp) + " J/(kg K) is below the cold cp " + messageNumber(g.coldCp) +
+               " J/(kg K): the products of combustion hold more heat per kelvin than the air they come from");
+}
+
 void checkGasModel(Checker& c, const GasModelInputs& g) {
   if (const auto* constant = std::get_if<ConstantCpGasModel>(&g.model)) {
     c.check("/gas_model/cp_J_per_kg_K", constant->cp, kCp, "J/(kg K)");
@@ -109,7 +131,8 @@ void checkGasModel(Checker& c, const GasModelInputs& g) {
     c.check("/gas_model/cold_cp_J_per_kg_K", two->coldCp, kCp, "J/(kg K)");
     c.check("/gas_model/cold_gamma", two->coldGamma, kGamma);
     c.check("/gas_model/hot_cp_J_per_kg_K", two->hotCp, kCp, "J/(kg K)");
-    c.check("/gas_model/hot_gamma", two->hotGamma, kGamma);
+    c.check("/gas_model/hot_gamma", two->hotGamma, kHotGamma);
+    checkHotGas(c, *two);
   } else if (g.neglectFuelMass) {
     c.fail("/gas_model/neglect_fuel_mass", "true", "false with kind \"thermally-perfect\"",
            "true is allowed only with kind \"constant-cp\" or \"two-gamma\"");

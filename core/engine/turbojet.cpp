@@ -77,6 +77,16 @@ void setEfficiencies(Performance& perf, double jetMassFlow, double flightVelocit
   perf.overallEfficiency = useful / input;
 }
 
+/// Runs one component: a state beyond the gas data found inside it is reported against the component.
+template <typename Run>
+auto within(const char* component, Run&& run) -> decltype(run()) {
+  try {
+    return run();
+  } catch (const OutOfRange& e) {
+    throw OutOfRange(component, std::string("a state beyond the gas data (") + e.what() + ")");
+  }
+}
+
 double entropyRate(const Station& in, const Station& out) {
   return out.massFlow * (out.entropy - in.entropy);
 }
@@ -138,7 +148,7 @@ CycleResult Assembly::at(double airMassFlow) const {
   if (free.velocity > 0.0) s0.area = airMassFlow / free.massFlux();
 
   // 2: engine face, at the sizing Mach number.
-  const TotalState t2 = components::Inlet(inputs_.inlet).exit(s0);
+  const TotalState t2 = within("inlet", [&] { return components::Inlet(inputs_.inlet).exit(s0); });
   Station s2 = stationAtRest("2", t2, entropyReference);
   flow::FlowState face;
   try {
@@ -153,23 +163,27 @@ CycleResult Assembly::at(double airMassFlow) const {
   s2.area = airMassFlow / face.massFlux();
 
   // 3: compressor exit, after the bleed.
-  const components::Compressor::Result compression = components::Compressor(inputs_.compressor).exit(t2);
+  const components::Compressor::Result compression =
+      within("compressor", [&] { return components::Compressor(inputs_.compressor).exit(t2); });
   Station s3 = stationAtRest("3", compression.exit, entropyReference);
 
   // 4: burner exit.
   const components::HeatAddition burner("burner", model, inputs_.burner.pressureLossFraction,
                                         inputs_.burner.combustionEfficiency);
-  const components::HeatAddition::Result combustion =
-      std::holds_alternative<ExitTemperatureSetting>(inputs_.burner.setting)
-          ? burner.toExitTemperature(compression.exit,
-                                     std::get<ExitTemperatureSetting>(inputs_.burner.setting).exitTemperature)
-          : burner.withFuelAirRatio(compression.exit,
-                                    std::get<FuelAirRatioSetting>(inputs_.burner.setting).fuelAirRatio);
+  const components::HeatAddition::Result combustion = within("burner", [&] {
+    return std::holds_alternative<ExitTemperatureSetting>(inputs_.burner.setting)
+               ? burner.toExitTemperature(
+                     compression.exit,
+                     std::get<ExitTemperatureSetting>(inputs_.burner.setting).exitTemperature)
+               : burner.withFuelAirRatio(compression.exit,
+                                         std::get<FuelAirRatioSetting>(inputs_.burner.setting).fuelAirRatio);
+  });
   Station s4 = stationAtRest("4", combustion.exit, entropyReference);
 
   // 5: turbine exit.
-  const components::Turbine::Result expansion =
-      components::Turbine(inputs_.turbine).exit(combustion.exit, compression.power);
+  const components::Turbine::Result expansion = within("turbine", [&] {
+    return components::Turbine(inputs_.turbine).exit(combustion.exit, compression.power);
+  });
   Station s5 = stationAtRest("5", expansion.exit, entropyReference);
 
   // 7: nozzle entry, through the jet pipe and (when lit) the afterburner.
@@ -181,7 +195,9 @@ CycleResult Assembly::at(double airMassFlow) const {
     const components::HeatAddition afterburner("afterburner", model,
                                                inputs_.afterburner.pressureLossFractionLit,
                                                inputs_.afterburner.combustionEfficiency);
-    const auto reheat = afterburner.toExitTemperature(t7, inputs_.afterburner.exitTemperature);
+    const auto reheat = within("afterburner", [&] {
+      return afterburner.toExitTemperature(t7, inputs_.afterburner.exitTemperature);
+    });
     t7 = reheat.exit;
     afterburnerFuel = reheat.fuelMassFlow;
   } else if (inputs_.afterburner.pressureLossFractionUnlit > 0.0) {
@@ -190,7 +206,8 @@ CycleResult Assembly::at(double airMassFlow) const {
   Station s7 = stationAtRest("7", t7, entropyReference);
 
   // 8, 9: nozzle throat and exit.
-  components::Nozzle::Result jet = components::Nozzle(inputs_.nozzle).expand(t7, fs.pressure);
+  components::Nozzle::Result jet =
+      within("nozzle", [&] { return components::Nozzle(inputs_.nozzle).expand(t7, fs.pressure); });
   Station s8 = std::move(jet.throat), s9 = std::move(jet.exit);
   s8.entropy = s8.gas->entropy(s8.staticTemperature, s8.staticPressure) - entropyReference;
   s9.entropy = s9.gas->entropy(s9.staticTemperature, s9.staticPressure) - entropyReference;

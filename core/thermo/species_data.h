@@ -23,14 +23,17 @@ struct ElementCount {
   int count;
 };
 
-/// One species as tabulated: two ranges [tLow, tMid] and [tMid, tHigh].
+/// One species as tabulated: two ranges [tLow, tMid] and [tMid, tHigh], and for the air species a
+/// range [tCold, tLow] below the tabulated ones (derived: core/thermo/data/cold-extension.json).
 struct SpeciesRecord {
   const char* name;
   const char* note;            ///< the data set's own date/origin tag, e.g. "TPIS78"
   double molarMass;            ///< [kg/mol]
+  double tCold;                ///< [K]; equal to tLow when there is no range below tLow
   double tLow;                 ///< [K]
   double tMid;                 ///< [K]
   double tHigh;                ///< [K]
+  std::array<double, 7> cold;  ///< a1..a7 on [tCold, tLow] (a copy of low when tCold = tLow)
   std::array<double, 7> low;   ///< a1..a7 on [tLow, tMid]
   std::array<double, 7> high;  ///< a1..a7 on [tMid, tHigh]
   std::array<ElementCount, 2> elements;

@@ -14,9 +14,11 @@ SpeciesThermo fromRecord(const SpeciesRecord& r) {
   std::map<std::string, int> elements;
   for (const auto& e : r.elements)
     if (e.element) elements[e.element] += e.count;
-  return SpeciesThermo(r.name, r.molarMass, std::move(elements),
-                       NasaPolynomial(r.tLow, r.tMid, r.low, where + " (low range)"),
-                       NasaPolynomial(r.tMid, r.tHigh, r.high, where + " (high range)"));
+  SpeciesThermo species(r.name, r.molarMass, std::move(elements),
+                        NasaPolynomial(r.tLow, r.tMid, r.low, where + " (low range)"),
+                        NasaPolynomial(r.tMid, r.tHigh, r.high, where + " (high range)"));
+  if (r.tCold < r.tLow) species.extendBelow(NasaPolynomial(r.tCold, r.tLow, r.cold, where + " (cold range)"));
+  return species;
 }
 
 std::vector<SpeciesThermo> embeddedSpecies() {

@@ -37,6 +37,29 @@ SpeciesThermo::SpeciesThermo(std::string name, double molarMass, std::map<std::s
     throw InvalidInput(where + ": jump of s/R at T_mid", jumps.entropyOverR, "", range);
 }
 
+void SpeciesThermo::extendBelow(NasaPolynomial cold) {
+  const std::string where = "species " + name_ + ": cold range";
+  const double joint = low_.minimumTemperature();
+  if (cold.maximumTemperature() != joint)
+    throw InvalidInput(
+        where + ": maximum temperature", cold.maximumTemperature(), "K",
+        "[" + messageNumber(joint) + ", " + messageNumber(joint) + "] K (the low range's minimum)");
+  const TemperaturePowers t(joint);
+  const std::string range = "[-" + messageNumber(kContinuityTolerance) + ", " +
+                            messageNumber(kContinuityTolerance) + "] (continuity at " + messageNumber(joint) +
+                            " K)";
+  for (const auto& [jump, what] : {std::pair{low_.cpOverR(t) - cold.cpOverR(t), ": jump of cp/R"},
+                                   {low_.enthalpyOverRT(t) - cold.enthalpyOverRT(t), ": jump of h/(RT)"},
+                                   {low_.entropyOverR(t) - cold.entropyOverR(t), ": jump of s/R"}})
+    if (!(std::abs(jump) <= kContinuityTolerance)) throw InvalidInput(where + what, jump, "", range);
+  cold_ = std::move(cold);
+}
+
+std::vector<double> SpeciesThermo::breakTemperatures() const {
+  if (cold_) return {low_.minimumTemperature(), midTemperature()};
+  return {midTemperature()};
+}
+
 int SpeciesThermo::atoms(const std::string& element) const {
   const auto it = elements_.find(element);
   return it == elements_.end() ? 0 : it->second;

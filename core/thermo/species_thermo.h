@@ -1,7 +1,9 @@
 #pragma once
 // The ideal-gas thermodynamic functions of one species: two NASA 7-coefficient ranges
 // [T_low, T_mid] and [T_mid, T_high] (McBride, Gordon and Reno, NASA TM-4513, 1993), held as
-// two thermo::NasaPolynomial objects. T <= T_mid uses the low range.
+// two thermo::NasaPolynomial objects, and optionally a third, cold range [T_cold, T_low] below
+// the tabulated ones (the air species: core/thermo/data/cold-extension.json). T <= T_mid uses
+// the low range, T < T_low the cold one.
 //
 // Molar basis, SI: cp in J/(mol K), h in J/mol (absolute, formation enthalpy at 298.15 K
 // included), s° in J/(mol K) at 1 bar; cp = R_u cp/R etc. with R_u = kMolarGasConstant.
@@ -13,7 +15,9 @@
 #include "thermo/nasa_polynomial.h"
 
 #include <map>
+#include <optional>
 #include <string>
+#include <vector>
 
 namespace cw::thermo {
 
@@ -42,14 +46,25 @@ class SpeciesThermo {
   /// Atoms of one element per molecule (0 when absent). [-]
   int atoms(const std::string& element) const;
 
-  double minimumTemperature() const { return low_.minimumTemperature(); }
+  /// Adds the cold range [T_cold, T_low]; throws cw::InvalidInput unless it ends at T_low and
+  /// cp/R, h/(RT) and s/R are continuous there to kContinuityTolerance.
+  void extendBelow(NasaPolynomial cold);
+
+  double minimumTemperature() const {
+    return cold_ ? cold_->minimumTemperature() : low_.minimumTemperature();
+  }
   double midTemperature() const { return low_.maximumTemperature(); }
   double maximumTemperature() const { return high_.maximumTemperature(); }
+  /// The temperatures inside the range where one polynomial hands over to the next, ascending. [K]
+  std::vector<double> breakTemperatures() const;
   const NasaPolynomial& low() const { return low_; }
   const NasaPolynomial& high() const { return high_; }
-  /// The range used at T (low for T <= T_mid); does not check T.
+  /// The cold range below T_low, when there is one.
+  const std::optional<NasaPolynomial>& cold() const { return cold_; }
+  /// The range used at T (low for T <= T_mid, cold below T_low); does not check T.
   const NasaPolynomial& rangeAt(double temperature) const {
-    return temperature <= midTemperature() ? low_ : high_;
+    if (temperature > midTemperature()) return high_;
+    return cold_ && temperature < low_.minimumTemperature() ? *cold_ : low_;
   }
 
   /// Dimensionless kernels; throw cw::OutOfRange outside [T_low, T_high]. [-]
@@ -75,6 +90,7 @@ class SpeciesThermo {
   std::map<std::string, int> elements_;
   NasaPolynomial low_;
   NasaPolynomial high_;
+  std::optional<NasaPolynomial> cold_;
 };
 
 }  // namespace cw::thermo

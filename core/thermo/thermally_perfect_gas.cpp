@@ -34,13 +34,15 @@ ThermallyPerfectGas::ThermallyPerfectGas(Composition composition, std::string de
   if (!(maximumTemperature_ > minimumTemperature_))
     throw InvalidInput(description_,
                        "the species' temperature ranges do not overlap (" + composition_.summary() + ")");
-  // Interval uppers: the present species' T_mid inside the range, then the range's top, ascending.
+  // Interval uppers: the present species' break temperatures inside the range (T_mid, and T_low
+  // where a cold range lies below it), then the range's top, ascending.
   std::vector<double> uppers{maximumTemperature_};
   for (std::size_t i = 0; i < table.size(); ++i) {
-    const double mid = table[i].midTemperature();
-    if (x[i] > 0.0 && mid > minimumTemperature_ && mid < maximumTemperature_ &&
-        std::find(uppers.begin(), uppers.end(), mid) == uppers.end())
-      uppers.push_back(mid);
+    if (!(x[i] > 0.0)) continue;
+    for (const double joint : table[i].breakTemperatures())
+      if (joint > minimumTemperature_ && joint < maximumTemperature_ &&
+          std::find(uppers.begin(), uppers.end(), joint) == uppers.end())
+        uppers.push_back(joint);
   }
   std::sort(uppers.begin(), uppers.end());
 

@@ -106,9 +106,12 @@ class TestCliProperties : public QObject {
     QTest::addColumn<QStringList>("words");
     QTest::addColumn<QString>("expected");
     QTest::newRow("hot") << QStringList{"--gas", "N2", "--temperature-K", "7000"}
-                         << "--temperature-K = 7000 K is outside the valid range [200, 6000] K";
-    QTest::newRow("cold") << QStringList{"--gas", "air", "--temperature-K", "150"}
-                          << "--temperature-K = 150 K is outside the valid range [200, 6000] K";
+                         << "--temperature-K = 7000 K is outside the valid range [100, 6000] K";
+    // Air reaches 100 K (the cold ranges of its species); NO keeps TM-4513's 200 K.
+    QTest::newRow("cold") << QStringList{"--gas", "air", "--temperature-K", "90"}
+                          << "--temperature-K = 90 K is outside the valid range [100, 6000] K";
+    QTest::newRow("cold NO") << QStringList{"--gas", "NO", "--temperature-K", "150"}
+                             << "--temperature-K = 150 K is outside the valid range [200, 6000] K";
     QTest::newRow("pressure zero") << QStringList{"--gas", "air",           "--temperature-K",
                                                   "300",   "--pressure-Pa", "0"}
                                    << "--pressure-Pa = 0 Pa is outside the valid range [0.001, 1e9] Pa";
@@ -168,7 +171,7 @@ class TestCliProperties : public QObject {
     QVERIFY(bad.waitForFinished(10000));
     QCOMPARE(bad.exitCode(), 2);
     QCOMPARE(QString::fromUtf8(bad.readAllStandardError()),
-             QString("cyclewright-cli properties: --temperature-K = 7000 K is outside the valid range [200, "
+             QString("cyclewright-cli properties: --temperature-K = 7000 K is outside the valid range [100, "
                      "6000] K\n"));
     QVERIFY(bad.readAllStandardOutput().isEmpty());
   }

@@ -446,11 +446,11 @@ class TestComponents : public QObject {
       components::Turbine(turbineInputs(EfficiencyBasis::Isentropic, 0.9)).exit(t4, 1.01 * everything);
     });
     QVERIFY2(m.find("cannot drive the compressor") != std::string::npos, m.c_str());
-    // Also on thermally perfect products, whose data end at 200 K.
+    // Also on thermally perfect products, whose data end at 100 K.
     const thermo::ThermallyPerfectModel model(thermo::HydrocarbonFuel::keroseneLike());
     const auto products = model.products(0.02);
     const TotalState hotProducts = totalState(products, 1400.0, 1.0e6, 20.0, 0.02);
-    const double tooMuch = 1.01 * 20.0 * (products->enthalpy(1400.0) - products->enthalpy(200.0));
+    const double tooMuch = 1.01 * 20.0 * (products->enthalpy(1400.0) - products->enthalpy(100.0));
     const std::string tp = noSolutionMessage([&] {
       components::Turbine(turbineInputs(EfficiencyBasis::Polytropic, 0.9)).exit(hotProducts, tooMuch);
     });
@@ -579,8 +579,15 @@ class TestComponents : public QObject {
     QVERIFY2(noSolutionMessage([&] { burner.withFuelAirRatio(t3, 0.07); }).find("stoichiometric") !=
                  std::string::npos,
              "given f above f_st");
-    // Heat taken out: the products at 500 K hold less than the air at 700 K (1239 x 500 < 1004 x 700).
-    QVERIFY(noSolutionMessage([&] { burner.toExitTemperature(t3, 500.0); }).find("below") !=
+    // Heat taken out: an exit colder than the entry (500 K against 700 K) is refused.
+    QVERIFY(noSolutionMessage([&] { burner.toExitTemperature(t3, 500.0); }).find("not above the entry") !=
+            std::string::npos);
+    // Two-gamma: 720 K holds more energy as products (1239 x 720) than the air at 750 K (1004 x 750),
+    // so the balance alone would "burn" fuel to a colder exit; a burner only heats.
+    const TotalState warm = totalState(model->air(), 750.0, 2.0e6, 30.0);
+    QVERIFY(noSolutionMessage([&] { burner.toExitTemperature(warm, 720.0); }).find("only heats") !=
+            std::string::npos);
+    QVERIFY(noSolutionMessage([&] { burner.withFuelAirRatio(warm, 0.001); }).find("only heats") !=
             std::string::npos);
     const TotalState spent = totalState(model->products(0.0676), 1500.0, 2.0e6, 30.0, 0.0676);
     QVERIFY(noSolutionMessage([&] { burner.toExitTemperature(spent, 1800.0); }).find("no oxygen") !=

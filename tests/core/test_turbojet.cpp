@@ -1,6 +1,9 @@
 // The turbojet design point against closed-form results, and its conservation laws.
+#include "analysis/audit_point.h"
+#include "analysis/exergy_balance.h"
 #include "analysis/ideal_twin.h"
 #include "common/error.h"
+#include "components/inlet.h"
 #include "engine/evaluate.h"
 #include "engine/isobars.h"
 #include "engine/turbojet.h"
@@ -33,6 +36,126 @@ double relative(double a, double b) {
   return std::abs(a - b) / std::max(std::abs(b), 1e-300);
 }
 
+/// A random valid case: gas model by i % 3, two-gamma with a random hot gas, the rest uniform
+/// over ranges a little inside the valid ones.
+/// The physical checks of one solved random case (randomCasesAreFiniteOrAClearError).
+void checkPhysical(const Case& c, const Evaluation& e) {
+  const double scale = e.actual.sizing.airMassFlow * 1004.0;  // W cp: a natural scale of S_gen [W/K]
+  for (const CycleResult* r : {&e.actual, &e.ideal}) {
+    const auto& p = r->performance;
+    for (double v : {p.netThrust, p.specificThrust, p.thrustSpecificFuelConsumption, p.fuelFlow,
+                     p.thermalEfficiency, p.propulsiveEfficiency, p.overallEfficiency, p.jetVelocity})
+      QVERIFY(std::isfinite(v));
+    QVERIFY(p.netThrust > 0 && p.fuelFlow > 0);
+    QVERIFY2(p.thermalEfficiency > 0 && p.thermalEfficiency < 1,
+             qPrintable(QString("eta_th %1 M %2 model %3 nozzle %4 p9/p0 %5 T9 %6 T0 %7 V9 %8 Ve %9")
+                            .arg(p.thermalEfficiency)
+                            .arg(c.flight.mach)
+                            .arg(c.gasModel.model.index())
+                            .arg(c.nozzle.geometry.index())
+                            .arg(r->station("9").staticPressure / r->station("0").staticPressure)
+                            .arg(r->station("9").staticTemperature)
+                            .arg(r->station("0").staticTemperature)
+                            .arg(r->station("9").velocity)
+                            .arg(p.effectiveJetVelocity)));
+    QVERIFY2(p.propulsiveEfficiency >= 0 && p.propulsiveEfficiency <= 1 + 1e-12,
+             qPrintable(QString("eta_p %1 at M %2").arg(p.propulsiveEfficiency).arg(c.flight.mach)));
+    if (c.flight.mach > 0) QVERIFY(p.propulsiveEfficiency > 0);
+    QVERIFY(relative(p.overallEfficiency, p.thermalEfficiency * p.propulsiveEfficiency) < 1e-12);
+    for (const auto& s : r->stations) {
+      QVERIFY(std::isfinite(s.totalTemperature) && s.totalTemperature > 0);
+      QVERIFY(std::isfinite(s.totalPressure) && s.totalPressure > 0);
+      QVERIFY(std::isfinite(s.entropy));
+    }
+  }
+  for (const auto& component : e.actual.components)
+    QVERIFY2(component.entropyGeneration >= -1e-12 * scale, component.component.c_str());
+  const cw::analysis::ExergyBalance b = cw::analysis::exergyBalanceOf(cw::analysis::AuditPoint(c));
+  for (const auto& component : b.components)
+    QVERIFY2(component.entropyGeneration >= -1e-12 * scale,
+             qPrintable(QString::fromStdString(component.component) + ": " +
+                        QString::number(component.entropyGeneration) +
+                        QString(" model %1 Tt3 %2 Tt4 %3 pt3 %4 f %5 T0 %6")
+                            .arg(c.gasModel.model.index())
+                            .arg(e.actual.station("3").totalTemperature)
+                            .arg(e.actual.station("4").totalTemperature)
+                            .arg(e.actual.station("3").totalPressure)
+                            .arg(e.actual.station("4").fuelAirRatio)
+                            .arg(b.deadStateTemperature)));
+  QVERIFY2(std::abs(b.closure) < 1e-9, qPrintable(QString::number(b.closure)));
+  // Removing every loss never lowers specific thrust at the same Tt4 (second law).
+  QVERIFY(e.ideal.performance.specificThrust >= e.actual.performance.specificThrust * (1 - 1e-12));
+}
+
+template <typename Uniform>
+Case randomCase(int i, Uniform& uniform) {
+  Case c;
+  if (i % 3 == 0)
+    c.gasModel.model = ThermallyPerfectGasModel{};
+  else if (i % 3 == 1)
+    c.gasModel.model = TwoGammaGasModel{1004.0, 1.4, uniform(1004.0, 1300.0), uniform(1.2, 1.4)};
+  else
+    c.gasModel.model = ConstantCpGasModel{1004.0, uniform(1.3, 1.4)};
+  c.flight.specificHumidity = (i % 5 == 0 && i % 3 == 0) ? uniform(0, 0.02) : 0.0;
+  c.flight.ambient = StandardAtmosphereAmbient{uniform(0, 20000), false, uniform(-30, 30)};
+  c.flight.mach = i % 7 == 0 ? uniform(3.0, 4.5) : uniform(0, 3);
+  c.inlet.supersonicRecoveryRule = i % 2 ? SupersonicRecoveryRule::MilE5008B : SupersonicRecoveryRule::None;
+  c.compressor.pressureRatio = uniform(1.5, 60);
+  c.compressor.efficiency =
+      Efficiency{i % 3 ? EfficiencyBasis::Isentropic : EfficiencyBasis::Polytropic, uniform(0.7, 1.0)};
+  c.compressor.bleedFraction = uniform(0, 0.1);
+  c.burner.setting = ExitTemperatureSetting{uniform(900, 2200)};
+  c.burner.pressureLossFraction = uniform(0, 0.1);
+  c.burner.combustionEfficiency = uniform(0.9, 1.0);
+  c.turbine.efficiency.value = uniform(0.7, 1.0);
+  c.turbine.powerOfftake = uniform(0, 2e5);
+  c.inlet.loss = uniform(0.85, 1.0);
+  c.nozzle.loss = uniform(0.9, 1.0);
+  if (i % 4 == 1) c.nozzle.geometry = FullyExpandingNozzle{};
+  if (i % 4 == 2) c.nozzle.geometry = FixedAreaRatioNozzle{uniform(1.0, 3.0)};
+  return c;
+}
+
+/// Whether a case clearly has a cycle, by a closed-form estimate with margins (a two-gamma ideal
+/// gas, Mattingly 2006, sec. 7.3, from memory): the compressor exit stays 300 K below Tt4, the
+/// turbine's work leaves the nozzle a pressure ratio of at least 3, and the estimated jet is 30 %
+/// faster than the flight; a convergent or fully expanding nozzle (a fixed area ratio may hold a
+/// shock), Mach at most 2.5; the offtake shared by the case's 20 kg/s.
+bool clearlyHasACycle(const Case& c) {
+  if (std::holds_alternative<FixedAreaRatioNozzle>(c.nozzle.geometry) || c.flight.mach > 2.5) return false;
+  const FreeStream fs = freeStreamOf(c.flight);
+  // The case's own gases; thermally perfect air and products as 1004 J/(kg K), 1.4 and 1150, 4/3.
+  double gc = 1.4, cpc = 1004.0, gt = 4.0 / 3.0, cpt = 1150.0;
+  if (const auto* two = std::get_if<TwoGammaGasModel>(&c.gasModel.model))
+    gc = two->coldGamma, cpc = two->coldCp, gt = two->hotGamma, cpt = two->hotCp;
+  if (const auto* one = std::get_if<ConstantCpGasModel>(&c.gasModel.model))
+    gc = gt = one->gamma, cpc = cpt = one->cp;
+  const double tauR = 1 + 0.5 * (gc - 1) * c.flight.mach * c.flight.mach, piR = std::pow(tauR, gc / (gc - 1));
+  const double ideal = std::pow(c.compressor.pressureRatio, (gc - 1) / gc);
+  const double eta = c.compressor.efficiency.value;
+  const double tauC = c.compressor.efficiency.basis == EfficiencyBasis::Isentropic
+                          ? 1 + (ideal - 1) / eta
+                          : std::pow(c.compressor.pressureRatio, (gc - 1) / (gc * eta));
+  const double Tt3 = fs.temperature * tauR * tauC;
+  const double Tt4 = std::get<ExitTemperatureSetting>(c.burner.setting).exitTemperature;
+  if (Tt3 > Tt4 - 300.0) return false;
+  const double work = (cpc * (Tt3 - fs.temperature * tauR) + c.turbine.powerOfftake / 20.0) /
+                      ((1 - c.compressor.bleedFraction) * c.turbine.mechanicalEfficiency);
+  const double tauT = 1 - work / (cpt * Tt4);
+  const double tauTs = 1 - (1 - tauT) / c.turbine.efficiency.value;
+  if (!(tauTs > 0.0)) return false;
+  const double rule = c.inlet.supersonicRecoveryRule == SupersonicRecoveryRule::MilE5008B
+                          ? cw::components::Inlet::supersonicRecovery(c.flight.mach)
+                          : 1.0;
+  const double pt7 = fs.pressure * piR * c.inlet.loss * rule * c.compressor.pressureRatio *
+                     (1 - c.burner.pressureLossFraction) * std::pow(tauTs, gt / (gt - 1)) *
+                     (1 - c.jetPipe.pressureLossFraction);
+  if (pt7 < 3.0 * fs.pressure) return false;
+  const double jet =
+      c.nozzle.loss * std::sqrt(2 * cpt * Tt4 * tauT * (1 - std::pow(fs.pressure / pt7, (gt - 1) / gt)));
+  const double flight = c.flight.mach * std::sqrt(gc * cpc * (gc - 1) / gc * fs.temperature);
+  return jet > 1.3 * flight;
+}
 }  // namespace
 
 class TestTurbojet : public QObject {
@@ -147,6 +270,73 @@ class TestTurbojet : public QObject {
     QVERIFY(relative(compressor.efficiency->polytropic, ec) < 1e-12);
   }
 
+  // The choked convergent nozzle of the textbook method in the two-gamma model, fuel mass
+  // neglected (Saravanamuttoo et al., Gas Turbine Theory, sec. 3.1, from memory; the nozzle
+  // relations derived in tests/core/test_nozzle.cpp). Upstream of the nozzle Mattingly's
+  // parametric relations (2006, sec. 7.3, from memory) with the fuel's mass left out:
+  //   tau_l = cp_t Tt4 / (cp_c T0), f = (tau_l - tau_r tau_c) / (eta_b h_PR / (cp_c T0)),
+  //   tau_t = 1 - tau_r (tau_c - 1) / (eta_m tau_l), pi_t = tau_t^(g_t / ((g_t - 1) e_t)),
+  //   pt7 = p0 pi_r pi_d pi_c pi_b pi_t pi_n, Tt7 = Tt4 tau_t.
+  // The throat is sonic in the actual flow: T8 = 2 Tt7 / (g_t + 1), V8 = sqrt(g_t R_t T8),
+  //   p8 = pt7 [1 - (1/eta_n)(g_t - 1)/(g_t + 1)]^(g_t/(g_t - 1))   with eta_n = C_V^2,
+  // and with W9 = W0 the specific thrust is
+  //   F/W0 = V8 + (p8 - p0) R_t T8 / (p8 V8) - V0.
+  void chokedConvergentTwoGammaMatchesClosedForm_data() {
+    QTest::addColumn<double>("mach");
+    QTest::addColumn<double>("velocityCoefficient");
+    QTest::newRow("M0.85, C_V 0.98") << 0.85 << 0.98;
+    QTest::newRow("M0.85, C_V 0.9") << 0.85 << 0.9;
+    QTest::newRow("M1.6, C_V 0.97") << 1.6 << 0.97;
+    QTest::newRow("static, C_V 0.99") << 0.0 << 0.99;
+  }
+  void chokedConvergentTwoGammaMatchesClosedForm() {
+    QFETCH(double, mach);
+    QFETCH(double, velocityCoefficient);
+    const double gc = 1.4, cpc = 1004.0, gt = 4.0 / 3.0, cpt = 1148.0, T0 = 216.7, p0 = 19330.0, hPR = 42.8e6;
+    const double piD = 0.97, ec = 0.9, piB = 0.95, etaB = 0.99, et = 0.9, etaM = 0.995, piN = 0.98;
+    const double pressureRatio = 16.0, Tt4 = 1600.0;
+    const double Rc = (gc - 1) / gc * cpc, Rt = (gt - 1) / gt * cpt;
+    const double V0 = mach * std::sqrt(gc * Rc * T0);
+    const double tauR = 1 + 0.5 * (gc - 1) * mach * mach, piR = std::pow(tauR, gc / (gc - 1));
+    const double tauL = cpt * Tt4 / (cpc * T0);
+    const double tauC = std::pow(pressureRatio, (gc - 1) / (gc * ec));
+    const double f = (tauL - tauR * tauC) / (etaB * hPR / (cpc * T0));
+    const double tauT = 1 - tauR * (tauC - 1) / (etaM * tauL);
+    const double piT = std::pow(tauT, gt / ((gt - 1) * et));
+    const double pt7 = p0 * piR * piD * pressureRatio * piB * piT * piN, Tt7 = Tt4 * tauT;
+    const double etaN = velocityCoefficient * velocityCoefficient;
+    const double p8 = pt7 * std::pow(1 - (1 / etaN) * (gt - 1) / (gt + 1), gt / (gt - 1));
+    QVERIFY(p8 > p0);  // choked
+    const double T8 = 2 * Tt7 / (gt + 1), V8 = std::sqrt(gt * Rt * T8);
+    const double specificThrust = V8 + (p8 - p0) * Rt * T8 / (p8 * V8) - V0;
+
+    Case c;
+    c.flight.ambient = GivenAmbient{T0, p0};
+    c.flight.mach = mach;
+    c.design.target = AirMassFlowTarget{30.0};
+    c.fuel.lowerHeatingValue = hPR;
+    c.gasModel.model = TwoGammaGasModel{cpc, gc, cpt, gt};
+    c.gasModel.neglectFuelMass = true;
+    c.inlet = InletInputs{InletLossBasis::PressureRecovery, piD, SupersonicRecoveryRule::None};
+    c.compressor = CompressorInputs{pressureRatio, Efficiency{EfficiencyBasis::Polytropic, ec}, 0.0};
+    c.burner = BurnerInputs{ExitTemperatureSetting{Tt4}, 1 - piB, etaB};
+    c.turbine = TurbineInputs{Efficiency{EfficiencyBasis::Polytropic, et}, etaM, 0.0};
+    c.jetPipe.pressureLossFraction = 1 - piN;
+    c.nozzle =
+        NozzleInputs{ConvergentNozzle{}, NozzleLossBasis::VelocityCoefficient, velocityCoefficient, 0.97};
+    const CycleResult r = Turbojet(c).evaluate();
+    const Station& s8 = r.station("8");
+    QVERIFY(r.performance.nozzleChoked);
+    QCOMPARE(s8.mach, 1.0);  // exactly
+    QVERIFY2(relative(s8.staticPressure, p8) < 1e-9,
+             qPrintable(QString::number(s8.staticPressure, 'g', 15) + " vs " + QString::number(p8, 'g', 15)));
+    QVERIFY(relative(s8.staticTemperature, T8) < 1e-9);
+    QVERIFY(relative(r.performance.fuelAirRatio, f) < 1e-9);
+    QVERIFY2(relative(r.performance.specificThrust, specificThrust) < 1e-9,
+             qPrintable(QString::number(r.performance.specificThrust, 'g', 15) + " vs " +
+                        QString::number(specificThrust, 'g', 15)));
+  }
+
   // Shaft and burner energy balances close (first law on each control volume; common practice).
   void energyBalancesClose_data() {
     QTest::addColumn<int>("model");
@@ -218,12 +408,173 @@ class TestTurbojet : public QObject {
     QVERIFY(previous < 1e-4);
   }
 
+  // Every loss input swept over its valid range, from no loss to its worst: specific thrust falls
+  // strictly as the loss grows, in three cases (thermally perfect with a convergent nozzle, two-gamma
+  // with a fixed-area-ratio nozzle, constant cp with the afterburner lit and full expansion). At a
+  // fixed Tt4 a lower combustion efficiency burns more fuel, whose mass slightly raises the thrust:
+  // there TSFC rises strictly instead; the discharge coefficient changes areas, not thrust (both
+  // common practice, no source). Once a loss is so large that no cycle exists, every larger one
+  // has none either.
+  void specificThrustFallsAsAnyLossGrows() {
+    enum class Expect { ThrustFalls, TsfcRises, ThrustUnchanged };
+    struct Sweep {
+      const char* name;
+      double noLoss, worst;
+      Expect expect;
+      void (*set)(Case&, double);
+    };
+    const std::vector<Sweep> sweeps = {
+        {"inlet pressure recovery", 1.0, 1e-3, Expect::ThrustFalls,
+         [](Case& c, double v) {
+           c.inlet = InletInputs{InletLossBasis::PressureRecovery, v, c.inlet.supersonicRecoveryRule};
+         }},
+        {"inlet ram efficiency", 1.0, 1e-3, Expect::ThrustFalls,
+         [](Case& c, double v) {
+           c.inlet = InletInputs{InletLossBasis::RamEfficiency, v, c.inlet.supersonicRecoveryRule};
+         }},
+        {"compressor isentropic efficiency", 1.0, 0.01, Expect::ThrustFalls,
+         [](Case& c, double v) {
+           c.compressor.efficiency = Efficiency{EfficiencyBasis::Isentropic, v};
+         }},
+        {"compressor polytropic efficiency", 1.0, 0.01, Expect::ThrustFalls,
+         [](Case& c, double v) {
+           c.compressor.efficiency = Efficiency{EfficiencyBasis::Polytropic, v};
+         }},
+        {"bleed fraction", 0.0, 0.3, Expect::ThrustFalls,
+         [](Case& c, double v) { c.compressor.bleedFraction = v; }},
+        {"burner pressure loss", 0.0, 0.3, Expect::ThrustFalls,
+         [](Case& c, double v) { c.burner.pressureLossFraction = v; }},
+        {"combustion efficiency", 1.0, 0.01, Expect::TsfcRises,
+         [](Case& c, double v) { c.burner.combustionEfficiency = v; }},
+        {"turbine isentropic efficiency", 1.0, 0.01, Expect::ThrustFalls,
+         [](Case& c, double v) {
+           c.turbine.efficiency = Efficiency{EfficiencyBasis::Isentropic, v};
+         }},
+        {"turbine polytropic efficiency", 1.0, 0.01, Expect::ThrustFalls,
+         [](Case& c, double v) {
+           c.turbine.efficiency = Efficiency{EfficiencyBasis::Polytropic, v};
+         }},
+        {"mechanical efficiency", 1.0, 0.01, Expect::ThrustFalls,
+         [](Case& c, double v) { c.turbine.mechanicalEfficiency = v; }},
+        {"power offtake", 0.0, 5e7, Expect::ThrustFalls,
+         [](Case& c, double v) { c.turbine.powerOfftake = v; }},
+        {"jet pipe pressure loss", 0.0, 0.3, Expect::ThrustFalls,
+         [](Case& c, double v) { c.jetPipe.pressureLossFraction = v; }},
+        {"afterburner pressure loss, lit", 0.0, 0.3, Expect::ThrustFalls,
+         [](Case& c, double v) { c.afterburner.pressureLossFractionLit = v; }},
+        {"afterburner pressure loss, unlit", 0.0, 0.3, Expect::ThrustFalls,
+         [](Case& c, double v) { c.afterburner.pressureLossFractionUnlit = v; }},
+        {"afterburner combustion efficiency", 1.0, 0.01, Expect::TsfcRises,
+         [](Case& c, double v) { c.afterburner.combustionEfficiency = v; }},
+        {"nozzle velocity coefficient", 1.0, 1e-3, Expect::ThrustFalls,
+         [](Case& c, double v) {
+           c.nozzle.lossBasis = NozzleLossBasis::VelocityCoefficient, c.nozzle.loss = v;
+         }},
+        {"nozzle isentropic efficiency", 1.0, 1e-3, Expect::ThrustFalls,
+         [](Case& c, double v) {
+           c.nozzle.lossBasis = NozzleLossBasis::IsentropicEfficiency, c.nozzle.loss = v;
+         }},
+        {"discharge coefficient", 1.0, 0.01, Expect::ThrustUnchanged,
+         [](Case& c, double v) { c.nozzle.dischargeCoefficient = v; }},
+    };
+    std::vector<Case> cases(3);
+    cases[0].flight.mach = 0.8;  // a ram rise for the ram efficiency to act on
+    cases[1].gasModel.model = TwoGammaGasModel{};
+    cases[1].flight.mach = 1.6;
+    cases[1].compressor.pressureRatio = 10.0;
+    cases[1].nozzle.geometry = FixedAreaRatioNozzle{1.8};
+    cases[2].gasModel.model = ConstantCpGasModel{};
+    cases[2].flight.mach = 1.2;
+    cases[2].afterburner.enabled = true;
+    cases[2].nozzle.geometry = FullyExpandingNozzle{};
+    constexpr int kSteps = 40;
+    for (std::size_t n = 0; n < cases.size(); ++n) {
+      for (const Sweep& sweep : sweeps) {
+        const bool lit = cases[n].afterburner.enabled;
+        if (QByteArray(sweep.name).startsWith("afterburner") &&
+            QByteArray(sweep.name).endsWith("unlit") == lit)
+          continue;  // the unlit loss needs an unlit afterburner, the lit ones a lit one
+        if (QByteArray(sweep.name).startsWith("afterburner combustion") && !lit) continue;
+        double previousThrust = 0.0, previousTsfc = 0.0;
+        int solved = 0;
+        bool ended = false;
+        for (int k = 0; k <= kSteps; ++k) {
+          // Steps closer together near no loss, where losses of practical size lie.
+          const double x = double(k) / kSteps, value = sweep.noLoss + (sweep.worst - sweep.noLoss) * x * x;
+          Case c = cases[n];
+          sweep.set(c, value);
+          const QString where = QString("case %1, %2 = %3").arg(n).arg(sweep.name).arg(value);
+          try {
+            const Evaluation e = evaluateCase(c, false);
+            QVERIFY2(!ended, qPrintable(where + ": a cycle again after none"));
+            const double thrust = e.actual.performance.specificThrust;
+            const double tsfc = e.actual.performance.thrustSpecificFuelConsumption;
+            if (solved > 0) {
+              switch (sweep.expect) {
+                case Expect::ThrustFalls:
+                  QVERIFY2(thrust < previousThrust,
+                           qPrintable(where + QString(": %1 after %2").arg(thrust).arg(previousThrust)));
+                  break;
+                case Expect::TsfcRises:
+                  QVERIFY2(tsfc > previousTsfc, qPrintable(where));
+                  break;
+                case Expect::ThrustUnchanged:
+                  QVERIFY2(relative(thrust, previousThrust) < 1e-12, qPrintable(where));
+                  break;
+              }
+            }
+            previousThrust = thrust;
+            previousTsfc = tsfc;
+            ++solved;
+          } catch (const cw::Error& e) {
+            // No cycle, or a state beyond the gas data (e.g. a compressor so poor that it would
+            // heat the air above the data's top): a clear error that names the component.
+            QVERIFY2(e.code() == cw::ErrorCode::NoSolution || e.code() == cw::ErrorCode::OutOfRange,
+                     qPrintable(where + ": " + e.what()));
+            QVERIFY2(solved > 0, qPrintable(where + ": " + e.what()));
+            // A state beyond the data names the component it arose in.
+            if (e.code() == cw::ErrorCode::OutOfRange)
+              QVERIFY2(std::string(e.what()).find("beyond the gas data") != std::string::npos, e.what());
+            if (!ended) qInfo("%s: %s", qPrintable(where), e.what());
+            ended = true;
+          }
+        }
+        QVERIFY2(solved >= 3, qPrintable(QString("case %1, %2").arg(n).arg(sweep.name)));
+      }
+    }
+  }
+
+  // Cold days at altitude: the standard atmosphere at 15 km, ISA - 20 K, is 196.65 K (U.S. Standard
+  // Atmosphere 1976: 216.65 K from 11 to 20 km) and a given ambient may be nearly as cold as 150 K
+  // (the case format's bound, (150, 350] K); the thermally perfect air now reaches 100 K, so both
+  // have a cycle. Below 200 K
+  // air is calorically perfect (vibration frozen), so the free stream's total temperature follows
+  // Tt0 = T0 (1 + (gamma - 1)/2 M0^2) with gamma = cp/(cp - R) at T0 (common practice, no source).
+  void coldDaysAtAltitudeHaveACycle() {
+    Case isa;
+    isa.flight.ambient = StandardAtmosphereAmbient{15000.0, false, -20.0};
+    isa.flight.mach = 0.8;
+    const Evaluation standard = evaluateCase(isa);
+    QVERIFY(std::abs(standard.actual.station("0").staticTemperature - 196.65) < 1e-9);
+    QVERIFY(standard.actual.performance.netThrust > 0.0);
+
+    Case cold;
+    cold.flight.ambient = GivenAmbient{160.0, 12000.0};
+    cold.flight.mach = 0.6;
+    const Evaluation e = evaluateCase(cold);
+    const Station& s0 = e.actual.station("0");
+    const double cp = s0.gas->cp(160.0), R = s0.gas->gasConstant(), gamma = cp / (cp - R);
+    QVERIFY(relative(s0.totalTemperature, 160.0 * (1 + 0.5 * (gamma - 1) * 0.36)) < 1e-4);
+    QCOMPARE(s0.gas->minimumTemperature(), 100.0);
+    QVERIFY(e.actual.performance.netThrust > 0.0);
+  }
+
   // A turbine that cannot drive the compressor is a NoSolution that says so.
   void turbineThatCannotDriveTheCompressor() {
     Case c;
     c.gasModel.model = TwoGammaGasModel{};
     c.compressor.pressureRatio = 40.0;
-    c.burner.setting = ExitTemperatureSetting{900.0};
+    c.burner.setting = ExitTemperatureSetting{950.0};  // just above the compressor exit (922 K)
     try {
       Turbojet(c).evaluate();
       QFAIL("expected NoSolution");
@@ -282,64 +633,48 @@ class TestTurbojet : public QObject {
                      M_PI / 4 * std::pow(r.sizing.engineFaceDiameter, 2) * (1 - hub * hub)) < 1e-12);
   }
 
-  // Random valid cases across the input ranges: finite and physical, or a clear error.
+  // Random valid cases across the input ranges, every gas model (two-gamma with hot gammas up to
+  // 5/3), Mach 0 to 4.5, pressure ratios to 60, cold and hot days: each is finite and physical, or
+  // a clear error. Physical: thrust and fuel flow positive; 0 < eta_th < 1; 0 <= eta_p <= 1 (above
+  // 0 in flight) and eta_o = eta_th eta_p (engine/turbojet.cpp, the efficiencies); every lossy
+  // component generates entropy (cycle summary and exergy view, second law); the exergy balance
+  // closes to 1e-9 of the fuel exergy; removing every loss never lowers specific thrust.
   void randomCasesAreFiniteOrAClearError() {
     std::mt19937 rng(20261201);
     auto uniform = [&](double a, double b) { return std::uniform_real_distribution<double>(a, b)(rng); };
-    int solved = 0, refused = 0;
+    int solved = 0, refused = 0, clear = 0;
     for (int i = 0; i < 10000; ++i) {
-      Case c;
-      if (i % 3 == 0)
-        c.gasModel.model = ThermallyPerfectGasModel{};
-      else if (i % 3 == 1)
-        c.gasModel.model = TwoGammaGasModel{};
-      else
-        c.gasModel.model = ConstantCpGasModel{};
-      c.flight.specificHumidity = (i % 5 == 0) ? uniform(0, 0.02) : 0.0;
-      c.flight.ambient = StandardAtmosphereAmbient{uniform(0, 20000), false, uniform(-30, 30)};
-      c.flight.mach = uniform(0, 3);
-      c.compressor.pressureRatio = uniform(1.5, 40);
-      c.compressor.efficiency =
-          Efficiency{i % 3 ? EfficiencyBasis::Isentropic : EfficiencyBasis::Polytropic, uniform(0.7, 1.0)};
-      c.compressor.bleedFraction = uniform(0, 0.1);
-      c.burner.setting = ExitTemperatureSetting{uniform(900, 2200)};
-      c.burner.pressureLossFraction = uniform(0, 0.1);
-      c.burner.combustionEfficiency = uniform(0.9, 1.0);
-      c.turbine.efficiency.value = uniform(0.7, 1.0);
-      c.turbine.powerOfftake = uniform(0, 2e5);
-      c.inlet.loss = uniform(0.85, 1.0);
-      c.nozzle.loss = uniform(0.9, 1.0);
-      if (i % 4 == 1) c.nozzle.geometry = FullyExpandingNozzle{};
-      if (i % 4 == 2) c.nozzle.geometry = FixedAreaRatioNozzle{uniform(1.0, 3.0)};
+      const Case c = randomCase(i, uniform);
+      const bool mustSolve = clearlyHasACycle(c);
+      clear += mustSolve ? 1 : 0;
       try {
         const Evaluation e = evaluateCase(c);
-        for (const CycleResult* r : {&e.actual, &e.ideal}) {
-          const auto& p = r->performance;
-          for (double v : {p.netThrust, p.specificThrust, p.thrustSpecificFuelConsumption, p.fuelFlow,
-                           p.thermalEfficiency, p.propulsiveEfficiency, p.jetVelocity})
-            QVERIFY(std::isfinite(v));
-          QVERIFY(p.netThrust > 0 && p.fuelFlow > 0);
-          QVERIFY(p.thermalEfficiency > 0 && p.thermalEfficiency < 1);
-          for (const auto& s : r->stations) {
-            QVERIFY(std::isfinite(s.totalTemperature) && s.totalTemperature > 0);
-            QVERIFY(std::isfinite(s.totalPressure) && s.totalPressure > 0);
-            QVERIFY(std::isfinite(s.entropy));
-          }
-        }
-        // Removing every loss never lowers specific thrust at the same Tt4 (second law).
-        QVERIFY(e.ideal.performance.specificThrust >= e.actual.performance.specificThrust * (1 - 1e-12));
+        checkPhysical(c, e);
         ++solved;
       } catch (const cw::Error& e) {
-        // No cycle, or an input that the gas data cannot follow (the thermally perfect data
-        // start at 200 K), reported against the case path of that input.
+        // No cycle, or an input that the gas data cannot follow, reported against the case path
+        // of that input or the component where the state left the data.
+        QVERIFY2(!mustSolve,
+                 qPrintable(QString("%1 (model %2, M %3, pi %4 eta_c %5 Tt4 %6 eta_t %7)")
+                                .arg(e.what())
+                                .arg(c.gasModel.model.index())
+                                .arg(c.flight.mach)
+                                .arg(c.compressor.pressureRatio)
+                                .arg(c.compressor.efficiency.value)
+                                .arg(std::get<ExitTemperatureSetting>(c.burner.setting).exitTemperature)
+                                .arg(c.turbine.efficiency.value)));
         const bool namesAnInput = e.code() != cw::ErrorCode::NotConverged && e.where().rfind("/", 0) == 0;
         QVERIFY2(e.code() == cw::ErrorCode::NoSolution || namesAnInput, e.what());
         QVERIFY(!std::string(e.what()).empty());
         ++refused;
       }
     }
-    QVERIFY(solved > 5000);
-    qInfo("random cases: %d solved, %d refused with a clear error", solved, refused);
+    // The cases that clearly have a cycle (clearlyHasACycle: work to spare by the closed-form
+    // estimate) all solved; with this seed they are a large share, so the check has teeth.
+    QVERIFY2(clear >= 2500, qPrintable(QString::number(clear)));
+    QVERIFY(solved >= clear);
+    qInfo("random cases: %d solved (%d of them clearly have a cycle), %d refused with a clear error", solved,
+          clear, refused);
   }
 };
 
