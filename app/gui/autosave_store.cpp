@@ -4,6 +4,7 @@
 #include "engine/case_validation_error.h"
 #include "io/atomic_file.h"
 #include "io/case_file.h"
+#include "io/json_document.h"
 
 #include <nlohmann/json.hpp>
 
@@ -54,18 +55,11 @@ QString storedOrigin(const QString& origin) {
   return QFileInfo(origin).absoluteFilePath();
 }
 
+/// The autosave's document, read like every document (core/io/json_document.h: a regular file of at
+/// most 4 MiB, bounded nesting, every JSON-library error an InvalidInput naming the file).
 json parseDocument(const QString& file) {
-  QFile in(file);
-  if (!in.open(QIODevice::ReadOnly))
-    refuse(file, "cannot read the autosave: " + in.errorString().toStdString());
-  const QByteArray bytes = in.readAll();
-  try {
-    return json::parse(bytes.constData(), bytes.constData() + bytes.size());
-  } catch (const json::parse_error& e) {
-    const std::string what = e.what();
-    refuse(file,
-           "not valid JSON: " + what.substr(what.find("] ") == std::string::npos ? 0 : what.find("] ") + 2));
-  }
+  const std::string path = file.toStdString();
+  return io::parseDocumentText(io::readDocumentFile(path, "autosave"), path);
 }
 
 void checkHeader(const QString& file, const json& document) {

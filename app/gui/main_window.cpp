@@ -73,17 +73,9 @@ engine::Case readCaseAt(const QString& path) {
   if (!file.open(QIODevice::ReadOnly))
     throw InvalidInput(path.toStdString(), "cannot read case file: " + file.errorString().toStdString());
   const QByteArray bytes = file.readAll();
-  nlohmann::json document;
-  try {
-    document = nlohmann::json::parse(bytes.constData(), bytes.constData() + bytes.size());
-  } catch (const nlohmann::json::parse_error& e) {
-    throw InvalidInput(path.toStdString(), std::string("not valid JSON: ") + e.what());
-  }
-  try {
-    return io::parseCase(document);
-  } catch (const engine::CaseValidationError& e) {
-    throw engine::CaseValidationError(path.toStdString(), e.problems());
-  }
+  // The same checks as a file from disk (nesting, NUL, trailing text, every JSON-library error).
+  return io::parseCaseText(std::string_view(bytes.constData(), static_cast<std::size_t>(bytes.size())),
+                           path.toStdString());
 }
 
 /// Why a case cannot be opened: the core reader's message, naming the file first.

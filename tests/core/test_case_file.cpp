@@ -4,6 +4,7 @@
 #include "engine/case_inputs.h"
 #include "engine/case_validation.h"
 #include "engine/case_validation_error.h"
+#include "io/atomic_file.h"
 #include "io/case_file.h"
 #include "io/case_keys.h"
 
@@ -11,6 +12,7 @@
 
 #include <sys/resource.h>
 #include <sys/stat.h>
+#include <sys/wait.h>
 #include <unistd.h>
 
 #include <algorithm>
@@ -586,6 +588,30 @@ class TestCaseFile : public QObject {
     // A choice's text is set as given; the reader names a bad one.
     applySetOverride(document, "nozzle.kind=conical");
     QVERIFY(hasProblemAt(problemsOf(document), "/nozzle/kind", "\"conical\" is not one of"));
+  }
+
+  // The temporaries of interrupted saves (".NAME.tmp-PID-N") of processes that have ended are
+  // removed; a live writer's (this process's), other names and look-alikes are kept.
+  void staleTemporariesOfEndedWritersAreRemoved() {
+    const TemporaryFolder folder;
+    const pid_t child = ::fork();
+    if (child == 0) ::_exit(0);
+    QVERIFY(child > 0);
+    int status = 0;
+    QCOMPARE(::waitpid(child, &status, 0), child);  // reaped: its pid names no process now
+    const std::string dead = std::to_string(child), live = std::to_string(::getpid());
+    const std::vector<std::string> names = {".case.json.tmp-" + dead + "-0",  ".case.json.tmp-" + live + "-3",
+                                            ".other.json.tmp-" + dead + "-1", "case.json",
+                                            ".case.json.tmp-" + dead + "-x",  "case.json.tmp-" + dead + "-0"};
+    for (const std::string& name : names) std::ofstream(folder.path / name) << "{}";
+    QCOMPARE(cw::io::removeStaleTemporaries(folder.path.string(), "case.json"), std::size_t(1));
+    std::vector<std::string> expected = {".case.json.tmp-" + dead + "-x", ".case.json.tmp-" + live + "-3",
+                                         ".other.json.tmp-" + dead + "-1", "case.json",
+                                         "case.json.tmp-" + dead + "-0"};
+    std::sort(expected.begin(), expected.end());
+    QCOMPARE(folder.entries(), expected);
+    QCOMPARE(cw::io::removeStaleTemporaries(folder.path.string()),
+             std::size_t(1));  // any name: .other.json's
   }
 
   void atomicWriteLeavesNoTemporaryFile() {
