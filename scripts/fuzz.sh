@@ -5,7 +5,8 @@
 # (clang, AddressSanitizer + UBSan) into build-fuzz/, seeds build-fuzz/corpus from resources/ and
 # tests/fuzz/seeds/, writes a dictionary of the case format's keys and choices, and runs. A crash,
 # leak or sanitizer report stops the run with a non-zero status and leaves the input that caused
-# it as build-fuzz/crash-* (rerun it: build-fuzz/bin/fuzz_case_reader build-fuzz/crash-...).
+# it as build-fuzz/crash-* (rerun it: build-fuzz/bin/fuzz_case_reader build-fuzz/crash-...); with
+# -jobs=N each job's log is build-fuzz/fuzz-<job>.log.
 set -euo pipefail
 cd "$(dirname "${BASH_SOURCE[0]}")/.."
 
@@ -44,5 +45,7 @@ PY
 # -rss_limit_mb bounds memory; -max_len keeps inputs near the size of case files.
 export ASAN_OPTIONS=${ASAN_OPTIONS:-detect_leaks=1}
 export UBSAN_OPTIONS=${UBSAN_OPTIONS:-print_stacktrace=1:halt_on_error=1}
-build-fuzz/bin/fuzz_case_reader -max_total_time="$seconds" -max_len=16384 -rss_limit_mb=2048 \
-  -dict=build-fuzz/case.dict -artifact_prefix=build-fuzz/ -print_final_stats=1 "$@" "$corpus"
+# From build-fuzz/, so that the logs of -jobs (fuzz-N.log) land there too.
+cd build-fuzz
+bin/fuzz_case_reader -max_total_time="$seconds" -max_len=16384 -rss_limit_mb=2048 \
+  -dict=case.dict -artifact_prefix=./ -print_final_stats=1 "$@" corpus
