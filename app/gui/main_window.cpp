@@ -145,7 +145,12 @@ MainWindow::MainWindow(QWidget* parent) : QMainWindow(parent) {
   statusBar()->showMessage(tr("Ready"));
 }
 
-MainWindow::~MainWindow() = default;
+MainWindow::~MainWindow() {
+  // QWidget's destructor hides the docks after this destructor has run, which toggles their view
+  // actions: their connections to this window must be gone by then (UBSan found the call).
+  auditDock_->toggleViewAction()->disconnect(this);
+  tradeStudyDock_->toggleViewAction()->disconnect(this);
+}
 
 // ---------------------------------------------------------------------------------------------
 // Actions, menus, toolbar
