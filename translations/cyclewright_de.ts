@@ -527,6 +527,13 @@ Gültiger Bereich: %2</translation>
     </message>
 </context>
 <context>
+    <name>Caution</name>
+    <message>
+        <source>Results are conceptual-design estimates. For anything that affects flight safety, defer to the engine manufacturer&apos;s data, your organisation&apos;s procedures and licensed engineering practice.</source>
+        <translation>Die Ergebnisse sind Schätzungen für den Konzeptentwurf. Für alles, was die Flugsicherheit berührt, gelten die Daten des Triebwerksherstellers, die Verfahren Ihrer Organisation und die zugelassene Ingenieurpraxis.</translation>
+    </message>
+</context>
+<context>
     <name>CycleChart</name>
     <message>
         <source>Stale: showing the last valid result</source>
@@ -1060,10 +1067,6 @@ p = %7   v = %8</translation>
     <message>
         <source>Opened %1</source>
         <translation>%1 geöffnet</translation>
-    </message>
-    <message>
-        <source>Results are conceptual-design estimates. For anything that affects flight safety, defer to the engine manufacturer&apos;s data, your organisation&apos;s procedures and licensed engineering practice.</source>
-        <translation>Die Ergebnisse sind Schätzungen für den Konzeptentwurf. Für alles, was die Flugsicherheit berührt, gelten die Daten des Triebwerksherstellers, die Verfahren Ihrer Organisation und die zugelassene Ingenieurpraxis.</translation>
     </message>
     <message>
         <source>About Cyclewright</source>

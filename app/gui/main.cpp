@@ -1,12 +1,12 @@
 // cyclewright: the desktop application.
-#include "application.h"
-#include "case_document.h"
-#include "guarded_application.h"
-#include "guarded_main.h"
+#include "document/case_document.h"
 #include "main_window.h"
-#include "start_options.h"
-#include "start_study.h"
-#include "study_panel.h"
+#include "startup/application.h"
+#include "startup/guarded_application.h"
+#include "startup/guarded_main.h"
+#include "startup/start_options.h"
+#include "startup/start_study.h"
+#include "trade_study/study_panel.h"
 
 #include "common/error.h"
 

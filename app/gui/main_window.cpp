@@ -1,28 +1,30 @@
 #include "main_window.h"
 
-#include "colours.h"
+#include "document/caution.h"
 
-#include "audit_panel.h"
-#include "autosave_store.h"
-#include "autosave_timer.h"
-#include "case_document.h"
-#include "case_form.h"
-#include "charts/audit_chart.h"
+#include "charts/colours.h"
+
+#include "audit/audit_chart.h"
+#include "audit/audit_panel.h"
 #include "charts/chart_export.h"
 #include "charts/cycle_chart.h"
 #include "charts/path_series.h"
 #include "common/error.h"
 #include "common/version.h"
-#include "dialogs.h"
+#include "dialogs/dialogs.h"
+#include "document/autosave_store.h"
+#include "document/autosave_timer.h"
+#include "document/case_document.h"
+#include "document/selection_router.h"
+#include "document/units.h"
 #include "engine/case_validation_error.h"
+#include "forms/case_form.h"
 #include "io/atomic_file.h"
 #include "io/case_file.h"
 #include "io/result_export.h"
-#include "performance_model.h"
-#include "selection_router.h"
-#include "station_table_model.h"
-#include "study_panel.h"
-#include "units.h"
+#include "tables/performance_model.h"
+#include "tables/station_table_model.h"
+#include "trade_study/study_panel.h"
 
 #include <QAction>
 #include <QActionGroup>
@@ -995,13 +997,6 @@ void MainWindow::showPreferences() {
   setChartLayout(dialog.chartLayout());
   settings_.setAutosaveWithinSeconds(dialog.autosaveWithinSeconds());
   autosaveTimer_->setLimit(settings_.autosaveWithinSeconds() * 1000);
-}
-
-QString MainWindow::cautionText() {
-  return tr(
-      "Results are conceptual-design estimates. For anything that affects flight safety, "
-      "defer to the engine manufacturer's data, your organisation's procedures and "
-      "licensed engineering practice.");
 }
 
 void MainWindow::showAbout() {

@@ -3,8 +3,8 @@
 // temperature-entropy and pressure-volume charts, the station table and the performance
 // summary; menus and toolbar (the window owns every action); files, autosave and recovery.
 
-#include "case_fields.h"
-#include "settings.h"
+#include "document/case_fields.h"
+#include "document/settings.h"
 
 #include <QMainWindow>
 #include <QSet>
@@ -63,9 +63,6 @@ class MainWindow : public QMainWindow {
 
   /// The file name of the open case, empty when none.
   QString casePath() const;
-
-  /// The caution text shown in the About box and carried by every export (translated).
-  static QString cautionText();
 
   CaseDocument& document() const { return *document_; }
   DisplayUnits& units() const { return *units_; }

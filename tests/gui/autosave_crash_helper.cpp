@@ -7,8 +7,8 @@
 // complete-first: the first autosave completes (title "First edit", pressure ratio 9.5), the
 // second pauses; pause-first: the first autosave already pauses. Run it in the suite's home
 // (cw::test::IsolatedHome) so that it autosaves into the suite's folder.
-#include "autosave_store.h"
-#include "case_document.h"
+#include "document/autosave_store.h"
+#include "document/case_document.h"
 #include "main_window.h"
 
 #include <QApplication>

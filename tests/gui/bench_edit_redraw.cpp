@@ -1,7 +1,7 @@
 // One edit-to-redraw cycle: a compressor-efficiency edit as the user types it, one evaluation,
 // both charts replotted and the station table and summary repainted. Goal: under 16 ms.
-#include "case_document.h"
 #include "charts/cycle_chart.h"
+#include "document/case_document.h"
 #include "main_window.h"
 
 #include <qwt_plot_canvas.h>

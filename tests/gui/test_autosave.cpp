@@ -7,13 +7,13 @@
 //
 // The suite runs in a home of its own (IsolatedHome applied to this process), shared with the
 // child it kills, so both use one autosave folder.
-#include "autosave_store.h"
-#include "autosave_timer.h"
-#include "case_document.h"
-#include "dialogs.h"
+#include "dialogs/dialogs.h"
+#include "document/autosave_store.h"
+#include "document/autosave_timer.h"
+#include "document/case_document.h"
+#include "document/settings.h"
 #include "gui_test_support.h"
 #include "main_window.h"
-#include "settings.h"
 
 #include "io/atomic_file.h"
 #include "io/case_file.h"

@@ -1,14 +1,14 @@
 // Under a dark system palette everything on the charts, the table and the banner reads: the
 // canvas is the palette's base, labels and markers are light, the Okabe-Ito lines keep their
 // colours. A suite of its own because it changes the application's palette.
-#include "application.h"
-#include "case_document.h"
 #include "charts/cycle_chart.h"
 #include "charts/isobar_labels.h"
+#include "document/case_document.h"
+#include "document/selection_router.h"
 #include "gui_test_support.h"
 #include "main_window.h"
-#include "selection_router.h"
-#include "station_table_model.h"
+#include "startup/application.h"
+#include "tables/station_table_model.h"
 
 #include <qwt_plot_curve.h>
 #include <qwt_plot_grid.h>

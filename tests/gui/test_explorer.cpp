@@ -2,16 +2,16 @@
 // and the summary with the numbers of cw::engine::evaluateCase on the same case; an invalid
 // value marks its field and keeps the last result, marked stale; undo restores the case and the
 // form; save and reopen give the same case; each export writes a file that reads back.
-#include "case_document.h"
 #include "charts/chart_export.h"
 #include "charts/cycle_chart.h"
 #include "charts/isobar_labels.h"
+#include "document/case_document.h"
+#include "document/selection_router.h"
+#include "document/units.h"
 #include "gui_test_support.h"
 #include "main_window.h"
-#include "performance_model.h"
-#include "selection_router.h"
-#include "station_table_model.h"
-#include "units.h"
+#include "tables/performance_model.h"
+#include "tables/station_table_model.h"
 
 #include "engine/evaluate.h"
 #include "io/case_file.h"

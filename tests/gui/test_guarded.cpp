@@ -2,9 +2,9 @@
 // a slot, shows it in the main window's status bar and a warning dialog and keeps running;
 // runGuarded() turns one escaping main()'s work into one line on stderr and an exit status.
 // The suite runs on a GuardedApplication of its own (see main() below).
-#include "guarded_application.h"
-#include "guarded_main.h"
 #include "gui_test_support.h"
+#include "startup/guarded_application.h"
+#include "startup/guarded_main.h"
 
 #include "common/error.h"
 

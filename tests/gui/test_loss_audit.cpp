@@ -4,16 +4,16 @@
 // strip, and the chart and table exports write a PNG, an SVG and a CSV that read back. The
 // waterfall follows an order set through the panel or its dialog; the audit starts as a tab
 // beside the tables and View › Loss Audit moves it into its dock and back.
-#include "audit_panel.h"
-#include "audit_table_model.h"
-#include "case_document.h"
-#include "charts/audit_chart.h"
+#include "audit/audit_chart.h"
+#include "audit/audit_panel.h"
+#include "audit/audit_table_model.h"
 #include "charts/chart_export.h"
 #include "charts/cycle_chart.h"
-#include "dialogs.h"
+#include "dialogs/dialogs.h"
+#include "document/case_document.h"
+#include "document/selection_router.h"
 #include "gui_test_support.h"
 #include "main_window.h"
-#include "selection_router.h"
 
 #include "analysis/loss_audit.h"
 #include "common/version.h"

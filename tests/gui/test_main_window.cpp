@@ -1,10 +1,11 @@
 // The main window opens offscreen with its menus, the demo case and an About box
 // carrying the caution; --screenshot writes a PNG of the requested size; a case that cannot be
 // opened says why in a dialog and leaves the open case.
-#include "application.h"
-#include "case_document.h"
+#include "document/case_document.h"
+#include "document/caution.h"
 #include "gui_test_support.h"
 #include "main_window.h"
+#include "startup/application.h"
 
 #include <QApplication>
 #include <QFile>
@@ -140,7 +141,7 @@ class TestMainWindow : public QObject {
     {
       cw::gui::MainWindow window;
       QCOMPARE(window.menuBar()->findChild<QMenu*>("fileMenu")->title(), QString("&Datei"));
-      QVERIFY(cw::gui::MainWindow::cautionText().contains("Konzeptentwurf"));
+      QVERIFY(cw::gui::cautionText().contains("Konzeptentwurf"));
     }
     for (auto* translator : app->findChildren<QTranslator*>()) QCoreApplication::removeTranslator(translator);
     cw::gui::MainWindow english;

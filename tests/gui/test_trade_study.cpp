@@ -9,19 +9,19 @@
 // axes, curves and fields; an edit of the case marks the study stale until Run; the panel starts
 // as a tab and moves into its dock; its choices are remembered; --study-vary with --screenshot-of
 // renders it; it reads on the dark palette.
-#include "application.h"
-#include "case_document.h"
 #include "charts/chart_export.h"
 #include "charts/line_end_labels.h"
-#include "charts/study_chart.h"
+#include "document/case_document.h"
+#include "document/selection_router.h"
+#include "document/units.h"
 #include "gui_test_support.h"
 #include "main_window.h"
-#include "selection_router.h"
-#include "study_axis_editor.h"
-#include "study_change_editor.h"
-#include "study_panel.h"
-#include "study_table_model.h"
-#include "units.h"
+#include "startup/application.h"
+#include "trade_study/study_axis_editor.h"
+#include "trade_study/study_change_editor.h"
+#include "trade_study/study_chart.h"
+#include "trade_study/study_panel.h"
+#include "trade_study/study_table_model.h"
 
 #include "common/version.h"
 #include "io/case_file.h"

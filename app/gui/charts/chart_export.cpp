@@ -1,6 +1,6 @@
 #include "charts/chart_export.h"
 
-#include "main_window.h"
+#include "document/caution.h"
 
 #include <qwt_plot.h>
 #include <qwt_plot_renderer.h>
@@ -12,7 +12,7 @@
 namespace cw::gui {
 
 CautionFooter::CautionFooter(QwtPlot* plot) : plot_(plot) {
-  QwtText footer(MainWindow::cautionText());
+  QwtText footer(cautionText());
   QFont font = plot_->font();
   font.setPointSizeF(font.pointSizeF() * 0.75);
   font.setItalic(true);

@@ -1,7 +1,7 @@
 #include "charts/cycle_chart.h"
+#include "charts/colours.h"
 #include "charts/readout_picker.h"
 #include "charts/stale_banner.h"
-#include "colours.h"
 
 #include "charts/isobar_labels.h"
 #include "charts/log_scale_engine.h"

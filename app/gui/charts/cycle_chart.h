@@ -14,7 +14,7 @@
 // (light or dark, and again when it changes); only the Okabe-Ito line colours are fixed.
 
 #include "charts/path_series.h"
-#include "units.h"
+#include "document/units.h"
 
 #include <qwt_plot.h>
 

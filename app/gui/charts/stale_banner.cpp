@@ -1,6 +1,6 @@
 #include "charts/stale_banner.h"
 
-#include "colours.h"
+#include "charts/colours.h"
 
 #include <QCoreApplication>
 #include <QFont>

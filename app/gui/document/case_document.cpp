@@ -1,0 +1,159 @@
+#include "document/case_document.h"
+
+#include "common/error.h"
+#include "engine/case_validation_error.h"
+#include "engine/evaluate.h"
+
+#include <QCoreApplication>
+#include <QUndoStack>
+
+#include <cmath>
+
+namespace cw::gui {
+
+namespace {
+
+bool finite(const engine::CycleResult& r) {
+  const auto& p = r.performance;
+  for (double x : {p.netThrust, p.specificThrust, p.thrustSpecificFuelConsumption, p.fuelFlow, p.fuelAirRatio,
+                   p.thermalEfficiency, p.propulsiveEfficiency, p.overallEfficiency})
+    if (!std::isfinite(x)) return false;
+  for (const auto& s : r.stations)
+    for (double x : {s.totalTemperature, s.totalPressure, s.staticTemperature, s.staticPressure, s.mach,
+                     s.velocity, s.massFlow, s.entropy})
+      if (!std::isfinite(x)) return false;
+  for (const auto& path : r.paths)
+    for (const auto& st : path.states)
+      for (double x : {st.temperature, st.entropy, st.pressure, st.specificVolume})
+        if (!std::isfinite(x)) return false;
+  return true;
+}
+
+QString translatedFailure(const Error& e) {
+  const QString detail = QString::fromStdString(e.what());
+  switch (e.code()) {
+    case ErrorCode::NoSolution:
+      return QCoreApplication::translate("cw::gui::CaseDocument", "No solution for these inputs: %1")
+          .arg(detail);
+    case ErrorCode::NotConverged:
+      return QCoreApplication::translate("cw::gui::CaseDocument", "The solver did not converge: %1")
+          .arg(detail);
+    case ErrorCode::OutOfRange:
+      return QCoreApplication::translate("cw::gui::CaseDocument", "A property is outside its data range: %1")
+          .arg(detail);
+    case ErrorCode::InvalidInput:
+      break;
+  }
+  return QCoreApplication::translate("cw::gui::CaseDocument", "Invalid input: %1").arg(detail);
+}
+
+}  // namespace
+
+CaseDocument::CaseDocument(QObject* parent) : QObject(parent), undoStack_(new QUndoStack(this)) {
+  connect(undoStack_, &QUndoStack::cleanChanged, this, [this] { emit modifiedChanged(isModified()); });
+  evaluate();
+}
+
+bool CaseDocument::isStale() const {
+  return !evaluation_ || !problems_.empty() || !failure_.isEmpty() || !entryProblems_.isEmpty();
+}
+
+const engine::CaseProblem* CaseDocument::problemAt(const std::string& path) const {
+  for (const auto& p : problems_)
+    if (p.path == path) return &p;
+  return nullptr;
+}
+
+void CaseDocument::applyEdit(int fieldId, const QString& description, const engine::Case& edited) {
+  if (edited == case_) return;
+  if (undoDisabled_ > 0) {
+    const bool wasModified = isModified();
+    modifiedWithoutUndo_ = true;
+    setCase(edited);
+    if (!wasModified) emit modifiedChanged(true);
+    return;
+  }
+  undoStack_->push(new SetCaseCommand(*this, fieldId, description, case_, edited));
+}
+
+void CaseDocument::setCase(const engine::Case& inputs) {
+  case_ = inputs;
+  emit caseChanged();
+  evaluate();
+}
+
+void CaseDocument::load(const engine::Case& inputs, const QString& filePath, bool modified) {
+  ScopedUndoDisabler guard(*this);
+  undoStack_->clear();
+  entryProblems_.clear();
+  filePath_ = filePath;
+  modifiedWithoutUndo_ = modified;
+  undoStack_->setClean();
+  setCase(inputs);
+  emit modifiedChanged(isModified());
+}
+
+void CaseDocument::setEntryProblem(int fieldId, const QString& message) {
+  if (entryProblems_.value(fieldId) == message && entryProblems_.contains(fieldId)) return;
+  entryProblems_.insert(fieldId, message);
+  emit resultChanged();
+}
+
+void CaseDocument::clearEntryProblem(int fieldId) {
+  if (entryProblems_.remove(fieldId) > 0) emit resultChanged();
+}
+
+bool CaseDocument::isModified() const {
+  return modifiedWithoutUndo_ || !undoStack_->isClean();
+}
+
+void CaseDocument::markSaved(const QString& path) {
+  filePath_ = path;
+  modifiedWithoutUndo_ = false;
+  undoStack_->setClean();
+  emit modifiedChanged(false);
+}
+
+void CaseDocument::evaluate() {
+  problems_.clear();
+  failure_.clear();
+  try {
+    auto result = std::make_shared<engine::Evaluation>(engine::evaluateCase(case_));
+    if (finite(result->actual) && finite(result->ideal))
+      evaluation_ = std::move(result);
+    else
+      failure_ =
+          tr("The evaluation gave a value that is not a finite number; the inputs are probably extreme.");
+  } catch (const engine::CaseValidationError& e) {
+    problems_ = e.problems();
+  } catch (const Error& e) {
+    failure_ = translatedFailure(e);
+  } catch (const std::exception& e) {
+    failure_ = tr("Evaluation failed: %1").arg(QString::fromStdString(e.what()));
+  }
+  emit resultChanged();
+}
+
+SetCaseCommand::SetCaseCommand(CaseDocument& document, int fieldId, const QString& text, engine::Case before,
+                               engine::Case after)
+    : QUndoCommand(text),
+      document_(document),
+      fieldId_(fieldId),
+      before_(std::move(before)),
+      after_(std::move(after)) {}
+
+void SetCaseCommand::redo() {
+  document_.setCase(after_);
+}
+void SetCaseCommand::undo() {
+  document_.setCase(before_);
+}
+
+bool SetCaseCommand::mergeWith(const QUndoCommand* other) {
+  if (other->id() != id() || id() < 0) return false;
+  after_ = static_cast<const SetCaseCommand*>(other)->after_;
+  setObsolete(after_ == before_);
+  return true;
+}
+
+}  // namespace cw::gui

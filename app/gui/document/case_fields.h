@@ -1,0 +1,75 @@
+#pragma once
+// Every input of a case as a field the forms can show: where it lives in the case, its
+// case-file path (to match the core's problems), its quantity, label, tooltip and valid range.
+// The forms are built from this table; nothing here computes physics.
+
+#include "document/units.h"
+#include "engine/case_inputs.h"
+
+#include <functional>
+#include <string>
+#include <vector>
+
+namespace cw::gui {
+
+/// The selectable items of the component strip: the case's own description (title, notes),
+/// then the operating inputs, then the components in flow order.
+enum class Section {
+  Case,
+  Flight,
+  Design,
+  Fuel,
+  GasModel,
+  Inlet,
+  Compressor,
+  Burner,
+  Turbine,
+  JetPipe,
+  Afterburner,
+  Nozzle,
+};
+inline constexpr int kSectionCount = 12;
+
+/// The component name the core uses for a section's process path ("inlet", ...); empty for
+/// sections that are no component (case, flight, design, fuel, gas model).
+std::string sectionComponent(Section section);
+/// The section's translated display name.
+QString sectionName(Section section);
+/// A stable object name, e.g. "compressor".
+QString sectionKey(Section section);
+
+/// Text: one line of free text; Notes: several lines.
+enum class FieldKind { Number, Choice, Flag, Text, Notes };
+
+struct FieldSpec {
+  int id = 0;  ///< unique; the undo merge id
+  Section section = Section::Flight;
+  FieldKind kind = FieldKind::Number;
+  const char* key = "";      ///< object name of the widget, e.g. "compressor.efficiency"
+  const char* label = "";    ///< untranslated (context "CaseFields")
+  const char* toolTip = "";  ///< untranslated (context "CaseFields")
+  Quantity quantity = Quantity::Dimensionless;
+  /// Valid range [SI] as the core checks it (docs/case-format.md), shown in the tooltip.
+  double low = 0.0, high = 0.0;
+  bool lowOpen = false, highOpen = false;
+  std::vector<const char*> choices;                      ///< untranslated choice names (Choice fields)
+  std::function<std::string(const engine::Case&)> path;  ///< the case-file path the core reports
+  std::function<bool(const engine::Case&)> visible;      ///< shown for the case's current choices
+  std::function<double(const engine::Case&)> get;        ///< SI value, choice index or 0/1
+  std::function<void(engine::Case&, double)> set;
+  std::function<std::string(const engine::Case&)> getText;  ///< Text and Notes fields (UTF-8)
+  std::function<void(engine::Case&, const std::string&)> setText;
+};
+
+/// The whole table, in form order.
+const std::vector<FieldSpec>& caseFields();
+/// The field with the given id, or nullptr.
+const FieldSpec* caseField(int id);
+/// The field whose key is given, or nullptr.
+const FieldSpec* caseField(const QString& key);
+
+/// Translated label and tooltip of a field.
+QString fieldLabel(const FieldSpec& spec);
+QString fieldToolTip(const FieldSpec& spec, const DisplayUnits& units);
+
+}  // namespace cw::gui

@@ -1,0 +1,593 @@
+#include "trade_study/study_chart.h"
+
+#include "charts/colours.h"
+#include "charts/line_end_labels.h"
+#include "charts/readout_picker.h"
+#include "charts/stale_banner.h"
+#include "trade_study/study_names.h"
+
+#include <qwt_legend.h>
+#include <qwt_picker_machine.h>
+#include <qwt_plot_canvas.h>
+#include <qwt_plot_curve.h>
+#include <qwt_plot_grid.h>
+#include <qwt_plot_legenditem.h>
+#include <qwt_plot_marker.h>
+#include <qwt_plot_picker.h>
+#include <qwt_plot_textlabel.h>
+#include <qwt_scale_map.h>
+#include <qwt_symbol.h>
+#include <qwt_text.h>
+
+#include <QEvent>
+#include <QLocale>
+
+#include <algorithm>
+#include <cmath>
+#include <limits>
+#include <optional>
+
+namespace cw::gui {
+
+namespace {
+
+using study::StudyPoint;
+using study::TradeStudy;
+
+const char* const kSpecificThrust = "specific_thrust_N_s_per_kg";
+const char* const kTsfc = "tsfc_g_per_kN_s";
+
+QColor between(const QPalette& palette, double t) {
+  return mixColours(palette.color(QPalette::Base), palette.color(QPalette::Text), t);
+}
+
+bool darkCanvas(const QPalette& palette) {
+  return palette.color(QPalette::Base).lightness() <= 128;
+}
+
+/// A value for a line's label: up to five significant digits, no trailing zeros, the locale's
+/// decimal point, never NaN (the study's inputs are finite).
+QString compactNumber(double shown) {
+  QLocale locale;
+  locale.setNumberOptions(QLocale::OmitGroupSeparator);
+  if (!std::isfinite(shown)) return locale.toString(0);
+  if (std::fabs(shown) < 1e-12) shown = 0.0;  // no "-0" or "1e-17" at a computed zero
+  return locale.toString(shown, 'g', 5);
+}
+
+/// The order in which labels are placed: both ends first, then the middles of the gaps between
+/// those placed, so that on a crowded chart the labels left are spread over the lines.
+std::vector<int> spreadOrder(int n) {
+  std::vector<int> order;
+  if (n <= 0) return order;
+  order.push_back(n - 1);
+  if (n > 1) order.push_back(0);
+  std::vector<std::pair<int, int>> gaps{{0, n - 1}};
+  while (!gaps.empty()) {
+    std::vector<std::pair<int, int>> next;
+    for (const auto& [a, b] : gaps) {
+      if (b - a < 2) continue;
+      const int m = (a + b) / 2;
+      order.push_back(m);
+      next.emplace_back(a, m);
+      next.emplace_back(m, b);
+    }
+    gaps = std::move(next);
+  }
+  return order;
+}
+
+QPen linePen(StudyChart::Family family, bool overlay, StudyOverlay kind, StudyPlot plot) {
+  if (overlay) {
+    const QColor colour = kind == StudyOverlay::IdealTwin ? kOkabeItoOrange : kOkabeItoReddishPurple;
+    const bool second = family == StudyChart::Family::ConstantSecond && plot == StudyPlot::Carpet;
+    return QPen(colour, second ? 1.3 : 1.8, second ? Qt::DashDotLine : Qt::DashLine);
+  }
+  if (family == StudyChart::Family::ConstantSecond && plot == StudyPlot::Carpet)
+    return QPen(kOkabeItoGreen, 2.0, Qt::DotLine);
+  return QPen(kOkabeItoBlue, 2.0, Qt::SolidLine);
+}
+
+}  // namespace
+
+StudyChart::StudyChart(DisplayUnits& units, QWidget* parent)
+    : QwtPlot(parent), units_(units), columns_(study::studyColumns(true)) {
+  setObjectName("studyChart");
+  setAutoReplot(false);
+  setMinimumSize(240, 180);
+  if (auto* c = qobject_cast<QwtPlotCanvas*>(canvas())) c->setFrameStyle(QFrame::Box | QFrame::Plain);
+
+  grid_ = new QwtPlotGrid;
+  grid_->attach(this);
+
+  insertOuterLegend();
+  legendItem_ = new QwtPlotLegendItem;
+  legendItem_->setMaxColumns(2);
+  legendItem_->setAlignmentInCanvas(Qt::AlignTop | Qt::AlignHCenter);
+  legendItem_->setBorderRadius(3);
+  legendItem_->setMargin(2);
+  legendItem_->setSpacing(1);
+  legendItem_->setItemMargin(0);
+  QFont inside = font();
+  inside.setPointSizeF(inside.pointSizeF() * 0.8);
+  legendItem_->setFont(inside);
+  legendItem_->setZ(90);
+
+  design_ = new QwtPlotMarker;
+  design_->setZ(50);
+  design_->setItemAttribute(QwtPlotItem::AutoScale, false);
+  design_->setItemAttribute(QwtPlotItem::Legend, true);
+  design_->setLegendIconSize(QSize(14, 14));
+  design_->setLabelAlignment(Qt::AlignRight | Qt::AlignTop);
+  design_->setSpacing(3);
+
+  labels_ = new LineEndLabels;
+  labels_->setLegend(legendItem_);
+  labels_->attach(this);
+
+  staleLabel_ = new QwtPlotTextLabel;
+  staleLabel_->setZ(100);
+  staleLabel_->attach(this);
+  hintLabel_ = new QwtPlotTextLabel;
+  hintLabel_->setZ(99);
+  hintLabel_->attach(this);
+
+  picker_ = new ReadoutPicker(this, [this](const QPoint& p) { return readoutAt(p); });
+
+  applyPalette();
+  retranslateUi();
+  connect(&units_, &DisplayUnits::changed, this, [this] {
+    retranslateUi();
+    rebuild();
+  });
+  rebuild();
+}
+
+StudyChart::~StudyChart() {
+  clearLines();
+  design_->detach();
+  delete design_;
+  if (!compact_) delete legendItem_;  // attached (and so deleted by the plot) only when compact
+}
+
+void StudyChart::insertOuterLegend() {
+  auto* legend = new QwtLegend;
+  legend->setObjectName("studyLegend");
+  legend->setMaxColumns(2);
+  QFont legendFont = font();
+  legendFont.setPointSizeF(legendFont.pointSizeF() * 0.85);
+  legend->setFont(legendFont);
+  insertLegend(legend, QwtPlot::BottomLegend);
+}
+
+void StudyChart::setCompact(bool compact) {
+  if (compact == compact_) return;
+  compact_ = compact;
+  if (compact_) {
+    insertLegend(nullptr);
+    legendItem_->attach(this);
+  } else {
+    legendItem_->detach();
+    insertOuterLegend();
+  }
+  retranslateUi();
+  rebuild();
+}
+
+void StudyChart::applyPalette() {
+  const QPalette& p = palette();
+  setCanvasBackground(p.color(QPalette::Base));
+  grid_->setMajorPen(between(p, 0.3), 0.0, Qt::DotLine);
+  const QColor ink = p.color(QPalette::Text);
+  QColor legendBackground = p.color(QPalette::Base);
+  legendBackground.setAlpha(215);
+  legendItem_->setBackgroundBrush(legendBackground);
+  legendItem_->setBorderPen(QPen(between(p, 0.4), 1.0));
+  legendItem_->setTextPen(QPen(ink));
+  design_->setSymbol(new QwtSymbol(QwtSymbol::Star2, QBrush(kOkabeItoYellow), QPen(ink, 1.2), QSize(15, 15)));
+}
+
+void StudyChart::changeEvent(QEvent* event) {
+  QwtPlot::changeEvent(event);
+  if (event->type() != QEvent::PaletteChange || applyingPalette_ || !grid_) return;
+  applyingPalette_ = true;
+  applyPalette();
+  retranslateUi();
+  rebuild();
+  applyingPalette_ = false;
+}
+
+const study::StudyColumn* StudyChart::columnNamed(const std::string& name) const {
+  for (const auto& c : columns_)
+    if (c.name == name) return &c;
+  return nullptr;
+}
+
+Quantity StudyChart::xQuantity() const {
+  return plot_ == StudyPlot::Carpet ? Quantity::Tsfc : axes_[0].quantity;
+}
+
+Quantity StudyChart::yQuantity() const {
+  if (plot_ == StudyPlot::Carpet) return Quantity::SpecificThrust;
+  const auto* c = columnNamed(column_);
+  return c ? displayQuantity(c->quantity) : Quantity::Dimensionless;
+}
+
+QString StudyChart::legendName(int axis) const {
+  // Compact: the short names, unless they would not tell the two inputs apart.
+  const auto& a = axes_[static_cast<std::size_t>(axis)];
+  const bool distinct = axes_[0].shortName != axes_[1].shortName;
+  return compact_ && distinct && !a.shortName.isEmpty() ? a.shortName : a.name;
+}
+
+QString StudyChart::overlayTitle() const {
+  if (overlay_ == StudyOverlay::IdealTwin) return tr("Ideal twin, no losses (dashed)");
+  return tr("With %1 (dashed)").arg(changedDescription_);
+}
+
+void StudyChart::retranslateUi() {
+  const auto* c = columnNamed(column_);
+  const QString title = plot_ == StudyPlot::Carpet
+                            ? tr("Carpet: specific thrust against TSFC")
+                            : tr("%1 against %2").arg(c ? studyColumnLabel(*c) : QString(), axes_[0].name);
+  setTitle(compact_ ? QString() : title);  // compact: the panel's plot choice names it
+  setAxisTitle(QwtAxis::XBottom, plot_ == StudyPlot::Carpet
+                                     ? units_.withUnit(tr("TSFC"), Quantity::Tsfc)
+                                     : units_.withUnit(axes_[0].name, axes_[0].quantity));
+  setAxisTitle(QwtAxis::YLeft, plot_ == StudyPlot::Carpet
+                                   ? units_.withUnit(tr("Specific thrust F_s"), Quantity::SpecificThrust)
+                                   : units_.withUnit(c ? studyColumnLabel(*c) : QString(), yQuantity()));
+  QwtText stale = staleBannerText(palette());
+  stale.setText(tr("Stale: the case has changed since this study ran; press Run to redo it"));
+  staleLabel_->setText(stale);
+  staleLabel_->setVisible(stale_ && study_);
+  QwtText designLabel(tr("Design point"));
+  QFont bold = font();
+  bold.setBold(true);
+  designLabel.setFont(bold);
+  designLabel.setColor(palette().color(QPalette::Text));
+  QColor background = palette().color(QPalette::Base);
+  background.setAlpha(200);
+  designLabel.setBackgroundBrush(background);
+  design_->setLabel(designLabel);
+  design_->setTitle(tr("Design point (the case as it is)"));
+}
+
+void StudyChart::setStudy(std::shared_ptr<const study::TradeStudy> s, std::array<StudyAxisName, 2> axes,
+                          bool stale) {
+  study_ = std::move(s);
+  axes_ = std::move(axes);
+  stale_ = stale;
+  if (study_ && study_->axes.size() < 2 && plot_ == StudyPlot::Carpet) plot_ = StudyPlot::Output;
+  retranslateUi();
+  rebuild();
+}
+
+void StudyChart::setOverlay(StudyOverlay overlay, std::shared_ptr<const study::TradeStudy> changed,
+                            const QString& description) {
+  overlay_ = overlay;
+  changed_ = std::move(changed);
+  changedDescription_ = description;
+  rebuild();
+}
+
+void StudyChart::setPlot(StudyPlot plot, const std::string& column) {
+  plot_ = plot;
+  if (!column.empty() && columnNamed(column)) column_ = column;
+  retranslateUi();
+  rebuild();
+}
+
+void StudyChart::setStale(bool stale) {
+  if (stale == stale_) return;
+  stale_ = stale;
+  staleLabel_->setVisible(stale_ && study_);
+  replot();
+}
+
+int StudyChart::lineCount(Family family, bool overlay) const {
+  return static_cast<int>(std::count_if(lines_.begin(), lines_.end(), [&](const Line& l) {
+    return l.family == family && l.overlay == overlay;
+  }));
+}
+
+const QwtPlotMarker* StudyChart::designMarker() const {
+  return designShown_ ? design_ : nullptr;
+}
+
+void StudyChart::clearLines() {
+  for (Line& line : lines_)
+    for (QwtPlotCurve* curve : line.curves) {
+      curve->detach();
+      delete curve;
+    }
+  lines_.clear();
+}
+
+void StudyChart::addLines(const TradeStudy& s, bool overlay, const std::string& xColumn,
+                          const std::string& yColumn) {
+  const study::StudyColumn* xc = xColumn.empty() ? nullptr : columnNamed(xColumn);
+  const study::StudyColumn* yc = columnNamed(yColumn);
+  if (!yc || (!xColumn.empty() && !xc) || s.axes.empty()) return;
+  const int n0 = s.axes[0].count;
+  const int n1 = s.axes.size() > 1 ? s.axes[1].count : 1;
+  if (static_cast<long>(s.points.size()) != static_cast<long>(n0) * n1) return;
+  auto figures = [&](const StudyPoint& p) -> std::optional<QPointF> {
+    const std::optional<double> x = xc ? xc->value(p) : std::optional<double>(p.inputs[0]);
+    const std::optional<double> y = yc->value(p);
+    if (!x || !y || !std::isfinite(*x) || !std::isfinite(*y)) return std::nullopt;
+    return QPointF(*x, *y);
+  };
+  // One line through the points (i, j) = at(k) for k along the line, split at the gaps.
+  auto line = [&](Family family, double value, int count, auto at) {
+    Line l;
+    l.family = family;
+    l.overlay = overlay;
+    l.value = value;
+    std::vector<QPointF> run;
+    for (int k = 0; k < count; ++k) {
+      if (const auto xy = figures(at(k))) {
+        run.push_back(*xy);
+      } else if (!run.empty()) {
+        l.segments.push_back(std::move(run));
+        run.clear();
+      }
+    }
+    if (!run.empty()) l.segments.push_back(std::move(run));
+    lines_.push_back(std::move(l));
+  };
+  if (s.axes.size() == 1) {
+    line(Family::Sweep, 0.0, n0, [&](int i) -> const StudyPoint& { return s.at(i); });
+    return;
+  }
+  const std::vector<double> first = s.axes[0].values(), second = s.axes[1].values();
+  if (plot_ == StudyPlot::Carpet)
+    for (int i = 0; i < n0; ++i)
+      line(Family::ConstantFirst, first[static_cast<std::size_t>(i)], n1,
+           [&](int j) -> const StudyPoint& { return s.at(i, j); });
+  for (int j = 0; j < n1; ++j)
+    line(Family::ConstantSecond, second[static_cast<std::size_t>(j)], n0,
+         [&](int i) -> const StudyPoint& { return s.at(i, j); });
+}
+
+void StudyChart::rebuild() {
+  clearLines();
+  overlayNote_.clear();
+  designShown_ = false;
+  design_->detach();
+  const bool carpet = plot_ == StudyPlot::Carpet;
+  const std::string xColumn = carpet ? kTsfc : std::string();
+  const std::string yColumn = carpet ? kSpecificThrust : column_;
+
+  if (study_) {
+    addLines(*study_, false, xColumn, yColumn);
+    if (overlay_ == StudyOverlay::IdealTwin) {
+      const bool hasIdeal = carpet || (column_.rfind("ideal.", 0) != 0 && column_.rfind("audit.", 0) != 0 &&
+                                       columnNamed("ideal." + column_));
+      if (hasIdeal)
+        addLines(*study_, true, carpet ? "ideal." + xColumn : std::string(), "ideal." + yColumn);
+      else
+        overlayNote_ = tr("The ideal twin has no figure of its own for this output.");
+    } else if (overlay_ == StudyOverlay::OneInputChanged) {
+      if (changed_ && changed_->axes == study_->axes)
+        addLines(*changed_, true, xColumn, yColumn);
+      else
+        overlayNote_ = tr("Press Run to compute the comparison.");
+    }
+  }
+
+  // Curves: one per segment; the legend shows each group (family, overlay) once.
+  const double xf = units_.factor(xQuantity()), yf = units_.factor(yQuantity());
+  const QPalette& p = palette();
+  std::vector<std::pair<Family, bool>> inLegend;
+  double x0 = std::numeric_limits<double>::infinity(), x1 = -x0, y0 = x0, y1 = -x0;
+  for (Line& l : lines_) {
+    const QPen pen = linePen(l.family, l.overlay, overlay_, plot_);
+    for (const auto& segment : l.segments) {
+      QVector<QPointF> shown;
+      shown.reserve(static_cast<qsizetype>(segment.size()));
+      for (const QPointF& q : segment) {
+        shown.push_back(QPointF(q.x() / xf, q.y() / yf));
+        x0 = std::min(x0, shown.back().x());
+        x1 = std::max(x1, shown.back().x());
+        y0 = std::min(y0, shown.back().y());
+        y1 = std::max(y1, shown.back().y());
+      }
+      auto* curve = new QwtPlotCurve;
+      curve->setPen(pen);
+      curve->setRenderHint(QwtPlotItem::RenderAntialiased, true);
+      curve->setLegendAttribute(QwtPlotCurve::LegendShowLine, true);
+      curve->setLegendIconSize(QSize(28, 10));
+      curve->setZ(l.overlay ? 18 : 20);
+      // A sweep's points, and any point standing alone between gaps, get a dot of their own.
+      if (l.family == Family::Sweep || segment.size() == 1)
+        curve->setSymbol(
+            new QwtSymbol(QwtSymbol::Ellipse, QBrush(pen.color()), QPen(pen.color()), QSize(5, 5)));
+      curve->setSamples(shown);
+      const std::pair<Family, bool> group{l.overlay ? Family::Sweep : l.family, l.overlay};
+      const bool first = std::find(inLegend.begin(), inLegend.end(), group) == inLegend.end();
+      curve->setItemAttribute(QwtPlotItem::Legend, first);
+      if (first) {
+        inLegend.push_back(group);
+        if (l.overlay)
+          curve->setTitle(overlayTitle());
+        else if (l.family == Family::Sweep)
+          curve->setTitle(tr("Cycle with losses"));
+        else
+          curve->setTitle(tr("Constant %1").arg(legendName(l.family == Family::ConstantFirst ? 0 : 1)));
+      }
+      curve->attach(this);
+      l.curves.push_back(curve);
+    }
+  }
+
+  // The design point: the case as it is, where the study knows its inputs.
+  std::vector<LineEndLabels::Obstacle> obstacles;
+  if (study_) {
+    const StudyPoint& d = study_->designPoint;
+    bool known = d.solved();
+    for (std::size_t k = 0; k < study_->axes.size() && k < 2; ++k)
+      known = known && study_->designPointOnAxis[k];
+    const auto* xc = carpet ? columnNamed(xColumn) : nullptr;
+    const auto* yc = columnNamed(yColumn);
+    if (known && yc) {
+      std::optional<double> x(d.inputs[0]);
+      if (carpet) x = xc ? xc->value(d) : std::nullopt;
+      const std::optional<double> y = yc->value(d);
+      if (x && y && std::isfinite(*x) && std::isfinite(*y)) {
+        design_->setValue(*x / xf, *y / yf);
+        design_->setItemAttribute(QwtPlotItem::Legend, !compact_);  // compact: its label says it
+        design_->attach(this);
+        designShown_ = true;
+        x0 = std::min(x0, *x / xf);
+        x1 = std::max(x1, *x / xf);
+        y0 = std::min(y0, *y / yf);
+        y1 = std::max(y1, *y / yf);
+        // Its symbol and label (right of and above it), to be kept clear.
+        const QSizeF label = design_->label().textSize(font());
+        obstacles.push_back({design_->value(), QSizeF(17, 17), {}});
+        obstacles.push_back({design_->value(), label + QSizeF(4, 4),
+                             QPointF(8.5 + 3 + label.width() / 2, -(8.5 + 3 + label.height() / 2))});
+      }
+    }
+  }
+
+  // End labels: a carpet's lines both ways, an output's curves per second input; spread first.
+  std::vector<LineEndLabels::Label> labels;
+  QFont labelFont = font();
+  labelFont.setPointSizeF(labelFont.pointSizeF() * 0.85);
+  // Both families take turns, so that neither takes every place at a corner they share.
+  std::array<std::vector<Line*>, 2> groups;
+  for (Line& l : lines_)
+    if (!l.overlay && l.family != Family::Sweep)
+      groups[l.family == Family::ConstantFirst ? 0 : 1].push_back(&l);
+  std::array<std::vector<int>, 2> orders{spreadOrder(static_cast<int>(groups[0].size())),
+                                         spreadOrder(static_cast<int>(groups[1].size()))};
+  std::vector<Line*> turns;
+  for (std::size_t k = 0; k < std::max(orders[0].size(), orders[1].size()); ++k)
+    for (std::size_t g = 0; g < 2; ++g)
+      if (k < orders[g].size()) turns.push_back(groups[g][static_cast<std::size_t>(orders[g][k])]);
+  for (Line* line : turns) {
+    Line& l = *line;
+    const Family family = l.family;
+    const int axis = family == Family::ConstantFirst ? 0 : 1;
+    QColor colour = linePen(family, false, overlay_, plot_).color();
+    if (darkCanvas(p)) colour = colour.lighter(150);
+    const QString unit =
+        axes_[axis].quantity == Quantity::Dimensionless ? QString() : units_.symbol(axes_[axis].quantity);
+    const QString number = compactNumber(units_.toDisplay(l.value, axes_[axis].quantity));
+    l.label = unit.isEmpty() ? number : number + QLatin1Char(' ') + unit;
+    if (l.segments.empty()) continue;
+    LineEndLabels::Label label;
+    label.text = QwtText(l.label);
+    label.text.setFont(labelFont);
+    label.text.setColor(colour);
+    QColor background = p.color(QPalette::Base);
+    background.setAlpha(190);
+    label.text.setBackgroundBrush(background);
+    const auto& last = l.segments.back();
+    for (auto it = last.rbegin(); it != last.rend(); ++it)
+      label.anchors.push_back(QPointF(it->x() / xf, it->y() / yf));
+    labels.push_back(std::move(label));
+  }
+  labels_->setLabels(std::move(labels));
+  labels_->setObstacles(std::move(obstacles));
+
+  hasBounds_ = x0 <= x1;
+  if (hasBounds_) bounds_ = QRectF(QPointF(x0, y0), QPointF(x1, y1));
+  legendEntries_ = static_cast<int>(inLegend.size()) + (designShown_ && !compact_ ? 1 : 0);
+  rescale();
+
+  // A hint on an empty chart.
+  QString hint;
+  if (!study_)
+    hint = tr("No study yet: choose the inputs to vary and press Run.");
+  else if (std::all_of(lines_.begin(), lines_.end(),
+                       [](const Line& l) { return l.overlay || l.segments.empty(); }))
+    hint = tr("No point of this study has this figure.");
+  QwtText hintText(hint);
+  hintText.setColor(between(p, 0.7));
+  hintText.setRenderFlags(Qt::AlignCenter | Qt::TextWordWrap);
+  hintLabel_->setText(hintText);
+  hintLabel_->setVisible(!hint.isEmpty());
+  staleLabel_->setVisible(stale_ && study_);
+  replot();
+}
+
+void StudyChart::rescale() {
+  // The figures with a margin, wider on the right for the end labels.
+  double x0 = 0.0, x1 = 1.0, y0 = 0.0, y1 = 1.0;
+  if (hasBounds_) {
+    x0 = bounds_.left();
+    x1 = bounds_.right();
+    y0 = bounds_.top();
+    y1 = bounds_.bottom();
+  }
+  const double dx = std::max(x1 - x0, 1e-6 * std::max(1.0, std::fabs(x1)));
+  const double dy = std::max(y1 - y0, 1e-6 * std::max(1.0, std::fabs(y1)));
+  // Compact: a band on top for the legend inside the canvas, its rows' share of the canvas:
+  // with the data's span dy and margins of 0.07 dy below and `top` dy above, the band takes
+  // top / (1.07 + top) of the height.
+  double top = 0.1;
+  if (compact_ && legendEntries_ > 0) {
+    const double band = ((legendEntries_ + 1) / 2) * (QFontMetrics(legendItem_->font()).height() + 3) + 10;
+    const double share = std::min(0.6, band / std::max(60.0, double(canvas()->height())));
+    top = 0.1 + 1.17 * share / (1.0 - share);
+  }
+  setAxisScale(QwtAxis::XBottom, x0 - 0.05 * dx, x1 + 0.14 * dx);
+  setAxisScale(QwtAxis::YLeft, y0 - 0.07 * dy, y1 + top * dy);
+}
+
+void StudyChart::resizeEvent(QResizeEvent* event) {
+  QwtPlot::resizeEvent(event);
+  if (compact_) {
+    rescale();
+    replot();
+  }
+}
+
+QString StudyChart::readoutAt(const QPoint& position) const {
+  if (!study_) return {};
+  const bool carpet = plot_ == StudyPlot::Carpet;
+  const auto* xc = carpet ? columnNamed(kTsfc) : nullptr;
+  const auto* yc = columnNamed(carpet ? kSpecificThrust : column_);
+  if (!yc) return {};
+  const double xf = units_.factor(xQuantity()), yf = units_.factor(yQuantity());
+  const QwtScaleMap xMap = canvasMap(QwtAxis::XBottom), yMap = canvasMap(QwtAxis::YLeft);
+  const StudyPoint* nearest = nullptr;
+  double best = 12.0;  // [px]
+  for (const StudyPoint& p : study_->points) {
+    const std::optional<double> y = yc->value(p);
+    double x = p.inputs[0];
+    if (carpet) {
+      const std::optional<double> tsfc = xc->value(p);
+      if (!tsfc) continue;
+      x = *tsfc;
+    }
+    if (!y) continue;
+    const double d =
+        std::hypot(xMap.transform(x / xf) - position.x(), yMap.transform(*y / yf) - position.y());
+    if (d < best) {
+      best = d;
+      nearest = &p;
+    }
+  }
+  if (!nearest) return {};
+  QStringList lines;
+  for (std::size_t k = 0; k < study_->axes.size() && k < 2; ++k)
+    lines << QStringLiteral("%1 = %2").arg(axes_[k].name,
+                                           units_.format(nearest->inputs[k], axes_[k].quantity, 5));
+  const auto* fs = columnNamed(kSpecificThrust);
+  const auto* tsfc = columnNamed(kTsfc);
+  if (const auto v = fs->value(*nearest))
+    lines << QStringLiteral("%1 = %2").arg(tr("Specific thrust F_s"),
+                                           units_.format(*v, Quantity::SpecificThrust, 5));
+  if (const auto v = tsfc->value(*nearest))
+    lines << QStringLiteral("%1 = %2").arg(tr("TSFC"), units_.format(*v, Quantity::Tsfc, 5));
+  if (!carpet && yc != fs && yc != tsfc)
+    if (const auto v = yc->value(*nearest))
+      lines << QStringLiteral("%1 = %2").arg(studyColumnLabel(*yc), units_.format(*v, yQuantity(), 5));
+  return lines.join(QLatin1Char('\n'));
+}
+
+}  // namespace cw::gui
