@@ -5,7 +5,10 @@
 #include "engine/evaluate.h"
 
 #include <QCoreApplication>
+#include <QTimer>
 #include <QUndoStack>
+
+#include <QScopeGuard>
 
 #include <cmath>
 
@@ -49,13 +52,34 @@ QString translatedFailure(const Error& e) {
 
 }  // namespace
 
-CaseDocument::CaseDocument(QObject* parent) : QObject(parent), undoStack_(new QUndoStack(this)) {
+CaseDocument::CaseDocument(QObject* parent)
+    : QObject(parent), undoStack_(new QUndoStack(this)), settle_(new QTimer(this)) {
   connect(undoStack_, &QUndoStack::cleanChanged, this, [this] { emit modifiedChanged(isModified()); });
+  settle_->setSingleShot(true);
+  settle_->setInterval(kSettleMilliseconds);
+  connect(settle_, &QTimer::timeout, this, &CaseDocument::commit);
   evaluate();
+  commit();
 }
 
 bool CaseDocument::isStale() const {
-  return !evaluation_ || !problems_.empty() || !failure_.isEmpty() || !entryProblems_.isEmpty();
+  return !live_ || !problems_.empty() || !failure_.isEmpty() || !entryProblems_.isEmpty();
+}
+
+std::shared_ptr<const engine::Evaluation> CaseDocument::evaluation() const {
+  return isStale() ? committed_ : live_;
+}
+
+bool CaseDocument::hasPendingCommit() const {
+  return settle_->isActive();
+}
+
+void CaseDocument::commit() {
+  settle_->stop();
+  if (isStale() || committed_ == live_) return;
+  committed_ = live_;
+  committedCase_ = case_;
+  emit committed();
 }
 
 const engine::CaseProblem* CaseDocument::problemAt(const std::string& path) const {
@@ -64,8 +88,19 @@ const engine::CaseProblem* CaseDocument::problemAt(const std::string& path) cons
   return nullptr;
 }
 
-void CaseDocument::applyEdit(int fieldId, const QString& description, const engine::Case& edited) {
-  if (edited == case_) return;
+void CaseDocument::applyEdit(int fieldId, const QString& description, const engine::Case& edited,
+                             Commit commit) {
+  if (edited == case_) {
+    // Back to the inputs already held (e.g. "0.9" after "0.9x"): commit as that edit would.
+    if (commit == Commit::Later && !isStale() && live_ != committed_)
+      settle_->start();
+    else if (commit == Commit::Now)
+      this->commit();
+    return;
+  }
+  // setCase, reached directly or through the command's redo, reads how to commit.
+  typing_ = commit == Commit::Later;
+  const auto done = qScopeGuard([this] { typing_ = false; });
   if (undoDisabled_ > 0) {
     const bool wasModified = isModified();
     modifiedWithoutUndo_ = true;
@@ -80,6 +115,10 @@ void CaseDocument::setCase(const engine::Case& inputs) {
   case_ = inputs;
   emit caseChanged();
   evaluate();
+  if (typing_)
+    settle_->start();  // committed by Enter, focus out or when it stands for the settle time
+  else
+    commit();
 }
 
 void CaseDocument::load(const engine::Case& inputs, const QString& filePath, bool modified) {
@@ -89,12 +128,16 @@ void CaseDocument::load(const engine::Case& inputs, const QString& filePath, boo
   filePath_ = filePath;
   modifiedWithoutUndo_ = modified;
   undoStack_->setClean();
+  // Another case: its own result or none, never the previous case's.
+  settle_->stop();
+  committed_.reset();
   setCase(inputs);
   emit modifiedChanged(isModified());
 }
 
 void CaseDocument::setEntryProblem(int fieldId, const QString& message) {
   if (entryProblems_.value(fieldId) == message && entryProblems_.contains(fieldId)) return;
+  settle_->stop();  // nothing valid to commit while a field holds no number
   entryProblems_.insert(fieldId, message);
   emit resultChanged();
 }
@@ -117,10 +160,11 @@ void CaseDocument::markSaved(const QString& path) {
 void CaseDocument::evaluate() {
   problems_.clear();
   failure_.clear();
+  live_.reset();
   try {
     auto result = std::make_shared<engine::Evaluation>(engine::evaluateCase(case_));
     if (finite(result->actual) && finite(result->ideal))
-      evaluation_ = std::move(result);
+      live_ = std::move(result);
     else
       failure_ =
           tr("The evaluation gave a value that is not a finite number; the inputs are probably extreme.");

@@ -39,13 +39,6 @@ bool parseNumber(const QString& text, double& value) {
   return ok && std::isfinite(value);
 }
 
-QString shownWithUnit(double shown, const QString& unit) {
-  QLocale locale;
-  locale.setNumberOptions(QLocale::OmitGroupSeparator);
-  const QString number = locale.toString(shown, 'g', 10);
-  return unit.isEmpty() ? number : number + QLatin1Char(' ') + unit;
-}
-
 }  // namespace
 
 void markInvalid(QWidget* editor, bool invalid) {
@@ -86,6 +79,8 @@ CaseForm::CaseForm(Section section, CaseDocument& document, DisplayUnits& units,
         edit->setAlignment(Qt::AlignRight);
         connect(edit, &QLineEdit::textEdited, this,
                 [this, &spec](const QString& text) { numberEdited(spec, text); });
+        // Enter or focus out commits the typed value's result (CaseDocument's stale rule).
+        connect(edit, &QLineEdit::editingFinished, &document_, &CaseDocument::commit);
         row.editor = edit;
         row.error = new QLabel(this);
         row.error->setObjectName(QString::fromLatin1(spec.key) + QStringLiteral(".error"));
@@ -210,21 +205,7 @@ void CaseForm::refresh() {
       if (entryProblem) {
         message = document_.entryProblems().value(spec.id);
       } else if (problem) {
-        QString valid = QString::fromStdString(problem->valid);
-        if (units_.system() != UnitSystem::SI && spec.quantity != Quantity::Dimensionless &&
-            spec.quantity != Quantity::MassRatio)
-          valid +=
-              QStringLiteral(" = %1%2, %3%4 %5")
-                  .arg(spec.lowOpen ? "(" : "[", formatNumber(units_.toDisplay(spec.low, spec.quantity), 6),
-                       formatNumber(units_.toDisplay(spec.high, spec.quantity), 6), spec.highOpen ? ")" : "]",
-                       units_.symbol(spec.quantity));
-        message =
-            tr("%1 = %2 is outside the valid range %3.")
-                .arg(fieldLabel(spec),
-                     shownWithUnit(
-                         units_.toDisplay(si, spec.quantity),
-                         spec.quantity == Quantity::Dimensionless ? QString() : units_.symbol(spec.quantity)),
-                     valid);
+        message = fieldRangeProblem(spec, si, QString::fromStdString(problem->valid), units_);
       }
       showProblem(row, message);
       if (problem)
@@ -261,7 +242,8 @@ void CaseForm::numberEdited(const FieldSpec& spec, const QString& text) {
   document_.clearEntryProblem(spec.id);
   engine::Case edited = document_.currentCase();
   spec.set(edited, units_.fromDisplay(shown, spec.quantity));
-  document_.applyEdit(spec.id, tr("Change %1").arg(fieldLabel(spec)), edited);
+  // Typed: its result becomes the one kept on screen once committed, not at each keystroke.
+  document_.applyEdit(spec.id, tr("Change %1").arg(fieldLabel(spec)), edited, CaseDocument::Commit::Later);
 }
 
 void CaseForm::choiceActivated(const FieldSpec& spec, int index) {
