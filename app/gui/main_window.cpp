@@ -432,7 +432,7 @@ void MainWindow::createCentralWidget() {
   bottomTabs_->setObjectName("bottomTabs");
   bottomTabs_->setDocumentMode(true);
   bottomTabs_->addTab(bottom, tr("Stations and performance"));
-  auditPanel_ = new AuditPanel(*units_, *router_);
+  auditPanel_ = new AuditPanel(*document_, *units_, *router_);
   auditPanel_->setSideBySide(true);
   bottomTabs_->addTab(auditPanel_, tr("Loss audit"));
   tradeStudyPanel_ = new TradeStudyPanel(*document_, *units_);
@@ -582,7 +582,6 @@ void MainWindow::refreshResult() {
     stationModel_->setStale(stale);
     performanceModel_->setStale(stale);
   }
-  auditPanel_->update(document_->evaluatedCase(), evaluation, stale);
   updateBanner();
 }
 

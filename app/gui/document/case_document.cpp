@@ -1,5 +1,9 @@
 #include "document/case_document.h"
 
+#include "document/case_auditor.h"
+
+#include "analysis/loss_catalogue.h"
+
 #include "common/error.h"
 #include "engine/case_validation_error.h"
 #include "engine/evaluate.h"
@@ -9,6 +13,8 @@
 #include <QUndoStack>
 
 #include <QScopeGuard>
+
+#include <algorithm>
 
 #include <cmath>
 
@@ -52,8 +58,10 @@ QString translatedFailure(const Error& e) {
 
 }  // namespace
 
-CaseDocument::CaseDocument(QObject* parent)
-    : QObject(parent), undoStack_(new QUndoStack(this)), settle_(new QTimer(this)) {
+CaseDocument::CaseDocument(QObject* parent) : QObject(parent), undoStack_(new QUndoStack(this)) {
+  settle_ = new QTimer(this);
+  auditor_ = new CaseAuditor(this);
+  connect(auditor_, &CaseAuditor::auditChanged, this, &CaseDocument::auditChanged);
   connect(undoStack_, &QUndoStack::cleanChanged, this, [this] { emit modifiedChanged(isModified()); });
   settle_->setSingleShot(true);
   settle_->setInterval(kSettleMilliseconds);
@@ -68,6 +76,36 @@ bool CaseDocument::isStale() const {
 
 std::shared_ptr<const engine::Evaluation> CaseDocument::evaluation() const {
   return isStale() ? committed_ : live_;
+}
+
+std::shared_ptr<const analysis::LossAudit> CaseDocument::audit() const {
+  return auditor_->audit();
+}
+
+bool CaseDocument::isAuditStale() const {
+  return isStale() || auditor_->failed() || auditor_->isPending() ||
+         auditor_->auditedEvaluation() != evaluation();
+}
+
+bool CaseDocument::setAuditOrder(const QStringList& keys) {
+  QStringList known;
+  for (const QString& key : keys) {
+    const bool valid =
+        std::any_of(analysis::lossCatalogue().begin(), analysis::lossCatalogue().end(),
+                    [&](const analysis::LossDefinition& l) { return l.key == key.toStdString(); });
+    if (valid && !known.contains(key)) known << key;
+  }
+  if (known == auditOrder_) return false;
+  auditOrder_ = known;
+  resultUpdated();
+  return true;
+}
+
+void CaseDocument::resultUpdated() {
+  std::vector<std::string> order;
+  for (const QString& key : auditOrder_) order.push_back(key.toStdString());
+  auditor_->request(evaluatedCase(), evaluation(), order);
+  emit resultChanged();
 }
 
 bool CaseDocument::hasPendingCommit() const {
@@ -139,11 +177,11 @@ void CaseDocument::setEntryProblem(int fieldId, const QString& message) {
   if (entryProblems_.value(fieldId) == message && entryProblems_.contains(fieldId)) return;
   settle_->stop();  // nothing valid to commit while a field holds no number
   entryProblems_.insert(fieldId, message);
-  emit resultChanged();
+  resultUpdated();
 }
 
 void CaseDocument::clearEntryProblem(int fieldId) {
-  if (entryProblems_.remove(fieldId) > 0) emit resultChanged();
+  if (entryProblems_.remove(fieldId) > 0) resultUpdated();
 }
 
 bool CaseDocument::isModified() const {
@@ -175,7 +213,7 @@ void CaseDocument::evaluate() {
   } catch (const std::exception& e) {
     failure_ = tr("Evaluation failed: %1").arg(QString::fromStdString(e.what()));
   }
-  emit resultChanged();
+  resultUpdated();
 }
 
 SetCaseCommand::SetCaseCommand(CaseDocument& document, int fieldId, const QString& text, engine::Case before,

@@ -14,6 +14,7 @@
 // and after; consecutive edits of one field merge (the command id is the field id). A
 // ScopedUndoDisabler turns recording off, e.g. while a file loads.
 
+#include "analysis/loss_audit.h"
 #include "engine/case_inputs.h"
 #include "engine/case_problem.h"
 #include "engine/cycle_result.h"
@@ -21,6 +22,7 @@
 #include <QHash>
 #include <QObject>
 #include <QString>
+#include <QStringList>
 #include <QUndoCommand>
 
 #include <memory>
@@ -30,6 +32,8 @@ class QTimer;
 class QUndoStack;
 
 namespace cw::gui {
+
+class CaseAuditor;
 
 class CaseDocument : public QObject {
   Q_OBJECT
@@ -61,6 +65,19 @@ class CaseDocument : public QObject {
   /// Fields whose text is not a number (field id -> translated message); they make the result stale.
   const QHash<int, QString>& entryProblems() const { return entryProblems_; }
 
+  /// The loss audit of evaluation() (the pipeline's last step; CaseAuditor runs it, off the GUI
+  /// thread once it takes longer than a frame). Null before the first, or with no evaluation.
+  std::shared_ptr<const analysis::LossAudit> audit() const;
+  /// True when audit() is not that of the current inputs: the result is stale, the audit of the
+  /// shown evaluation failed, or it is still running.
+  bool isAuditStale() const;
+  CaseAuditor& auditor() const { return *auditor_; }
+  /// The waterfall order asked for (loss keys; empty for the flow order). The audit puts these
+  /// first and the remaining losses after them in flow order (analysis::waterfallOrderOf).
+  QStringList auditOrder() const { return auditOrder_; }
+  /// Sets the order (unknown and repeated keys dropped) and re-audits. False when unchanged.
+  bool setAuditOrder(const QStringList& keys);
+
   QUndoStack* undoStack() const { return undoStack_; }
   bool undoEnabled() const { return undoDisabled_ == 0; }
 
@@ -73,6 +90,9 @@ class CaseDocument : public QObject {
                  Commit commit = Commit::Now);
   /// Commits the current result when valid (Enter or focus out in a field; the settle timer).
   void commit();
+  /// True while a typed edit (Commit::Later) is being applied: the signals it emits concern the
+  /// visible form's field, so hidden forms may catch up later (CaseForm::refresh).
+  bool isApplyingTypedEdit() const { return typing_; }
   /// Replaces the inputs without touching the undo stack (used by the commands). Evaluates once.
   void setCase(const engine::Case& inputs);
   /// Loads a case (file open, new, recovery): clears the undo stack, evaluates, marks clean.
@@ -95,10 +115,14 @@ class CaseDocument : public QObject {
   void modifiedChanged(bool modified);
   /// A result was committed: it is now the one kept while later inputs are invalid.
   void committed();
+  /// audit() or isAuditStale() changed (the audit panel refreshes).
+  void auditChanged();
 
  private:
   friend class ScopedUndoDisabler;
   void evaluate();
+  /// Emits resultChanged after asking for the audit of the evaluation now shown.
+  void resultUpdated();
 
   engine::Case case_;
   std::shared_ptr<const engine::Evaluation> live_;       ///< of the current inputs; null if none
@@ -106,6 +130,8 @@ class CaseDocument : public QObject {
   engine::Case committedCase_;                           ///< its inputs
   QTimer* settle_ = nullptr;
   bool typing_ = false;  ///< the edit being applied is typed (commit later)
+  CaseAuditor* auditor_ = nullptr;
+  QStringList auditOrder_;
   std::vector<engine::CaseProblem> problems_;
   QString failure_;
   QHash<int, QString> entryProblems_;

@@ -171,7 +171,19 @@ void CaseForm::retranslateUi() {
   refresh();
 }
 
+void CaseForm::showEvent(QShowEvent* event) {
+  QWidget::showEvent(event);
+  if (behind_) refresh();
+}
+
 void CaseForm::refresh() {
+  // Typing in the visible form: a form the stack hides is not on screen, so it skips its
+  // widgets until it is shown (showEvent). Any other change (undo, a file, units) refreshes all.
+  if (isHidden() && parentWidget() && document_.isApplyingTypedEdit()) {
+    behind_ = true;
+    return;
+  }
+  behind_ = false;
   const engine::Case& c = document_.currentCase();
   for (const auto& row : rows_) {
     const FieldSpec& spec = *row.spec;
@@ -239,11 +251,13 @@ void CaseForm::numberEdited(const FieldSpec& spec, const QString& text) {
     document_.setEntryProblem(spec.id, tr("%1: “%2” is not a number.").arg(fieldLabel(spec), text));
     return;
   }
-  document_.clearEntryProblem(spec.id);
   engine::Case edited = document_.currentCase();
   spec.set(edited, units_.fromDisplay(shown, spec.quantity));
   // Typed: its result becomes the one kept on screen once committed, not at each keystroke.
   document_.applyEdit(spec.id, tr("Change %1").arg(fieldLabel(spec)), edited, CaseDocument::Commit::Later);
+  // After the edit, so that the refresh it causes finds the model already holding the typed value
+  // (before it, the refresh would write the old value back into the field).
+  document_.clearEntryProblem(spec.id);
 }
 
 void CaseForm::choiceActivated(const FieldSpec& spec, int index) {
