@@ -77,6 +77,8 @@ CaseForm::CaseForm(Section section, CaseDocument& document, DisplayUnits& units,
         auto* edit = new QLineEdit(this);
         edit->setObjectName(QString::fromLatin1(spec.key));
         edit->setAlignment(Qt::AlignRight);
+        // Wide enough for a value at display precision with its sign and decimals.
+        edit->setMinimumWidth(edit->fontMetrics().horizontalAdvance(QStringLiteral("-0000000.0000")) + 16);
         connect(edit, &QLineEdit::textEdited, this,
                 [this, &spec](const QString& text) { numberEdited(spec, text); });
         // Enter or focus out commits the typed value's result (CaseDocument's stale rule).
@@ -203,16 +205,14 @@ void CaseForm::refresh() {
     } else if (auto* edit = qobject_cast<QLineEdit*>(row.editor)) {
       const bool entryProblem = document_.entryProblems().contains(spec.id);
       const double si = spec.get(c);
-      // Leave the user's text alone when it already stands for the model's value.
+      // Leave the user's text alone when it already stands for the model's value (typed) or is
+      // the model's value at display precision (a U.S. customary conversion, rounded).
+      const QString shown = units_.inputText(si, spec.quantity);
       double typed = 0.0;
-      const bool same =
-          parseNumber(edit->text(), typed) &&
-          std::fabs(units_.fromDisplay(typed, spec.quantity) - si) <= 1e-12 * std::max(1.0, std::fabs(si));
-      if (!entryProblem && !same) {
-        QLocale locale;
-        locale.setNumberOptions(QLocale::OmitGroupSeparator);
-        edit->setText(locale.toString(units_.toDisplay(si, spec.quantity), 'g', 12));
-      }
+      const bool same = edit->text() == shown || (parseNumber(edit->text(), typed) &&
+                                                  std::fabs(units_.fromDisplay(typed, spec.quantity) - si) <=
+                                                      1e-12 * std::max(1.0, std::fabs(si)));
+      if (!entryProblem && !same) edit->setText(shown);
       QString message;
       if (entryProblem) {
         message = document_.entryProblems().value(spec.id);
