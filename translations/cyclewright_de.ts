@@ -888,6 +888,10 @@ kein Kreisprozess mit diesen Eingaben</translation>
         <source>Evaluation failed: %1</source>
         <translation>Berechnung fehlgeschlagen: %1</translation>
     </message>
+    <message>
+        <source>Untitled case</source>
+        <translation>Unbenannter Fall</translation>
+    </message>
 </context>
 <context>
     <name>cw::gui::CaseForm</name>
@@ -1488,6 +1492,58 @@ p = %7   v = %8</translation>
         <source>No discards this autosave.</source>
         <translation>„Nein“ verwirft diese automatische Speicherung.</translation>
     </message>
+    <message>
+        <source>&amp;Pin as Baseline</source>
+        <translation>Als &amp;Basis festhalten</translation>
+    </message>
+    <message>
+        <source>Keep the shown result as the baseline the tables compare against</source>
+        <translation>Das angezeigte Ergebnis als Basis festhalten, mit der die Tabellen vergleichen</translation>
+    </message>
+    <message>
+        <source>Open &amp;Baseline…</source>
+        <translation>&amp;Basis öffnen…</translation>
+    </message>
+    <message>
+        <source>&amp;Clear Baseline</source>
+        <translation>Basis &amp;entfernen</translation>
+    </message>
+    <message>
+        <source>Copy &amp;Performance Table</source>
+        <translation>&amp;Leistungstabelle kopieren</translation>
+    </message>
+    <message>
+        <source>Performance table copied as tab-separated text</source>
+        <translation>Leistungstabelle als tabulatorgetrennter Text kopiert</translation>
+    </message>
+    <message>
+        <source>Difference from baseline (with losses − baseline)</source>
+        <translation>Differenz zur Basis (mit Verlusten − Basis)</translation>
+    </message>
+    <message>
+        <source>Baseline: %1</source>
+        <translation>Basis: %1</translation>
+    </message>
+    <message>
+        <source>There is no result to pin as the baseline.</source>
+        <translation>Es gibt kein Ergebnis, das als Basis festgehalten werden kann.</translation>
+    </message>
+    <message>
+        <source>Open Baseline</source>
+        <translation>Basis öffnen</translation>
+    </message>
+    <message>
+        <source>Baseline not opened: %1</source>
+        <translation>Basis nicht geöffnet: %1</translation>
+    </message>
+    <message>
+        <source>Cannot open baseline</source>
+        <translation>Basis kann nicht geöffnet werden</translation>
+    </message>
+    <message>
+        <source>The baseline is unchanged.</source>
+        <translation>Die Basis bleibt unverändert.</translation>
+    </message>
 </context>
 <context>
     <name>cw::gui::PerformanceModel</name>
@@ -1546,6 +1602,22 @@ p = %7   v = %8</translation>
     <message>
         <source>Unit</source>
         <translation>Einheit</translation>
+    </message>
+    <message>
+        <source>Baseline</source>
+        <translation>Basis</translation>
+    </message>
+    <message>
+        <source>Change from baseline</source>
+        <translation>Änderung zur Basis</translation>
+    </message>
+    <message>
+        <source>Change [%]</source>
+        <translation>Änderung [%]</translation>
+    </message>
+    <message>
+        <source>Baseline: %1</source>
+        <translation>Basis: %1</translation>
     </message>
 </context>
 <context>
@@ -1652,6 +1724,10 @@ p = %7   v = %8</translation>
     <message>
         <source>Stations, difference (with losses − ideal)</source>
         <translation>Stationen, Differenz (mit Verlusten − ideal)</translation>
+    </message>
+    <message>
+        <source>Stations, difference from the baseline (with losses − baseline)</source>
+        <translation>Stationen, Differenz zur Basis (mit Verlusten − Basis)</translation>
     </message>
 </context>
 <context>

@@ -48,6 +48,7 @@
 #include <QScrollArea>
 #include <QSplitter>
 #include <QStackedWidget>
+#include <QStandardItemModel>
 #include <QStandardPaths>
 #include <QStatusBar>
 #include <QTabWidget>
@@ -123,6 +124,7 @@ MainWindow::MainWindow(QWidget* parent) : QMainWindow(parent) {
   connect(document_, &CaseDocument::caseChanged, this, &MainWindow::updateStrip);
   connect(document_, &CaseDocument::caseChanged, this, &MainWindow::scheduleAutosave);
   connect(document_, &CaseDocument::modifiedChanged, this, &MainWindow::updateTitle);
+  connect(document_, &CaseDocument::baselineChanged, this, &MainWindow::refreshBaseline);
   connect(router_, &SelectionRouter::selected, this, &MainWindow::routeSelection);
   connect(units_, &DisplayUnits::changed, this, &MainWindow::updateBanner);
 
@@ -141,6 +143,7 @@ MainWindow::MainWindow(QWidget* parent) : QMainWindow(parent) {
           [this] { settings_.setStudySetup(tradeStudyPanel_->setup()); });
 
   router_->select(Section::Compressor);
+  refreshBaseline();
   refreshResult();
   updateStrip();
   updateTitle();
@@ -223,6 +226,22 @@ void MainWindow::createActions() {
   actions_.copyTable = new QAction(tr("Copy Station &Table"), this);
   actions_.copyTable->setObjectName("copyTableAction");
   connect(actions_.copyTable, &QAction::triggered, this, &MainWindow::copyTable);
+  actions_.pinBaseline = new QAction(tr("&Pin as Baseline"), this);
+  actions_.pinBaseline->setObjectName("pinBaselineAction");
+  actions_.pinBaseline->setToolTip(tr("Keep the shown result as the baseline the tables compare against"));
+  connect(actions_.pinBaseline, &QAction::triggered, this, &MainWindow::pinBaseline);
+  actions_.openBaseline = new QAction(tr("Open &Baseline…"), this);
+  actions_.openBaseline->setObjectName("openBaselineAction");
+  connect(actions_.openBaseline, &QAction::triggered, this, &MainWindow::chooseBaseline);
+  actions_.clearBaseline = new QAction(tr("&Clear Baseline"), this);
+  actions_.clearBaseline->setObjectName("clearBaselineAction");
+  connect(actions_.clearBaseline, &QAction::triggered, this, [this] { document_->clearBaseline(); });
+  actions_.copyPerformance = new QAction(tr("Copy &Performance Table"), this);
+  actions_.copyPerformance->setObjectName("copyPerformanceAction");
+  connect(actions_.copyPerformance, &QAction::triggered, this, [this] {
+    QApplication::clipboard()->setText(performanceTableText());
+    statusBar()->showMessage(tr("Performance table copied as tab-separated text"));
+  });
   actions_.copyStudyTable = new QAction(tr("Copy Trade &Study Table"), this);
   actions_.copyStudyTable->setObjectName("copyStudyTableAction");
   connect(actions_.copyStudyTable, &QAction::triggered, this, &MainWindow::copyStudyTable);
@@ -238,6 +257,8 @@ void MainWindow::createMenus() {
   connect(recentMenu_, &QMenu::aboutToShow, this, &MainWindow::updateRecentMenu);
   fileMenu->addAction(actions_.save);
   fileMenu->addAction(actions_.saveAs);
+  fileMenu->addSeparator();
+  fileMenu->addAction(actions_.openBaseline);
   fileMenu->addSeparator();
   QMenu* exportMenu = fileMenu->addMenu(tr("&Export"));
   exportMenu->setObjectName("exportMenu");
@@ -283,7 +304,11 @@ void MainWindow::createMenus() {
   editMenu->addAction(actions_.copyTs);
   editMenu->addAction(actions_.copyPv);
   editMenu->addAction(actions_.copyTable);
+  editMenu->addAction(actions_.copyPerformance);
   editMenu->addAction(actions_.copyStudyTable);
+  editMenu->addSeparator();
+  editMenu->addAction(actions_.pinBaseline);
+  editMenu->addAction(actions_.clearBaseline);
 
   QMenu* viewMenu = menuBar()->addMenu(tr("&View"));
   viewMenu->setObjectName("viewMenu");
@@ -390,7 +415,8 @@ void MainWindow::createCentralWidget() {
   auto* stationLayout = new QVBoxLayout(stationBox);
   tableMode_ = new QComboBox(stationBox);
   tableMode_->setObjectName("tableMode");
-  tableMode_->addItems({tr("With losses"), tr("Ideal"), tr("Difference (with losses − ideal)")});
+  tableMode_->addItems({tr("With losses"), tr("Ideal"), tr("Difference (with losses − ideal)"),
+                        tr("Difference from baseline (with losses − baseline)")});
   stationLayout->addWidget(tableMode_);
   stationModel_ = new StationTableModel(*units_, this);
   stationView_ = new QTableView(stationBox);
@@ -583,6 +609,53 @@ void MainWindow::refreshResult() {
     performanceModel_->setStale(stale);
   }
   updateBanner();
+}
+
+void MainWindow::refreshBaseline() {
+  const auto baseline = document_->baselineEvaluation();
+  stationModel_->setBaseline(baseline);
+  performanceModel_->setBaseline(baseline, document_->baselineTitle());
+  // The station table's difference from the baseline only while there is one.
+  const int baselineMode = static_cast<int>(TableMode::BaselineDifference);
+  if (auto* model = qobject_cast<QStandardItemModel*>(tableMode_->model()))
+    if (QStandardItem* item = model->item(baselineMode)) item->setEnabled(baseline != nullptr);
+  if (!baseline && tableMode_->currentIndex() == baselineMode) tableMode_->setCurrentIndex(0);
+  actions_.clearBaseline->setEnabled(baseline != nullptr);
+  if (baseline) statusBar()->showMessage(tr("Baseline: %1").arg(document_->baselineTitle()));
+  // The hook for the charts' baseline overlay: CaseDocument::baselineChanged and
+  // baselineEvaluation() / baselineTitle() (a third line style, Okabe-Ito grey, dash-dot).
+}
+
+void MainWindow::pinBaseline() {
+  if (!document_->pinBaseline()) statusBar()->showMessage(tr("There is no result to pin as the baseline."));
+}
+
+void MainWindow::chooseBaseline() {
+  const QString path = QFileDialog::getOpenFileName(this, tr("Open Baseline"), QString(),
+                                                    tr("Cyclewright cases (*.json);;All files (*)"));
+  if (!path.isEmpty()) openBaseline(path);
+}
+
+bool MainWindow::openBaseline(const QString& path, QString* error) {
+  QString why;
+  try {
+    const engine::Case inputs = readCaseAt(path);
+    const QString title =
+        inputs.title.empty() ? QFileInfo(path).fileName() : QString::fromStdString(inputs.title);
+    if (document_->setBaseline(inputs, title, &why)) return true;
+    why = path + QStringLiteral(": ") + why;
+  } catch (const std::exception& e) {
+    why = openFailureText(path, e);
+  }
+  if (error) *error = why;
+  statusBar()->showMessage(tr("Baseline not opened: %1").arg(why.section(QLatin1Char('\n'), 0, 0)));
+  showProblem(QStringLiteral("baselineFailedBox"), tr("Cannot open baseline"), why,
+              tr("The baseline is unchanged."));
+  return false;
+}
+
+QString MainWindow::performanceTableText() const {
+  return performanceModel_->toTabSeparated();
 }
 
 void MainWindow::updateBanner() {
@@ -883,10 +956,16 @@ bool MainWindow::exportStationCsv(const QString& path) {
   if (!evaluation) return false;
   // The table as shown: with losses, ideal twin, or their difference.
   const TableMode mode = stationModel_->mode();
-  const std::string csv =
-      mode == TableMode::Difference
-          ? io::stationDifferenceCsv(evaluation->actual, evaluation->ideal)
-          : io::stationTableCsv(mode == TableMode::Ideal ? evaluation->ideal : evaluation->actual);
+  const auto baseline = document_->baselineEvaluation();
+  std::string csv;
+  if (mode == TableMode::BaselineDifference && baseline)
+    csv = io::stationDifferenceCsv(evaluation->actual, baseline->actual,
+                                   " Values: with losses minus the baseline (" +
+                                       document_->baselineTitle().toStdString() + "), with losses.");
+  else if (mode == TableMode::Difference)
+    csv = io::stationDifferenceCsv(evaluation->actual, evaluation->ideal);
+  else
+    csv = io::stationTableCsv(mode == TableMode::Ideal ? evaluation->ideal : evaluation->actual);
   QSaveFile file(path);
   if (!file.open(QIODevice::WriteOnly)) return false;
   file.write(QByteArray::fromStdString(csv));
@@ -898,7 +977,14 @@ bool MainWindow::exportResultJson(const QString& path) {
   if (!evaluation) return false;
   QSaveFile file(path);
   if (!file.open(QIODevice::WriteOnly)) return false;
-  file.write(QByteArray::fromStdString(io::evaluationToJson(*evaluation).dump(2)));
+  nlohmann::json json = io::evaluationToJson(*evaluation);
+  if (const auto baseline = document_->baselineEvaluation()) {
+    // The baseline beside the result, so the file holds both sides of the comparison.
+    nlohmann::json base = io::evaluationToJson(*baseline, false);
+    base["title"] = document_->baselineTitle().toStdString();
+    json["baseline"] = base;
+  }
+  file.write(QByteArray::fromStdString(json.dump(2)));
   file.write("\n");
   return file.commit();
 }

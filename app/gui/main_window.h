@@ -60,6 +60,9 @@ class MainWindow : public QMainWindow {
   bool openCase(const QString& path, QString* error = nullptr);
   /// Saves to a path (SI, atomically). Returns false and says why when it cannot.
   bool saveCaseAs(const QString& path);
+  /// Makes a saved case the baseline (File › Open Baseline…). Returns false and says why when
+  /// it cannot be read or has no cycle; the baseline is then unchanged.
+  bool openBaseline(const QString& path, QString* error = nullptr);
 
   /// The file name of the open case, empty when none.
   QString casePath() const;
@@ -96,6 +99,8 @@ class MainWindow : public QMainWindow {
 
   // Exports without dialogs (tests and the menu actions).
   bool exportStationCsv(const QString& path);
+  /// The performance table as tab-separated text, as shown (with the baseline's columns when set).
+  QString performanceTableText() const;
   bool exportResultJson(const QString& path);
   bool exportAuditCsv(const QString& path);
   bool exportStudyCsv(const QString& path);
@@ -126,6 +131,8 @@ class MainWindow : public QMainWindow {
   bool save();
   bool saveAs();
   void showPreferences();
+  void pinBaseline();
+  void chooseBaseline();
 
  protected:
   void closeEvent(QCloseEvent* event) override;
@@ -141,6 +148,8 @@ class MainWindow : public QMainWindow {
   void updateTitle();
   void refreshResult();
   void updateBanner();
+  /// The tables follow the document's baseline (columns, difference mode, action states).
+  void refreshBaseline();
   /// The stale banner's colours from the window's palette (light or dark).
   void applyBannerPalette();
   void updateStrip();
@@ -193,7 +202,8 @@ class MainWindow : public QMainWindow {
 
   struct Actions {
     QAction *newCase, *open, *save, *saveAs, *preferences, *quit, *undo, *redo, *resetZoom, *logAxes,
-        *sideBySide, *tabbed, *about, *copyTs, *copyPv, *copyTable, *copyStudyTable;
+        *sideBySide, *tabbed, *about, *copyTs, *copyPv, *copyTable, *copyStudyTable, *pinBaseline,
+        *openBaseline, *clearBaseline, *copyPerformance;
     QActionGroup* layoutGroup;
   } actions_{};
 };
