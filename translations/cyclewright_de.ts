@@ -1758,6 +1758,14 @@ p = %7   v = %8</translation>
         <translation>&amp;Wiederholen</translation>
     </message>
     <message>
+        <source>Undo</source>
+        <translation>Rückgängig</translation>
+    </message>
+    <message>
+        <source>Redo</source>
+        <translation>Wiederholen</translation>
+    </message>
+    <message>
         <source>&amp;Reset Zoom</source>
         <translation>Zoom &amp;zurücksetzen</translation>
     </message>

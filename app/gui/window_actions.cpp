@@ -200,6 +200,19 @@ void WindowActions::createToolBar() {
   bar->addSeparator();
   bar->addAction(sideBySide_);
   bar->addAction(tabbed_);
+  fixButtonWidths(bar);
+}
+
+void WindowActions::fixButtonWidths(QToolBar* bar) {
+  // The undo stack renames its actions after every edit ("Undo Change Efficiency"): the buttons
+  // say only "Undo" and "Redo" and the tooltip the whole text, and no button changes its width,
+  // so that none of them moves under the pointer.
+  undo_->setIconText(tr("Undo"));
+  redo_->setIconText(tr("Redo"));
+  for (QAction* action : bar->actions()) {
+    QWidget* button = bar->widgetForAction(action);
+    if (button && !action->isSeparator()) button->setFixedWidth(button->sizeHint().width());
+  }
 }
 
 void WindowActions::updateRecentMenu() {

@@ -41,6 +41,7 @@ class WindowActions : public QObject {
   void createEditMenu();
   void createViewMenu();
   void updateRecentMenu();
+  void fixButtonWidths(QToolBar* bar);
 
   MainWindow& window_;
   QAction *newCase_ = nullptr, *open_ = nullptr, *save_ = nullptr, *saveAs_ = nullptr,
