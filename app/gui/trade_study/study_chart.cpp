@@ -3,7 +3,6 @@
 #include "charts/colours.h"
 #include "charts/line_end_labels.h"
 #include "charts/readout_picker.h"
-#include "charts/stale_banner.h"
 #include "trade_study/study_names.h"
 
 #include <qwt_legend.h>
@@ -36,14 +35,6 @@ using study::TradeStudy;
 
 const char* const kSpecificThrust = "specific_thrust_N_s_per_kg";
 const char* const kTsfc = "tsfc_g_per_kN_s";
-
-QColor between(const QPalette& palette, double t) {
-  return mixColours(palette.color(QPalette::Base), palette.color(QPalette::Text), t);
-}
-
-bool darkCanvas(const QPalette& palette) {
-  return palette.color(QPalette::Base).lightness() <= 128;
-}
 
 /// A value for a line's label: up to five significant digits, no trailing zeros, the locale's
 /// decimal point, never NaN (the study's inputs are finite).
@@ -91,27 +82,14 @@ QPen linePen(StudyChart::Family family, bool overlay, StudyOverlay kind, StudyPl
 }  // namespace
 
 StudyChart::StudyChart(DisplayUnits& units, QWidget* parent)
-    : QwtPlot(parent), units_(units), columns_(study::studyColumns(true)) {
+    : ChartBase(parent), units_(units), columns_(study::studyColumns(true)) {
   setObjectName("studyChart");
-  setAutoReplot(false);
   setMinimumSize(240, 180);
-  if (auto* c = qobject_cast<QwtPlotCanvas*>(canvas())) c->setFrameStyle(QFrame::Box | QFrame::Plain);
 
-  grid_ = new QwtPlotGrid;
-  grid_->attach(this);
-
-  insertOuterLegend();
-  legendItem_ = new QwtPlotLegendItem;
-  legendItem_->setMaxColumns(2);
-  legendItem_->setAlignmentInCanvas(Qt::AlignTop | Qt::AlignHCenter);
-  legendItem_->setBorderRadius(3);
+  insertStudyLegend();
+  legendItem_ = makeLegendItem(Qt::AlignTop | Qt::AlignHCenter, 2, 0.8);
   legendItem_->setMargin(2);
-  legendItem_->setSpacing(1);
   legendItem_->setItemMargin(0);
-  QFont inside = font();
-  inside.setPointSizeF(inside.pointSizeF() * 0.8);
-  legendItem_->setFont(inside);
-  legendItem_->setZ(90);
 
   design_ = new QwtPlotMarker;
   design_->setZ(50);
@@ -125,9 +103,6 @@ StudyChart::StudyChart(DisplayUnits& units, QWidget* parent)
   labels_->setLegend(legendItem_);
   labels_->attach(this);
 
-  staleLabel_ = new QwtPlotTextLabel;
-  staleLabel_->setZ(100);
-  staleLabel_->attach(this);
   hintLabel_ = new QwtPlotTextLabel;
   hintLabel_->setZ(99);
   hintLabel_->attach(this);
@@ -141,6 +116,7 @@ StudyChart::StudyChart(DisplayUnits& units, QWidget* parent)
     rebuild();
   });
   rebuild();
+  finishConstruction();
 }
 
 StudyChart::~StudyChart() {
@@ -150,14 +126,8 @@ StudyChart::~StudyChart() {
   if (!compact_) delete legendItem_;  // attached (and so deleted by the plot) only when compact
 }
 
-void StudyChart::insertOuterLegend() {
-  auto* legend = new QwtLegend;
-  legend->setObjectName("studyLegend");
-  legend->setMaxColumns(2);
-  QFont legendFont = font();
-  legendFont.setPointSizeF(legendFont.pointSizeF() * 0.85);
-  legend->setFont(legendFont);
-  insertLegend(legend, QwtPlot::BottomLegend);
+void StudyChart::insertStudyLegend() {
+  insertOuterLegend(QwtPlot::BottomLegend, 2, 0.85)->setObjectName("studyLegend");
 }
 
 void StudyChart::setCompact(bool compact) {
@@ -168,33 +138,21 @@ void StudyChart::setCompact(bool compact) {
     legendItem_->attach(this);
   } else {
     legendItem_->detach();
-    insertOuterLegend();
+    insertStudyLegend();
   }
   retranslateUi();
   rebuild();
 }
 
 void StudyChart::applyPalette() {
-  const QPalette& p = palette();
-  setCanvasBackground(p.color(QPalette::Base));
-  grid_->setMajorPen(between(p, 0.3), 0.0, Qt::DotLine);
-  const QColor ink = p.color(QPalette::Text);
-  QColor legendBackground = p.color(QPalette::Base);
-  legendBackground.setAlpha(215);
-  legendItem_->setBackgroundBrush(legendBackground);
-  legendItem_->setBorderPen(QPen(between(p, 0.4), 1.0));
-  legendItem_->setTextPen(QPen(ink));
+  const QColor ink = palette().color(QPalette::Text);
   design_->setSymbol(new QwtSymbol(QwtSymbol::Star2, QBrush(kOkabeItoYellow), QPen(ink, 1.2), QSize(15, 15)));
 }
 
-void StudyChart::changeEvent(QEvent* event) {
-  QwtPlot::changeEvent(event);
-  if (event->type() != QEvent::PaletteChange || applyingPalette_ || !grid_) return;
-  applyingPalette_ = true;
+void StudyChart::paletteChanged() {
   applyPalette();
   retranslateUi();
   rebuild();
-  applyingPalette_ = false;
 }
 
 const study::StudyColumn* StudyChart::columnNamed(const std::string& name) const {
@@ -237,10 +195,8 @@ void StudyChart::retranslateUi() {
   setAxisTitle(QwtAxis::YLeft, plot_ == StudyPlot::Carpet
                                    ? units_.withUnit(tr("Specific thrust F_s"), Quantity::SpecificThrust)
                                    : units_.withUnit(c ? studyColumnLabel(*c) : QString(), yQuantity()));
-  QwtText stale = staleBannerText(palette());
-  stale.setText(tr("Stale: the case has changed since this study ran; press Run to redo it"));
-  staleLabel_->setText(stale);
-  staleLabel_->setVisible(stale_ && study_);
+  setStaleText(tr("Stale: the case has changed since this study ran; press Run to redo it"));
+  showStaleBanner();
   QwtText designLabel(tr("Design point"));
   QFont bold = font();
   bold.setBold(true);
@@ -257,7 +213,7 @@ void StudyChart::setStudy(std::shared_ptr<const study::TradeStudy> s, std::array
                           bool stale) {
   study_ = std::move(s);
   axes_ = std::move(axes);
-  stale_ = stale;
+  assignStale(stale);
   if (study_ && study_->axes.size() < 2 && plot_ == StudyPlot::Carpet) plot_ = StudyPlot::Output;
   retranslateUi();
   rebuild();
@@ -276,13 +232,6 @@ void StudyChart::setPlot(StudyPlot plot, const std::string& column) {
   if (!column.empty() && columnNamed(column)) column_ = column;
   retranslateUi();
   rebuild();
-}
-
-void StudyChart::setStale(bool stale) {
-  if (stale == stale_) return;
-  stale_ = stale;
-  staleLabel_->setVisible(stale_ && study_);
-  replot();
 }
 
 int StudyChart::lineCount(Family family, bool overlay) const {
@@ -472,7 +421,7 @@ void StudyChart::rebuild() {
     const Family family = l.family;
     const int axis = family == Family::ConstantFirst ? 0 : 1;
     QColor colour = linePen(family, false, overlay_, plot_).color();
-    if (darkCanvas(p)) colour = colour.lighter(150);
+    if (darkCanvas()) colour = colour.lighter(150);
     const QString unit =
         axes_[axis].quantity == Quantity::Dimensionless ? QString() : units_.symbol(axes_[axis].quantity);
     const QString number = compactNumber(units_.toDisplay(l.value, axes_[axis].quantity));
@@ -506,11 +455,11 @@ void StudyChart::rebuild() {
                        [](const Line& l) { return l.overlay || l.segments.empty(); }))
     hint = tr("No point of this study has this figure.");
   QwtText hintText(hint);
-  hintText.setColor(between(p, 0.7));
+  hintText.setColor(between(0.7));
   hintText.setRenderFlags(Qt::AlignCenter | Qt::TextWordWrap);
   hintLabel_->setText(hintText);
   hintLabel_->setVisible(!hint.isEmpty());
-  staleLabel_->setVisible(stale_ && study_);
+  showStaleBanner();
   replot();
 }
 
