@@ -5,6 +5,9 @@
 #include "charts/chart_base.h"
 #include "charts/chart_export.h"
 #include "charts/cycle_chart.h"
+#include "charts/isobar_labels.h"
+#include "charts/label_placer.h"
+#include "charts/line_end_labels.h"
 #include "charts/readout_picker.h"
 #include "document/units.h"
 #include "gui_test_support.h"
@@ -16,6 +19,9 @@
 #include "engine/evaluate.h"
 #include "engine/process_paths.h"
 #include "io/case_file.h"
+#include "study/trade_study.h"
+
+#include <nlohmann/json.hpp>
 
 #include <qwt_plot_curve.h>
 #include <qwt_plot_marker.h>
@@ -23,7 +29,9 @@
 
 #include <QAction>
 #include <QApplication>
+#include <QDir>
 #include <QFile>
+#include <QFontMetricsF>
 #include <QImage>
 #include <QPen>
 #include <QTabWidget>
@@ -50,6 +58,36 @@ std::shared_ptr<const cw::engine::Evaluation> demoEvaluation() {
 
 std::shared_ptr<const cw::analysis::LossAudit> demoAudit() {
   return std::make_shared<const cw::analysis::LossAudit>(cw::analysis::auditCase(demoCase()));
+}
+
+std::shared_ptr<const cw::study::TradeStudy> demoCarpet(double lowestBurnerExit = 1200.0) {
+  QFile file(kDemo);
+  if (!file.open(QIODevice::ReadOnly)) qFatal("cannot read the demo case");
+  cw::study::TradeStudySpec spec;
+  spec.document = nlohmann::json::parse(file.readAll().toStdString());
+  spec.axes = {{"compressor.pressure_ratio", 4.0, 20.0, 9},
+               {"burner.exit_temperature_K", lowestBurnerExit, 1500.0, 4}};
+  spec.threads = 1;
+  return std::make_shared<const cw::study::TradeStudy>(cw::study::runTradeStudy(spec));
+}
+
+/// With CYCLEWRIGHT_TEST_FIGURES set to a folder, the figures the suite renders are kept there
+/// to be looked at.
+void saveFigure(const QImage& image, const QString& name) {
+  const QString folder = qEnvironmentVariable("CYCLEWRIGHT_TEST_FIGURES");
+  if (!folder.isEmpty()) image.save(QDir(folder).filePath(name + ".png"));
+}
+
+/// Whether a rectangle meets any of the curves (pixels).
+bool crossesAny(const QRectF& r, const std::vector<std::vector<QPointF>>& curves) {
+  for (const auto& c : curves)
+    for (std::size_t k = 1; k < c.size(); ++k)
+      if (segmentMeetsRect(c[k - 1], c[k], r)) return true;
+  return false;
+}
+
+QString describe(const QRectF& r) {
+  return QString("(%1, %2 %3 x %4)").arg(r.x()).arg(r.y()).arg(r.width()).arg(r.height());
 }
 
 /// The share of an image's pixels in a border strip that are exactly `colour`.
@@ -147,13 +185,16 @@ class TestCharts : public QObject {
     chart.setAudit(demoAudit(), false);
     const QImage image = renderChartImage(&chart, pixels, dpi);
     QCOMPARE(image.size(), pixels);
+    saveFigure(image, QString("audit-%1x%2-%3dpi").arg(pixels.width()).arg(pixels.height()).arg(dpi));
     const QRectF canvas = chart.lastCanvasRect();
     QVERIFY(canvas.width() > 100);
     const auto& labels = chart.valueLabelRects();
     QCOMPARE(labels.size(), chart.bars().size());
     QFont font = chart.font();
     font.setPointSizeF(font.pointSizeF() * 0.8);
-    const double textHeight = font.pointSizeF() * dpi / 72.0;  // the cap-to-descent box exceeds this
+    // The renderer scales the painter to the image's resolution: rectangles are in the chart's
+    // logical pixels, where the text is as tall as on screen.
+    const double textHeight = 0.95 * QFontMetricsF(font).height();
     for (const QRectF& r : labels) {
       QVERIFY2(canvas.contains(r), qPrintable(QString("label %1,%2 %3x%4 outside the canvas %5,%6 %7x%8")
                                                   .arg(r.x())
@@ -296,6 +337,169 @@ class TestCharts : public QObject {
       if (m->label().text() == "3") three = m;
     QVERIFY(three);
     QVERIFY(std::abs(three->yValue() * hf - evaluation->actual.station("3").totalEnthalpy) < 1e-3);
+  }
+
+  // The T-s chart's vector exports kept only one isobar label: every label placed on screen is
+  // placed in the SVG and the PDF too, and in PNGs at several sizes, inside the canvas.
+  void exportsKeepEveryIsobarLabel() {
+    DisplayUnits units;
+    CycleChart chart(ChartKind::TemperatureEntropy, units);
+    // On screen at the exports' size: 180 x 120 mm at 96 px per inch.
+    chart.resize(680, 454);
+    chart.setEvaluation(demoEvaluation(), false);
+    chart.grab();
+    const std::size_t onScreen = chart.isobarLabels()->placedRects().size();
+    QVERIFY2(onScreen >= 5, qPrintable(QString::number(onScreen)));
+    QTemporaryDir dir;
+    for (const QString format : {QStringLiteral("svg"), QStringLiteral("pdf")}) {
+      QVERIFY(exportChartDocument(&chart, dir.filePath("ts." + format), format, QSizeF(180, 120)));
+      const auto& placed = chart.isobarLabels()->placedTexts();
+      QVERIFY2(placed.size() >= onScreen,
+               qPrintable(format + QString(": %1 of %2 on screen: ").arg(placed.size()).arg(onScreen) +
+                          QStringList(placed.begin(), placed.end()).join(", ")));
+    }
+  }
+
+  // One placer for station numbers and isobar labels: none overlaps another, the isobars' labels
+  // cross none of the cycle's curves, the station numbers none at the larger size, all inside
+  // the canvas; on screen at two sizes and in a PNG export.
+  void cycleChartLabelsNeitherOverlapNorCrossCurves_data() {
+    QTest::addColumn<int>("kind");
+    QTest::addColumn<QSize>("size");
+    QTest::addColumn<bool>("exported");
+    for (int kind : {0, 1, 2})
+      for (const QSize size : {QSize(900, 600), QSize(560, 420)})
+        for (bool exported : {false, true})
+          QTest::addRow("kind %d, %dx%d%s", kind, size.width(), size.height(), exported ? ", PNG" : "")
+              << kind << size << exported;
+  }
+  void cycleChartLabelsNeitherOverlapNorCrossCurves() {
+    QFETCH(int, kind);
+    QFETCH(QSize, size);
+    QFETCH(bool, exported);
+    DisplayUnits units;
+    CycleChart chart(static_cast<ChartKind>(kind), units);
+    chart.resize(size);
+    chart.setEvaluation(demoEvaluation(), false);
+    const QString name = QString("cycle-%1-%2x%3%4")
+                             .arg(kind)
+                             .arg(size.width())
+                             .arg(size.height())
+                             .arg(exported ? "-png" : "");
+    if (exported)
+      saveFigure(renderChartImage(&chart, size * 2, 192), name);
+    else
+      saveFigure(chart.grab().toImage(), name);
+    const IsobarLabels* labels = chart.isobarLabels();
+    const QRectF canvas = labels->canvasRect();
+    QVERIFY(labels->curvePixels().size() == 4);
+    const auto& stations = labels->stationRects();
+    QCOMPARE(int(stations.size()), 8);  // every station number shown: 0, 2, 3, 4, 5, 7, 8, 9
+    const auto& isobars = labels->placedRects();
+    QVERIFY2(isobars.size() >= 2, qPrintable(QString::number(isobars.size())));
+    std::vector<QRectF> all(stations.begin(), stations.end());
+    all.insert(all.end(), isobars.begin(), isobars.end());
+    for (std::size_t i = 0; i < all.size(); ++i) {
+      QVERIFY2(canvas.contains(all[i]), qPrintable(describe(all[i]) + " outside " + describe(canvas)));
+      for (std::size_t j = i + 1; j < all.size(); ++j)
+        QVERIFY2(!all[i].intersects(all[j]), qPrintable(describe(all[i]) + " overlaps " + describe(all[j])));
+    }
+    for (const QRectF& r : isobars)
+      QVERIFY2(!crossesAny(r, labels->curvePixels()),
+               qPrintable("isobar label " + describe(r) + " crosses a curve"));
+    // A station number is never left out: where no side of its marker is clear of the lines
+    // (the small h-s chart's 5 and 7), it may cross one; at most one does.
+    int crossing = 0;
+    for (const QRectF& r : stations) crossing += crossesAny(r, labels->curvePixels()) ? 1 : 0;
+    QVERIFY2(crossing <= (size.width() < 700 ? 1 : 0),
+             qPrintable(QString("%1 station numbers cross a curve").arg(crossing)));
+  }
+
+  // The carpet's end labels: inside the canvas, none over another; the lines' ends are labelled
+  // clear of the lines where there is room (at most one in five crosses a line).
+  void carpetLabelsNeitherOverlapNorLeaveTheCanvas() {
+    DisplayUnits units;
+    StudyChart chart(units);
+    chart.resize(760, 520);
+    chart.setStudy(demoCarpet(),
+                   {StudyAxisName{"Compressor pressure ratio", Quantity::Dimensionless, {}},
+                    StudyAxisName{"Burner exit temperature", Quantity::Temperature, {}}},
+                   false);
+    chart.setOverlay(StudyOverlay::IdealTwin);
+    saveFigure(chart.grab().toImage(), "carpet-ideal");
+    const LineEndLabels* labels = chart.lineLabels();
+    const auto& placed = labels->placedRects();
+    QVERIFY2(placed.size() >= 8, qPrintable(QString::number(placed.size())));
+    int crossing = 0;
+    for (std::size_t i = 0; i < placed.size(); ++i) {
+      QVERIFY(labels->canvasRect().contains(placed[i]));
+      for (std::size_t j = i + 1; j < placed.size(); ++j) QVERIFY(!placed[i].intersects(placed[j]));
+      crossing += crossesAny(placed[i], labels->curvePixels()) ? 1 : 0;
+    }
+    QVERIFY2(crossing * 5 <= int(placed.size()),
+             qPrintable(QString("%1 of %2 cross").arg(crossing).arg(placed.size())));
+    // The ideal twin's lines are labelled too.
+    int overlayLabels = 0;
+    for (const auto& line : chart.lines()) overlayLabels += line.overlay && !line.label.isEmpty() ? 1 : 0;
+    QVERIFY(overlayLabels > 0);
+  }
+
+  // A study with points that have no cycle (burner exit temperatures too low for the turbine
+  // to drive the compressor) and some barely having one: the chart scales to the bulk of the
+  // points that have a cycle, the ideal twin's overlay included.
+  void studyScalesToThePointsThatHaveACycle() {
+    const auto study = demoCarpet(700.0);
+    int failed = 0;
+    double low = 1e300, high = -1e300, tsfcHigh = 0.0;
+    for (const auto& p : study->points) {
+      if (!p.solved()) {
+        ++failed;
+        continue;
+      }
+      tsfcHigh = std::max(tsfcHigh, p.actual.thrustSpecificFuelConsumption);
+      low = std::min(low, p.actual.specificThrust);
+      high = std::max(high, p.actual.specificThrust);
+    }
+    QVERIFY2(failed >= 3, qPrintable(QString::number(failed)));
+    DisplayUnits units;
+    StudyChart chart(units);
+    chart.resize(760, 520);
+    chart.setStudy(study,
+                   {StudyAxisName{"Compressor pressure ratio", Quantity::Dimensionless, {}},
+                    StudyAxisName{"Burner exit temperature", Quantity::Temperature, {}}},
+                   false);
+    chart.setOverlay(StudyOverlay::IdealTwin);
+    saveFigure(chart.grab().toImage(), "carpet-with-failed-points");
+    const QwtInterval y = chart.axisInterval(QwtAxis::YLeft);
+    const double span = high - low;
+    // The design point (the case as it is) is among the solved points' range here.
+    QVERIFY2(y.minValue() >= low - 0.1 * span && y.maxValue() <= high + 0.6 * span,
+             qPrintable(QString("axis %1 to %2, solved points %3 to %4")
+                            .arg(y.minValue())
+                            .arg(y.maxValue())
+                            .arg(low)
+                            .arg(high)));
+    // The few points at the edge of having a cycle (thrust near zero, TSFC some fifty times the
+    // design point's) do not squeeze the rest: the TSFC axis ends well short of them.
+    const double tsfcShown = chart.axisInterval(QwtAxis::XBottom).maxValue() * units.factor(Quantity::Tsfc);
+    QVERIFY2(tsfcShown < 0.2 * tsfcHigh, qPrintable(QString("%1 against %2").arg(tsfcShown).arg(tsfcHigh)));
+  }
+
+  // The waterfall docked narrow: its values do not run together.
+  void waterfallValuesDoNotRunTogether() {
+    DisplayUnits units;
+    AuditChart chart(units);
+    chart.resize(380, 300);
+    chart.setAudit(demoAudit(), false);
+    saveFigure(chart.grab().toImage(), "audit-narrow");
+    const auto& labels = chart.valueLabelRects();
+    QCOMPARE(labels.size(), chart.bars().size());
+    for (std::size_t i = 0; i < labels.size(); ++i) {
+      QVERIFY(chart.lastCanvasRect().contains(labels[i]));
+      for (std::size_t j = i + 1; j < labels.size(); ++j)
+        QVERIFY2(!labels[i].intersects(labels[j]), qPrintable(QString("values %1 and %2: ").arg(i).arg(j) +
+                                                              describe(labels[i]) + describe(labels[j])));
+    }
   }
 };
 

@@ -1,5 +1,6 @@
 #include "audit/audit_chart.h"
 #include "charts/colours.h"
+#include "charts/label_placer.h"
 
 #include "document/loss_names.h"
 
@@ -72,6 +73,9 @@ class AuditChart::WaterfallItem : public QwtPlotItem {
     QFont font = chart_.font();
     font.setPointSizeF(font.pointSizeF() * 0.8);
     painter->setFont(font);
+    std::vector<QString> texts;
+    std::vector<std::vector<QRectF>> candidates;
+    std::vector<QRectF> barRects;
     for (size_t i = 0; i < bars.size(); ++i) {
       const auto& bar = bars[i];
       const bool total = bar.loss.empty();
@@ -104,16 +108,38 @@ class AuditChart::WaterfallItem : public QwtPlotItem {
       const double shown = (total ? bar.to : bar.to - bar.from) / factor;
       QString text = formatNumber(shown, total ? 4 : 3);
       if (!total && shown > 0) text.prepend(QLatin1Char('+'));
-      // Sized by the font on this device (a 200 dpi export has text four times as tall as 50 dpi),
-      // above the bar, and inside the canvas.
-      painter->setPen(p.color(QPalette::Text));
-      const QFontMetricsF metrics(painter->font(), painter->device());
-      const QSizeF size(metrics.horizontalAdvance(text) + 2.0, metrics.height());
-      QRectF textRect(QPointF(r.center().x() - size.width() / 2.0, r.top() - 2.0 - size.height()), size);
-      if (textRect.top() < canvasRect.top() + 1.0) textRect.moveTop(canvasRect.top() + 1.0);
-      if (textRect.left() < canvasRect.left() + 1.0) textRect.moveLeft(canvasRect.left() + 1.0);
-      if (textRect.right() > canvasRect.right() - 1.0) textRect.moveRight(canvasRect.right() - 1.0);
-      painter->drawText(textRect, Qt::AlignCenter, text);
+      // Sized and drawn as QwtText (a fixed box and QPainter::drawText cut the value in half on
+      // a 200 dpi export, where the renderer's scaled painter drew it larger); above the bar,
+      // clear of the bars and of each other.
+      const QSizeF size = textSizeOn(painter, painter->font(), text);
+      const double lift = size.height() + 1.0;
+      std::vector<QRectF> options;
+      for (int row = 0; row < 3; ++row)  // above the bar, then staggered a line or two higher
+        options.emplace_back(
+            QPointF(r.center().x() - size.width() / 2.0, r.top() - 2.0 - size.height() - row * lift), size);
+      texts.push_back(text);
+      candidates.push_back(std::move(options));
+      barRects.push_back(r);
+    }
+    // The values: clear of every bar and of each other, inside the canvas; one that fits nowhere
+    // goes where it prefers, moved inside the canvas.
+    LabelPlacer placer(canvasRect.adjusted(1, 1, -1, -1));
+    for (const QRectF& r : barRects) placer.addObstacle(r);
+    painter->setPen(p.color(QPalette::Text));
+    for (std::size_t i = 0; i < candidates.size(); ++i) {
+      const int k = placer.place(candidates[i]);
+      QRectF textRect = candidates[i][static_cast<std::size_t>(std::max(k, 0))];
+      if (k < 0) {
+        textRect.moveTop(std::max(textRect.top(), canvasRect.top() + 1.0));
+        textRect.moveLeft(std::max(textRect.left(), canvasRect.left() + 1.0));
+        textRect.moveRight(std::min(textRect.right(), canvasRect.right() - 1.0));
+        placer.addObstacle(textRect);
+      }
+      QwtText value(texts[i]);
+      value.setFont(font);
+      value.setColor(p.color(QPalette::Text));
+      value.setRenderFlags(Qt::AlignCenter);
+      value.draw(painter, textRect);
       labelRects_.push_back(textRect);
     }
     lastCanvas_ = canvasRect;
@@ -224,7 +250,13 @@ void AuditChart::rebuild() {
     }
     const double span = std::max(high - low, 1e-9 * std::abs(high));
     low = std::max(0.0, low - 0.6 * span);
-    high += 0.18 * span;
+    // Room above the highest bar for three rows of values (they stagger where they would run
+    // together), however small the canvas: a share k of the axis, (high' - high) = k (high' - low).
+    QFont valueFont = font();
+    valueFont.setPointSizeF(valueFont.pointSizeF() * 0.8);
+    const double rows = 3.3 * QFontMetricsF(valueFont).height();
+    const double k = std::min(0.6, std::max(0.15, rows / std::max(60.0, double(canvas()->height()))));
+    high = std::max(high + 0.18 * span, (high - k * low) / (1.0 - k));
   }
   setAxisScale(QwtAxis::YLeft, low / factor, high / factor);
   QList<double> ticks;
@@ -257,6 +289,11 @@ QPoint AuditChart::barCentre(int index) const {
   const QwtScaleMap xMap = canvasMap(QwtAxis::XBottom), yMap = canvasMap(QwtAxis::YLeft);
   const double from = bar.loss.empty() ? yMap.s1() : bar.from / factor;
   return QPoint(qRound(xMap.transform(index)), qRound(yMap.transform(0.5 * (from + bar.to / factor))));
+}
+
+void AuditChart::resizeEvent(QResizeEvent* event) {
+  ChartBase::resizeEvent(event);
+  rebuild();  // the room for the values depends on the canvas's height
 }
 
 bool AuditChart::eventFilter(QObject* object, QEvent* event) {

@@ -58,6 +58,7 @@ class AuditChart : public ChartBase {
   void lossClicked(const QString& loss);
 
  protected:
+  void resizeEvent(QResizeEvent* event) override;
   void paletteChanged() override;
   bool eventFilter(QObject* object, QEvent* event) override;
 

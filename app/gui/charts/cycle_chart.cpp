@@ -117,6 +117,7 @@ CycleChart::CycleChart(ChartKind kind, DisplayUnits& units, QWidget* parent)
 
   isobarLabels_ = new IsobarLabels;
   isobarLabels_->setLegend(legendItem_);
+  isobarLabels_->setCurves({actual_, ideal_, actualClosure_, idealClosure_});
   isobarLabels_->attach(this);
 
   zoomer_ = new QwtPlotZoomer(QwtAxis::XBottom, QwtAxis::YLeft, canvas());
@@ -329,13 +330,13 @@ void CycleChart::rebuild() {
     for (const auto& station : cycle->stations) {
       engine::PathState state;
       if (!stationState(*cycle, station, state)) continue;
-      auto* marker = new QwtPlotMarker;
+      auto* marker = new StationMarker(isobarLabels_);
       marker->setValue(stateValue(state, xv) / xs, stateValue(state, yv) / ys);
       if (isIdeal) {
         const QColor edge = darkCanvas() ? kOrange : kOrange.darker(130);
         marker->setSymbol(new QwtSymbol(QwtSymbol::Diamond, Qt::NoBrush, QPen(edge, 1.0), QSize(6, 6)));
         marker->setZ(21);
-        stations.push_back({marker->value(), QSizeF(6, 6), QSizeF(), Qt::AlignCenter, 0.0});
+        stations.push_back({marker->value(), QSizeF(6, 6), QSizeF(), Qt::AlignCenter, 0.0, marker});
       } else {
         marker->setSymbol(new QwtSymbol(QwtSymbol::Ellipse, QBrush(ink), QPen(ink, 1.0), QSize(7, 7)));
         QwtText label(QString::fromStdString(station.id));
@@ -355,7 +356,7 @@ void CycleChart::rebuild() {
         marker->setSpacing(4);
         marker->setZ(22);
         stations.push_back({marker->value(), QSizeF(7, 7), label.textSize(bold), marker->labelAlignment(),
-                            double(marker->spacing())});
+                            double(marker->spacing()), marker});
       }
       marker->setItemAttribute(QwtPlotItem::AutoScale, false);
       marker->attach(this);
