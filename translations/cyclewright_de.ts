@@ -539,6 +539,12 @@ Gültiger Bereich: %2</translation>
         <source>Stale: showing the last valid result</source>
         <translation>Veraltet: letztes gültiges Ergebnis</translation>
     </message>
+    <message>
+        <source>No result:
+these inputs have no cycle</source>
+        <translation>Kein Ergebnis:
+kein Kreisprozess mit diesen Eingaben</translation>
+    </message>
 </context>
 <context>
     <name>LossNames</name>
@@ -929,6 +935,14 @@ Gültiger Bereich: %2</translation>
         <translation>Druck p</translation>
     </message>
     <message>
+        <source>Enthalpy–entropy</source>
+        <translation>Enthalpie–Entropie</translation>
+    </message>
+    <message>
+        <source>Specific enthalpy h</source>
+        <translation>Spezifische Enthalpie h</translation>
+    </message>
+    <message>
         <source>Cycle with losses</source>
         <translation>Kreisprozess mit Verlusten</translation>
     </message>
@@ -947,6 +961,12 @@ Gültiger Bereich: %2</translation>
     <message>
         <source>Isobars through station pressures</source>
         <translation>Isobaren durch die Stationsdrücke</translation>
+    </message>
+    <message>
+        <source>Stations: 0, 8, 9 static states;
+2 to 7 total states</source>
+        <translation>Stationen: 0, 8, 9 statische Zustände;
+2 bis 7 Totalzustände</translation>
     </message>
     <message>
         <source>Selected component</source>
@@ -1049,152 +1069,12 @@ p = %7   v = %8</translation>
         <translation>Bereit</translation>
     </message>
     <message>
-        <source>&amp;File</source>
-        <translation>&amp;Datei</translation>
-    </message>
-    <message>
-        <source>&amp;Quit</source>
-        <translation>&amp;Beenden</translation>
-    </message>
-    <message>
-        <source>&amp;Help</source>
-        <translation>&amp;Hilfe</translation>
-    </message>
-    <message>
-        <source>&amp;About Cyclewright</source>
-        <translation>Ü&amp;ber Cyclewright</translation>
-    </message>
-    <message>
-        <source>Opened %1</source>
-        <translation>%1 geöffnet</translation>
-    </message>
-    <message>
         <source>About Cyclewright</source>
         <translation>Über Cyclewright</translation>
     </message>
     <message>
         <source>&lt;b&gt;Cyclewright %1&lt;/b&gt;&lt;br&gt;A gas-turbine cycle explorer for conceptual design.</source>
         <translation>&lt;b&gt;Cyclewright %1&lt;/b&gt;&lt;br&gt;Ein Werkzeug zur Untersuchung von Gasturbinen-Kreisprozessen im Konzeptentwurf.</translation>
-    </message>
-    <message>
-        <source>&amp;New</source>
-        <translation>&amp;Neu</translation>
-    </message>
-    <message>
-        <source>&amp;Open…</source>
-        <translation>Ö&amp;ffnen…</translation>
-    </message>
-    <message>
-        <source>&amp;Save</source>
-        <translation>&amp;Speichern</translation>
-    </message>
-    <message>
-        <source>Save &amp;As…</source>
-        <translation>Speichern &amp;unter…</translation>
-    </message>
-    <message>
-        <source>&amp;Preferences…</source>
-        <translation>&amp;Einstellungen…</translation>
-    </message>
-    <message>
-        <source>&amp;Undo</source>
-        <translation>&amp;Rückgängig</translation>
-    </message>
-    <message>
-        <source>&amp;Redo</source>
-        <translation>&amp;Wiederholen</translation>
-    </message>
-    <message>
-        <source>&amp;Reset Zoom</source>
-        <translation>Zoom &amp;zurücksetzen</translation>
-    </message>
-    <message>
-        <source>Show the whole cycle on both charts</source>
-        <translation>Den ganzen Kreisprozess in beiden Diagrammen zeigen</translation>
-    </message>
-    <message>
-        <source>&amp;Logarithmic Pressure–Volume Axes</source>
-        <translation>&amp;Logarithmische Druck–Volumen-Achsen</translation>
-    </message>
-    <message>
-        <source>Log p–v</source>
-        <translation>Log p–v</translation>
-    </message>
-    <message>
-        <source>Charts &amp;Side by Side</source>
-        <translation>Diagramme &amp;nebeneinander</translation>
-    </message>
-    <message>
-        <source>Side by Side</source>
-        <translation>Nebeneinander</translation>
-    </message>
-    <message>
-        <source>Charts in &amp;Tabs</source>
-        <translation>Diagramme in &amp;Reitern</translation>
-    </message>
-    <message>
-        <source>Tabs</source>
-        <translation>Reiter</translation>
-    </message>
-    <message>
-        <source>Copy &amp;Temperature–Entropy Chart</source>
-        <translation>&amp;Temperatur–Entropie-Diagramm kopieren</translation>
-    </message>
-    <message>
-        <source>Copy &amp;Pressure–Volume Chart</source>
-        <translation>&amp;Druck–Volumen-Diagramm kopieren</translation>
-    </message>
-    <message>
-        <source>Copy Station &amp;Table</source>
-        <translation>Stations&amp;tabelle kopieren</translation>
-    </message>
-    <message>
-        <source>Open &amp;Recent</source>
-        <translation>&amp;Zuletzt geöffnet</translation>
-    </message>
-    <message>
-        <source>&amp;Export</source>
-        <translation>&amp;Exportieren</translation>
-    </message>
-    <message>
-        <source>PNG Image…</source>
-        <translation>PNG-Bild…</translation>
-    </message>
-    <message>
-        <source>SVG Drawing…</source>
-        <translation>SVG-Zeichnung…</translation>
-    </message>
-    <message>
-        <source>PDF Document…</source>
-        <translation>PDF-Dokument…</translation>
-    </message>
-    <message>
-        <source>Temperature–Entropy Chart as %1</source>
-        <translation>Temperatur–Entropie-Diagramm als %1</translation>
-    </message>
-    <message>
-        <source>Pressure–Volume Chart as %1</source>
-        <translation>Druck–Volumen-Diagramm als %1</translation>
-    </message>
-    <message>
-        <source>Station Table as CSV…</source>
-        <translation>Stationstabelle als CSV…</translation>
-    </message>
-    <message>
-        <source>Results as JSON…</source>
-        <translation>Ergebnisse als JSON…</translation>
-    </message>
-    <message>
-        <source>&amp;Edit</source>
-        <translation>&amp;Bearbeiten</translation>
-    </message>
-    <message>
-        <source>&amp;View</source>
-        <translation>&amp;Ansicht</translation>
-    </message>
-    <message>
-        <source>Main</source>
-        <translation>Haupt</translation>
     </message>
     <message>
         <source>Stations</source>
@@ -1225,6 +1105,10 @@ p = %7   v = %8</translation>
         <translation>Druck–Volumen</translation>
     </message>
     <message>
+        <source>Enthalpy–entropy</source>
+        <translation>Enthalpie–Entropie</translation>
+    </message>
+    <message>
         <source>%1: %2 is outside the valid range %3</source>
         <translation>%1: %2 liegt außerhalb des gültigen Bereichs %3</translation>
     </message>
@@ -1233,8 +1117,8 @@ p = %7   v = %8</translation>
         <translation>Diagramme und Tabellen zeigen das letzte gültige Ergebnis (veraltet).</translation>
     </message>
     <message>
-        <source>There is no valid result to show yet.</source>
-        <translation>Es gibt noch kein gültiges Ergebnis.</translation>
+        <source>There is no result for this case: the charts and tables are empty.</source>
+        <translation>Für diesen Fall gibt es kein Ergebnis: Diagramme und Tabellen bleiben leer.</translation>
     </message>
     <message>
         <source>Stale result. %1
@@ -1251,130 +1135,6 @@ p = %7   v = %8</translation>
         <translation>%1: Stationen %2</translation>
     </message>
     <message>
-        <source>Cannot open case</source>
-        <translation>Fall kann nicht geöffnet werden</translation>
-    </message>
-    <message>
-        <source>Cannot save %1: %2</source>
-        <translation>%1 kann nicht gespeichert werden: %2</translation>
-    </message>
-    <message>
-        <source>Cannot save</source>
-        <translation>Speichern nicht möglich</translation>
-    </message>
-    <message>
-        <source>Saved %1</source>
-        <translation>%1 gespeichert</translation>
-    </message>
-    <message>
-        <source>Open Case</source>
-        <translation>Fall öffnen</translation>
-    </message>
-    <message>
-        <source>Cyclewright cases (*.json);;All files (*)</source>
-        <translation>Cyclewright-Fälle (*.json);;Alle Dateien (*)</translation>
-    </message>
-    <message>
-        <source>Save Case As</source>
-        <translation>Fall speichern unter</translation>
-    </message>
-    <message>
-        <source>Cyclewright cases (*.json)</source>
-        <translation>Cyclewright-Fälle (*.json)</translation>
-    </message>
-    <message>
-        <source>No recent files</source>
-        <translation>Keine zuletzt geöffneten Dateien</translation>
-    </message>
-    <message>
-        <source>Unsaved changes</source>
-        <translation>Ungespeicherte Änderungen</translation>
-    </message>
-    <message>
-        <source>The case has unsaved changes. Save them first?</source>
-        <translation>Der Fall hat ungespeicherte Änderungen. Zuerst speichern?</translation>
-    </message>
-    <message>
-        <source>Untitled</source>
-        <translation>Unbenannt</translation>
-    </message>
-    <message>
-        <source>%1[*] — Cyclewright</source>
-        <translation>%1[*] — Cyclewright</translation>
-    </message>
-    <message>
-        <source>Autosave failed: %1</source>
-        <translation>Automatisches Speichern fehlgeschlagen: %1</translation>
-    </message>
-    <message>
-        <source>Recovered the autosaved case; save it to keep it.</source>
-        <translation>Automatisch gespeicherter Fall wiederhergestellt; zum Behalten speichern.</translation>
-    </message>
-    <message>
-        <source>Recover case</source>
-        <translation>Fall wiederherstellen</translation>
-    </message>
-    <message>
-        <source>PNG images (*.png)</source>
-        <translation>PNG-Bilder (*.png)</translation>
-    </message>
-    <message>
-        <source>SVG drawings (*.svg)</source>
-        <translation>SVG-Zeichnungen (*.svg)</translation>
-    </message>
-    <message>
-        <source>PDF documents (*.pdf)</source>
-        <translation>PDF-Dokumente (*.pdf)</translation>
-    </message>
-    <message>
-        <source>Export Chart</source>
-        <translation>Diagramm exportieren</translation>
-    </message>
-    <message>
-        <source>Exported %1</source>
-        <translation>%1 exportiert</translation>
-    </message>
-    <message>
-        <source>Cannot write %1</source>
-        <translation>%1 kann nicht geschrieben werden</translation>
-    </message>
-    <message>
-        <source>Export Station Table</source>
-        <translation>Stationstabelle exportieren</translation>
-    </message>
-    <message>
-        <source>Export Results</source>
-        <translation>Ergebnisse exportieren</translation>
-    </message>
-    <message>
-        <source>CSV files (*.csv)</source>
-        <translation>CSV-Dateien (*.csv)</translation>
-    </message>
-    <message>
-        <source>JSON files (*.json)</source>
-        <translation>JSON-Dateien (*.json)</translation>
-    </message>
-    <message>
-        <source>Exported %1 (SI units)</source>
-        <translation>%1 exportiert (SI-Einheiten)</translation>
-    </message>
-    <message>
-        <source>Chart copied to the clipboard</source>
-        <translation>Diagramm in die Zwischenablage kopiert</translation>
-    </message>
-    <message>
-        <source>Station table copied as tab-separated text</source>
-        <translation>Stationstabelle als tabulatorgetrennter Text kopiert</translation>
-    </message>
-    <message>
-        <source>Loss Audit Chart as %1</source>
-        <translation>Verlustanalyse-Diagramm als %1</translation>
-    </message>
-    <message>
-        <source>Loss Audit Table as CSV…</source>
-        <translation>Verlustanalyse-Tabelle als CSV…</translation>
-    </message>
-    <message>
         <source>Loss audit</source>
         <translation>Verlustanalyse</translation>
     </message>
@@ -1383,28 +1143,8 @@ p = %7   v = %8</translation>
         <translation>&amp;Verlustanalyse</translation>
     </message>
     <message>
-        <source>Export Loss Audit</source>
-        <translation>Verlustanalyse exportieren</translation>
-    </message>
-    <message>
         <source>Stations and performance</source>
         <translation>Stationen und Leistung</translation>
-    </message>
-    <message>
-        <source>Copy Trade &amp;Study Table</source>
-        <translation>Tabelle der &amp;Parameterstudie kopieren</translation>
-    </message>
-    <message>
-        <source>Trade Study Chart as %1</source>
-        <translation>Parameterstudien-Diagramm als %1</translation>
-    </message>
-    <message>
-        <source>Trade Study as CSV…</source>
-        <translation>Parameterstudie als CSV…</translation>
-    </message>
-    <message>
-        <source>Trade Study as JSON…</source>
-        <translation>Parameterstudie als JSON…</translation>
     </message>
     <message>
         <source>Trade study</source>
@@ -1415,72 +1155,8 @@ p = %7   v = %8</translation>
         <translation>&amp;Parameterstudie</translation>
     </message>
     <message>
-        <source>There is no trade study to export yet: run one first.</source>
-        <translation>Es gibt noch keine Parameterstudie zum Exportieren: zuerst eine rechnen.</translation>
-    </message>
-    <message>
-        <source>Export Trade Study</source>
-        <translation>Parameterstudie exportieren</translation>
-    </message>
-    <message>
-        <source>Exported %1 (the units are in the column names)</source>
-        <translation>%1 exportiert (die Einheiten stehen in den Spaltennamen)</translation>
-    </message>
-    <message>
-        <source>Cannot write %1: %2</source>
-        <translation>%1 kann nicht geschrieben werden: %2</translation>
-    </message>
-    <message>
-        <source>There is no trade study to copy yet: run one first.</source>
-        <translation>Es gibt noch keine Parameterstudie zum Kopieren: zuerst eine rechnen.</translation>
-    </message>
-    <message>
-        <source>Trade-study table copied as tab-separated text</source>
-        <translation>Tabelle der Parameterstudie als tabulatorgetrennter Text kopiert</translation>
-    </message>
-    <message>
-        <source>Not opened: %1</source>
-        <translation>Nicht geöffnet: %1</translation>
-    </message>
-    <message>
-        <source>The case shown is unchanged.</source>
-        <translation>Der angezeigte Fall bleibt unverändert.</translation>
-    </message>
-    <message>
-        <source>Cannot recover: %1</source>
-        <translation>Wiederherstellen nicht möglich: %1</translation>
-    </message>
-    <message>
-        <source>Cannot recover case</source>
-        <translation>Fall kann nicht wiederhergestellt werden</translation>
-    </message>
-    <message>
-        <source>It was left where it is.</source>
-        <translation>Er wurde an seinem Ort belassen.</translation>
-    </message>
-    <message>
-        <source>It was kept as %1.</source>
-        <translation>Er wurde als %1 aufbewahrt.</translation>
-    </message>
-    <message>
-        <source>An autosaved case cannot be recovered. %1</source>
-        <translation>Ein automatisch gespeicherter Fall kann nicht wiederhergestellt werden. %1</translation>
-    </message>
-    <message>
-        <source>An autosaved case cannot be recovered: %1</source>
-        <translation>Ein automatisch gespeicherter Fall kann nicht wiederhergestellt werden: %1</translation>
-    </message>
-    <message>
-        <source>Cyclewright did not close normally. Recover the untitled case autosaved at %1?</source>
-        <translation>Cyclewright wurde nicht normal beendet. Den um %1 automatisch gespeicherten unbenannten Fall wiederherstellen?</translation>
-    </message>
-    <message>
-        <source>Cyclewright did not close normally. Recover the changes to %1 autosaved at %2?</source>
-        <translation>Cyclewright wurde nicht normal beendet. Die um %2 automatisch gespeicherten Änderungen an %1 wiederherstellen?</translation>
-    </message>
-    <message>
-        <source>No discards this autosave.</source>
-        <translation>„Nein“ verwirft diese automatische Speicherung.</translation>
+        <source>&amp;Enthalpy–Entropy Chart Beside</source>
+        <translation>&amp;Enthalpie–Entropie-Diagramm daneben</translation>
     </message>
 </context>
 <context>
@@ -1792,6 +1468,18 @@ p = %7   v = %8</translation>
         <source>No point of this study has this figure.</source>
         <translation>Kein Punkt dieser Studie hat diese Größe.</translation>
     </message>
+    <message>
+        <source>with losses</source>
+        <translation>mit Verlusten</translation>
+    </message>
+    <message>
+        <source>ideal twin</source>
+        <translation>idealer Zwilling</translation>
+    </message>
+    <message>
+        <source>comparison</source>
+        <translation>Vergleich</translation>
+    </message>
 </context>
 <context>
     <name>cw::gui::StudyInputs</name>
@@ -2061,6 +1749,382 @@ p = %7   v = %8</translation>
     <message>
         <source>%1 × %2</source>
         <translation>%1 × %2</translation>
+    </message>
+</context>
+<context>
+    <name>cw::gui::WindowActions</name>
+    <message>
+        <source>&amp;File</source>
+        <translation>&amp;Datei</translation>
+    </message>
+    <message>
+        <source>&amp;Quit</source>
+        <translation>&amp;Beenden</translation>
+    </message>
+    <message>
+        <source>&amp;Help</source>
+        <translation>&amp;Hilfe</translation>
+    </message>
+    <message>
+        <source>&amp;About Cyclewright</source>
+        <translation>Ü&amp;ber Cyclewright</translation>
+    </message>
+    <message>
+        <source>&amp;New</source>
+        <translation>&amp;Neu</translation>
+    </message>
+    <message>
+        <source>&amp;Open…</source>
+        <translation>Ö&amp;ffnen…</translation>
+    </message>
+    <message>
+        <source>&amp;Save</source>
+        <translation>&amp;Speichern</translation>
+    </message>
+    <message>
+        <source>Save &amp;As…</source>
+        <translation>Speichern &amp;unter…</translation>
+    </message>
+    <message>
+        <source>&amp;Preferences…</source>
+        <translation>&amp;Einstellungen…</translation>
+    </message>
+    <message>
+        <source>&amp;Undo</source>
+        <translation>&amp;Rückgängig</translation>
+    </message>
+    <message>
+        <source>&amp;Redo</source>
+        <translation>&amp;Wiederholen</translation>
+    </message>
+    <message>
+        <source>Undo</source>
+        <translation>Rückgängig</translation>
+    </message>
+    <message>
+        <source>Redo</source>
+        <translation>Wiederholen</translation>
+    </message>
+    <message>
+        <source>&amp;Reset Zoom</source>
+        <translation>Zoom &amp;zurücksetzen</translation>
+    </message>
+    <message>
+        <source>Show the whole cycle on both charts</source>
+        <translation>Den ganzen Kreisprozess in beiden Diagrammen zeigen</translation>
+    </message>
+    <message>
+        <source>&amp;Logarithmic Pressure–Volume Axes</source>
+        <translation>&amp;Logarithmische Druck–Volumen-Achsen</translation>
+    </message>
+    <message>
+        <source>Log p–v</source>
+        <translation>Log p–v</translation>
+    </message>
+    <message>
+        <source>Charts &amp;Side by Side</source>
+        <translation>Diagramme &amp;nebeneinander</translation>
+    </message>
+    <message>
+        <source>Side by Side</source>
+        <translation>Nebeneinander</translation>
+    </message>
+    <message>
+        <source>Charts in &amp;Tabs</source>
+        <translation>Diagramme in &amp;Reitern</translation>
+    </message>
+    <message>
+        <source>Tabs</source>
+        <translation>Reiter</translation>
+    </message>
+    <message>
+        <source>Copy &amp;Temperature–Entropy Chart</source>
+        <translation>&amp;Temperatur–Entropie-Diagramm kopieren</translation>
+    </message>
+    <message>
+        <source>Copy &amp;Pressure–Volume Chart</source>
+        <translation>&amp;Druck–Volumen-Diagramm kopieren</translation>
+    </message>
+    <message>
+        <source>Copy Station &amp;Table</source>
+        <translation>Stations&amp;tabelle kopieren</translation>
+    </message>
+    <message>
+        <source>Open &amp;Recent</source>
+        <translation>&amp;Zuletzt geöffnet</translation>
+    </message>
+    <message>
+        <source>&amp;Export</source>
+        <translation>&amp;Exportieren</translation>
+    </message>
+    <message>
+        <source>PNG Image…</source>
+        <translation>PNG-Bild…</translation>
+    </message>
+    <message>
+        <source>SVG Drawing…</source>
+        <translation>SVG-Zeichnung…</translation>
+    </message>
+    <message>
+        <source>PDF Document…</source>
+        <translation>PDF-Dokument…</translation>
+    </message>
+    <message>
+        <source>Temperature–Entropy Chart as %1</source>
+        <translation>Temperatur–Entropie-Diagramm als %1</translation>
+    </message>
+    <message>
+        <source>Pressure–Volume Chart as %1</source>
+        <translation>Druck–Volumen-Diagramm als %1</translation>
+    </message>
+    <message>
+        <source>Enthalpy–Entropy Chart as %1</source>
+        <translation>Enthalpie–Entropie-Diagramm als %1</translation>
+    </message>
+    <message>
+        <source>Station Table as CSV…</source>
+        <translation>Stationstabelle als CSV…</translation>
+    </message>
+    <message>
+        <source>Results as JSON…</source>
+        <translation>Ergebnisse als JSON…</translation>
+    </message>
+    <message>
+        <source>&amp;Edit</source>
+        <translation>&amp;Bearbeiten</translation>
+    </message>
+    <message>
+        <source>&amp;View</source>
+        <translation>&amp;Ansicht</translation>
+    </message>
+    <message>
+        <source>Main</source>
+        <translation>Haupt</translation>
+    </message>
+    <message>
+        <source>No recent files</source>
+        <translation>Keine zuletzt geöffneten Dateien</translation>
+    </message>
+    <message>
+        <source>Loss Audit Chart as %1</source>
+        <translation>Verlustanalyse-Diagramm als %1</translation>
+    </message>
+    <message>
+        <source>Loss Audit Table as CSV…</source>
+        <translation>Verlustanalyse-Tabelle als CSV…</translation>
+    </message>
+    <message>
+        <source>Copy Trade &amp;Study Table</source>
+        <translation>Tabelle der &amp;Parameterstudie kopieren</translation>
+    </message>
+    <message>
+        <source>Trade Study Chart as %1</source>
+        <translation>Parameterstudien-Diagramm als %1</translation>
+    </message>
+    <message>
+        <source>Trade Study as CSV…</source>
+        <translation>Parameterstudie als CSV…</translation>
+    </message>
+    <message>
+        <source>Trade Study as JSON…</source>
+        <translation>Parameterstudie als JSON…</translation>
+    </message>
+</context>
+<context>
+    <name>cw::gui::WindowAutosave</name>
+    <message>
+        <source>Autosave failed: %1</source>
+        <translation>Automatisches Speichern fehlgeschlagen: %1</translation>
+    </message>
+    <message>
+        <source>Recovered the autosaved case; save it to keep it.</source>
+        <translation>Automatisch gespeicherter Fall wiederhergestellt; zum Behalten speichern.</translation>
+    </message>
+    <message>
+        <source>Recover case</source>
+        <translation>Fall wiederherstellen</translation>
+    </message>
+    <message>
+        <source>Cannot recover: %1</source>
+        <translation>Wiederherstellen nicht möglich: %1</translation>
+    </message>
+    <message>
+        <source>Cannot recover case</source>
+        <translation>Fall kann nicht wiederhergestellt werden</translation>
+    </message>
+    <message>
+        <source>It was left where it is.</source>
+        <translation>Er wurde an seinem Ort belassen.</translation>
+    </message>
+    <message>
+        <source>It was kept as %1.</source>
+        <translation>Er wurde als %1 aufbewahrt.</translation>
+    </message>
+    <message>
+        <source>An autosaved case cannot be recovered. %1</source>
+        <translation>Ein automatisch gespeicherter Fall kann nicht wiederhergestellt werden. %1</translation>
+    </message>
+    <message>
+        <source>An autosaved case cannot be recovered: %1</source>
+        <translation>Ein automatisch gespeicherter Fall kann nicht wiederhergestellt werden: %1</translation>
+    </message>
+    <message>
+        <source>Cyclewright did not close normally. Recover the untitled case autosaved at %1?</source>
+        <translation>Cyclewright wurde nicht normal beendet. Den um %1 automatisch gespeicherten unbenannten Fall wiederherstellen?</translation>
+    </message>
+    <message>
+        <source>Cyclewright did not close normally. Recover the changes to %1 autosaved at %2?</source>
+        <translation>Cyclewright wurde nicht normal beendet. Die um %2 automatisch gespeicherten Änderungen an %1 wiederherstellen?</translation>
+    </message>
+    <message>
+        <source>No discards this autosave.</source>
+        <translation>„Nein“ verwirft diese automatische Speicherung.</translation>
+    </message>
+</context>
+<context>
+    <name>cw::gui::WindowExports</name>
+    <message>
+        <source>PNG images (*.png)</source>
+        <translation>PNG-Bilder (*.png)</translation>
+    </message>
+    <message>
+        <source>SVG drawings (*.svg)</source>
+        <translation>SVG-Zeichnungen (*.svg)</translation>
+    </message>
+    <message>
+        <source>PDF documents (*.pdf)</source>
+        <translation>PDF-Dokumente (*.pdf)</translation>
+    </message>
+    <message>
+        <source>Export Chart</source>
+        <translation>Diagramm exportieren</translation>
+    </message>
+    <message>
+        <source>Exported %1</source>
+        <translation>%1 exportiert</translation>
+    </message>
+    <message>
+        <source>Cannot write %1</source>
+        <translation>%1 kann nicht geschrieben werden</translation>
+    </message>
+    <message>
+        <source>Export Station Table</source>
+        <translation>Stationstabelle exportieren</translation>
+    </message>
+    <message>
+        <source>Export Results</source>
+        <translation>Ergebnisse exportieren</translation>
+    </message>
+    <message>
+        <source>CSV files (*.csv)</source>
+        <translation>CSV-Dateien (*.csv)</translation>
+    </message>
+    <message>
+        <source>JSON files (*.json)</source>
+        <translation>JSON-Dateien (*.json)</translation>
+    </message>
+    <message>
+        <source>Exported %1 (SI units)</source>
+        <translation>%1 exportiert (SI-Einheiten)</translation>
+    </message>
+    <message>
+        <source>Chart copied to the clipboard</source>
+        <translation>Diagramm in die Zwischenablage kopiert</translation>
+    </message>
+    <message>
+        <source>Station table copied as tab-separated text</source>
+        <translation>Stationstabelle als tabulatorgetrennter Text kopiert</translation>
+    </message>
+    <message>
+        <source>Export Loss Audit</source>
+        <translation>Verlustanalyse exportieren</translation>
+    </message>
+    <message>
+        <source>There is no trade study to export yet: run one first.</source>
+        <translation>Es gibt noch keine Parameterstudie zum Exportieren: zuerst eine rechnen.</translation>
+    </message>
+    <message>
+        <source>Export Trade Study</source>
+        <translation>Parameterstudie exportieren</translation>
+    </message>
+    <message>
+        <source>Exported %1 (the units are in the column names)</source>
+        <translation>%1 exportiert (die Einheiten stehen in den Spaltennamen)</translation>
+    </message>
+    <message>
+        <source>Cannot write %1: %2</source>
+        <translation>%1 kann nicht geschrieben werden: %2</translation>
+    </message>
+    <message>
+        <source>There is no trade study to copy yet: run one first.</source>
+        <translation>Es gibt noch keine Parameterstudie zum Kopieren: zuerst eine rechnen.</translation>
+    </message>
+    <message>
+        <source>Trade-study table copied as tab-separated text</source>
+        <translation>Tabelle der Parameterstudie als tabulatorgetrennter Text kopiert</translation>
+    </message>
+</context>
+<context>
+    <name>cw::gui::WindowFiles</name>
+    <message>
+        <source>Opened %1</source>
+        <translation>%1 geöffnet</translation>
+    </message>
+    <message>
+        <source>Cannot open case</source>
+        <translation>Fall kann nicht geöffnet werden</translation>
+    </message>
+    <message>
+        <source>Cannot save %1: %2</source>
+        <translation>%1 kann nicht gespeichert werden: %2</translation>
+    </message>
+    <message>
+        <source>Cannot save</source>
+        <translation>Speichern nicht möglich</translation>
+    </message>
+    <message>
+        <source>Saved %1</source>
+        <translation>%1 gespeichert</translation>
+    </message>
+    <message>
+        <source>Open Case</source>
+        <translation>Fall öffnen</translation>
+    </message>
+    <message>
+        <source>Cyclewright cases (*.json);;All files (*)</source>
+        <translation>Cyclewright-Fälle (*.json);;Alle Dateien (*)</translation>
+    </message>
+    <message>
+        <source>Save Case As</source>
+        <translation>Fall speichern unter</translation>
+    </message>
+    <message>
+        <source>Cyclewright cases (*.json)</source>
+        <translation>Cyclewright-Fälle (*.json)</translation>
+    </message>
+    <message>
+        <source>Unsaved changes</source>
+        <translation>Ungespeicherte Änderungen</translation>
+    </message>
+    <message>
+        <source>The case has unsaved changes. Save them first?</source>
+        <translation>Der Fall hat ungespeicherte Änderungen. Zuerst speichern?</translation>
+    </message>
+    <message>
+        <source>Untitled</source>
+        <translation>Unbenannt</translation>
+    </message>
+    <message>
+        <source>%1[*] — Cyclewright</source>
+        <translation>%1[*] — Cyclewright</translation>
+    </message>
+    <message>
+        <source>Not opened: %1</source>
+        <translation>Nicht geöffnet: %1</translation>
+    </message>
+    <message>
+        <source>The case shown is unchanged.</source>
+        <translation>Der angezeigte Fall bleibt unverändert.</translation>
     </message>
 </context>
 </TS>

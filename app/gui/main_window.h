@@ -1,7 +1,9 @@
 #pragma once
 // The main window of Cyclewright: the component strip, the form of the selected section, the
 // temperature-entropy and pressure-volume charts, the station table and the performance
-// summary; menus and toolbar (the window owns every action); files, autosave and recovery.
+// summary, and the docks. The window lays them out; its actions, menus and toolbar
+// (WindowActions), files (WindowFiles), autosave and recovery (WindowAutosave) and exports
+// (WindowExports) are classes of their own.
 
 #include "document/case_fields.h"
 #include "document/settings.h"
@@ -13,13 +15,11 @@
 #include <array>
 #include <memory>
 
-class QAction;
-class QActionGroup;
 class QComboBox;
 class QDockWidget;
 class QLabel;
+class QVBoxLayout;
 class QListWidget;
-class QMenu;
 class QSplitter;
 class QStackedWidget;
 class QTabWidget;
@@ -33,11 +33,8 @@ struct Evaluation;
 namespace cw::gui {
 
 class AuditPanel;
-class AutosaveStore;
 class AutosaveTimer;
 class TradeStudyPanel;
-struct Autosave;
-struct OrphanAutosave;
 class CaseDocument;
 class CaseForm;
 class CycleChart;
@@ -45,6 +42,10 @@ class DisplayUnits;
 class PerformanceModel;
 class SelectionRouter;
 class StationTableModel;
+class WindowActions;
+class WindowAutosave;
+class WindowExports;
+class WindowFiles;
 
 class MainWindow : public QMainWindow {
   Q_OBJECT
@@ -90,6 +91,8 @@ class MainWindow : public QMainWindow {
   void setChartLayout(ChartLayout layout);
   ChartLayout chartLayout() const { return chartLayout_; }
   void setUnitSystem(UnitSystem system);
+  /// Logarithmic axes on the pressure-volume chart (kept in the settings).
+  void setPressureVolumeLogAxes(bool on);
   /// Puts the audit panel in its dock when the dock is shown, else in the bottom tabs.
   void placeAudit();
   /// Puts the trade-study panel in its dock when the dock is shown, else in the bottom tabs.
@@ -108,7 +111,7 @@ class MainWindow : public QMainWindow {
   QString autosaveFile() const;
   /// When the next autosave is due (after an edit: 2 s after the last, at most the Preferences'
   /// limit after the first).
-  AutosaveTimer* autosaveTimer() const { return autosaveTimer_; }
+  AutosaveTimer* autosaveTimer() const;
   /// Writes the autosave now (when modified). Returns true when written.
   bool autosaveNow();
   /// At start: removes the temporaries of interrupted autosaves whose process is gone, then
@@ -119,6 +122,10 @@ class MainWindow : public QMainWindow {
   /// Loads an autosaved case as a modified, unsaved case of its origin file. Returns false, with
   /// a message naming the file and what is wrong, when it is not a valid autosave.
   bool recoverFrom(const QString& autosaveFile);
+
+  WindowActions& actions() const { return *actions_; }
+  WindowFiles& files() const { return *files_; }
+  WindowExports& exports() const { return *exports_; }
 
  public slots:
   void showAbout();
@@ -133,13 +140,17 @@ class MainWindow : public QMainWindow {
   void changeEvent(QEvent* event) override;
 
  private:
-  void createActions();
-  void createMenus();
-  void createToolBar();
   void createCentralWidget();
-  void updateRecentMenu();
-  bool maybeSave();
-  void updateTitle();
+  void createStrip(QVBoxLayout* layout);
+  void createBanner(QVBoxLayout* layout);
+  QSplitter* createFormsAndCharts();
+  QWidget* createStationBox();
+  QWidget* createPerformanceBox();
+  void createBottomTabs(QSplitter* vertical);
+  QDockWidget* createDock(const QString& title, const char* name, int width);
+  void createDocks();
+  void connectDocument();
+  void restoreFromSettings();
   void refreshResult();
   void updateBanner();
   /// The stale banner's colours from the window's palette (light or dark).
@@ -147,25 +158,16 @@ class MainWindow : public QMainWindow {
   void updateStrip();
   void routeSelection(Section section);
   QSet<QString> stationsOf(Section section) const;
-  void exportChart(QwtPlot* chart, const QString& baseName, const QString& format);
-  void exportTable(const QString& format);
-  void copyChart(CycleChart* chart);
-  void copyTable();
-  void copyStudyTable();
-  void scheduleAutosave();
-  void removeAutosave();
-  bool refuseToOpen(const QString& message, QString* error);
-  bool askToRecover(const Autosave& autosave);
-  void recover(const Autosave& autosave);
-  bool readAutosave(OrphanAutosave& orphan, Autosave& autosave);
-  void showProblem(const QString& objectName, const QString& title, const QString& text,
-                   const QString& detail);
 
   AppSettings settings_;
   DisplayUnits* units_ = nullptr;
   CaseDocument* document_ = nullptr;
   SelectionRouter* router_ = nullptr;
   std::shared_ptr<const engine::Evaluation> shown_;
+  WindowFiles* files_ = nullptr;
+  WindowAutosave* autosave_ = nullptr;
+  WindowExports* exports_ = nullptr;
+  WindowActions* actions_ = nullptr;
 
   QListWidget* strip_ = nullptr;
   QStackedWidget* forms_ = nullptr;
@@ -189,16 +191,6 @@ class MainWindow : public QMainWindow {
   QDockWidget* auditDock_ = nullptr;
   TradeStudyPanel* tradeStudyPanel_ = nullptr;
   QDockWidget* tradeStudyDock_ = nullptr;
-  QMenu* viewMenu_ = nullptr;
-  QMenu* recentMenu_ = nullptr;
-  AutosaveTimer* autosaveTimer_ = nullptr;
-  std::unique_ptr<AutosaveStore> autosaves_;
-
-  struct Actions {
-    QAction *newCase, *open, *save, *saveAs, *preferences, *quit, *undo, *redo, *resetZoom, *logAxes,
-        *sideBySide, *tabbed, *about, *copyTs, *copyPv, *copyTable, *copyStudyTable;
-    QActionGroup* layoutGroup;
-  } actions_{};
 };
 
 }  // namespace cw::gui

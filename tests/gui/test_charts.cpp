@@ -351,7 +351,7 @@ class TestCharts : public QObject {
     const std::size_t onScreen = chart.isobarLabels()->placedRects().size();
     QVERIFY2(onScreen >= 5, qPrintable(QString::number(onScreen)));
     QTemporaryDir dir;
-    for (const QString format : {QStringLiteral("svg"), QStringLiteral("pdf")}) {
+    for (const QString& format : {QStringLiteral("svg"), QStringLiteral("pdf")}) {
       QVERIFY(exportChartDocument(&chart, dir.filePath("ts." + format), format, QSizeF(180, 120)));
       const auto& placed = chart.isobarLabels()->placedTexts();
       QVERIFY2(placed.size() >= onScreen,

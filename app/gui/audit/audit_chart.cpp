@@ -198,7 +198,6 @@ void AuditChart::retranslateUi() {
   setAxisTitle(QwtAxis::YLeft, figure_ == AuditFigure::Tsfc
                                    ? units_.withUnit(tr("TSFC"), Quantity::Tsfc)
                                    : units_.withUnit(tr("Specific thrust F_s"), Quantity::SpecificThrust));
-  setStaleText(QCoreApplication::translate("CycleChart", "Stale: showing the last valid result"));
   showStaleBanner();
 }
 

@@ -60,6 +60,7 @@ class AuditChart : public ChartBase {
  protected:
   void resizeEvent(QResizeEvent* event) override;
   void paletteChanged() override;
+  bool hasResult() const override { return audit_ != nullptr; }
   bool eventFilter(QObject* object, QEvent* event) override;
 
  private:

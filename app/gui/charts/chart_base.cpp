@@ -10,7 +10,6 @@
 #include <qwt_plot_legenditem.h>
 #include <qwt_plot_textlabel.h>
 
-#include <QCoreApplication>
 #include <QEvent>
 #include <QPen>
 
@@ -25,7 +24,6 @@ ChartBase::ChartBase(QWidget* parent) : QwtPlot(parent) {
   staleLabel_->setZ(100);
   staleLabel_->setVisible(false);
   staleLabel_->attach(this);
-  staleText_ = QCoreApplication::translate("CycleChart", "Stale: showing the last valid result");
   applyBasePalette();
 }
 
@@ -57,13 +55,14 @@ void ChartBase::assignStale(bool stale) {
 
 void ChartBase::setStaleText(const QString& text) {
   staleText_ = text;
-  QwtText banner = staleBannerText(palette());
-  banner.setText(staleText_);
-  staleLabel_->setText(banner);
+  showStaleBanner();
 }
 
 void ChartBase::showStaleBanner() {
-  staleLabel_->setVisible(stale_ && showsResult());
+  QwtText banner = staleBannerText(palette(), hasResult());
+  if (!staleText_.isEmpty()) banner.setText(staleText_);
+  staleLabel_->setText(banner);
+  staleLabel_->setVisible(stale_ && wantsStaleBanner());
 }
 
 QwtPlotLegendItem* ChartBase::makeLegendItem(Qt::Alignment alignment, int columns, double fontScale) {
@@ -105,7 +104,7 @@ void ChartBase::applyBasePalette() {
   setCanvasBackground(palette().color(QPalette::Base));
   grid_->setMajorPen(between(0.3), 0.0, Qt::DotLine);
   for (QwtPlotLegendItem* legend : legendItems_) styleLegendItem(legend);
-  setStaleText(staleText_);
+  showStaleBanner();
 }
 
 void ChartBase::changeEvent(QEvent* event) {

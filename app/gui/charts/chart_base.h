@@ -61,12 +61,15 @@ class ChartBase : public QwtPlot {
   virtual void staleChanged() {}
   /// Sets the stale flag without notifying (setEvaluation-like calls that rebuild anyway).
   void assignStale(bool stale);
-  /// The banner's text (default: the cycle charts' "Stale: showing the last valid result").
+  /// A text of the chart's own for the banner (empty: staleBannerText's, by hasResult()).
   void setStaleText(const QString& text);
-  /// Shows the banner when stale and the chart shows a result.
+  /// Shows the banner when stale (and wanted), with the text for the result shown.
   void showStaleBanner();
-  /// Whether the chart shows a result (the banner needs one); the default: always.
-  virtual bool showsResult() const { return true; }
+  /// Whether the chart has a result to show: the banner says it shows the last valid one, or
+  /// that there is none (a case opened without a cycle). The default: it has.
+  virtual bool hasResult() const { return true; }
+  /// Whether the banner is wanted while stale; the default: always.
+  virtual bool wantsStaleBanner() const { return true; }
 
   QwtPlotGrid* gridItem() const { return grid_; }
   /// A legend inside the canvas in the charts' style; the caller attaches it.

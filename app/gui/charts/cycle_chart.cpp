@@ -216,7 +216,6 @@ void CycleChart::retranslateUi() {
   stationLegend_->setTitle(tr("Stations: 0, 8, 9 static states;\n2 to 7 total states"));
   highlight_->setTitle(highlighted_.empty() ? tr("Selected component")
                                             : tr("Selected: %1").arg(componentName(highlighted_)));
-  setStaleText(QCoreApplication::translate("CycleChart", "Stale: showing the last valid result"));
   showStaleBanner();
 }
 

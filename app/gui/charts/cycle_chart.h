@@ -82,6 +82,7 @@ class CycleChart : public ChartBase {
  protected:
   void paletteChanged() override;
   void staleChanged() override;
+  bool hasResult() const override { return evaluation_ != nullptr; }
 
  private:
   /// Colours of the canvas, grid, legend and rubber band from the palette.

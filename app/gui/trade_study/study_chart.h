@@ -106,7 +106,7 @@ class StudyChart : public ChartBase {
 
  protected:
   void paletteChanged() override;
-  bool showsResult() const override { return study_ != nullptr; }
+  bool wantsStaleBanner() const override { return study_ != nullptr; }
   void resizeEvent(QResizeEvent* event) override;
 
  private:

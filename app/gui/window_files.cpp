@@ -1,0 +1,159 @@
+#include "window_files.h"
+
+#include "dialogs/problem_box.h"
+#include "document/case_document.h"
+#include "document/settings.h"
+
+#include "common/error.h"
+#include "engine/case_validation_error.h"
+#include "io/atomic_file.h"
+#include "io/case_file.h"
+
+#include <QDir>
+#include <QFile>
+#include <QFileDialog>
+#include <QFileInfo>
+#include <QMainWindow>
+#include <QMessageBox>
+#include <QStatusBar>
+
+namespace cw::gui {
+
+namespace {
+
+/// The case at a path or a Qt resource; throws as io::readCaseFile does, naming the path.
+engine::Case readCaseAt(const QString& path) {
+  if (!path.startsWith(QLatin1Char(':')))
+    return io::readCaseFile(QDir::toNativeSeparators(path).toStdString());
+  QFile file(path);
+  if (!file.open(QIODevice::ReadOnly))
+    throw InvalidInput(path.toStdString(), "cannot read case file: " + file.errorString().toStdString());
+  const QByteArray bytes = file.readAll();
+  // The same checks as a file from disk (nesting, NUL, trailing text, every JSON-library error).
+  return io::parseCaseText(std::string_view(bytes.constData(), static_cast<std::size_t>(bytes.size())),
+                           path.toStdString());
+}
+
+/// Why a case cannot be opened: the core reader's message, naming the file first.
+QString openFailureText(const QString& path, const std::exception& e) {
+  const auto* invalid = dynamic_cast<const engine::CaseValidationError*>(&e);
+  if (!invalid) return QString::fromStdString(e.what());
+  QStringList lines;
+  for (const auto& p : invalid->problems()) lines << QString::fromStdString(p.message);
+  return path + QStringLiteral(": ") + lines.join(QLatin1Char('\n'));
+}
+
+/// Removes the temporaries interrupted atomic saves of a case file left beside it.
+void removeStaleTemporariesOf(const QString& path) {
+  if (path.isEmpty() || path.startsWith(QLatin1Char(':'))) return;
+  const QFileInfo info(path);
+  io::removeStaleTemporaries(info.absolutePath().toStdString(), info.fileName().toStdString());
+}
+
+bool isResource(const QString& path) {
+  return path.startsWith(QLatin1Char(':'));
+}
+
+}  // namespace
+
+WindowFiles::WindowFiles(QMainWindow& window, CaseDocument& document, AppSettings& settings)
+    : QObject(&window), window_(window), document_(document), settings_(settings) {
+  connect(&document_, &CaseDocument::modifiedChanged, this, &WindowFiles::updateTitle);
+}
+
+bool WindowFiles::openCase(const QString& path, QString* error) {
+  engine::Case loaded;
+  try {
+    loaded = readCaseAt(path);
+  } catch (const std::exception& e) {
+    return refuseToOpen(openFailureText(path, e), error);
+  }
+  removeStaleTemporariesOf(path);
+  document_.load(loaded, path);
+  if (!isResource(path)) settings_.addRecentFile(QFileInfo(path).absoluteFilePath());
+  updateTitle();
+  const QString title = QString::fromStdString(loaded.title);
+  window_.statusBar()->showMessage(tr("Opened %1").arg(title.isEmpty() ? path : title));
+  return true;
+}
+
+bool WindowFiles::refuseToOpen(const QString& message, QString* error) {
+  if (error) *error = message;
+  window_.statusBar()->showMessage(tr("Not opened: %1").arg(message.section(QLatin1Char('\n'), 0, 0)));
+  showProblemBox(&window_, QStringLiteral("openFailedBox"), tr("Cannot open case"), message,
+                 tr("The case shown is unchanged."));
+  return false;
+}
+
+bool WindowFiles::saveCaseAs(const QString& path) {
+  try {
+    io::writeCaseFile(path.toStdString(), document_.currentCase());
+  } catch (const std::exception& e) {
+    window_.statusBar()->showMessage(tr("Cannot save %1: %2").arg(path, QString::fromStdString(e.what())));
+    if (window_.isVisible())
+      QMessageBox::warning(&window_, tr("Cannot save"), QString::fromStdString(e.what()));
+    return false;
+  }
+  document_.markSaved(path);
+  removeStaleTemporariesOf(path);
+  settings_.addRecentFile(QFileInfo(path).absoluteFilePath());
+  emit saved();
+  updateTitle();
+  window_.statusBar()->showMessage(tr("Saved %1").arg(path));
+  return true;
+}
+
+void WindowFiles::newCase() {
+  if (!maybeSave()) return;
+  document_.load(engine::Case{}, QString());
+  updateTitle();
+}
+
+void WindowFiles::open() {
+  if (!maybeSave()) return;
+  const QString path = QFileDialog::getOpenFileName(&window_, tr("Open Case"), QString(),
+                                                    tr("Cyclewright cases (*.json);;All files (*)"));
+  if (!path.isEmpty()) openCase(path);
+}
+
+bool WindowFiles::save() {
+  const QString path = document_.filePath();
+  if (path.isEmpty() || isResource(path)) return saveAs();
+  return saveCaseAs(path);
+}
+
+bool WindowFiles::saveAs() {
+  QString suggestion = document_.filePath();
+  if (suggestion.isEmpty() || isResource(suggestion))
+    suggestion = QDir::home().filePath(suggestion.isEmpty() ? QStringLiteral("case.json")
+                                                            : QFileInfo(suggestion).fileName());
+  const QString path = QFileDialog::getSaveFileName(&window_, tr("Save Case As"), suggestion,
+                                                    tr("Cyclewright cases (*.json)"));
+  return !path.isEmpty() && saveCaseAs(path);
+}
+
+void WindowFiles::openRecent(const QString& path) {
+  if (maybeSave()) openCase(path);
+}
+
+QStringList WindowFiles::recentFiles() const {
+  return settings_.recentFiles();
+}
+
+bool WindowFiles::maybeSave() {
+  if (!document_.isModified()) return true;
+  const auto answer = QMessageBox::warning(&window_, tr("Unsaved changes"),
+                                           tr("The case has unsaved changes. Save them first?"),
+                                           QMessageBox::Save | QMessageBox::Discard | QMessageBox::Cancel);
+  if (answer == QMessageBox::Save) return save();
+  return answer == QMessageBox::Discard;
+}
+
+void WindowFiles::updateTitle() {
+  const QString path = document_.filePath();
+  const QString name = path.isEmpty() ? tr("Untitled") : QFileInfo(path).fileName();
+  window_.setWindowTitle(tr("%1[*] — Cyclewright").arg(name));
+  window_.setWindowModified(document_.isModified());
+}
+
+}  // namespace cw::gui

@@ -1,0 +1,54 @@
+#pragma once
+// The main window's files: open, save, save as, the recent files, and the question before
+// unsaved changes are lost. The window's title names the open file.
+
+#include <QObject>
+#include <QString>
+#include <QStringList>
+
+class QMainWindow;
+
+namespace cw::gui {
+
+class AppSettings;
+class CaseDocument;
+
+class WindowFiles : public QObject {
+  Q_OBJECT
+
+ public:
+  WindowFiles(QMainWindow& window, CaseDocument& document, AppSettings& settings);
+
+  /// Opens a case file (a path or a Qt resource) and removes the temporaries interrupted saves
+  /// left beside it; see MainWindow::openCase.
+  bool openCase(const QString& path, QString* error = nullptr);
+  /// Saves to a path (SI, atomically). Returns false and says why when it cannot.
+  bool saveCaseAs(const QString& path);
+
+  void newCase();
+  /// Asks for a file, then opens it.
+  void open();
+  bool save();
+  bool saveAs();
+  /// Opens a recent file, after asking about unsaved changes.
+  void openRecent(const QString& path);
+  /// The recent files, newest first (absolute paths).
+  QStringList recentFiles() const;
+  /// Asks whether to save unsaved changes. Returns false when the user cancels.
+  bool maybeSave();
+  /// The window's title: the file's name and the modified mark.
+  void updateTitle();
+
+ signals:
+  /// The case was written to its file: nothing is left to recover.
+  void saved();
+
+ private:
+  bool refuseToOpen(const QString& message, QString* error);
+
+  QMainWindow& window_;
+  CaseDocument& document_;
+  AppSettings& settings_;
+};
+
+}  // namespace cw::gui
