@@ -40,13 +40,34 @@ bool segmentMeetsRect(const QPointF& a, const QPointF& b, const QRectF& r) {
   return true;
 }
 
+void LabelPlacer::cellRange(const QRectF& r, int& c0, int& c1, int& r0, int& r1) const {
+  auto clampTo = [](double v, int n) { return std::clamp(static_cast<int>(std::floor(v)), 0, n - 1); };
+  c0 = clampTo((r.left() - bounds_.left()) / kCell, columns_);
+  c1 = clampTo((r.right() - bounds_.left()) / kCell, columns_);
+  r0 = clampTo((r.top() - bounds_.top()) / kCell, rows_);
+  r1 = clampTo((r.bottom() - bounds_.top()) / kCell, rows_);
+}
+
 void LabelPlacer::addCurve(std::vector<QPointF> points) {
+  if (cells_.empty()) {
+    columns_ = std::max(1, static_cast<int>(std::ceil(bounds_.width() / kCell)));
+    rows_ = std::max(1, static_cast<int>(std::ceil(bounds_.height() / kCell)));
+    cells_.assign(static_cast<std::size_t>(columns_ * rows_), {});
+  }
+  const QRectF area = bounds_.adjusted(-kCell, -kCell, kCell, kCell);
   for (std::size_t k = 1; k < points.size(); ++k) {
     const QPointF& a = points[k - 1];
     const QPointF& b = points[k];
     if (!std::isfinite(a.x()) || !std::isfinite(a.y()) || !std::isfinite(b.x()) || !std::isfinite(b.y()))
       continue;
-    segments_.push_back({a, b, QRectF(a, b).normalized()});
+    const QRectF box = QRectF(a, b).normalized().adjusted(-0.5, -0.5, 0.5, 0.5);
+    if (!box.intersects(area)) continue;  // off the canvas: no label can meet it
+    const int index = static_cast<int>(segments_.size());
+    segments_.push_back({a, b, box});
+    int c0, c1, r0, r1;
+    cellRange(box, c0, c1, r0, r1);
+    for (int r = r0; r <= r1; ++r)
+      for (int c = c0; c <= c1; ++c) cells_[static_cast<std::size_t>(r * columns_ + c)].push_back(index);
   }
 }
 
@@ -56,12 +77,17 @@ bool LabelPlacer::clearOfTaken(const QRectF& rect) const {
 }
 
 bool LabelPlacer::crossesCurve(const QRectF& rect) const {
+  if (segments_.empty()) return false;
   const QRectF r = rect.adjusted(-1, -1, 1, 1);
-  for (const Segment& s : segments_) {
-    // A horizontal or vertical segment has an empty box: widen it a hair for the quick test.
-    if (!s.box.adjusted(-0.5, -0.5, 0.5, 0.5).intersects(r)) continue;
-    if (segmentMeetsRect(s.a, s.b, r)) return true;
-  }
+  int c0, c1, r0, r1;
+  cellRange(r, c0, c1, r0, r1);
+  for (int row = r0; row <= r1; ++row)
+    for (int c = c0; c <= c1; ++c)
+      for (int index : cells_[static_cast<std::size_t>(row * columns_ + c)]) {
+        const Segment& s = segments_[static_cast<std::size_t>(index)];
+        // The box is widened a hair: a horizontal or vertical segment's own is empty.
+        if (s.box.intersects(r) && segmentMeetsRect(s.a, s.b, r)) return true;
+      }
   return false;
 }
 

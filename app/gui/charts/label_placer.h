@@ -59,6 +59,12 @@ class LabelPlacer {
     QRectF box;
   };
   std::vector<Segment> segments_;
+  /// The segments by cell of a coarse grid over the bounds, so that a candidate is tested only
+  /// against the segments near it (placement runs at every draw: edit-to-redraw stays fast).
+  static constexpr double kCell = 32.0;  ///< [px]
+  int columns_ = 1, rows_ = 1;
+  std::vector<std::vector<int>> cells_;
+  void cellRange(const QRectF& r, int& c0, int& c1, int& r0, int& r1) const;
 };
 
 /// The size of a text as QwtText draws it in `font` through `painter` [painter's logical px]:
