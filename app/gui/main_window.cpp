@@ -34,6 +34,7 @@
 #include <QScrollArea>
 #include <QSplitter>
 #include <QStackedWidget>
+#include <QStandardItemModel>
 #include <QStatusBar>
 #include <QTabWidget>
 #include <QTableView>
@@ -63,6 +64,7 @@ MainWindow::MainWindow(QWidget* parent) : QMainWindow(parent) {
   restoreFromSettings();
 
   router_->select(Section::Compressor);
+  refreshBaseline();
   refreshResult();
   updateStrip();
   files_->updateTitle();
@@ -81,6 +83,7 @@ void MainWindow::connectDocument() {
   connect(autosave_, &WindowAutosave::recovered, files_, &WindowFiles::updateTitle);
   connect(document_, &CaseDocument::resultChanged, this, &MainWindow::refreshResult);
   connect(document_, &CaseDocument::caseChanged, this, &MainWindow::updateStrip);
+  connect(document_, &CaseDocument::baselineChanged, this, &MainWindow::refreshBaseline);
   connect(router_, &SelectionRouter::selected, this, &MainWindow::routeSelection);
   connect(units_, &DisplayUnits::changed, this, &MainWindow::updateBanner);
 }
@@ -196,7 +199,8 @@ QWidget* MainWindow::createStationBox() {
   auto* stationLayout = new QVBoxLayout(stationBox);
   tableMode_ = new QComboBox(stationBox);
   tableMode_->setObjectName("tableMode");
-  tableMode_->addItems({tr("With losses"), tr("Ideal"), tr("Difference (with losses − ideal)")});
+  tableMode_->addItems({tr("With losses"), tr("Ideal"), tr("Difference (with losses − ideal)"),
+                        tr("Difference from baseline (with losses − baseline)")});
   stationLayout->addWidget(tableMode_);
   stationModel_ = new StationTableModel(*units_, this);
   stationView_ = new QTableView(stationBox);
@@ -416,6 +420,35 @@ void MainWindow::refreshResult() {
     performanceModel_->setStale(stale);
   }
   updateBanner();
+}
+
+void MainWindow::refreshBaseline() {
+  const auto baseline = document_->baselineEvaluation();
+  stationModel_->setBaseline(baseline);
+  performanceModel_->setBaseline(baseline, document_->baselineTitle());
+  // The station table's difference from the baseline only while there is one.
+  const int baselineMode = static_cast<int>(TableMode::BaselineDifference);
+  if (auto* model = qobject_cast<QStandardItemModel*>(tableMode_->model()))
+    if (QStandardItem* item = model->item(baselineMode)) item->setEnabled(baseline != nullptr);
+  if (!baseline && tableMode_->currentIndex() == baselineMode) tableMode_->setCurrentIndex(0);
+  actions_->clearBaseline()->setEnabled(baseline != nullptr);
+  // The hook for the charts' baseline overlay: CaseDocument::baselineChanged with
+  // baselineEvaluation() and baselineTitle() (a third line style, Okabe-Ito grey, dash-dot).
+}
+
+void MainWindow::pinBaseline() {
+  if (document_->pinBaseline())
+    statusBar()->showMessage(tr("Baseline: %1").arg(document_->baselineTitle()));
+  else
+    statusBar()->showMessage(tr("There is no result to pin as the baseline."));
+}
+
+bool MainWindow::openBaseline(const QString& path, QString* error) {
+  return files_->openBaseline(path, error);
+}
+
+QString MainWindow::performanceTableText() const {
+  return performanceModel_->toTabSeparated();
 }
 
 void MainWindow::updateBanner() {

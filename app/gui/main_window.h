@@ -100,6 +100,10 @@ class MainWindow : public QMainWindow {
 
   // Exports without dialogs (tests and the menu actions).
   bool exportStationCsv(const QString& path);
+  /// The performance table as tab-separated text, as shown (with the baseline's columns when set).
+  QString performanceTableText() const;
+  /// Makes a saved case the baseline (WindowFiles::openBaseline).
+  bool openBaseline(const QString& path, QString* error = nullptr);
   bool exportResultJson(const QString& path);
   bool exportAuditCsv(const QString& path);
   bool exportStudyCsv(const QString& path);
@@ -134,6 +138,8 @@ class MainWindow : public QMainWindow {
   bool save();
   bool saveAs();
   void showPreferences();
+  /// Pins the shown result as the baseline (Edit › Pin as Baseline).
+  void pinBaseline();
 
  protected:
   void closeEvent(QCloseEvent* event) override;
@@ -153,6 +159,8 @@ class MainWindow : public QMainWindow {
   void restoreFromSettings();
   void refreshResult();
   void updateBanner();
+  /// The tables follow the document's baseline (columns, difference mode, action states).
+  void refreshBaseline();
   /// The stale banner's colours from the window's palette (light or dark).
   void applyBannerPalette();
   void updateStrip();
