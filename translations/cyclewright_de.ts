@@ -939,6 +939,14 @@ kein Kreisprozess mit diesen Eingaben</translation>
         <translation>Druck p</translation>
     </message>
     <message>
+        <source>Enthalpy–entropy</source>
+        <translation>Enthalpie–Entropie</translation>
+    </message>
+    <message>
+        <source>Specific enthalpy h</source>
+        <translation>Spezifische Enthalpie h</translation>
+    </message>
+    <message>
         <source>Cycle with losses</source>
         <translation>Kreisprozess mit Verlusten</translation>
     </message>
@@ -957,6 +965,12 @@ kein Kreisprozess mit diesen Eingaben</translation>
     <message>
         <source>Isobars through station pressures</source>
         <translation>Isobaren durch die Stationsdrücke</translation>
+    </message>
+    <message>
+        <source>Stations: 0, 8, 9 static states;
+2 to 7 total states</source>
+        <translation>Stationen: 0, 8, 9 statische Zustände;
+2 bis 7 Totalzustände</translation>
     </message>
     <message>
         <source>Selected component</source>
@@ -1095,6 +1109,10 @@ p = %7   v = %8</translation>
         <translation>Druck–Volumen</translation>
     </message>
     <message>
+        <source>Enthalpy–entropy</source>
+        <translation>Enthalpie–Entropie</translation>
+    </message>
+    <message>
         <source>%1: %2 is outside the valid range %3</source>
         <translation>%1: %2 liegt außerhalb des gültigen Bereichs %3</translation>
     </message>
@@ -1139,6 +1157,10 @@ p = %7   v = %8</translation>
     <message>
         <source>Trade &amp;Study</source>
         <translation>&amp;Parameterstudie</translation>
+    </message>
+    <message>
+        <source>&amp;Enthalpy–Entropy Chart Beside</source>
+        <translation>&amp;Enthalpie–Entropie-Diagramm daneben</translation>
     </message>
     <message>
         <source>Difference from baseline (with losses − baseline)</source>
@@ -1481,6 +1503,18 @@ p = %7   v = %8</translation>
     <message>
         <source>No point of this study has this figure.</source>
         <translation>Kein Punkt dieser Studie hat diese Größe.</translation>
+    </message>
+    <message>
+        <source>with losses</source>
+        <translation>mit Verlusten</translation>
+    </message>
+    <message>
+        <source>ideal twin</source>
+        <translation>idealer Zwilling</translation>
+    </message>
+    <message>
+        <source>comparison</source>
+        <translation>Vergleich</translation>
     </message>
 </context>
 <context>
@@ -1878,6 +1912,10 @@ p = %7   v = %8</translation>
     <message>
         <source>Pressure–Volume Chart as %1</source>
         <translation>Druck–Volumen-Diagramm als %1</translation>
+    </message>
+    <message>
+        <source>Enthalpy–Entropy Chart as %1</source>
+        <translation>Enthalpie–Entropie-Diagramm als %1</translation>
     </message>
     <message>
         <source>Station Table as CSV…</source>

@@ -180,6 +180,7 @@ QSplitter* MainWindow::createFormsAndCharts() {
 
   tsChart_ = new CycleChart(ChartKind::TemperatureEntropy, *units_);
   pvChart_ = new CycleChart(ChartKind::PressureVolume, *units_);
+  hsChart_ = new CycleChart(ChartKind::EnthalpyEntropy, *units_);
   chartHost_ = new QStackedWidget(horizontal);
   chartSplitter_ = new QSplitter(Qt::Horizontal);
   chartSplitter_->setObjectName("chartSplitter");
@@ -288,6 +289,15 @@ void MainWindow::createDocks() {
   studyToggle->setObjectName("tradeStudyDockAction");
   studyToggle->setText(tr("Trade &Study"));
   QMenu* viewMenu = actions_->viewMenu();
+  // Side by side, a third chart leaves each canvas too narrow at a laptop's width: the h-s chart
+  // joins the other two there on request, and is always a tab of its own.
+  enthalpyEntropyBeside_ = new QAction(tr("&Enthalpy–Entropy Chart Beside"), this);
+  enthalpyEntropyBeside_->setObjectName("enthalpyEntropyBesideAction");
+  enthalpyEntropyBeside_->setCheckable(true);
+  connect(enthalpyEntropyBeside_, &QAction::toggled, this, [this] { setChartLayout(chartLayout_); });
+  const QList<QAction*> items = viewMenu->actions();
+  const qsizetype after = items.indexOf(actions_->tabbed()) + 1;
+  viewMenu->insertAction(after > 0 && after < items.size() ? items[after] : nullptr, enthalpyEntropyBeside_);
   viewMenu->addSeparator();
   viewMenu->addAction(toggle);
   viewMenu->addAction(studyToggle);
@@ -298,16 +308,24 @@ void MainWindow::setChartLayout(ChartLayout chartLayout) {
   if (chartLayout == ChartLayout::Tabbed) {
     chartTabs_->addTab(tsChart_, tr("Temperature–entropy"));
     chartTabs_->addTab(pvChart_, tr("Pressure–volume"));
+    chartTabs_->addTab(hsChart_, tr("Enthalpy–entropy"));
     chartHost_->setCurrentWidget(chartTabs_);
+    // Only the current tab's chart is shown: a chart shown on a hidden page paints over the
+    // current one until the tabs are switched.
+    for (QWidget* chart :
+         {static_cast<QWidget*>(tsChart_), static_cast<QWidget*>(pvChart_), static_cast<QWidget*>(hsChart_)})
+      chart->setVisible(chart == chartTabs_->currentWidget());
     actions_->tabbed()->setChecked(true);
   } else {
     chartSplitter_->addWidget(tsChart_);
     chartSplitter_->addWidget(pvChart_);
+    chartSplitter_->addWidget(hsChart_);
     chartHost_->setCurrentWidget(chartSplitter_);
+    tsChart_->show();  // a chart that was on a hidden tab page stays hidden in the splitter
+    pvChart_->show();
+    hsChart_->setVisible(enthalpyEntropyBeside_ && enthalpyEntropyBeside_->isChecked());
     actions_->sideBySide()->setChecked(true);
   }
-  tsChart_->show();
-  pvChart_->show();
   settings_.setChartLayout(chartLayout);
 }
 
@@ -379,6 +397,7 @@ void MainWindow::routeSelection(Section section) {
   forms_->setCurrentIndex(row);
   tsChart_->setHighlightedComponent(sectionComponent(section));
   pvChart_->setHighlightedComponent(sectionComponent(section));
+  hsChart_->setHighlightedComponent(sectionComponent(section));
   stationModel_->setHighlightedStations(stationsOf(section));
 }
 
@@ -389,12 +408,14 @@ void MainWindow::refreshResult() {
     shown_ = evaluation;
     tsChart_->setEvaluation(evaluation, stale);
     pvChart_->setEvaluation(evaluation, stale);
+    hsChart_->setEvaluation(evaluation, stale);
     stationModel_->setEvaluation(evaluation, stale);
     performanceModel_->setEvaluation(evaluation, stale);
     stationModel_->setHighlightedStations(stationsOf(router_->current()));
   } else {
     tsChart_->setStale(stale);
     pvChart_->setStale(stale);
+    hsChart_->setStale(stale);
     stationModel_->setStale(stale);
     performanceModel_->setStale(stale);
   }

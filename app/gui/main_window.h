@@ -70,6 +70,7 @@ class MainWindow : public QMainWindow {
   SelectionRouter& selection() const { return *router_; }
   CycleChart* temperatureEntropyChart() const { return tsChart_; }
   CycleChart* pressureVolumeChart() const { return pvChart_; }
+  CycleChart* enthalpyEntropyChart() const { return hsChart_; }
   StationTableModel* stationModel() const { return stationModel_; }
   PerformanceModel* performanceModel() const { return performanceModel_; }
   /// The loss-audit panel: a tab beside the station table and performance summary, or in its
@@ -182,6 +183,8 @@ class MainWindow : public QMainWindow {
   QLabel* banner_ = nullptr;
   CycleChart* tsChart_ = nullptr;
   CycleChart* pvChart_ = nullptr;
+  CycleChart* hsChart_ = nullptr;
+  QAction* enthalpyEntropyBeside_ = nullptr;  ///< View: the h-s chart beside the others (side by side)
   QStackedWidget* chartHost_ = nullptr;
   QSplitter* chartSplitter_ = nullptr;
   QTabWidget* chartTabs_ = nullptr;

@@ -103,6 +103,7 @@ void WindowActions::createViewActions() {
   connect(resetZoom_, &QAction::triggered, this, [this] {
     window_.temperatureEntropyChart()->resetZoom();
     window_.pressureVolumeChart()->resetZoom();
+    window_.enthalpyEntropyChart()->resetZoom();
   });
   logAxes_ = make(tr("&Logarithmic Pressure–Volume Axes"), "logAxesAction");
   logAxes_->setCheckable(true);
@@ -153,10 +154,12 @@ void WindowActions::createExportMenu(QMenu* fileMenu) {
       {tr("Temperature–Entropy Chart as %1"),
        [this]() -> QwtPlot* { return window_.temperatureEntropyChart(); }},
       {tr("Pressure–Volume Chart as %1"), [this]() -> QwtPlot* { return window_.pressureVolumeChart(); }},
+      {tr("Enthalpy–Entropy Chart as %1"), [this]() -> QwtPlot* { return window_.enthalpyEntropyChart(); }},
       {tr("Loss Audit Chart as %1"), [this]() -> QwtPlot* { return window_.auditPanel()->chart(); }},
       {tr("Trade Study Chart as %1"), [this]() -> QwtPlot* { return window_.tradeStudyPanel()->chart(); }}};
   const QString baseNames[] = {QStringLiteral("temperature-entropy"), QStringLiteral("pressure-volume"),
-                               QStringLiteral("loss-audit"), QStringLiteral("trade-study")};
+                               QStringLiteral("enthalpy-entropy"), QStringLiteral("loss-audit"),
+                               QStringLiteral("trade-study")};
   for (std::size_t c = 0; c < std::size(charts); ++c) {
     for (const auto& [format, text] : formats) {
       const QString f = format, base = baseNames[c];
