@@ -539,6 +539,12 @@ Gültiger Bereich: %2</translation>
         <source>Stale: showing the last valid result</source>
         <translation>Veraltet: letztes gültiges Ergebnis</translation>
     </message>
+    <message>
+        <source>No result:
+these inputs have no cycle</source>
+        <translation>Kein Ergebnis:
+kein Kreisprozess mit diesen Eingaben</translation>
+    </message>
 </context>
 <context>
     <name>LossNames</name>
@@ -1093,8 +1099,8 @@ p = %7   v = %8</translation>
         <translation>Diagramme und Tabellen zeigen das letzte gültige Ergebnis (veraltet).</translation>
     </message>
     <message>
-        <source>There is no valid result to show yet.</source>
-        <translation>Es gibt noch kein gültiges Ergebnis.</translation>
+        <source>There is no result for this case: the charts and tables are empty.</source>
+        <translation>Für diesen Fall gibt es kein Ergebnis: Diagramme und Tabellen bleiben leer.</translation>
     </message>
     <message>
         <source>Stale result. %1

@@ -267,7 +267,7 @@ void MainWindow::createBottomTabs(QSplitter* vertical) {
   bottomTabs_->setObjectName("bottomTabs");
   bottomTabs_->setDocumentMode(true);
   bottomTabs_->addTab(bottom, tr("Stations and performance"));
-  auditPanel_ = new AuditPanel(*units_, *router_);
+  auditPanel_ = new AuditPanel(*document_, *units_, *router_);
   auditPanel_->setSideBySide(true);
   bottomTabs_->addTab(auditPanel_, tr("Loss audit"));
   tradeStudyPanel_ = new TradeStudyPanel(*document_, *units_);
@@ -443,7 +443,6 @@ void MainWindow::refreshResult() {
     stationModel_->setStale(stale);
     performanceModel_->setStale(stale);
   }
-  auditPanel_->update(document_->currentCase(), evaluation, stale);
   fitTables();
   updateBanner();
 }
@@ -489,6 +488,15 @@ void MainWindow::updateBanner() {
   const engine::Case& c = document_->currentCase();
   for (const auto& message : document_->entryProblems()) lines << message;
   for (const auto& problem : document_->problems()) {
+    const FieldSpec* field = nullptr;
+    for (const auto& spec : caseFields())
+      if (spec.kind == FieldKind::Number && spec.path(c) == problem.path) field = &spec;
+    if (field) {
+      // The field's value in display units at display precision, as the form says it.
+      lines << sectionName(field->section) + QStringLiteral(" › ") +
+                   fieldRangeProblem(*field, field->get(c), QString::fromStdString(problem.valid), *units_);
+      continue;
+    }
     QString where = QString::fromStdString(problem.path);
     for (const auto& spec : caseFields())
       if (spec.path(c) == problem.path)
@@ -497,8 +505,9 @@ void MainWindow::updateBanner() {
                  .arg(where, QString::fromStdString(problem.value), QString::fromStdString(problem.valid));
   }
   if (!document_->failure().isEmpty()) lines << document_->failure();
-  const QString tail = document_->evaluation() ? tr("Charts and tables show the last valid result (stale).")
-                                               : tr("There is no valid result to show yet.");
+  const QString tail = document_->evaluation()
+                           ? tr("Charts and tables show the last valid result (stale).")
+                           : tr("There is no result for this case: the charts and tables are empty.");
   banner_->setText(tr("Stale result. %1\n%2").arg(tail, lines.join(QLatin1Char('\n'))));
   banner_->show();
 }

@@ -144,6 +144,7 @@ class TestLossAudit : public QObject {
     const auto reference = cw::analysis::auditCase(window.document().currentCase());
     QVERIFY(near(after.back().to, reference.actual.specificThrust));
     QVERIFY(!window.auditPanel()->isStale());
+    QTest::keyClick(field, Qt::Key_Return);  // committed: now the result kept while invalid
 
     typeInto(field, "0");  // outside (0, 1]
     QVERIFY(window.document().isStale());

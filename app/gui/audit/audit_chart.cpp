@@ -180,13 +180,14 @@ void AuditChart::retranslateUi() {
   setAxisTitle(QwtAxis::YLeft, figure_ == AuditFigure::Tsfc
                                    ? units_.withUnit(tr("TSFC"), Quantity::Tsfc)
                                    : units_.withUnit(tr("Specific thrust F_s"), Quantity::SpecificThrust));
-  staleLabel_->setText(staleBannerText(palette()));
+  staleLabel_->setText(staleBannerText(palette(), audit_ != nullptr));
   staleLabel_->setVisible(stale_);
 }
 
 void AuditChart::setAudit(std::shared_ptr<const analysis::LossAudit> audit, bool stale) {
   audit_ = std::move(audit);
   stale_ = stale;
+  staleLabel_->setText(staleBannerText(palette(), audit_ != nullptr));
   staleLabel_->setVisible(stale_);
   rebuild();
 }

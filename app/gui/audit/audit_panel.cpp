@@ -4,6 +4,7 @@
 #include "audit/audit_csv.h"
 #include "audit/audit_table_model.h"
 #include "dialogs/dialogs.h"
+#include "document/case_document.h"
 #include "document/loss_names.h"
 #include "document/selection_router.h"
 
@@ -26,8 +27,8 @@
 
 namespace cw::gui {
 
-AuditPanel::AuditPanel(DisplayUnits& units, SelectionRouter& router, QWidget* parent)
-    : QWidget(parent), router_(router) {
+AuditPanel::AuditPanel(CaseDocument& document, DisplayUnits& units, SelectionRouter& router, QWidget* parent)
+    : QWidget(parent), document_(document), router_(router) {
   setObjectName("auditPanel");
   auto* layout = new QVBoxLayout(this);
   layout->setContentsMargins(4, 4, 4, 4);
@@ -102,64 +103,50 @@ AuditPanel::AuditPanel(DisplayUnits& units, SelectionRouter& router, QWidget* pa
           [this](const QString& loss) { router_.select(lossSection(loss.toStdString())); });
   connect(&router_, &SelectionRouter::selected, chart_, &AuditChart::setHighlightedSection);
   chart_->setHighlightedSection(router_.current());
+  connect(&document_, &CaseDocument::auditChanged, this, &AuditPanel::refresh);
+  connect(&document_, &CaseDocument::resultChanged, this, &AuditPanel::refresh);
+  refresh();
 }
 
-void AuditPanel::update(const engine::Case& inputs,
-                        const std::shared_ptr<const engine::Evaluation>& evaluation, bool stale) {
-  if (evaluation != audited_) {
-    audited_ = evaluation;
-    inputs_ = inputs;
-    documentStale_ = stale;
-    runAudit();
-    return;
-  }
-  documentStale_ = stale;
-  stale_ = stale || failed_;
-  chart_->setStale(stale_);
-  model_->setStale(stale_);
+std::shared_ptr<const analysis::LossAudit> AuditPanel::audit() const {
+  return document_.audit();
 }
 
-void AuditPanel::runAudit() {
-  failed_ = false;
-  if (!audited_) {
-    audit_.reset();
+bool AuditPanel::isStale() const {
+  return document_.isAuditStale();
+}
+
+QStringList AuditPanel::order() const {
+  return document_.auditOrder();
+}
+
+void AuditPanel::refresh() {
+  const auto audit = document_.audit();
+  const bool stale = document_.isAuditStale();
+  orderButton_->setEnabled(document_.evaluation() != nullptr);
+  if (audit != shown_) {
+    shown_ = audit;
+    chart_->setAudit(audit, stale);
+    model_->setAudit(audit, stale);
   } else {
-    std::vector<std::string> order;
-    for (const QString& key : order_) order.push_back(key.toStdString());
-    try {
-      audit_ = std::make_shared<const analysis::LossAudit>(analysis::auditCase(inputs_, order));
-    } catch (const std::exception&) {
-      failed_ = true;  // a variant had no cycle: keep the last audit, marked stale
-    }
+    chart_->setStale(stale);
+    model_->setStale(stale);
   }
-  stale_ = documentStale_ || failed_;
-  orderButton_->setEnabled(audited_ != nullptr);
-  chart_->setAudit(audit_, stale_);
-  model_->setAudit(audit_, stale_);
 }
 
 void AuditPanel::setOrder(const QStringList& keys) {
-  QStringList known;
-  for (const QString& key : keys) {
-    const bool valid =
-        std::any_of(analysis::lossCatalogue().begin(), analysis::lossCatalogue().end(),
-                    [&](const analysis::LossDefinition& l) { return l.key == key.toStdString(); });
-    if (valid && !known.contains(key)) known << key;
-  }
-  if (known == order_) return;
-  order_ = known;
-  if (audited_) runAudit();
-  emit orderChanged(order_);
+  if (document_.setAuditOrder(keys)) emit orderChanged(document_.auditOrder());
 }
 
 void AuditPanel::editOrder() {
   // The losses of this case: as audited now, and in flow order.
   QStringList current, flow;
   std::vector<std::string> asked;
-  for (const QString& key : order_) asked.push_back(key.toStdString());
+  for (const QString& key : document_.auditOrder()) asked.push_back(key.toStdString());
+  const engine::Case& inputs = document_.evaluatedCase();
   try {
-    for (const auto& key : analysis::waterfallOrderOf(inputs_, asked)) current << QString::fromStdString(key);
-    for (const auto& key : analysis::waterfallOrderOf(inputs_, {})) flow << QString::fromStdString(key);
+    for (const auto& key : analysis::waterfallOrderOf(inputs, asked)) current << QString::fromStdString(key);
+    for (const auto& key : analysis::waterfallOrderOf(inputs, {})) flow << QString::fromStdString(key);
   } catch (const std::exception&) {
     return;  // setOrder keeps only valid keys, so this does not happen
   }
@@ -175,6 +162,7 @@ void AuditPanel::setSideBySide(bool sideBySide) {
 }
 
 bool AuditPanel::exportCsv(const QString& path) const {
+  const auto audit_ = document_.audit();
   if (!audit_) return false;
   QSaveFile file(path);
   if (!file.open(QIODevice::WriteOnly)) return false;

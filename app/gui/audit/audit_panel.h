@@ -1,13 +1,11 @@
 #pragma once
 // The loss-audit panel: the waterfall chart (specific thrust or TSFC) over a table of the
-// audit's four views. It runs cw::analysis::auditCase once per new valid evaluation of the
-// document (about 0.25 ms on the demo case, against 0.04 ms for evaluateCase, so on the edit
-// path), keeps the last audit while the inputs are invalid and marks it stale. The waterfall's
-// order is the user's (setOrder, or the "Order…" dialog); the panel passes it to auditCase.
+// audit's four views. It shows the document's audit (CaseDocument::audit(), the last step of
+// the one evaluation pipeline per edit) and keeps no copy: while the inputs are invalid the
+// document keeps the last audit, marked stale. The waterfall's order is the user's (setOrder,
+// or the "Order…" dialog), kept in the document.
 
 #include "analysis/loss_audit.h"
-#include "engine/case_inputs.h"
-#include "engine/cycle_result.h"
 
 #include <QStringList>
 #include <QWidget>
@@ -24,6 +22,7 @@ namespace cw::gui {
 
 class AuditChart;
 class AuditTableModel;
+class CaseDocument;
 class DisplayUnits;
 class SelectionRouter;
 
@@ -31,14 +30,10 @@ class AuditPanel : public QWidget {
   Q_OBJECT
 
  public:
-  AuditPanel(DisplayUnits& units, SelectionRouter& router, QWidget* parent = nullptr);
+  AuditPanel(CaseDocument& document, DisplayUnits& units, SelectionRouter& router, QWidget* parent = nullptr);
 
-  /// After a change of the document's result: audits the case when its evaluation is new.
-  void update(const engine::Case& inputs, const std::shared_ptr<const engine::Evaluation>& evaluation,
-              bool stale);
-
-  std::shared_ptr<const analysis::LossAudit> audit() const { return audit_; }
-  bool isStale() const { return stale_; }
+  std::shared_ptr<const analysis::LossAudit> audit() const;
+  bool isStale() const;
   AuditChart* chart() const { return chart_; }
   AuditTableModel* model() const { return model_; }
   QComboBox* figureBox() const { return figure_; }
@@ -48,7 +43,7 @@ class AuditPanel : public QWidget {
 
   /// The waterfall order asked for (loss keys; empty for the flow order). The audit puts these
   /// first and the remaining losses after them in flow order (analysis::waterfallOrderOf).
-  QStringList order() const { return order_; }
+  QStringList order() const;
   /// Sets the order (unknown and repeated keys are dropped) and re-audits at once.
   void setOrder(const QStringList& keys);
   /// The order in the dialog (LossOrderDialog), applied when accepted.
@@ -64,8 +59,10 @@ class AuditPanel : public QWidget {
   void orderChanged(const QStringList& keys);
 
  private:
-  void runAudit();
+  /// The document's audit changed: chart, table and the order button follow.
+  void refresh();
 
+  CaseDocument& document_;
   SelectionRouter& router_;
   AuditChart* chart_ = nullptr;
   AuditTableModel* model_ = nullptr;
@@ -75,13 +72,7 @@ class AuditPanel : public QWidget {
   QSplitter* split_ = nullptr;
   QPushButton* orderButton_ = nullptr;
   QLabel* note_ = nullptr;
-  QStringList order_;
-  engine::Case inputs_;  ///< the inputs of the audited evaluation
-  std::shared_ptr<const engine::Evaluation> audited_;
-  std::shared_ptr<const analysis::LossAudit> audit_;
-  bool stale_ = false;
-  bool documentStale_ = false;  ///< the document's result is stale
-  bool failed_ = false;         ///< the audit of the shown evaluation threw
+  std::shared_ptr<const analysis::LossAudit> shown_;  ///< what the chart holds (to rebuild only on change)
 };
 
 }  // namespace cw::gui

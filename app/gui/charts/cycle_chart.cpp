@@ -226,7 +226,7 @@ void CycleChart::retranslateUi() {
   isobarLegend_->setTitle(tr("Isobars through station pressures"));
   highlight_->setTitle(highlighted_.empty() ? tr("Selected component")
                                             : tr("Selected: %1").arg(componentName(highlighted_)));
-  staleLabel_->setText(staleBannerText(palette()));
+  staleLabel_->setText(staleBannerText(palette(), evaluation_ != nullptr));
   staleLabel_->setVisible(stale_);
 }
 
@@ -425,6 +425,7 @@ void CycleChart::updateStalePens() {
     pen.setColor(colour);
     c->setPen(pen);
   }
+  staleLabel_->setText(staleBannerText(palette(), evaluation_ != nullptr));
   staleLabel_->setVisible(stale_);
 }
 

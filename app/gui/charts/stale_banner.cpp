@@ -8,8 +8,10 @@
 
 namespace cw::gui {
 
-QwtText staleBannerText(const QPalette& palette) {
-  QwtText stale(QCoreApplication::translate("CycleChart", "Stale: showing the last valid result"));
+QwtText staleBannerText(const QPalette& palette, bool hasResult) {
+  QwtText stale(hasResult
+                    ? QCoreApplication::translate("CycleChart", "Stale: showing the last valid result")
+                    : QCoreApplication::translate("CycleChart", "No result:\nthese inputs have no cycle"));
   stale.setRenderFlags(Qt::AlignHCenter | Qt::AlignTop);
   QFont font = stale.font();
   font.setBold(true);

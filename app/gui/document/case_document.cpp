@@ -1,11 +1,20 @@
 #include "document/case_document.h"
 
+#include "document/case_auditor.h"
+
+#include "analysis/loss_catalogue.h"
+
 #include "common/error.h"
 #include "engine/case_validation_error.h"
 #include "engine/evaluate.h"
 
 #include <QCoreApplication>
+#include <QTimer>
 #include <QUndoStack>
+
+#include <QScopeGuard>
+
+#include <algorithm>
 
 #include <cmath>
 
@@ -50,12 +59,65 @@ QString translatedFailure(const Error& e) {
 }  // namespace
 
 CaseDocument::CaseDocument(QObject* parent) : QObject(parent), undoStack_(new QUndoStack(this)) {
+  settle_ = new QTimer(this);
+  auditor_ = new CaseAuditor(this);
+  connect(auditor_, &CaseAuditor::auditChanged, this, &CaseDocument::auditChanged);
   connect(undoStack_, &QUndoStack::cleanChanged, this, [this] { emit modifiedChanged(isModified()); });
+  settle_->setSingleShot(true);
+  settle_->setInterval(kSettleMilliseconds);
+  connect(settle_, &QTimer::timeout, this, &CaseDocument::commit);
   evaluate();
+  commit();
 }
 
 bool CaseDocument::isStale() const {
-  return !evaluation_ || !problems_.empty() || !failure_.isEmpty() || !entryProblems_.isEmpty();
+  return !live_ || !problems_.empty() || !failure_.isEmpty() || !entryProblems_.isEmpty();
+}
+
+std::shared_ptr<const engine::Evaluation> CaseDocument::evaluation() const {
+  return isStale() ? committed_ : live_;
+}
+
+std::shared_ptr<const analysis::LossAudit> CaseDocument::audit() const {
+  return auditor_->audit();
+}
+
+bool CaseDocument::isAuditStale() const {
+  return isStale() || auditor_->failed() || auditor_->isPending() ||
+         auditor_->auditedEvaluation() != evaluation();
+}
+
+bool CaseDocument::setAuditOrder(const QStringList& keys) {
+  QStringList known;
+  for (const QString& key : keys) {
+    const bool valid =
+        std::any_of(analysis::lossCatalogue().begin(), analysis::lossCatalogue().end(),
+                    [&](const analysis::LossDefinition& l) { return l.key == key.toStdString(); });
+    if (valid && !known.contains(key)) known << key;
+  }
+  if (known == auditOrder_) return false;
+  auditOrder_ = known;
+  resultUpdated();
+  return true;
+}
+
+void CaseDocument::resultUpdated() {
+  std::vector<std::string> order;
+  for (const QString& key : auditOrder_) order.push_back(key.toStdString());
+  auditor_->request(evaluatedCase(), evaluation(), order);
+  emit resultChanged();
+}
+
+bool CaseDocument::hasPendingCommit() const {
+  return settle_->isActive();
+}
+
+void CaseDocument::commit() {
+  settle_->stop();
+  if (isStale() || committed_ == live_) return;
+  committed_ = live_;
+  committedCase_ = case_;
+  emit committed();
 }
 
 const engine::CaseProblem* CaseDocument::problemAt(const std::string& path) const {
@@ -64,8 +126,19 @@ const engine::CaseProblem* CaseDocument::problemAt(const std::string& path) cons
   return nullptr;
 }
 
-void CaseDocument::applyEdit(int fieldId, const QString& description, const engine::Case& edited) {
-  if (edited == case_) return;
+void CaseDocument::applyEdit(int fieldId, const QString& description, const engine::Case& edited,
+                             Commit commit) {
+  if (edited == case_) {
+    // Back to the inputs already held (e.g. "0.9" after "0.9x"): commit as that edit would.
+    if (commit == Commit::Later && !isStale() && live_ != committed_)
+      settle_->start();
+    else if (commit == Commit::Now)
+      this->commit();
+    return;
+  }
+  // setCase, reached directly or through the command's redo, reads how to commit.
+  typing_ = commit == Commit::Later;
+  const auto done = qScopeGuard([this] { typing_ = false; });
   if (undoDisabled_ > 0) {
     const bool wasModified = isModified();
     modifiedWithoutUndo_ = true;
@@ -80,6 +153,10 @@ void CaseDocument::setCase(const engine::Case& inputs) {
   case_ = inputs;
   emit caseChanged();
   evaluate();
+  if (typing_)
+    settle_->start();  // committed by Enter, focus out or when it stands for the settle time
+  else
+    commit();
 }
 
 void CaseDocument::load(const engine::Case& inputs, const QString& filePath, bool modified) {
@@ -89,18 +166,22 @@ void CaseDocument::load(const engine::Case& inputs, const QString& filePath, boo
   filePath_ = filePath;
   modifiedWithoutUndo_ = modified;
   undoStack_->setClean();
+  // Another case: its own result or none, never the previous case's.
+  settle_->stop();
+  committed_.reset();
   setCase(inputs);
   emit modifiedChanged(isModified());
 }
 
 void CaseDocument::setEntryProblem(int fieldId, const QString& message) {
   if (entryProblems_.value(fieldId) == message && entryProblems_.contains(fieldId)) return;
+  settle_->stop();  // nothing valid to commit while a field holds no number
   entryProblems_.insert(fieldId, message);
-  emit resultChanged();
+  resultUpdated();
 }
 
 void CaseDocument::clearEntryProblem(int fieldId) {
-  if (entryProblems_.remove(fieldId) > 0) emit resultChanged();
+  if (entryProblems_.remove(fieldId) > 0) resultUpdated();
 }
 
 bool CaseDocument::isModified() const {
@@ -117,10 +198,11 @@ void CaseDocument::markSaved(const QString& path) {
 void CaseDocument::evaluate() {
   problems_.clear();
   failure_.clear();
+  live_.reset();
   try {
     auto result = std::make_shared<engine::Evaluation>(engine::evaluateCase(case_));
     if (finite(result->actual) && finite(result->ideal))
-      evaluation_ = std::move(result);
+      live_ = std::move(result);
     else
       failure_ =
           tr("The evaluation gave a value that is not a finite number; the inputs are probably extreme.");
@@ -131,7 +213,7 @@ void CaseDocument::evaluate() {
   } catch (const std::exception& e) {
     failure_ = tr("Evaluation failed: %1").arg(QString::fromStdString(e.what()));
   }
-  emit resultChanged();
+  resultUpdated();
 }
 
 SetCaseCommand::SetCaseCommand(CaseDocument& document, int fieldId, const QString& text, engine::Case before,

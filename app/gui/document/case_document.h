@@ -2,10 +2,19 @@
 // The open case: its inputs, the last valid evaluation, the problems of the current inputs,
 // the undo stack and the file it came from. One evaluateCase per change of the inputs.
 //
+// Live and committed results: every edit is evaluated at once and shown while valid (the live
+// result), but only a committed result becomes "the last valid result" that stays on screen,
+// marked stale, when later inputs are invalid. A result is committed when its edit is: Enter or
+// focus out in a number field (commit()), the edit standing unchanged for kSettleMilliseconds,
+// or any edit that is not typing (a choice, a flag, undo, redo, a file loaded). So the "1" on the
+// way to "1.2" never becomes the stale result. A case loaded without a cycle has no committed
+// result: charts and tables stay empty and the banner says why.
+//
 // Undo follows small swap commands: an edit pushes a SetCaseCommand holding the case before
 // and after; consecutive edits of one field merge (the command id is the field id). A
 // ScopedUndoDisabler turns recording off, e.g. while a file loads.
 
+#include "analysis/loss_audit.h"
 #include "engine/case_inputs.h"
 #include "engine/case_problem.h"
 #include "engine/cycle_result.h"
@@ -13,14 +22,18 @@
 #include <QHash>
 #include <QObject>
 #include <QString>
+#include <QStringList>
 #include <QUndoCommand>
 
 #include <memory>
 #include <vector>
 
+class QTimer;
 class QUndoStack;
 
 namespace cw::gui {
+
+class CaseAuditor;
 
 class CaseDocument : public QObject {
   Q_OBJECT
@@ -29,9 +42,18 @@ class CaseDocument : public QObject {
   explicit CaseDocument(QObject* parent = nullptr);
 
   const engine::Case& currentCase() const { return case_; }
-  /// The last valid evaluation (null before the first valid case). It stays displayed, marked
-  /// stale, while the current inputs are invalid or have no solution.
-  std::shared_ptr<const engine::Evaluation> evaluation() const { return evaluation_; }
+  /// How long a typed value must stand unchanged before its result is committed [ms].
+  static constexpr int kSettleMilliseconds = 400;
+
+  /// The evaluation on screen: that of the current inputs while they are valid, else the last
+  /// committed one (null when there is none, e.g. a case loaded without a cycle), marked stale.
+  std::shared_ptr<const engine::Evaluation> evaluation() const;
+  /// The last committed evaluation (what stays on screen while the inputs are invalid).
+  std::shared_ptr<const engine::Evaluation> committedEvaluation() const { return committed_; }
+  /// The inputs of evaluation() (the current case while it is valid, else the committed one's).
+  const engine::Case& evaluatedCase() const { return isStale() ? committedCase_ : case_; }
+  /// True while a typed edit waits to be committed (Enter, focus out, or the settle time).
+  bool hasPendingCommit() const;
   /// True when the displayed evaluation is not that of the current inputs.
   bool isStale() const;
   /// The core's problems with the current inputs (each names its case-file path).
@@ -43,12 +65,34 @@ class CaseDocument : public QObject {
   /// Fields whose text is not a number (field id -> translated message); they make the result stale.
   const QHash<int, QString>& entryProblems() const { return entryProblems_; }
 
+  /// The loss audit of evaluation() (the pipeline's last step; CaseAuditor runs it, off the GUI
+  /// thread once it takes longer than a frame). Null before the first, or with no evaluation.
+  std::shared_ptr<const analysis::LossAudit> audit() const;
+  /// True when audit() is not that of the current inputs: the result is stale, the audit of the
+  /// shown evaluation failed, or it is still running.
+  bool isAuditStale() const;
+  CaseAuditor& auditor() const { return *auditor_; }
+  /// The waterfall order asked for (loss keys; empty for the flow order). The audit puts these
+  /// first and the remaining losses after them in flow order (analysis::waterfallOrderOf).
+  QStringList auditOrder() const { return auditOrder_; }
+  /// Sets the order (unknown and repeated keys dropped) and re-audits. False when unchanged.
+  bool setAuditOrder(const QStringList& keys);
+
   QUndoStack* undoStack() const { return undoStack_; }
   bool undoEnabled() const { return undoDisabled_ == 0; }
 
+  /// How an edit reaches the document: typed (committed later: commit() or the settle time) or
+  /// committed at once (a choice, a flag, a command).
+  enum class Commit { Now, Later };
   /// A user's edit of one field: pushes an undoable command (merging with the previous one of
   /// the same field id >= 0) or, while undo is disabled, applies the case directly.
-  void applyEdit(int fieldId, const QString& description, const engine::Case& edited);
+  void applyEdit(int fieldId, const QString& description, const engine::Case& edited,
+                 Commit commit = Commit::Now);
+  /// Commits the current result when valid (Enter or focus out in a field; the settle timer).
+  void commit();
+  /// True while a typed edit (Commit::Later) is being applied: the signals it emits concern the
+  /// visible form's field, so hidden forms may catch up later (CaseForm::refresh).
+  bool isApplyingTypedEdit() const { return typing_; }
   /// Replaces the inputs without touching the undo stack (used by the commands). Evaluates once.
   void setCase(const engine::Case& inputs);
   /// Loads a case (file open, new, recovery): clears the undo stack, evaluates, marks clean.
@@ -69,13 +113,25 @@ class CaseDocument : public QObject {
   /// The evaluation, the problems or the stale state changed (charts and tables refresh).
   void resultChanged();
   void modifiedChanged(bool modified);
+  /// A result was committed: it is now the one kept while later inputs are invalid.
+  void committed();
+  /// audit() or isAuditStale() changed (the audit panel refreshes).
+  void auditChanged();
 
  private:
   friend class ScopedUndoDisabler;
   void evaluate();
+  /// Emits resultChanged after asking for the audit of the evaluation now shown.
+  void resultUpdated();
 
   engine::Case case_;
-  std::shared_ptr<const engine::Evaluation> evaluation_;
+  std::shared_ptr<const engine::Evaluation> live_;       ///< of the current inputs; null if none
+  std::shared_ptr<const engine::Evaluation> committed_;  ///< the last committed live result
+  engine::Case committedCase_;                           ///< its inputs
+  QTimer* settle_ = nullptr;
+  bool typing_ = false;  ///< the edit being applied is typed (commit later)
+  CaseAuditor* auditor_ = nullptr;
+  QStringList auditOrder_;
   std::vector<engine::CaseProblem> problems_;
   QString failure_;
   QHash<int, QString> entryProblems_;

@@ -1,5 +1,7 @@
 #include "document/case_fields.h"
 
+#include "document/units.h"
+
 #include <QCoreApplication>
 
 namespace cw::gui {
@@ -618,6 +620,24 @@ QString fieldToolTip(const FieldSpec& spec, const DisplayUnits& units) {
           .arg(spec.lowOpen ? "(" : "[", formatNumber(units.toDisplay(spec.low, spec.quantity), 6),
                formatNumber(units.toDisplay(spec.high, spec.quantity), 6), spec.highOpen ? ")" : "]", unit);
   return QCoreApplication::translate("CaseFields", "%1\nValid range: %2").arg(tip, range);
+}
+
+QString fieldRangeText(const FieldSpec& spec, const QString& coreRange, const DisplayUnits& units) {
+  if (units.system() == UnitSystem::SI || spec.quantity == Quantity::Dimensionless ||
+      spec.quantity == Quantity::MassRatio)
+    return coreRange;
+  return coreRange + QStringLiteral(" = %1%2, %3%4 %5")
+                         .arg(spec.lowOpen ? "(" : "[", units.inputText(spec.low, spec.quantity),
+                              units.inputText(spec.high, spec.quantity), spec.highOpen ? ")" : "]",
+                              units.symbol(spec.quantity));
+}
+
+QString fieldRangeProblem(const FieldSpec& spec, double si, const QString& coreRange,
+                          const DisplayUnits& units) {
+  // The form's message (its context, so one translation serves form and banner).
+  return QCoreApplication::translate("cw::gui::CaseForm", "%1 = %2 is outside the valid range %3.")
+      .arg(fieldLabel(spec), units.inputTextWithUnit(si, spec.quantity),
+           fieldRangeText(spec, coreRange, units));
 }
 
 }  // namespace cw::gui

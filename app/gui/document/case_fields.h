@@ -71,5 +71,12 @@ const FieldSpec* caseField(const QString& key);
 /// Translated label and tooltip of a field.
 QString fieldLabel(const FieldSpec& spec);
 QString fieldToolTip(const FieldSpec& spec, const DisplayUnits& units);
+/// The valid range of a number field as the core states it (SI) and, in U.S. customary units,
+/// converted: "[200, 2500] K = [360, 4500] °R".
+QString fieldRangeText(const FieldSpec& spec, const QString& coreRange, const DisplayUnits& units);
+/// "label = value unit is outside the valid range ..." for a number field, the value at display
+/// precision in display units.
+QString fieldRangeProblem(const FieldSpec& spec, double si, const QString& coreRange,
+                          const DisplayUnits& units);
 
 }  // namespace cw::gui

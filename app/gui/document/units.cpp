@@ -112,3 +112,48 @@ QString DisplayUnits::format(double si, Quantity q, int significantDigits) const
 }
 
 }  // namespace cw::gui
+
+namespace cw::gui {
+
+namespace {
+
+/// Significant digits of a number's text ("6000" 1, "0.845" 3, "1350.5" 5).
+int significantDigits(const QString& text) {
+  QString mantissa = text.section(QLatin1Char('e'), 0, 0, QString::SectionCaseInsensitiveSeps);
+  QString digits;
+  for (const QChar c : mantissa)
+    if (c.isDigit()) digits += c;
+  while (digits.startsWith(QLatin1Char('0'))) digits.remove(0, 1);
+  const bool fraction = mantissa.contains(QLocale().decimalPoint()) || mantissa.contains(QLatin1Char('.'));
+  if (!fraction)
+    while (digits.endsWith(QLatin1Char('0'))) digits.chop(1);  // 6000: trailing zeros say nothing
+  return static_cast<int>(digits.size());
+}
+
+}  // namespace
+
+QString DisplayUnits::inputText(double si, Quantity q) const {
+  QLocale locale;
+  locale.setNumberOptions(QLocale::OmitGroupSeparator);
+  if (!std::isfinite(si)) return locale.toString(0);
+  const QString asTyped = locale.toString(si / unitFactor(q, UnitSystem::SI), 'g', 12);
+  if (system_ == UnitSystem::SI || factor(q) == unitFactor(q, UnitSystem::SI)) return asTyped;
+  const double shown = toDisplay(si, q);
+  if (shown == 0.0) return locale.toString(0);
+  const int digits = std::clamp(significantDigits(asTyped), kInputDigits, 12);
+  const int magnitude = static_cast<int>(std::floor(std::log10(std::fabs(shown))));
+  const int decimals = std::clamp(digits - 1 - magnitude, 0, 12);
+  QString text = locale.toString(shown, 'f', decimals);
+  if (decimals > 0) {
+    while (text.endsWith(QLatin1Char('0'))) text.chop(1);
+    if (text.endsWith(locale.decimalPoint())) text.chop(locale.decimalPoint().size());
+  }
+  return text;
+}
+
+QString DisplayUnits::inputTextWithUnit(double si, Quantity q) const {
+  const QString number = inputText(si, q);
+  return q == Quantity::Dimensionless ? number : QStringLiteral("%1 %2").arg(number, symbol(q));
+}
+
+}  // namespace cw::gui

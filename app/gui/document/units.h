@@ -89,6 +89,14 @@ class DisplayUnits : public QObject {
   QString withUnit(const QString& label, Quantity q) const;
   /// A value formatted for display with its unit, in the current locale.
   QString format(double si, Quantity q, int significantDigits = 5) const;
+  /// The text of an input value in its field, without unit, in the current locale: in SI the
+  /// value as typed (shortest form up to 12 significant digits); in U.S. customary units the
+  /// conversion at display precision, as many significant digits as the SI text has but at
+  /// least kInputDigits, trailing zeros dropped (6000 m: "19685" ft, not "19685.0393701").
+  QString inputText(double si, Quantity q) const;
+  /// inputText with the unit symbol (none for a dimensionless quantity).
+  QString inputTextWithUnit(double si, Quantity q) const;
+  static constexpr int kInputDigits = 5;
 
  signals:
   void changed();

@@ -39,13 +39,6 @@ bool parseNumber(const QString& text, double& value) {
   return ok && std::isfinite(value);
 }
 
-QString shownWithUnit(double shown, const QString& unit) {
-  QLocale locale;
-  locale.setNumberOptions(QLocale::OmitGroupSeparator);
-  const QString number = locale.toString(shown, 'g', 10);
-  return unit.isEmpty() ? number : number + QLatin1Char(' ') + unit;
-}
-
 }  // namespace
 
 void markInvalid(QWidget* editor, bool invalid) {
@@ -84,8 +77,12 @@ CaseForm::CaseForm(Section section, CaseDocument& document, DisplayUnits& units,
         auto* edit = new QLineEdit(this);
         edit->setObjectName(QString::fromLatin1(spec.key));
         edit->setAlignment(Qt::AlignRight);
+        // Wide enough for a value at display precision with its sign and decimals.
+        edit->setMinimumWidth(edit->fontMetrics().horizontalAdvance(QStringLiteral("-0000000.0000")) + 16);
         connect(edit, &QLineEdit::textEdited, this,
                 [this, &spec](const QString& text) { numberEdited(spec, text); });
+        // Enter or focus out commits the typed value's result (CaseDocument's stale rule).
+        connect(edit, &QLineEdit::editingFinished, &document_, &CaseDocument::commit);
         row.editor = edit;
         row.error = new QLabel(this);
         row.error->setObjectName(QString::fromLatin1(spec.key) + QStringLiteral(".error"));
@@ -176,7 +173,19 @@ void CaseForm::retranslateUi() {
   refresh();
 }
 
+void CaseForm::showEvent(QShowEvent* event) {
+  QWidget::showEvent(event);
+  if (behind_) refresh();
+}
+
 void CaseForm::refresh() {
+  // Typing in the visible form: a form the stack hides is not on screen, so it skips its
+  // widgets until it is shown (showEvent). Any other change (undo, a file, units) refreshes all.
+  if (isHidden() && parentWidget() && document_.isApplyingTypedEdit()) {
+    behind_ = true;
+    return;
+  }
+  behind_ = false;
   const engine::Case& c = document_.currentCase();
   for (const auto& row : rows_) {
     const FieldSpec& spec = *row.spec;
@@ -196,35 +205,19 @@ void CaseForm::refresh() {
     } else if (auto* edit = qobject_cast<QLineEdit*>(row.editor)) {
       const bool entryProblem = document_.entryProblems().contains(spec.id);
       const double si = spec.get(c);
-      // Leave the user's text alone when it already stands for the model's value.
+      // Leave the user's text alone when it already stands for the model's value (typed) or is
+      // the model's value at display precision (a U.S. customary conversion, rounded).
+      const QString shown = units_.inputText(si, spec.quantity);
       double typed = 0.0;
-      const bool same =
-          parseNumber(edit->text(), typed) &&
-          std::fabs(units_.fromDisplay(typed, spec.quantity) - si) <= 1e-12 * std::max(1.0, std::fabs(si));
-      if (!entryProblem && !same) {
-        QLocale locale;
-        locale.setNumberOptions(QLocale::OmitGroupSeparator);
-        edit->setText(locale.toString(units_.toDisplay(si, spec.quantity), 'g', 12));
-      }
+      const bool same = edit->text() == shown || (parseNumber(edit->text(), typed) &&
+                                                  std::fabs(units_.fromDisplay(typed, spec.quantity) - si) <=
+                                                      1e-12 * std::max(1.0, std::fabs(si)));
+      if (!entryProblem && !same) edit->setText(shown);
       QString message;
       if (entryProblem) {
         message = document_.entryProblems().value(spec.id);
       } else if (problem) {
-        QString valid = QString::fromStdString(problem->valid);
-        if (units_.system() != UnitSystem::SI && spec.quantity != Quantity::Dimensionless &&
-            spec.quantity != Quantity::MassRatio)
-          valid +=
-              QStringLiteral(" = %1%2, %3%4 %5")
-                  .arg(spec.lowOpen ? "(" : "[", formatNumber(units_.toDisplay(spec.low, spec.quantity), 6),
-                       formatNumber(units_.toDisplay(spec.high, spec.quantity), 6), spec.highOpen ? ")" : "]",
-                       units_.symbol(spec.quantity));
-        message =
-            tr("%1 = %2 is outside the valid range %3.")
-                .arg(fieldLabel(spec),
-                     shownWithUnit(
-                         units_.toDisplay(si, spec.quantity),
-                         spec.quantity == Quantity::Dimensionless ? QString() : units_.symbol(spec.quantity)),
-                     valid);
+        message = fieldRangeProblem(spec, si, QString::fromStdString(problem->valid), units_);
       }
       showProblem(row, message);
       if (problem)
@@ -258,10 +251,13 @@ void CaseForm::numberEdited(const FieldSpec& spec, const QString& text) {
     document_.setEntryProblem(spec.id, tr("%1: “%2” is not a number.").arg(fieldLabel(spec), text));
     return;
   }
-  document_.clearEntryProblem(spec.id);
   engine::Case edited = document_.currentCase();
   spec.set(edited, units_.fromDisplay(shown, spec.quantity));
-  document_.applyEdit(spec.id, tr("Change %1").arg(fieldLabel(spec)), edited);
+  // Typed: its result becomes the one kept on screen once committed, not at each keystroke.
+  document_.applyEdit(spec.id, tr("Change %1").arg(fieldLabel(spec)), edited, CaseDocument::Commit::Later);
+  // After the edit, so that the refresh it causes finds the model already holding the typed value
+  // (before it, the refresh would write the old value back into the field).
+  document_.clearEntryProblem(spec.id);
 }
 
 void CaseForm::choiceActivated(const FieldSpec& spec, int index) {

@@ -28,8 +28,15 @@ class CaseForm : public QWidget {
   /// Labels, tooltips and units in the current language and unit system.
   void retranslateUi();
 
-  /// Changed in the model: values, visibility and problem marks from the document.
+  /// Changed in the model: values, visibility and problem marks from the document. On a typed
+  /// edit only the visible form (the stack's current one) rewrites its widgets; a hidden form
+  /// remembers that it is behind and refreshes when it is shown. Other changes refresh all.
   void refresh();
+  /// True when the widgets wait for a refresh (the form was hidden when the model changed).
+  bool isBehind() const { return behind_; }
+
+ protected:
+  void showEvent(QShowEvent* event) override;
 
  private:
   struct Row {
@@ -53,6 +60,7 @@ class CaseForm : public QWidget {
   QFormLayout* layout_ = nullptr;
   QLabel* title_ = nullptr;
   std::vector<Row> rows_;
+  bool behind_ = false;
 };
 
 /// Marks an editor as holding an invalid value (a red-tinted base, "invalid" property true).
