@@ -10,6 +10,7 @@
 
 #include <QMainWindow>
 #include <QSet>
+#include <QSize>
 #include <QString>
 
 #include <array>
@@ -46,6 +47,11 @@ class WindowActions;
 class WindowAutosave;
 class WindowExports;
 class WindowFiles;
+
+/// The smallest a cycle chart gets in the window (legend, ticks and labels still readable) [px].
+inline constexpr QSize kChartMinimum{300, 240};
+/// The station and performance tables show at least this many rows.
+inline constexpr int kMinimumTableRows = 3;
 
 class MainWindow : public QMainWindow {
   Q_OBJECT
@@ -143,6 +149,7 @@ class MainWindow : public QMainWindow {
 
  protected:
   void closeEvent(QCloseEvent* event) override;
+  bool eventFilter(QObject* watched, QEvent* event) override;
   void changeEvent(QEvent* event) override;
 
  private:
@@ -158,6 +165,16 @@ class MainWindow : public QMainWindow {
   void connectDocument();
   void restoreFromSettings();
   void refreshResult();
+  /// The station and performance tables' minimum sizes: every column, at least three rows.
+  void fitTables();
+  /// The bottom area's height for every row of the tables, where the window allows.
+  void fitTableRows();
+  static int rowsHeight(const QTableView* view, int rows);
+  void fitDock(QDockWidget* dock, int preferredWidth);
+  /// Puts the charts side by side or in tabs: as chosen, and in tabs while too narrow for two.
+  void arrangeCharts();
+  bool chartsInTabs() const;
+  bool hsBeside() const;  ///< the h-s chart shown beside the others (View menu)
   void updateBanner();
   /// The tables follow the document's baseline (columns, difference mode, action states).
   void refreshBaseline();
@@ -195,6 +212,8 @@ class MainWindow : public QMainWindow {
   QTableView* performanceView_ = nullptr;
   PerformanceModel* performanceModel_ = nullptr;
   QTabWidget* bottomTabs_ = nullptr;
+  QSplitter* vertical_ = nullptr;
+  int tableRows_ = -1;
   AuditPanel* auditPanel_ = nullptr;
   QDockWidget* auditDock_ = nullptr;
   TradeStudyPanel* tradeStudyPanel_ = nullptr;
