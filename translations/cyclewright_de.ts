@@ -888,6 +888,10 @@ kein Kreisprozess mit diesen Eingaben</translation>
         <source>Evaluation failed: %1</source>
         <translation>Berechnung fehlgeschlagen: %1</translation>
     </message>
+    <message>
+        <source>Untitled case</source>
+        <translation>Unbenannter Fall</translation>
+    </message>
 </context>
 <context>
     <name>cw::gui::CaseForm</name>
@@ -1266,6 +1270,18 @@ p = %7   v = %8</translation>
         <source>&amp;Enthalpy–Entropy Chart Beside</source>
         <translation>&amp;Enthalpie–Entropie-Diagramm daneben</translation>
     </message>
+    <message>
+        <source>Difference from baseline (with losses − baseline)</source>
+        <translation>Differenz zur Basis (mit Verlusten − Basis)</translation>
+    </message>
+    <message>
+        <source>Baseline: %1</source>
+        <translation>Basis: %1</translation>
+    </message>
+    <message>
+        <source>There is no result to pin as the baseline.</source>
+        <translation>Es gibt kein Ergebnis, das als Basis festgehalten werden kann.</translation>
+    </message>
 </context>
 <context>
     <name>cw::gui::PerformanceModel</name>
@@ -1324,6 +1340,22 @@ p = %7   v = %8</translation>
     <message>
         <source>Unit</source>
         <translation>Einheit</translation>
+    </message>
+    <message>
+        <source>Baseline</source>
+        <translation>Basis</translation>
+    </message>
+    <message>
+        <source>Change from baseline</source>
+        <translation>Änderung zur Basis</translation>
+    </message>
+    <message>
+        <source>Change [%]</source>
+        <translation>Änderung [%]</translation>
+    </message>
+    <message>
+        <source>Baseline: %1</source>
+        <translation>Basis: %1</translation>
     </message>
 </context>
 <context>
@@ -1430,6 +1462,10 @@ p = %7   v = %8</translation>
     <message>
         <source>Stations, difference (with losses − ideal)</source>
         <translation>Stationen, Differenz (mit Verlusten − ideal)</translation>
+    </message>
+    <message>
+        <source>Stations, difference from the baseline (with losses − baseline)</source>
+        <translation>Stationen, Differenz zur Basis (mit Verlusten − Basis)</translation>
     </message>
 </context>
 <context>
@@ -2037,6 +2073,26 @@ p = %7   v = %8</translation>
         <source>Trade Study as JSON…</source>
         <translation>Parameterstudie als JSON…</translation>
     </message>
+    <message>
+        <source>&amp;Pin as Baseline</source>
+        <translation>Als &amp;Basis festhalten</translation>
+    </message>
+    <message>
+        <source>Keep the shown result as the baseline the tables compare against</source>
+        <translation>Das angezeigte Ergebnis als Basis festhalten, mit der die Tabellen vergleichen</translation>
+    </message>
+    <message>
+        <source>Open &amp;Baseline…</source>
+        <translation>&amp;Basis öffnen…</translation>
+    </message>
+    <message>
+        <source>&amp;Clear Baseline</source>
+        <translation>Basis &amp;entfernen</translation>
+    </message>
+    <message>
+        <source>Copy &amp;Performance Table</source>
+        <translation>&amp;Leistungstabelle kopieren</translation>
+    </message>
 </context>
 <context>
     <name>cw::gui::WindowAutosave</name>
@@ -2171,6 +2227,10 @@ p = %7   v = %8</translation>
         <source>Trade-study table copied as tab-separated text</source>
         <translation>Tabelle der Parameterstudie als tabulatorgetrennter Text kopiert</translation>
     </message>
+    <message>
+        <source>Performance table copied as tab-separated text</source>
+        <translation>Leistungstabelle als tabulatorgetrennter Text kopiert</translation>
+    </message>
 </context>
 <context>
     <name>cw::gui::WindowFiles</name>
@@ -2233,6 +2293,26 @@ p = %7   v = %8</translation>
     <message>
         <source>The case shown is unchanged.</source>
         <translation>Der angezeigte Fall bleibt unverändert.</translation>
+    </message>
+    <message>
+        <source>Baseline: %1</source>
+        <translation>Basis: %1</translation>
+    </message>
+    <message>
+        <source>Open Baseline</source>
+        <translation>Basis öffnen</translation>
+    </message>
+    <message>
+        <source>Baseline not opened: %1</source>
+        <translation>Basis nicht geöffnet: %1</translation>
+    </message>
+    <message>
+        <source>Cannot open baseline</source>
+        <translation>Basis kann nicht geöffnet werden</translation>
+    </message>
+    <message>
+        <source>The baseline is unchanged.</source>
+        <translation>Die Basis bleibt unverändert.</translation>
     </message>
 </context>
 </TS>

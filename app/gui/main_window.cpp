@@ -19,6 +19,7 @@
 #include "forms/case_form.h"
 #include "tables/performance_model.h"
 #include "tables/station_table_model.h"
+#include "tables/table_pair.h"
 #include "trade_study/study_panel.h"
 
 #include <QAction>
@@ -32,9 +33,12 @@
 #include <QMenu>
 #include <QMessageBox>
 #include <QScrollArea>
+#include <QScrollBar>
 #include <QSplitter>
 #include <QStackedWidget>
+#include <QStandardItemModel>
 #include <QStatusBar>
+#include <QTabBar>
 #include <QTabWidget>
 #include <QTableView>
 #include <QVBoxLayout>
@@ -63,6 +67,7 @@ MainWindow::MainWindow(QWidget* parent) : QMainWindow(parent) {
   restoreFromSettings();
 
   router_->select(Section::Compressor);
+  refreshBaseline();
   refreshResult();
   updateStrip();
   files_->updateTitle();
@@ -81,8 +86,10 @@ void MainWindow::connectDocument() {
   connect(autosave_, &WindowAutosave::recovered, files_, &WindowFiles::updateTitle);
   connect(document_, &CaseDocument::resultChanged, this, &MainWindow::refreshResult);
   connect(document_, &CaseDocument::caseChanged, this, &MainWindow::updateStrip);
+  connect(document_, &CaseDocument::baselineChanged, this, &MainWindow::refreshBaseline);
   connect(router_, &SelectionRouter::selected, this, &MainWindow::routeSelection);
   connect(units_, &DisplayUnits::changed, this, &MainWindow::updateBanner);
+  connect(units_, &DisplayUnits::changed, this, &MainWindow::fitTables);
 }
 
 void MainWindow::restoreFromSettings() {
@@ -111,13 +118,16 @@ void MainWindow::createCentralWidget() {
   createStrip(layout);
   createBanner(layout);
 
-  auto* vertical = new QSplitter(Qt::Vertical, central);
+  auto* vertical = vertical_ = new QSplitter(Qt::Vertical, central);
   vertical->setObjectName("verticalSplitter");
+  vertical->installEventFilter(this);
   vertical->addWidget(createFormsAndCharts());
   createBottomTabs(vertical);
-  vertical->setStretchFactor(0, 3);
-  vertical->setStretchFactor(1, 2);
-  vertical->setSizes({600, 330});
+  // The tables keep the height of their rows; the charts take the rest.
+  vertical->setChildrenCollapsible(false);
+  vertical->setStretchFactor(0, 1);
+  vertical->setStretchFactor(1, 0);
+  vertical->setSizes({2000, 1});
   layout->addWidget(vertical, 1);
   setCentralWidget(central);
   createDocks();
@@ -169,25 +179,38 @@ QSplitter* MainWindow::createFormsAndCharts() {
     forms_->addWidget(form);
   }
   auto* scroll = new QScrollArea(horizontal);
+  scroll->setObjectName("formScroll");
   scroll->setWidgetResizable(true);
   scroll->setWidget(forms_);
-  scroll->setMinimumWidth(200);
-  horizontal->setSizes({340, 1200});
+  // Never narrower than the widest form: fields are never slivers, whatever the docks take.
+  scroll->setHorizontalScrollBarPolicy(Qt::ScrollBarAlwaysOff);
+  int formWidth = 0;
+  for (const CaseForm* form : formOf_) formWidth = std::max(formWidth, form->minimumSizeHint().width());
+  scroll->setMinimumWidth(formWidth + scroll->verticalScrollBar()->sizeHint().width() +
+                          2 * scroll->frameWidth());
+  horizontal->setChildrenCollapsible(false);
   horizontal->addWidget(scroll);
 
   tsChart_ = new CycleChart(ChartKind::TemperatureEntropy, *units_);
   pvChart_ = new CycleChart(ChartKind::PressureVolume, *units_);
   hsChart_ = new CycleChart(ChartKind::EnthalpyEntropy, *units_);
+  for (CycleChart* chart : {tsChart_, pvChart_, hsChart_}) chart->setMinimumSize(kChartMinimum);
   chartHost_ = new QStackedWidget(horizontal);
   chartSplitter_ = new QSplitter(Qt::Horizontal);
   chartSplitter_->setObjectName("chartSplitter");
+  chartSplitter_->setChildrenCollapsible(false);
   chartTabs_ = new QTabWidget;
   chartTabs_->setObjectName("chartTabs");
   chartHost_->addWidget(chartSplitter_);
   chartHost_->addWidget(chartTabs_);
+  // One chart's width at least; narrower than two, the charts go into tabs (arrangeCharts).
+  chartHost_->setMinimumSize(kChartMinimum.width(),
+                             kChartMinimum.height() + chartTabs_->tabBar()->sizeHint().height());
+  chartHost_->installEventFilter(this);
   horizontal->addWidget(chartHost_);
   horizontal->setStretchFactor(0, 0);
   horizontal->setStretchFactor(1, 1);
+  horizontal->setSizes({scroll->minimumWidth(), 1200});
   return horizontal;
 }
 
@@ -196,7 +219,8 @@ QWidget* MainWindow::createStationBox() {
   auto* stationLayout = new QVBoxLayout(stationBox);
   tableMode_ = new QComboBox(stationBox);
   tableMode_->setObjectName("tableMode");
-  tableMode_->addItems({tr("With losses"), tr("Ideal"), tr("Difference (with losses − ideal)")});
+  tableMode_->addItems({tr("With losses"), tr("Ideal"), tr("Difference (with losses − ideal)"),
+                        tr("Difference from baseline (with losses − baseline)")});
   stationLayout->addWidget(tableMode_);
   stationModel_ = new StationTableModel(*units_, this);
   stationView_ = new QTableView(stationBox);
@@ -206,8 +230,8 @@ QWidget* MainWindow::createStationBox() {
   stationView_->horizontalHeader()->setSectionResizeMode(QHeaderView::ResizeToContents);
   stationView_->setSelectionBehavior(QAbstractItemView::SelectRows);
   stationView_->setAlternatingRowColors(true);
-  stationView_->verticalHeader()->setDefaultSectionSize(QFontMetrics(stationView_->font()).height() + 6);
-  stationView_->setMinimumHeight(60);
+  stationView_->verticalHeader()->setDefaultSectionSize(QFontMetrics(stationView_->font()).height() + 4);
+  stationView_->setHorizontalScrollBarPolicy(Qt::ScrollBarAlwaysOff);
   stationLayout->addWidget(stationView_);
   connect(tableMode_, &QComboBox::currentIndexChanged, this,
           [this](int index) { stationModel_->setMode(static_cast<TableMode>(index)); });
@@ -222,22 +246,24 @@ QWidget* MainWindow::createPerformanceBox() {
   performanceView_->setObjectName("performanceTable");
   performanceView_->setModel(performanceModel_);
   performanceView_->verticalHeader()->hide();
+  // The names take what the numbers leave (never less than their text: fitTables).
   performanceView_->horizontalHeader()->setSectionResizeMode(QHeaderView::ResizeToContents);
-  performanceView_->horizontalHeader()->setStretchLastSection(true);
+  performanceView_->horizontalHeader()->setSectionResizeMode(0, QHeaderView::Stretch);
   performanceView_->setAlternatingRowColors(true);
   performanceView_->verticalHeader()->setDefaultSectionSize(QFontMetrics(performanceView_->font()).height() +
-                                                            6);
-  performanceView_->setMinimumHeight(60);
+                                                            4);
+  performanceView_->setHorizontalScrollBarPolicy(Qt::ScrollBarAlwaysOff);
   performanceLayout->addWidget(performanceView_);
   return performanceBox;
 }
 
 void MainWindow::createBottomTabs(QSplitter* vertical) {
-  auto* bottom = new QSplitter(Qt::Horizontal);
-  bottom->addWidget(createStationBox());
-  bottom->addWidget(createPerformanceBox());
-  bottom->setStretchFactor(0, 3);
-  bottom->setStretchFactor(1, 2);
+  // Side by side where both fit, else in two tabs (a laptop screen with a dock open).
+  auto* bottom = new TablePair(createStationBox(), tr("Stations"), createPerformanceBox(), tr("Performance"));
+  bottom->setObjectName("tablePair");
+  connect(bottom, &TablePair::arranged, this, [this] {
+    if (vertical_->isVisible()) fitTableRows();
+  });
 
   // The tables and the loss audit share the bottom area, in tabs, so that the audit is in sight
   // from the start without taking room from the charts. View › Loss Audit moves it into a dock
@@ -301,28 +327,55 @@ void MainWindow::createDocks() {
 
 void MainWindow::setChartLayout(ChartLayout chartLayout) {
   chartLayout_ = chartLayout;
-  if (chartLayout == ChartLayout::Tabbed) {
+  (chartLayout == ChartLayout::Tabbed ? actions_->tabbed() : actions_->sideBySide())->setChecked(true);
+  settings_.setChartLayout(chartLayout);
+  arrangeCharts();
+}
+
+bool MainWindow::chartsInTabs() const {
+  return chartHost_->currentWidget() == chartTabs_;
+}
+
+void MainWindow::arrangeCharts() {
+  // Side by side as chosen while both charts have their minimum width; in tabs when the room is
+  // less (a dock beside them on a laptop screen), back side by side when it grows again.
+  const int besideCount = hsBeside() ? 3 : 2;
+  const int sideBySideWidth =
+      besideCount * kChartMinimum.width() + (besideCount - 1) * chartSplitter_->handleWidth();
+  const bool narrow = chartHost_->isVisible() && chartHost_->width() < sideBySideWidth;
+  const bool tabs = chartLayout_ == ChartLayout::Tabbed || narrow;
+  if (tabs && (!chartsInTabs() || chartTabs_->count() < 3)) {
     chartTabs_->addTab(tsChart_, tr("Temperature–entropy"));
     chartTabs_->addTab(pvChart_, tr("Pressure–volume"));
     chartTabs_->addTab(hsChart_, tr("Enthalpy–entropy"));
     chartHost_->setCurrentWidget(chartTabs_);
+    chartTabs_->setCurrentIndex(0);
     // Only the current tab's chart is shown: a chart shown on a hidden page paints over the
     // current one until the tabs are switched.
-    for (QWidget* chart :
-         {static_cast<QWidget*>(tsChart_), static_cast<QWidget*>(pvChart_), static_cast<QWidget*>(hsChart_)})
+    for (CycleChart* chart : {tsChart_, pvChart_, hsChart_})
       chart->setVisible(chart == chartTabs_->currentWidget());
-    actions_->tabbed()->setChecked(true);
-  } else {
-    chartSplitter_->addWidget(tsChart_);
-    chartSplitter_->addWidget(pvChart_);
-    chartSplitter_->addWidget(hsChart_);
-    chartHost_->setCurrentWidget(chartSplitter_);
-    tsChart_->show();  // a chart that was on a hidden tab page stays hidden in the splitter
-    pvChart_->show();
-    hsChart_->setVisible(enthalpyEntropyBeside_ && enthalpyEntropyBeside_->isChecked());
-    actions_->sideBySide()->setChecked(true);
+  } else if (!tabs) {
+    if (chartsInTabs() || chartSplitter_->count() < 3) {
+      chartSplitter_->addWidget(tsChart_);
+      chartSplitter_->addWidget(pvChart_);
+      chartSplitter_->addWidget(hsChart_);
+      chartHost_->setCurrentWidget(chartSplitter_);
+      tsChart_->show();  // a chart that was on a hidden tab page stays hidden in the splitter
+      pvChart_->show();
+    }
+    hsChart_->setVisible(hsBeside());
   }
-  settings_.setChartLayout(chartLayout);
+}
+
+bool MainWindow::hsBeside() const {
+  return enthalpyEntropyBeside_ && enthalpyEntropyBeside_->isChecked();
+}
+
+bool MainWindow::eventFilter(QObject* watched, QEvent* event) {
+  if (watched == chartHost_ && (event->type() == QEvent::Resize || event->type() == QEvent::Show))
+    arrangeCharts();
+  if (watched == vertical_ && event->type() == QEvent::Show) fitTableRows();
+  return QMainWindow::eventFilter(watched, event);
 }
 
 void MainWindow::placeAudit() {
@@ -331,11 +384,17 @@ void MainWindow::placeAudit() {
     bottomTabs_->removeTab(bottomTabs_->indexOf(auditPanel_));
     auditPanel_->setSideBySide(false);
     auditDock_->setWidget(auditPanel_);
+    fitDock(auditDock_, 440);
   } else if (!docked && auditDock_->widget() == auditPanel_) {
     auditDock_->setWidget(nullptr);
     auditPanel_->setSideBySide(true);
     bottomTabs_->insertTab(1, auditPanel_, tr("Loss audit"));
   }
+}
+
+void MainWindow::fitDock(QDockWidget* dock, int preferredWidth) {
+  // At most 40 % of a laptop screen's width, so that the forms and charts keep theirs.
+  resizeDocks({dock}, {std::min(preferredWidth, width() * 2 / 5)}, Qt::Horizontal);
 }
 
 void MainWindow::placeTradeStudy() {
@@ -344,6 +403,7 @@ void MainWindow::placeTradeStudy() {
     bottomTabs_->removeTab(bottomTabs_->indexOf(tradeStudyPanel_));
     tradeStudyPanel_->setSideBySide(false);
     tradeStudyDock_->setWidget(tradeStudyPanel_);
+    fitDock(tradeStudyDock_, 640);
   } else if (!docked && tradeStudyDock_->widget() == tradeStudyPanel_) {
     tradeStudyDock_->setWidget(nullptr);
     tradeStudyPanel_->setSideBySide(true);
@@ -415,7 +475,69 @@ void MainWindow::refreshResult() {
     stationModel_->setStale(stale);
     performanceModel_->setStale(stale);
   }
+  fitTables();
   updateBanner();
+}
+
+void MainWindow::refreshBaseline() {
+  const auto baseline = document_->baselineEvaluation();
+  stationModel_->setBaseline(baseline);
+  performanceModel_->setBaseline(baseline, document_->baselineTitle());
+  // The station table's difference from the baseline only while there is one.
+  const int baselineMode = static_cast<int>(TableMode::BaselineDifference);
+  if (auto* model = qobject_cast<QStandardItemModel*>(tableMode_->model()))
+    if (QStandardItem* item = model->item(baselineMode)) item->setEnabled(baseline != nullptr);
+  if (!baseline && tableMode_->currentIndex() == baselineMode) tableMode_->setCurrentIndex(0);
+  actions_->clearBaseline()->setEnabled(baseline != nullptr);
+  // The hook for the charts' baseline overlay: CaseDocument::baselineChanged with
+  // baselineEvaluation() and baselineTitle() (a third line style, Okabe-Ito grey, dash-dot).
+}
+
+void MainWindow::pinBaseline() {
+  if (document_->pinBaseline())
+    statusBar()->showMessage(tr("Baseline: %1").arg(document_->baselineTitle()));
+  else
+    statusBar()->showMessage(tr("There is no result to pin as the baseline."));
+}
+
+bool MainWindow::openBaseline(const QString& path, QString* error) {
+  return files_->openBaseline(path, error);
+}
+
+QString MainWindow::performanceTableText() const {
+  return performanceModel_->toTabSeparated();
+}
+
+int MainWindow::rowsHeight(const QTableView* view, int rows) {
+  return view->horizontalHeader()->sizeHint().height() + rows * view->verticalHeader()->defaultSectionSize() +
+         2 * view->frameWidth();
+}
+
+void MainWindow::fitTables() {
+  // Every column in view: a table is never narrower than its columns, so it never scrolls
+  // sideways. At least three rows; every row when the window's height allows (fitTableRows).
+  for (QTableView* view : {stationView_, performanceView_}) {
+    const auto* asView = static_cast<const QAbstractItemView*>(view);
+    int width = 2 * view->frameWidth() + view->verticalScrollBar()->sizeHint().width();
+    for (int c = 0; c < view->model()->columnCount(); ++c)
+      width += std::max(asView->sizeHintForColumn(c), view->horizontalHeader()->sectionSizeHint(c));
+    view->setMinimumSize(width, rowsHeight(view, kMinimumTableRows));
+  }
+  const int rows = std::max(stationModel_->rowCount(), performanceModel_->rowCount());
+  if (rows != tableRows_ && vertical_->isVisible()) fitTableRows();
+  tableRows_ = rows;
+}
+
+void MainWindow::fitTableRows() {
+  // The bottom area as high as the taller table's rows need, the charts the rest (at least their
+  // minimum); later the user's splitter.
+  int extra = 0;
+  for (QTableView* view : {stationView_, performanceView_})
+    extra = std::max(extra, rowsHeight(view, view->model()->rowCount()) - view->minimumHeight());
+  const int wanted = bottomTabs_->minimumSizeHint().height() + extra;
+  const int total = vertical_->height() - vertical_->handleWidth();
+  const int top = std::max(total - wanted, vertical_->widget(0)->minimumSizeHint().height());
+  vertical_->setSizes({top, total - top});
 }
 
 void MainWindow::updateBanner() {

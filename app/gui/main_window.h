@@ -10,6 +10,7 @@
 
 #include <QMainWindow>
 #include <QSet>
+#include <QSize>
 #include <QString>
 
 #include <array>
@@ -46,6 +47,11 @@ class WindowActions;
 class WindowAutosave;
 class WindowExports;
 class WindowFiles;
+
+/// The smallest a cycle chart gets in the window (legend, ticks and labels still readable) [px].
+inline constexpr QSize kChartMinimum{300, 240};
+/// The station and performance tables show at least this many rows.
+inline constexpr int kMinimumTableRows = 3;
 
 class MainWindow : public QMainWindow {
   Q_OBJECT
@@ -100,6 +106,10 @@ class MainWindow : public QMainWindow {
 
   // Exports without dialogs (tests and the menu actions).
   bool exportStationCsv(const QString& path);
+  /// The performance table as tab-separated text, as shown (with the baseline's columns when set).
+  QString performanceTableText() const;
+  /// Makes a saved case the baseline (WindowFiles::openBaseline).
+  bool openBaseline(const QString& path, QString* error = nullptr);
   bool exportResultJson(const QString& path);
   bool exportAuditCsv(const QString& path);
   bool exportStudyCsv(const QString& path);
@@ -134,9 +144,12 @@ class MainWindow : public QMainWindow {
   bool save();
   bool saveAs();
   void showPreferences();
+  /// Pins the shown result as the baseline (Edit › Pin as Baseline).
+  void pinBaseline();
 
  protected:
   void closeEvent(QCloseEvent* event) override;
+  bool eventFilter(QObject* watched, QEvent* event) override;
   void changeEvent(QEvent* event) override;
 
  private:
@@ -152,7 +165,19 @@ class MainWindow : public QMainWindow {
   void connectDocument();
   void restoreFromSettings();
   void refreshResult();
+  /// The station and performance tables' minimum sizes: every column, at least three rows.
+  void fitTables();
+  /// The bottom area's height for every row of the tables, where the window allows.
+  void fitTableRows();
+  static int rowsHeight(const QTableView* view, int rows);
+  void fitDock(QDockWidget* dock, int preferredWidth);
+  /// Puts the charts side by side or in tabs: as chosen, and in tabs while too narrow for two.
+  void arrangeCharts();
+  bool chartsInTabs() const;
+  bool hsBeside() const;  ///< the h-s chart shown beside the others (View menu)
   void updateBanner();
+  /// The tables follow the document's baseline (columns, difference mode, action states).
+  void refreshBaseline();
   /// The stale banner's colours from the window's palette (light or dark).
   void applyBannerPalette();
   void updateStrip();
@@ -187,6 +212,8 @@ class MainWindow : public QMainWindow {
   QTableView* performanceView_ = nullptr;
   PerformanceModel* performanceModel_ = nullptr;
   QTabWidget* bottomTabs_ = nullptr;
+  QSplitter* vertical_ = nullptr;
+  int tableRows_ = -1;
   AuditPanel* auditPanel_ = nullptr;
   QDockWidget* auditDock_ = nullptr;
   TradeStudyPanel* tradeStudyPanel_ = nullptr;

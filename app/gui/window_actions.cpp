@@ -82,6 +82,16 @@ void WindowActions::createEditActions() {
           [this] { window_.exports().copyChart(window_.pressureVolumeChart()); });
   copyTable_ = make(tr("Copy Station &Table"), "copyTableAction");
   connect(copyTable_, &QAction::triggered, &exports, &WindowExports::copyStationTable);
+  copyPerformance_ = make(tr("Copy &Performance Table"), "copyPerformanceAction");
+  connect(copyPerformance_, &QAction::triggered, &exports, &WindowExports::copyPerformanceTable);
+  pinBaseline_ = make(tr("&Pin as Baseline"), "pinBaselineAction");
+  pinBaseline_->setToolTip(tr("Keep the shown result as the baseline the tables compare against"));
+  connect(pinBaseline_, &QAction::triggered, &window_, &MainWindow::pinBaseline);
+  clearBaseline_ = make(tr("&Clear Baseline"), "clearBaselineAction");
+  clearBaseline_->setEnabled(false);  // until there is a baseline
+  connect(clearBaseline_, &QAction::triggered, this, [this] { window_.document().clearBaseline(); });
+  openBaseline_ = make(tr("Open &Baseline…"), "openBaselineAction");
+  connect(openBaseline_, &QAction::triggered, &window_.files(), &WindowFiles::chooseBaseline);
   copyStudyTable_ = make(tr("Copy Trade &Study Table"), "copyStudyTableAction");
   connect(copyStudyTable_, &QAction::triggered, &exports, &WindowExports::copyStudyTable);
 }
@@ -124,6 +134,8 @@ void WindowActions::createFileMenu() {
   connect(recentMenu_, &QMenu::aboutToShow, this, &WindowActions::updateRecentMenu);
   fileMenu->addAction(save_);
   fileMenu->addAction(saveAs_);
+  fileMenu->addSeparator();
+  fileMenu->addAction(openBaseline_);
   fileMenu->addSeparator();
   createExportMenu(fileMenu);
   fileMenu->addSeparator();
@@ -174,7 +186,11 @@ void WindowActions::createEditMenu() {
   editMenu->addAction(copyTs_);
   editMenu->addAction(copyPv_);
   editMenu->addAction(copyTable_);
+  editMenu->addAction(copyPerformance_);
   editMenu->addAction(copyStudyTable_);
+  editMenu->addSeparator();
+  editMenu->addAction(pinBaseline_);
+  editMenu->addAction(clearBaseline_);
 }
 
 void WindowActions::createViewMenu() {

@@ -1,9 +1,23 @@
-// The main window's layout holds: toolbar buttons keep their place whatever the undo text says.
+// The main window's layout holds: toolbar buttons keep their place whatever the undo text says;
+// at 1280 x 800 and 1920 x 1080, with and without the docks, no control is below its minimum
+// size or cut off, and the station and performance tables show every column (scrolling, if at
+// all, only vertically; at 1280 x 800 without a dock every station).
 #include "document/case_document.h"
 #include "gui_test_support.h"
 #include "main_window.h"
 
+#include <qwt_plot.h>
+
+#include <QAbstractButton>
+#include <QAbstractSpinBox>
 #include <QAction>
+#include <QComboBox>
+#include <QDockWidget>
+#include <QHeaderView>
+#include <QLineEdit>
+#include <QScrollBar>
+#include <QTabWidget>
+#include <QTableView>
 #include <QTest>
 #include <QToolBar>
 #include <QToolButton>
@@ -18,6 +32,76 @@ QList<QRect> buttonPlaces(QToolBar* bar) {
     if (QWidget* button = bar->widgetForAction(action); button && !action->isSeparator())
       places << button->geometry();
   return places;
+}
+
+/// The smallest size a widget's layout would give it: its minimum size where set, else its
+/// minimum size hint [px].
+QSize smallestSize(const QWidget* w) {
+  QSize min = w->minimumSizeHint();
+  if (w->minimumWidth() > 0) min.setWidth(w->minimumWidth());
+  if (w->minimumHeight() > 0) min.setHeight(w->minimumHeight());
+  return min;
+}
+
+/// Whether every ancestor up to the window is visible (QWidget::isVisible() says so).
+bool shown(const QWidget* w) {
+  return w->isVisible() && !w->visibleRegion().isEmpty();
+}
+
+/// The controls that are smaller than their minimum or cut off by their parents, as text.
+QStringList crampedControls(const QWidget& window) {
+  QStringList out;
+  for (QWidget* w : window.findChildren<QWidget*>()) {
+    const bool control = qobject_cast<QLineEdit*>(w) || qobject_cast<QAbstractSpinBox*>(w) ||
+                         qobject_cast<QComboBox*>(w) || qobject_cast<QAbstractButton*>(w) ||
+                         qobject_cast<QwtPlot*>(w) || qobject_cast<QTableView*>(w);
+    if (!control || !shown(w) || w->objectName().startsWith("qt_")) continue;
+    if (qobject_cast<QAbstractButton*>(w) && w->parentWidget() &&
+        qobject_cast<QHeaderView*>(w->parentWidget()))
+      continue;
+    const QSize min = smallestSize(w);
+    const QRect seen = w->visibleRegion().boundingRect();
+    if (w->width() < min.width() || w->height() < min.height() ||
+        seen.width() < std::min(w->width(), min.width()))
+      out << QStringLiteral("%1 (%2) %3x%4, seen %5x%6, minimum %7x%8")
+                 .arg(w->objectName(), QString::fromLatin1(w->metaObject()->className()))
+                 .arg(w->width())
+                 .arg(w->height())
+                 .arg(seen.width())
+                 .arg(seen.height())
+                 .arg(min.width())
+                 .arg(min.height());
+  }
+  return out;
+}
+
+/// What is wrong with a table's fit: a horizontal scroll bar, or a column narrower than its text.
+QString tableFit(QTableView* table) {
+  if (table->horizontalScrollBar()->maximum() > 0)
+    return QStringLiteral("%1 scrolls horizontally by %2 px")
+        .arg(table->objectName())
+        .arg(table->horizontalScrollBar()->maximum());
+  for (int c = 0; c < table->model()->columnCount(); ++c) {
+    const int needed = std::max(static_cast<QAbstractItemView*>(table)->sizeHintForColumn(c),
+                                table->horizontalHeader()->sectionSizeHint(c));
+    if (table->columnWidth(c) < needed)
+      return QStringLiteral("%1 column %2 is %3 px, needs %4")
+          .arg(table->objectName())
+          .arg(c)
+          .arg(table->columnWidth(c))
+          .arg(needed);
+  }
+  return {};
+}
+
+/// Whether every row of a table is in view.
+bool everyRowInView(QTableView* table) {
+  const int last = table->model()->rowCount() - 1;
+  return table->rowViewportPosition(last) + table->rowHeight(last) <= table->viewport()->height();
+}
+
+void settle() {
+  for (int i = 0; i < 4; ++i) QApplication::processEvents();
 }
 
 }  // namespace
@@ -54,6 +138,59 @@ class TestWindowLayout : public QObject {
     window.document().undoStack()->undo();  // now Redo carries the text
     QApplication::processEvents();
     QCOMPARE(buttonPlaces(bar), before);
+  }
+
+  void holdsAtLaptopAndDesktopSizes_data() {
+    QTest::addColumn<QSize>("size");
+    QTest::addColumn<QString>("dock");  // "", "audit" or "study"
+    for (const QSize size : {QSize(1280, 800), QSize(1920, 1080)})
+      for (const QString dock : {"", "audit", "study"})
+        QTest::addRow("%dx%d %s", size.width(), size.height(), dock.isEmpty() ? "no dock" : qPrintable(dock))
+            << size << dock;
+  }
+  void holdsAtLaptopAndDesktopSizes() {
+    QFETCH(QSize, size);
+    QFETCH(QString, dock);
+    cw::gui::MainWindow window;
+    QVERIFY(window.openCase(":/demo/demo-turbojet.json"));
+    window.resize(size);
+    window.show();
+    QVERIFY(QTest::qWaitForWindowExposed(&window));
+    if (dock == "audit") {
+      window.auditDock()->show();
+      window.placeAudit();
+    } else if (dock == "study") {
+      window.tradeStudyDock()->show();
+      window.placeTradeStudy();
+    }
+    settle();
+    QCOMPARE(window.size(), size);
+    if (!qEnvironmentVariableIsEmpty("CYCLEWRIGHT_LAYOUT_PICTURES"))
+      window.grab().save(QStringLiteral("%1/layout-%2x%3-%4.png")
+                             .arg(qEnvironmentVariable("CYCLEWRIGHT_LAYOUT_PICTURES"))
+                             .arg(size.width())
+                             .arg(size.height())
+                             .arg(dock.isEmpty() ? "none" : dock));
+
+    const QStringList cramped = crampedControls(window);
+    QVERIFY2(cramped.isEmpty(), qPrintable(cramped.join("\n")));
+    // Side by side, or in two tabs when the room is less: each table in view fits.
+    for (const char* name : {"stationTable", "performanceTable"}) {
+      auto* table = window.findChild<QTableView*>(name);
+      QVERIFY(table);
+      if (!shown(table)) {
+        auto* tabs = window.findChild<QTabWidget*>("tablePairTabs");
+        QVERIFY2(tabs && tabs->isVisible(), name);
+        for (int i = 0; i < tabs->count(); ++i)
+          if (tabs->widget(i)->isAncestorOf(table)) tabs->setCurrentIndex(i);
+        settle();
+        QVERIFY(crampedControls(window).isEmpty());
+      }
+      QVERIFY2(shown(table), name);
+      QCOMPARE(tableFit(table), QString());
+      // Stations 8 and 9 in view at the laptop size too; the performance summary in one view.
+      QVERIFY2(everyRowInView(table), name);
+    }
   }
 };
 

@@ -45,6 +45,9 @@ AuditPanel::AuditPanel(CaseDocument& document, DisplayUnits& units, SelectionRou
   view_->addItems({tr("Each loss removed alone"), tr("Waterfall steps"), tr("Sensitivities per unit"),
                    tr("Exergy destroyed")});
   view_->setCurrentIndex(static_cast<int>(AuditView::Waterfall));
+  // Narrower than its longest entry when docked on a laptop screen (the list shows them whole).
+  view_->setSizeAdjustPolicy(QComboBox::AdjustToMinimumContentsLengthWithIcon);
+  view_->setMinimumContentsLength(14);
   viewLabel->setBuddy(view_);
   controls->addWidget(figureLabel);
   controls->addWidget(figure_);
@@ -65,12 +68,13 @@ AuditPanel::AuditPanel(CaseDocument& document, DisplayUnits& units, SelectionRou
   chartLayout->setContentsMargins(0, 0, 0, 0);
   chartLayout->setSpacing(2);
   chart_ = new AuditChart(units, chartBox);
-  chart_->setMinimumHeight(200);
+  chart_->setMinimumSize(260, 200);  // a docked waterfall on a laptop screen; its labels wrap
   note_ = new QLabel(tr("The waterfall steps depend on the order in which the losses are added, because "
                         "the losses interact; their sum does not."),
                      chartBox);
   note_->setObjectName("auditOrderNote");
   note_->setWordWrap(true);
+  note_->setMinimumWidth(240);  // a wrapped label would ask for a long line: it wraps in a narrow dock
   chartLayout->addWidget(chart_, 1);
   chartLayout->addWidget(note_);
   model_ = new AuditTableModel(units, this);

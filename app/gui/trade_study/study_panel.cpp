@@ -97,11 +97,6 @@ TradeStudyPanel::TradeStudyPanel(CaseDocument& document, DisplayUnits& units, QW
   compareRow->addWidget(compare_, 1);
   form->addLayout(compareRow);
   form->addWidget(change_);
-  auto* runRow = new QHBoxLayout;
-  runRow->addWidget(runButton_);
-  runRow->addWidget(cancelButton_);
-  runRow->addWidget(progress_, 1);
-  form->addLayout(runRow);
   form->addWidget(status_);
   form->addStretch(1);
   controlsArea_ = new QScrollArea;
@@ -110,6 +105,19 @@ TradeStudyPanel::TradeStudyPanel(CaseDocument& document, DisplayUnits& units, QW
   controlsArea_->setFrameShape(QFrame::NoFrame);
   controlsArea_->setHorizontalScrollBarPolicy(Qt::ScrollBarAlwaysOff);
   controlsArea_->setMinimumWidth(controls->sizeHint().width() + 16);
+  // Run, Cancel and the progress below the scrolled controls: always in sight, never cut off.
+  controlsPane_ = new QWidget;
+  controlsPane_->setObjectName("studyControlsPane");
+  auto* pane = new QVBoxLayout(controlsPane_);
+  pane->setContentsMargins(0, 0, 0, 0);
+  pane->setSpacing(2);
+  pane->addWidget(controlsArea_, 1);
+  auto* runRow = new QHBoxLayout;
+  runRow->setContentsMargins(2, 0, 6, 2);
+  runRow->addWidget(runButton_);
+  runRow->addWidget(cancelButton_);
+  runRow->addWidget(progress_, 1);
+  pane->addLayout(runRow);
 
   // --- the chart, its plot choice and its note ------------------------------------------------
   auto* chartBox = chartBox_ = new QWidget;
@@ -328,7 +336,7 @@ void TradeStudyPanel::setSideBySide(bool sideBySide) {
     form_->insertWidget(0, plotRow_);
     form_->insertWidget(form_->count() - 1, note_);  // before the stretch
     split_->setOrientation(Qt::Horizontal);
-    split_->insertWidget(0, controlsArea_);
+    split_->insertWidget(0, controlsPane_);
     split_->insertWidget(1, chartBox_);
     split_->insertWidget(2, table_);
     lower_->hide();
@@ -342,7 +350,7 @@ void TradeStudyPanel::setSideBySide(bool sideBySide) {
     chartLayout_->addWidget(note_);
     split_->setOrientation(Qt::Vertical);
     split_->insertWidget(0, chartBox_);
-    lower_->insertWidget(0, controlsArea_);
+    lower_->insertWidget(0, controlsPane_);
     lower_->insertWidget(1, table_);
     split_->insertWidget(1, lower_);
     lower_->show();

@@ -153,6 +153,7 @@ class TradeStudyPanel : public QWidget {
   QVBoxLayout* form_ = nullptr;         ///< the controls and, side by side, the plot choice and the note
   QWidget* plotRow_ = nullptr;
   QScrollArea* controlsArea_ = nullptr;
+  QWidget* controlsPane_ = nullptr;  ///< the scrolled controls above the Run row
 
   // The study shown and what it ran on.
   std::shared_ptr<const study::TradeStudy> study_;
