@@ -94,7 +94,8 @@ class AuditChart::WaterfallItem : public QwtPlotItem {
         const bool costs = tsfc ? step > 0.0 : step < 0.0;
         fill = std::abs(step) <= 1e-9 * std::abs(bar.to) ? chart_.between(0.5) : costs ? kVermillion : kGreen;
       }
-      const bool selected = !total && lossSection(bar.loss) == chart_.highlighted_;
+      const bool selected =
+          !total && !chart_.exportingWithoutSelection_ && lossSection(bar.loss) == chart_.highlighted_;
       painter->setPen(selected ? QPen(p.color(QPalette::Text), 2.5) : QPen(fill.darker(130), 1.0));
       painter->setBrush(fill);
       painter->drawRect(r.height() < 1.0 ? r.adjusted(0, -0.5, 0, 0.5) : r);
@@ -182,6 +183,19 @@ AuditChart::~AuditChart() = default;
 
 double AuditChart::figureFactor() const {
   return units_.factor(figure_ == AuditFigure::Tsfc ? Quantity::Tsfc : Quantity::SpecificThrust);
+}
+
+void AuditChart::refresh() {
+  retranslateUi();
+  rebuild();
+}
+
+void AuditChart::beginExport(const ExportOptions& options) {
+  exportingWithoutSelection_ = !options.selectionHighlight;
+}
+
+void AuditChart::endExport() {
+  exportingWithoutSelection_ = false;
 }
 
 void AuditChart::paletteChanged() {

@@ -156,6 +156,26 @@ void CycleChart::paletteChanged() {
   rebuild();
 }
 
+void CycleChart::refresh() {
+  applyPalette();
+  retranslateUi();
+  rebuild();
+}
+
+void CycleChart::beginExport(const ExportOptions& options) {
+  // The selection belongs on screen; a figure shows it only when asked to.
+  if (!options.selectionHighlight) {
+    highlight_->setVisible(false);
+    idealHighlight_->setVisible(false);
+    highlight_->setItemAttribute(QwtPlotItem::Legend, false);
+  }
+}
+
+void CycleChart::endExport() {
+  highlight_->setItemAttribute(QwtPlotItem::Legend, true);
+  updateHighlight();
+}
+
 void CycleChart::staleChanged() {
   updateStalePens();
 }

@@ -87,6 +87,9 @@ class CycleChart : public ChartBase {
  protected:
   void paletteChanged() override;
   void staleChanged() override;
+  void refresh() override;
+  void beginExport(const ExportOptions& options) override;
+  void endExport() override;
   bool hasResult() const override { return evaluation_ != nullptr; }
 
  private:
