@@ -254,7 +254,8 @@ QWidget* MainWindow::createPerformanceBox() {
 
 void MainWindow::createBottomTabs(QSplitter* vertical) {
   // Side by side where both fit, else in two tabs (a laptop screen with a dock open).
-  auto* bottom = new TablePair(createStationBox(), tr("Stations"), createPerformanceBox(), tr("Performance"));
+  auto* bottom = tablePair_ =
+      new TablePair(createStationBox(), tr("Stations"), createPerformanceBox(), tr("Performance"));
   bottom->setObjectName("tablePair");
   connect(bottom, &TablePair::arranged, this, [this] {
     if (vertical_->isVisible()) fitTableRows();
@@ -463,6 +464,7 @@ void MainWindow::fitTables() {
     view->setMinimumSize(width, rowsHeight(view, kMinimumTableRows));
   }
   const int rows = std::max(stationModel_->rowCount(), performanceModel_->rowCount());
+  tablePair_->fit();  // the widths changed
   if (rows != tableRows_ && vertical_->isVisible()) fitTableRows();
   tableRows_ = rows;
 }
