@@ -6,8 +6,10 @@
 #include "common/version.h"
 
 #include <QDateTime>
+#include <QDir>
 #include <QFile>
 #include <QFileInfo>
+#include <QImage>
 #include <QProcess>
 #include <QTest>
 
@@ -203,15 +205,37 @@ class TestStartUp : public QObject {
     const Run run = runApp(home, {"--screenshot", home.path("window.png"), "--size", "640x480"});
     QCOMPARE(run.status, 0);
     QVERIFY(QFile::exists(home.path("window.png")));
-    // The child wrote its settings (the chart layout, at least) in its own home...
-    const QString ownSettings = home.folderOf("XDG_CONFIG_HOME") + "/Cyclewright/Cyclewright.conf";
-    QVERIFY2(QFile::exists(ownSettings), qPrintable(ownSettings));
-    QFile settings(ownSettings);
-    QVERIFY(settings.open(QIODevice::ReadOnly));
-    QVERIFY(settings.readAll().contains("layout=side-by-side"));
-    // ...and nothing where the user's own settings and data are.
+    // Nothing where the user's own settings and data are (and, a screenshot, no settings at all:
+    // screenshotRunsChangeNoSettings).
     QVERIFY(stateOf(realSettings) == settingsBefore);
     QVERIFY(stateOf(realData) == dataBefore);
+  }
+
+  void screenshotRunsChangeNoSettings() {
+    const cw::test::IsolatedHome home;
+    const QString settingsFile = home.folderOf("XDG_CONFIG_HOME") + "/Cyclewright/Cyclewright.conf";
+    QVERIFY(QDir().mkpath(QFileInfo(settingsFile).absolutePath()));
+    // The user's own: the inputs of their last study, SI units, the charts in tabs.
+    const QByteArray own =
+        "[charts]\nlayout=tabbed\n\n[study]\nfirst_input=nozzle.velocity_coefficient\n"
+        "first_count=7\ncarpet=false\n\n[units]\nsystem=si\n";
+    QVERIFY(writeFile(settingsFile, own));
+    const QString casePath = home.path("case.json");
+    QVERIFY(writeFile(casePath, demoWith("\"pressure_ratio\": 8.0", "\"pressure_ratio\": 9.0")));
+    for (const auto& [of, size] : {std::pair{QStringLiteral("window"), QStringLiteral("1280x800")},
+                                   std::pair{QStringLiteral("trade-study"), QStringLiteral("900x600")}}) {
+      const Run run = runApp(home, {"--screenshot", home.path(of + ".png"), "--screenshot-of", of, "--size",
+                                    size, "--study-vary", "compressor.pressure_ratio=4:12:5", "--study-vary",
+                                    "burner.exit_temperature_K=1200:1500:3", "--study-plot",
+                                    "specific_thrust_N_s_per_kg", casePath});
+      QVERIFY2(run.status == 0, qPrintable(run.err));
+      QFile settings(settingsFile);
+      QVERIFY(settings.open(QIODevice::ReadOnly));
+      QCOMPARE(settings.readAll(), own);  // byte for byte: no study set-up, no recent file
+    }
+    // The panel's picture honours --size too.
+    QCOMPARE(QImage(home.path("trade-study.png")).size(), QSize(900, 600));
+    QCOMPARE(QImage(home.path("window.png")).size(), QSize(1280, 800));
   }
 };
 
