@@ -888,6 +888,10 @@ kein Kreisprozess mit diesen Eingaben</translation>
         <source>Evaluation failed: %1</source>
         <translation>Berechnung fehlgeschlagen: %1</translation>
     </message>
+    <message>
+        <source>Untitled case</source>
+        <translation>Unbenannter Fall</translation>
+    </message>
 </context>
 <context>
     <name>cw::gui::CaseForm</name>
@@ -935,6 +939,14 @@ kein Kreisprozess mit diesen Eingaben</translation>
         <translation>Druck p</translation>
     </message>
     <message>
+        <source>Enthalpy–entropy</source>
+        <translation>Enthalpie–Entropie</translation>
+    </message>
+    <message>
+        <source>Specific enthalpy h</source>
+        <translation>Spezifische Enthalpie h</translation>
+    </message>
+    <message>
         <source>Cycle with losses</source>
         <translation>Kreisprozess mit Verlusten</translation>
     </message>
@@ -953,6 +965,12 @@ kein Kreisprozess mit diesen Eingaben</translation>
     <message>
         <source>Isobars through station pressures</source>
         <translation>Isobaren durch die Stationsdrücke</translation>
+    </message>
+    <message>
+        <source>Stations: 0, 8, 9 static states;
+2 to 7 total states</source>
+        <translation>Stationen: 0, 8, 9 statische Zustände;
+2 bis 7 Totalzustände</translation>
     </message>
     <message>
         <source>Selected component</source>
@@ -1091,6 +1109,10 @@ p = %7   v = %8</translation>
         <translation>Druck–Volumen</translation>
     </message>
     <message>
+        <source>Enthalpy–entropy</source>
+        <translation>Enthalpie–Entropie</translation>
+    </message>
+    <message>
         <source>%1: %2 is outside the valid range %3</source>
         <translation>%1: %2 liegt außerhalb des gültigen Bereichs %3</translation>
     </message>
@@ -1135,6 +1157,22 @@ p = %7   v = %8</translation>
     <message>
         <source>Trade &amp;Study</source>
         <translation>&amp;Parameterstudie</translation>
+    </message>
+    <message>
+        <source>&amp;Enthalpy–Entropy Chart Beside</source>
+        <translation>&amp;Enthalpie–Entropie-Diagramm daneben</translation>
+    </message>
+    <message>
+        <source>Difference from baseline (with losses − baseline)</source>
+        <translation>Differenz zur Basis (mit Verlusten − Basis)</translation>
+    </message>
+    <message>
+        <source>Baseline: %1</source>
+        <translation>Basis: %1</translation>
+    </message>
+    <message>
+        <source>There is no result to pin as the baseline.</source>
+        <translation>Es gibt kein Ergebnis, das als Basis festgehalten werden kann.</translation>
     </message>
 </context>
 <context>
@@ -1194,6 +1232,22 @@ p = %7   v = %8</translation>
     <message>
         <source>Unit</source>
         <translation>Einheit</translation>
+    </message>
+    <message>
+        <source>Baseline</source>
+        <translation>Basis</translation>
+    </message>
+    <message>
+        <source>Change from baseline</source>
+        <translation>Änderung zur Basis</translation>
+    </message>
+    <message>
+        <source>Change [%]</source>
+        <translation>Änderung [%]</translation>
+    </message>
+    <message>
+        <source>Baseline: %1</source>
+        <translation>Basis: %1</translation>
     </message>
 </context>
 <context>
@@ -1300,6 +1354,10 @@ p = %7   v = %8</translation>
     <message>
         <source>Stations, difference (with losses − ideal)</source>
         <translation>Stationen, Differenz (mit Verlusten − ideal)</translation>
+    </message>
+    <message>
+        <source>Stations, difference from the baseline (with losses − baseline)</source>
+        <translation>Stationen, Differenz zur Basis (mit Verlusten − Basis)</translation>
     </message>
 </context>
 <context>
@@ -1445,6 +1503,18 @@ p = %7   v = %8</translation>
     <message>
         <source>No point of this study has this figure.</source>
         <translation>Kein Punkt dieser Studie hat diese Größe.</translation>
+    </message>
+    <message>
+        <source>with losses</source>
+        <translation>mit Verlusten</translation>
+    </message>
+    <message>
+        <source>ideal twin</source>
+        <translation>idealer Zwilling</translation>
+    </message>
+    <message>
+        <source>comparison</source>
+        <translation>Vergleich</translation>
     </message>
 </context>
 <context>
@@ -1844,6 +1914,10 @@ p = %7   v = %8</translation>
         <translation>Druck–Volumen-Diagramm als %1</translation>
     </message>
     <message>
+        <source>Enthalpy–Entropy Chart as %1</source>
+        <translation>Enthalpie–Entropie-Diagramm als %1</translation>
+    </message>
+    <message>
         <source>Station Table as CSV…</source>
         <translation>Stationstabelle als CSV…</translation>
     </message>
@@ -1890,6 +1964,26 @@ p = %7   v = %8</translation>
     <message>
         <source>Trade Study as JSON…</source>
         <translation>Parameterstudie als JSON…</translation>
+    </message>
+    <message>
+        <source>&amp;Pin as Baseline</source>
+        <translation>Als &amp;Basis festhalten</translation>
+    </message>
+    <message>
+        <source>Keep the shown result as the baseline the tables compare against</source>
+        <translation>Das angezeigte Ergebnis als Basis festhalten, mit der die Tabellen vergleichen</translation>
+    </message>
+    <message>
+        <source>Open &amp;Baseline…</source>
+        <translation>&amp;Basis öffnen…</translation>
+    </message>
+    <message>
+        <source>&amp;Clear Baseline</source>
+        <translation>Basis &amp;entfernen</translation>
+    </message>
+    <message>
+        <source>Copy &amp;Performance Table</source>
+        <translation>&amp;Leistungstabelle kopieren</translation>
     </message>
 </context>
 <context>
@@ -2025,6 +2119,10 @@ p = %7   v = %8</translation>
         <source>Trade-study table copied as tab-separated text</source>
         <translation>Tabelle der Parameterstudie als tabulatorgetrennter Text kopiert</translation>
     </message>
+    <message>
+        <source>Performance table copied as tab-separated text</source>
+        <translation>Leistungstabelle als tabulatorgetrennter Text kopiert</translation>
+    </message>
 </context>
 <context>
     <name>cw::gui::WindowFiles</name>
@@ -2087,6 +2185,26 @@ p = %7   v = %8</translation>
     <message>
         <source>The case shown is unchanged.</source>
         <translation>Der angezeigte Fall bleibt unverändert.</translation>
+    </message>
+    <message>
+        <source>Baseline: %1</source>
+        <translation>Basis: %1</translation>
+    </message>
+    <message>
+        <source>Open Baseline</source>
+        <translation>Basis öffnen</translation>
+    </message>
+    <message>
+        <source>Baseline not opened: %1</source>
+        <translation>Basis nicht geöffnet: %1</translation>
+    </message>
+    <message>
+        <source>Cannot open baseline</source>
+        <translation>Basis kann nicht geöffnet werden</translation>
+    </message>
+    <message>
+        <source>The baseline is unchanged.</source>
+        <translation>Die Basis bleibt unverändert.</translation>
     </message>
 </context>
 </TS>

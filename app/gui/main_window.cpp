@@ -36,6 +36,7 @@
 #include <QScrollBar>
 #include <QSplitter>
 #include <QStackedWidget>
+#include <QStandardItemModel>
 #include <QStatusBar>
 #include <QTabBar>
 #include <QTabWidget>
@@ -66,6 +67,7 @@ MainWindow::MainWindow(QWidget* parent) : QMainWindow(parent) {
   restoreFromSettings();
 
   router_->select(Section::Compressor);
+  refreshBaseline();
   refreshResult();
   updateStrip();
   files_->updateTitle();
@@ -84,6 +86,7 @@ void MainWindow::connectDocument() {
   connect(autosave_, &WindowAutosave::recovered, files_, &WindowFiles::updateTitle);
   connect(document_, &CaseDocument::resultChanged, this, &MainWindow::refreshResult);
   connect(document_, &CaseDocument::caseChanged, this, &MainWindow::updateStrip);
+  connect(document_, &CaseDocument::baselineChanged, this, &MainWindow::refreshBaseline);
   connect(router_, &SelectionRouter::selected, this, &MainWindow::routeSelection);
   connect(units_, &DisplayUnits::changed, this, &MainWindow::updateBanner);
   connect(units_, &DisplayUnits::changed, this, &MainWindow::fitTables);
@@ -190,7 +193,8 @@ QSplitter* MainWindow::createFormsAndCharts() {
 
   tsChart_ = new CycleChart(ChartKind::TemperatureEntropy, *units_);
   pvChart_ = new CycleChart(ChartKind::PressureVolume, *units_);
-  for (CycleChart* chart : {tsChart_, pvChart_}) chart->setMinimumSize(kChartMinimum);
+  hsChart_ = new CycleChart(ChartKind::EnthalpyEntropy, *units_);
+  for (CycleChart* chart : {tsChart_, pvChart_, hsChart_}) chart->setMinimumSize(kChartMinimum);
   chartHost_ = new QStackedWidget(horizontal);
   chartSplitter_ = new QSplitter(Qt::Horizontal);
   chartSplitter_->setObjectName("chartSplitter");
@@ -215,7 +219,8 @@ QWidget* MainWindow::createStationBox() {
   auto* stationLayout = new QVBoxLayout(stationBox);
   tableMode_ = new QComboBox(stationBox);
   tableMode_->setObjectName("tableMode");
-  tableMode_->addItems({tr("With losses"), tr("Ideal"), tr("Difference (with losses − ideal)")});
+  tableMode_->addItems({tr("With losses"), tr("Ideal"), tr("Difference (with losses − ideal)"),
+                        tr("Difference from baseline (with losses − baseline)")});
   stationLayout->addWidget(tableMode_);
   stationModel_ = new StationTableModel(*units_, this);
   stationView_ = new QTableView(stationBox);
@@ -307,6 +312,15 @@ void MainWindow::createDocks() {
   studyToggle->setObjectName("tradeStudyDockAction");
   studyToggle->setText(tr("Trade &Study"));
   QMenu* viewMenu = actions_->viewMenu();
+  // Side by side, a third chart leaves each canvas too narrow at a laptop's width: the h-s chart
+  // joins the other two there on request, and is always a tab of its own.
+  enthalpyEntropyBeside_ = new QAction(tr("&Enthalpy–Entropy Chart Beside"), this);
+  enthalpyEntropyBeside_->setObjectName("enthalpyEntropyBesideAction");
+  enthalpyEntropyBeside_->setCheckable(true);
+  connect(enthalpyEntropyBeside_, &QAction::toggled, this, [this] { setChartLayout(chartLayout_); });
+  const QList<QAction*> items = viewMenu->actions();
+  const qsizetype after = items.indexOf(actions_->tabbed()) + 1;
+  viewMenu->insertAction(after > 0 && after < items.size() ? items[after] : nullptr, enthalpyEntropyBeside_);
   viewMenu->addSeparator();
   viewMenu->addAction(toggle);
   viewMenu->addAction(studyToggle);
@@ -324,23 +338,33 @@ bool MainWindow::chartsInTabs() const {
 }
 
 void MainWindow::arrangeCharts() {
-  // Side by side as chosen while both charts have their minimum width; in tabs when the room is
-  // less (a dock beside them on a laptop screen), back side by side when it grows again.
-  const int sideBySideWidth = 2 * kChartMinimum.width() + chartSplitter_->handleWidth();
+  // Side by side as chosen while each chart shown there has its minimum width; in tabs when the
+  // room is less (a dock beside them on a laptop screen), back side by side when it grows again.
+  const bool hsBeside = enthalpyEntropyBeside_ && enthalpyEntropyBeside_->isChecked();
+  const int beside = hsBeside ? 3 : 2;
+  const int sideBySideWidth = beside * kChartMinimum.width() + (beside - 1) * chartSplitter_->handleWidth();
   const bool narrow = chartHost_->isVisible() && chartHost_->width() < sideBySideWidth;
-  const bool tabs = chartLayout_ == ChartLayout::Tabbed || narrow;
-  if (tabs && (!chartsInTabs() || chartTabs_->count() < 2)) {
-    chartTabs_->addTab(tsChart_, tr("Temperature–entropy"));
-    chartTabs_->addTab(pvChart_, tr("Pressure–volume"));
-    chartHost_->setCurrentWidget(chartTabs_);
-    chartTabs_->setCurrentIndex(0);  // the tab widget shows one chart, never both on each other
-  } else if (!tabs && (chartsInTabs() || chartSplitter_->count() < 2)) {
-    chartSplitter_->addWidget(tsChart_);
-    chartSplitter_->addWidget(pvChart_);
-    chartHost_->setCurrentWidget(chartSplitter_);
-    tsChart_->show();
-    pvChart_->show();
+  const std::array<QWidget*, 3> charts{tsChart_, pvChart_, hsChart_};
+  if (chartLayout_ == ChartLayout::Tabbed || narrow) {
+    if (!chartsInTabs() || chartTabs_->count() < 3) {
+      chartTabs_->addTab(tsChart_, tr("Temperature–entropy"));
+      chartTabs_->addTab(pvChart_, tr("Pressure–volume"));
+      chartTabs_->addTab(hsChart_, tr("Enthalpy–entropy"));
+      chartTabs_->setCurrentIndex(0);
+      chartHost_->setCurrentWidget(chartTabs_);
+    }
+    // Only the current tab's chart is shown: a chart shown on a hidden page paints over the
+    // current one until the tabs are switched.
+    for (QWidget* chart : charts) chart->setVisible(chart == chartTabs_->currentWidget());
+    return;
   }
+  if (chartsInTabs() || chartSplitter_->count() < 3) {
+    for (QWidget* chart : charts) chartSplitter_->addWidget(chart);
+    chartHost_->setCurrentWidget(chartSplitter_);
+  }
+  tsChart_->show();  // a chart that was on a hidden tab page stays hidden in the splitter
+  pvChart_->show();
+  hsChart_->setVisible(hsBeside);
 }
 
 bool MainWindow::eventFilter(QObject* watched, QEvent* event) {
@@ -425,6 +449,7 @@ void MainWindow::routeSelection(Section section) {
   forms_->setCurrentIndex(row);
   tsChart_->setHighlightedComponent(sectionComponent(section));
   pvChart_->setHighlightedComponent(sectionComponent(section));
+  hsChart_->setHighlightedComponent(sectionComponent(section));
   stationModel_->setHighlightedStations(stationsOf(section));
 }
 
@@ -435,12 +460,14 @@ void MainWindow::refreshResult() {
     shown_ = evaluation;
     tsChart_->setEvaluation(evaluation, stale);
     pvChart_->setEvaluation(evaluation, stale);
+    hsChart_->setEvaluation(evaluation, stale);
     stationModel_->setEvaluation(evaluation, stale);
     performanceModel_->setEvaluation(evaluation, stale);
     stationModel_->setHighlightedStations(stationsOf(router_->current()));
   } else {
     tsChart_->setStale(stale);
     pvChart_->setStale(stale);
+    hsChart_->setStale(stale);
     stationModel_->setStale(stale);
     performanceModel_->setStale(stale);
   }
@@ -479,6 +506,35 @@ void MainWindow::fitTableRows() {
   const int total = vertical_->height() - vertical_->handleWidth();
   const int top = std::max(total - wanted, vertical_->widget(0)->minimumSizeHint().height());
   vertical_->setSizes({top, total - top});
+}
+
+void MainWindow::refreshBaseline() {
+  const auto baseline = document_->baselineEvaluation();
+  stationModel_->setBaseline(baseline);
+  performanceModel_->setBaseline(baseline, document_->baselineTitle());
+  // The station table's difference from the baseline only while there is one.
+  const int baselineMode = static_cast<int>(TableMode::BaselineDifference);
+  if (auto* model = qobject_cast<QStandardItemModel*>(tableMode_->model()))
+    if (QStandardItem* item = model->item(baselineMode)) item->setEnabled(baseline != nullptr);
+  if (!baseline && tableMode_->currentIndex() == baselineMode) tableMode_->setCurrentIndex(0);
+  actions_->clearBaseline()->setEnabled(baseline != nullptr);
+  // The hook for the charts' baseline overlay: CaseDocument::baselineChanged with
+  // baselineEvaluation() and baselineTitle() (a third line style, Okabe-Ito grey, dash-dot).
+}
+
+void MainWindow::pinBaseline() {
+  if (document_->pinBaseline())
+    statusBar()->showMessage(tr("Baseline: %1").arg(document_->baselineTitle()));
+  else
+    statusBar()->showMessage(tr("There is no result to pin as the baseline."));
+}
+
+bool MainWindow::openBaseline(const QString& path, QString* error) {
+  return files_->openBaseline(path, error);
+}
+
+QString MainWindow::performanceTableText() const {
+  return performanceModel_->toTabSeparated();
 }
 
 void MainWindow::updateBanner() {

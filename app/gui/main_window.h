@@ -77,6 +77,7 @@ class MainWindow : public QMainWindow {
   SelectionRouter& selection() const { return *router_; }
   CycleChart* temperatureEntropyChart() const { return tsChart_; }
   CycleChart* pressureVolumeChart() const { return pvChart_; }
+  CycleChart* enthalpyEntropyChart() const { return hsChart_; }
   StationTableModel* stationModel() const { return stationModel_; }
   PerformanceModel* performanceModel() const { return performanceModel_; }
   /// The loss-audit panel: a tab beside the station table and performance summary, or in its
@@ -106,6 +107,10 @@ class MainWindow : public QMainWindow {
 
   // Exports without dialogs (tests and the menu actions).
   bool exportStationCsv(const QString& path);
+  /// The performance table as tab-separated text, as shown (with the baseline's columns when set).
+  QString performanceTableText() const;
+  /// Makes a saved case the baseline (WindowFiles::openBaseline).
+  bool openBaseline(const QString& path, QString* error = nullptr);
   bool exportResultJson(const QString& path);
   bool exportAuditCsv(const QString& path);
   bool exportStudyCsv(const QString& path);
@@ -140,6 +145,8 @@ class MainWindow : public QMainWindow {
   bool save();
   bool saveAs();
   void showPreferences();
+  /// Pins the shown result as the baseline (Edit › Pin as Baseline).
+  void pinBaseline();
 
  protected:
   void closeEvent(QCloseEvent* event) override;
@@ -169,6 +176,8 @@ class MainWindow : public QMainWindow {
   void arrangeCharts();
   bool chartsInTabs() const;
   void updateBanner();
+  /// The tables follow the document's baseline (columns, difference mode, action states).
+  void refreshBaseline();
   /// The stale banner's colours from the window's palette (light or dark).
   void applyBannerPalette();
   void updateStrip();
@@ -191,6 +200,8 @@ class MainWindow : public QMainWindow {
   QLabel* banner_ = nullptr;
   CycleChart* tsChart_ = nullptr;
   CycleChart* pvChart_ = nullptr;
+  CycleChart* hsChart_ = nullptr;
+  QAction* enthalpyEntropyBeside_ = nullptr;  ///< View: the h-s chart beside the others (side by side)
   QStackedWidget* chartHost_ = nullptr;
   QSplitter* chartSplitter_ = nullptr;
   QTabWidget* chartTabs_ = nullptr;

@@ -82,6 +82,16 @@ void WindowActions::createEditActions() {
           [this] { window_.exports().copyChart(window_.pressureVolumeChart()); });
   copyTable_ = make(tr("Copy Station &Table"), "copyTableAction");
   connect(copyTable_, &QAction::triggered, &exports, &WindowExports::copyStationTable);
+  copyPerformance_ = make(tr("Copy &Performance Table"), "copyPerformanceAction");
+  connect(copyPerformance_, &QAction::triggered, &exports, &WindowExports::copyPerformanceTable);
+  pinBaseline_ = make(tr("&Pin as Baseline"), "pinBaselineAction");
+  pinBaseline_->setToolTip(tr("Keep the shown result as the baseline the tables compare against"));
+  connect(pinBaseline_, &QAction::triggered, &window_, &MainWindow::pinBaseline);
+  clearBaseline_ = make(tr("&Clear Baseline"), "clearBaselineAction");
+  clearBaseline_->setEnabled(false);  // until there is a baseline
+  connect(clearBaseline_, &QAction::triggered, this, [this] { window_.document().clearBaseline(); });
+  openBaseline_ = make(tr("Open &Baseline…"), "openBaselineAction");
+  connect(openBaseline_, &QAction::triggered, &window_.files(), &WindowFiles::chooseBaseline);
   copyStudyTable_ = make(tr("Copy Trade &Study Table"), "copyStudyTableAction");
   connect(copyStudyTable_, &QAction::triggered, &exports, &WindowExports::copyStudyTable);
 }
@@ -93,6 +103,7 @@ void WindowActions::createViewActions() {
   connect(resetZoom_, &QAction::triggered, this, [this] {
     window_.temperatureEntropyChart()->resetZoom();
     window_.pressureVolumeChart()->resetZoom();
+    window_.enthalpyEntropyChart()->resetZoom();
   });
   logAxes_ = make(tr("&Logarithmic Pressure–Volume Axes"), "logAxesAction");
   logAxes_->setCheckable(true);
@@ -124,6 +135,8 @@ void WindowActions::createFileMenu() {
   fileMenu->addAction(save_);
   fileMenu->addAction(saveAs_);
   fileMenu->addSeparator();
+  fileMenu->addAction(openBaseline_);
+  fileMenu->addSeparator();
   createExportMenu(fileMenu);
   fileMenu->addSeparator();
   fileMenu->addAction(preferences_);
@@ -141,10 +154,12 @@ void WindowActions::createExportMenu(QMenu* fileMenu) {
       {tr("Temperature–Entropy Chart as %1"),
        [this]() -> QwtPlot* { return window_.temperatureEntropyChart(); }},
       {tr("Pressure–Volume Chart as %1"), [this]() -> QwtPlot* { return window_.pressureVolumeChart(); }},
+      {tr("Enthalpy–Entropy Chart as %1"), [this]() -> QwtPlot* { return window_.enthalpyEntropyChart(); }},
       {tr("Loss Audit Chart as %1"), [this]() -> QwtPlot* { return window_.auditPanel()->chart(); }},
       {tr("Trade Study Chart as %1"), [this]() -> QwtPlot* { return window_.tradeStudyPanel()->chart(); }}};
   const QString baseNames[] = {QStringLiteral("temperature-entropy"), QStringLiteral("pressure-volume"),
-                               QStringLiteral("loss-audit"), QStringLiteral("trade-study")};
+                               QStringLiteral("enthalpy-entropy"), QStringLiteral("loss-audit"),
+                               QStringLiteral("trade-study")};
   for (std::size_t c = 0; c < std::size(charts); ++c) {
     for (const auto& [format, text] : formats) {
       const QString f = format, base = baseNames[c];
@@ -171,7 +186,11 @@ void WindowActions::createEditMenu() {
   editMenu->addAction(copyTs_);
   editMenu->addAction(copyPv_);
   editMenu->addAction(copyTable_);
+  editMenu->addAction(copyPerformance_);
   editMenu->addAction(copyStudyTable_);
+  editMenu->addSeparator();
+  editMenu->addAction(pinBaseline_);
+  editMenu->addAction(clearBaseline_);
 }
 
 void WindowActions::createViewMenu() {

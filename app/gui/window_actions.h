@@ -30,6 +30,7 @@ class WindowActions : public QObject {
   QAction* tabbed() const { return tabbed_; }
   /// The View menu, where the window adds its docks' toggles.
   QMenu* viewMenu() const { return viewMenu_; }
+  QAction* clearBaseline() const { return clearBaseline_; }
 
  private:
   QAction* make(const QString& text, const char* name);
@@ -47,7 +48,8 @@ class WindowActions : public QObject {
   QAction *newCase_ = nullptr, *open_ = nullptr, *save_ = nullptr, *saveAs_ = nullptr,
           *preferences_ = nullptr, *quit_ = nullptr, *about_ = nullptr;
   QAction *undo_ = nullptr, *redo_ = nullptr, *copyTs_ = nullptr, *copyPv_ = nullptr, *copyTable_ = nullptr,
-          *copyStudyTable_ = nullptr;
+          *copyStudyTable_ = nullptr, *copyPerformance_ = nullptr, *pinBaseline_ = nullptr,
+          *openBaseline_ = nullptr, *clearBaseline_ = nullptr;
   QAction *resetZoom_ = nullptr, *logAxes_ = nullptr, *sideBySide_ = nullptr, *tabbed_ = nullptr;
   QActionGroup* layoutGroup_ = nullptr;
   QMenu* recentMenu_ = nullptr;

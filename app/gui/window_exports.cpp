@@ -45,19 +45,33 @@ QString WindowExports::askForFile(const QString& title, const QString& fileName,
 bool WindowExports::stationCsv(const QString& path) {
   const auto evaluation = window_.document().evaluation();
   if (!evaluation) return false;
-  // The table as shown: with losses, ideal twin, or their difference.
+  // The table as shown: with losses, ideal twin, their difference, or the difference from the
+  // baseline (the note after the caution names it).
   const TableMode mode = window_.stationModel()->mode();
-  const std::string csv =
-      mode == TableMode::Difference
-          ? io::stationDifferenceCsv(evaluation->actual, evaluation->ideal)
-          : io::stationTableCsv(mode == TableMode::Ideal ? evaluation->ideal : evaluation->actual);
+  const auto baseline = window_.document().baselineEvaluation();
+  std::string csv;
+  if (mode == TableMode::BaselineDifference && baseline)
+    csv = io::stationDifferenceCsv(evaluation->actual, baseline->actual,
+                                   " Values: with losses minus the baseline (" +
+                                       window_.document().baselineTitle().toStdString() + "), with losses.");
+  else if (mode == TableMode::Difference)
+    csv = io::stationDifferenceCsv(evaluation->actual, evaluation->ideal);
+  else
+    csv = io::stationTableCsv(mode == TableMode::Ideal ? evaluation->ideal : evaluation->actual);
   return writeFile(path, QByteArray::fromStdString(csv));
 }
 
 bool WindowExports::resultJson(const QString& path) {
   const auto evaluation = window_.document().evaluation();
   if (!evaluation) return false;
-  return writeFile(path, QByteArray::fromStdString(io::evaluationToJson(*evaluation).dump(2)) + "\n");
+  nlohmann::json json = io::evaluationToJson(*evaluation);
+  if (const auto baseline = window_.document().baselineEvaluation()) {
+    // The baseline beside the result, so that the file holds both sides of the comparison.
+    nlohmann::json base = io::evaluationToJson(*baseline, false);
+    base["title"] = window_.document().baselineTitle().toStdString();
+    json["baseline"] = base;
+  }
+  return writeFile(path, QByteArray::fromStdString(json.dump(2)) + "\n");
 }
 
 bool WindowExports::auditCsv(const QString& path) {
@@ -137,6 +151,11 @@ void WindowExports::copyChart(CycleChart* chart) {
 void WindowExports::copyStationTable() {
   QApplication::clipboard()->setText(window_.stationModel()->toTabSeparated());
   showStatus(tr("Station table copied as tab-separated text"));
+}
+
+void WindowExports::copyPerformanceTable() {
+  QApplication::clipboard()->setText(window_.performanceTableText());
+  showStatus(tr("Performance table copied as tab-separated text"));
 }
 
 void WindowExports::copyStudyTable() {

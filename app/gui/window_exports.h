@@ -36,6 +36,8 @@ class WindowExports : public QObject {
 
   void copyChart(CycleChart* chart);
   void copyStationTable();
+  /// The performance table as tab-separated text (with the baseline's columns when set).
+  void copyPerformanceTable();
   void copyStudyTable();
 
  private:

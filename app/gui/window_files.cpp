@@ -77,6 +77,33 @@ bool WindowFiles::openCase(const QString& path, QString* error) {
   return true;
 }
 
+bool WindowFiles::openBaseline(const QString& path, QString* error) {
+  QString why;
+  try {
+    const engine::Case inputs = readCaseAt(path);
+    const QString title =
+        inputs.title.empty() ? QFileInfo(path).fileName() : QString::fromStdString(inputs.title);
+    if (document_.setBaseline(inputs, title, &why)) {
+      window_.statusBar()->showMessage(tr("Baseline: %1").arg(title));
+      return true;
+    }
+    why = path + QStringLiteral(": ") + why;
+  } catch (const std::exception& e) {
+    why = openFailureText(path, e);
+  }
+  if (error) *error = why;
+  window_.statusBar()->showMessage(tr("Baseline not opened: %1").arg(why.section(QLatin1Char('\n'), 0, 0)));
+  showProblemBox(&window_, QStringLiteral("baselineFailedBox"), tr("Cannot open baseline"), why,
+                 tr("The baseline is unchanged."));
+  return false;
+}
+
+void WindowFiles::chooseBaseline() {
+  const QString path = QFileDialog::getOpenFileName(&window_, tr("Open Baseline"), QString(),
+                                                    tr("Cyclewright cases (*.json);;All files (*)"));
+  if (!path.isEmpty()) openBaseline(path);
+}
+
 bool WindowFiles::refuseToOpen(const QString& message, QString* error) {
   if (error) *error = message;
   window_.statusBar()->showMessage(tr("Not opened: %1").arg(message.section(QLatin1Char('\n'), 0, 0)));

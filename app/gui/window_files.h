@@ -38,6 +38,12 @@ class WindowFiles : public QObject {
   bool maybeSave();
   /// The window's title: the file's name and the modified mark.
   void updateTitle();
+  /// Makes a saved case the baseline (File › Open Baseline…): its title is the case's title,
+  /// else the file's name. Returns false and says why (in *error, the status bar and, while the
+  /// window is visible, a dialog "baselineFailedBox") when it cannot be read or has no cycle.
+  bool openBaseline(const QString& path, QString* error = nullptr);
+  /// Asks for a file, then opens it as the baseline.
+  void chooseBaseline();
 
  signals:
   /// The case was written to its file: nothing is left to recover.

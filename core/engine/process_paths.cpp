@@ -51,15 +51,29 @@ ProcessPath heatingPath(std::string component, std::string from, std::string to,
 ProcessPath closurePath(const thermo::Gas& exhaustGas, double t9, double p9, double t0, double p0,
                         double entropyReference, const thermo::Gas& air) {
   ProcessPath path{"closure", "9", "0", true, {}};
-  path.states.reserve(kPathStates);
-  const PathState first = stateOf(exhaustGas, t9, p9, entropyReference);
-  const PathState last = stateOf(air, t0, p0, entropyReference);
-  for (int i = 0; i < kPathStates; ++i) {
+  path.states.reserve(kClosureExpansionStates + kPathStates);
+  // An exhaust not at ambient pressure (a choked convergent nozzle) first expands to it at its
+  // own entropy; the isobar then starts at the end of that expansion.
+  double tStart = t9;
+  if (std::fabs(p9 - p0) > 1e-9 * p0) {
+    const double s9 = exhaustGas.entropy(t9, p9);
+    for (int i = 0; i < kClosureExpansionStates; ++i) {
+      const double x = double(i) / (kClosureExpansionStates - 1);
+      const double p = i == kClosureExpansionStates - 1 ? p0 : std::exp(lerp(std::log(p9), std::log(p0), x));
+      const double T = i == 0 ? t9 : exhaustGas.temperatureFromEntropy(s9, p);
+      path.states.push_back(stateOf(exhaustGas, T, p, entropyReference));
+    }
+    tStart = path.states.back().temperature;
+  }
+  // The isobar at p0: temperature linear; the properties blended from the exhaust gas's to the
+  // air's at the same (T, p0), exact at both ends (the same convention as heatingPath).
+  for (int i = path.states.empty() ? 0 : 1; i < kPathStates; ++i) {
     const double x = double(i) / (kPathStates - 1);
-    const double T = lerp(t9, t0, x), p = std::exp(lerp(std::log(p9), std::log(p0), x));
-    const double R = lerp(exhaustGas.gasConstant(), air.gasConstant(), x);
-    path.states.push_back(
-        {T, lerp(first.entropy, last.entropy, x), p, R * T / p, lerp(first.enthalpy, last.enthalpy, x)});
+    const double T = i == kPathStates - 1 ? t0 : lerp(tStart, t0, x);
+    const PathState a = stateOf(exhaustGas, T, p0, entropyReference),
+                    b = stateOf(air, T, p0, entropyReference);
+    path.states.push_back({T, lerp(a.entropy, b.entropy, x), p0, lerp(a.specificVolume, b.specificVolume, x),
+                           lerp(a.enthalpy, b.enthalpy, x)});
   }
   return path;
 }

@@ -8,8 +8,11 @@
 //   heatingPath   the burner: pressure falling linearly from entry to exit, temperature rising
 //                 linearly, and the properties blended linearly from those of the entry gas to
 //                 those of the exit gas at the same (T, p) (a drawing convention, exact at both ends).
-//   closurePath   the open cycle's return from exhaust to the free-stream static state at
-//                 ambient pressure: temperature and ln p linear, entropy linear (drawn dashed).
+//   closurePath   the open cycle's return from exhaust to the free-stream static state: the
+//                 constant-pressure heat rejection it stands for, an isobar at the ambient
+//                 pressure p0 (temperature linear, the gas blended from exhaust to air, exact
+//                 at both ends), after an expansion at constant entropy from p9 to p0 where
+//                 the exhaust is not at ambient pressure (drawn dashed).
 
 #include "engine/process_path.h"
 #include "thermo/gas.h"
@@ -17,6 +20,8 @@
 namespace cw::engine {
 
 inline constexpr int kPathStates = 24;
+/// States of the closure's expansion from p9 to p0 (when they differ), its end included.
+inline constexpr int kClosureExpansionStates = 8;
 
 ProcessPath pressurePath(std::string component, std::string from, std::string to, const thermo::Gas& gas,
                          double t1, double p1, double t2, double p2, double entropyReference);

@@ -129,9 +129,10 @@ std::string stationTableCsv(const engine::CycleResult& r) {
   return out.str();
 }
 
-std::string stationDifferenceCsv(const engine::CycleResult& actual, const engine::CycleResult& ideal) {
+std::string stationDifferenceCsv(const engine::CycleResult& actual, const engine::CycleResult& ideal,
+                                 const std::string& note) {
   std::ostringstream out;
-  writeTableHead(out, " Values: with losses minus ideal twin.");
+  writeTableHead(out, note);
   for (const auto& a : actual.stations) {
     const auto twin = std::find_if(ideal.stations.begin(), ideal.stations.end(),
                                    [&](const engine::Station& s) { return s.id == a.id; });

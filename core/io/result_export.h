@@ -25,8 +25,11 @@ nlohmann::json evaluationToJson(const engine::Evaluation& evaluation, bool withP
 std::string stationTableCsv(const engine::CycleResult& result);
 
 /// The station table of the difference actual - ideal, station by station (stations that only
-/// one of the two has, such as 6, are left out; areas where either lacks one are empty).
-std::string stationDifferenceCsv(const engine::CycleResult& actual, const engine::CycleResult& ideal);
+/// one of the two has, such as 6, are left out; areas where either lacks one are empty). The
+/// note after the caution says what was subtracted (the ideal twin unless told otherwise, e.g.
+/// a baseline's cycle with losses).
+std::string stationDifferenceCsv(const engine::CycleResult& actual, const engine::CycleResult& ideal,
+                                 const std::string& note = " Values: with losses minus ideal twin.");
 
 /// Column names of the station table, in order (the CSV header and the JSON keys).
 const std::vector<std::string>& stationColumns();

@@ -6,7 +6,9 @@
 #include "components/inlet.h"
 #include "engine/evaluate.h"
 #include "engine/isobars.h"
+#include "engine/process_paths.h"
 #include "engine/turbojet.h"
+#include "thermo/constant_cp_gas.h"
 
 #include <QTest>
 
@@ -161,6 +163,64 @@ bool clearlyHasACycle(const Case& c) {
 class TestTurbojet : public QObject {
   Q_OBJECT
  private slots:
+  // The closure is the constant-pressure heat rejection it stands for: on the constant-cp model
+  // (one gas for exhaust and air) an isobar at p0 with s - s1 = cp ln(T/T1) (the ideal gas at
+  // constant pressure, closed form), after the isentropic expansion T = T9 (p0/p9)^((g-1)/g)
+  // where the exhaust is above ambient pressure. Ends exactly at the free-stream state.
+  void closureIsTheIsobarAtAmbientPressure_data() {
+    QTest::addColumn<double>("p9");
+    QTest::newRow("fully expanded") << 50e3;
+    QTest::newRow("choked, p9 = 2 p0") << 100e3;
+  }
+  void closureIsTheIsobarAtAmbientPressure() {
+    QFETCH(double, p9);
+    const double cp = 1004.0, gamma = 1.4, t9 = 700.0, t0 = 250.0, p0 = 50e3;
+    const cw::thermo::ConstantCpGas gas(cp, gamma);
+    const double reference = gas.entropy(t0, p0);
+    const ProcessPath path = closurePath(gas, t9, p9, t0, p0, reference, gas);
+    QVERIFY(path.closure);
+    const bool expands = p9 != p0;
+    const std::size_t first = expands ? kClosureExpansionStates - 1 : 0;  // the isobar's first state
+    QCOMPARE(path.states.size(), first + kPathStates);
+    const double s9 = gas.entropy(t9, p9) - reference;
+    QVERIFY(std::abs(path.states.front().temperature - t9) < 1e-9);
+    QVERIFY(std::abs(path.states.front().entropy - s9) < 1e-9);
+    for (std::size_t k = 0; k <= first; ++k) QVERIFY(std::abs(path.states[k].entropy - s9) < 1e-6);
+    const PathState start = path.states[first];
+    const double expected = t9 * std::pow(p0 / p9, (gamma - 1.0) / gamma);
+    QVERIFY2(std::abs(start.temperature - expected) < 1e-6 * expected,
+             qPrintable(QString::number(start.temperature)));
+    double previousT = start.temperature + 1.0;
+    for (std::size_t k = first; k < path.states.size(); ++k) {
+      const PathState& s = path.states[k];
+      QCOMPARE(s.pressure, p0);
+      QVERIFY(s.temperature < previousT);  // cooling all the way
+      previousT = s.temperature;
+      const double closedForm = cp * std::log(s.temperature / start.temperature);
+      QVERIFY2(std::abs(s.entropy - start.entropy - closedForm) < 1e-9 * cp,
+               qPrintable(QString("%1: %2 vs %3").arg(k).arg(s.entropy - start.entropy).arg(closedForm)));
+      QVERIFY(std::abs(s.specificVolume - gas.gasConstant() * s.temperature / p0) < 1e-12);
+    }
+    QCOMPARE(path.states.back().temperature, t0);
+    QVERIFY(std::abs(path.states.back().entropy) < 1e-9);
+  }
+
+  // In an evaluated case the closure ends on the free stream's static state, at its pressure.
+  void evaluatedClosureRunsAtAmbientPressure() {
+    Case c = idealConstantCpCase(10.0, 1600.0, 0.8);
+    const Evaluation e = evaluateCase(c);
+    for (const CycleResult* r : {&e.actual, &e.ideal}) {
+      const ProcessPath& closure = r->paths.back();
+      QVERIFY(closure.closure);
+      const Station& s0 = r->station("0");
+      QVERIFY(std::abs(closure.states.back().pressure - s0.staticPressure) < 1e-9 * s0.staticPressure);
+      QVERIFY(std::abs(closure.states.back().temperature - s0.staticTemperature) < 1e-9);
+      const std::size_t n = closure.states.size();
+      for (std::size_t k = n - kPathStates; k < n; ++k)
+        QVERIFY(std::abs(closure.states[k].pressure - s0.staticPressure) < 1e-9 * s0.staticPressure);
+    }
+  }
+
   // Closed form: the ideal turbojet of parametric cycle analysis, Mattingly, Elements of
   // Propulsion: Gas Turbines and Rockets, AIAA 2006, sec. 5.6 (ideal turbojet), eqs. for
   // tau_r, tau_c, tau_lambda, tau_t = 1 - tau_r (tau_c - 1) / tau_lambda, V9/a0, F/m0,

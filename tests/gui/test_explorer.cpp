@@ -5,6 +5,7 @@
 #include "charts/chart_export.h"
 #include "charts/cycle_chart.h"
 #include "charts/isobar_labels.h"
+#include "charts/label_placer.h"
 #include "document/case_document.h"
 #include "document/selection_router.h"
 #include "document/units.h"

@@ -1,6 +1,6 @@
 #include "audit/audit_chart.h"
 #include "charts/colours.h"
-#include "charts/stale_banner.h"
+#include "charts/label_placer.h"
 
 #include "document/loss_names.h"
 
@@ -15,6 +15,7 @@
 
 #include <QCoreApplication>
 #include <QEvent>
+#include <QFontMetricsF>
 #include <QMouseEvent>
 #include <QPainter>
 
@@ -32,10 +33,6 @@ const QColor& kVermillion = kOkabeItoVermillion;
 const QColor& kGreen = kOkabeItoGreen;
 
 constexpr double kHalfWidth = 0.36;  // half a bar's width [bar pitch]
-
-QColor between(const QPalette& palette, double t) {
-  return mixColours(palette.color(QPalette::Base), palette.color(QPalette::Text), t);
-}
 
 /// The loss names under the bars, at the integer positions.
 class BarScaleDraw : public QwtScaleDraw {
@@ -66,7 +63,8 @@ class AuditChart::WaterfallItem : public QwtPlotItem {
   int rtti() const override { return QwtPlotItem::Rtti_PlotUserItem + 7; }
 
   void draw(QPainter* painter, const QwtScaleMap& xMap, const QwtScaleMap& yMap,
-            const QRectF&) const override {
+            const QRectF& canvasRect) const override {
+    labelRects_.clear();
     const auto& bars = chart_.bars_;
     const QPalette& p = chart_.palette();
     const double factor = chart_.figureFactor();
@@ -75,6 +73,9 @@ class AuditChart::WaterfallItem : public QwtPlotItem {
     QFont font = chart_.font();
     font.setPointSizeF(font.pointSizeF() * 0.8);
     painter->setFont(font);
+    std::vector<QString> texts;
+    std::vector<std::vector<QRectF>> candidates;
+    std::vector<QRectF> barRects;
     for (size_t i = 0; i < bars.size(); ++i) {
       const auto& bar = bars[i];
       const bool total = bar.loss.empty();
@@ -83,14 +84,14 @@ class AuditChart::WaterfallItem : public QwtPlotItem {
       const QRectF r(QPointF(xMap.transform(x - kHalfWidth), yMap.transform(std::max(y0, y1))),
                      QPointF(xMap.transform(x + kHalfWidth), yMap.transform(std::min(y0, y1))));
       QColor fill;
-      if (chart_.stale_)
-        fill = between(p, 0.4);
+      if (chart_.isStale())
+        fill = chart_.between(0.4);
       else if (total)
         fill = i == 0 ? kOrange : kBlue;
       else {
         const double step = bar.to - bar.from;
         const bool costs = tsfc ? step > 0.0 : step < 0.0;
-        fill = std::abs(step) <= 1e-9 * std::abs(bar.to) ? between(p, 0.5) : costs ? kVermillion : kGreen;
+        fill = std::abs(step) <= 1e-9 * std::abs(bar.to) ? chart_.between(0.5) : costs ? kVermillion : kGreen;
       }
       const bool selected = !total && lossSection(bar.loss) == chart_.highlighted_;
       painter->setPen(selected ? QPen(p.color(QPalette::Text), 2.5) : QPen(fill.darker(130), 1.0));
@@ -98,7 +99,7 @@ class AuditChart::WaterfallItem : public QwtPlotItem {
       painter->drawRect(r.height() < 1.0 ? r.adjusted(0, -0.5, 0, 0.5) : r);
       // Connector to the next bar at the running figure.
       if (i + 1 < bars.size()) {
-        painter->setPen(QPen(between(p, 0.5), 1.0, Qt::DotLine));
+        painter->setPen(QPen(chart_.between(0.5), 1.0, Qt::DotLine));
         const double yc = yMap.transform(y1);
         painter->drawLine(QPointF(xMap.transform(x + kHalfWidth), yc),
                           QPointF(xMap.transform(x + 1 - kHalfWidth), yc));
@@ -107,31 +108,59 @@ class AuditChart::WaterfallItem : public QwtPlotItem {
       const double shown = (total ? bar.to : bar.to - bar.from) / factor;
       QString text = formatNumber(shown, total ? 4 : 3);
       if (!total && shown > 0) text.prepend(QLatin1Char('+'));
-      painter->setPen(p.color(QPalette::Text));
-      const QRectF textRect(r.center().x() - 40, r.top() - 16, 80, 14);
-      painter->drawText(textRect, Qt::AlignHCenter | Qt::AlignBottom, text);
+      // Sized and drawn as QwtText (a fixed box and QPainter::drawText cut the value in half on
+      // a 200 dpi export, where the renderer's scaled painter drew it larger); above the bar,
+      // clear of the bars and of each other.
+      const QSizeF size = textSizeOn(painter, painter->font(), text);
+      const double lift = size.height() + 1.0;
+      std::vector<QRectF> options;
+      for (int row = 0; row < 3; ++row)  // above the bar, then staggered a line or two higher
+        options.emplace_back(
+            QPointF(r.center().x() - size.width() / 2.0, r.top() - 2.0 - size.height() - row * lift), size);
+      texts.push_back(text);
+      candidates.push_back(std::move(options));
+      barRects.push_back(r);
     }
+    // The values: clear of every bar and of each other, inside the canvas; one that fits nowhere
+    // goes where it prefers, moved inside the canvas.
+    LabelPlacer placer(canvasRect.adjusted(1, 1, -1, -1));
+    for (const QRectF& r : barRects) placer.addObstacle(r);
+    painter->setPen(p.color(QPalette::Text));
+    for (std::size_t i = 0; i < candidates.size(); ++i) {
+      const int k = placer.place(candidates[i]);
+      QRectF textRect = candidates[i][static_cast<std::size_t>(std::max(k, 0))];
+      if (k < 0) {
+        textRect.moveTop(std::max(textRect.top(), canvasRect.top() + 1.0));
+        textRect.moveLeft(std::max(textRect.left(), canvasRect.left() + 1.0));
+        textRect.moveRight(std::min(textRect.right(), canvasRect.right() - 1.0));
+        placer.addObstacle(textRect);
+      }
+      QwtText value(texts[i]);
+      value.setFont(font);
+      value.setColor(p.color(QPalette::Text));
+      value.setRenderFlags(Qt::AlignCenter);
+      value.draw(painter, textRect);
+      labelRects_.push_back(textRect);
+    }
+    lastCanvas_ = canvasRect;
   }
+
+  /// From the last draw [canvas px], for tests: the value labels and the canvas.
+  mutable std::vector<QRectF> labelRects_;
+  mutable QRectF lastCanvas_;
 
  private:
   const AuditChart& chart_;
 };
 
-AuditChart::AuditChart(DisplayUnits& units, QWidget* parent) : QwtPlot(parent), units_(units) {
+AuditChart::AuditChart(DisplayUnits& units, QWidget* parent) : ChartBase(parent), units_(units) {
   setObjectName("auditChart");
-  setAutoReplot(false);
-  if (auto* c = qobject_cast<QwtPlotCanvas*>(canvas())) c->setFrameStyle(QFrame::Box | QFrame::Plain);
   canvas()->installEventFilter(this);
   canvas()->setCursor(Qt::PointingHandCursor);
 
-  grid_ = new QwtPlotGrid;
-  grid_->enableX(false);
-  grid_->attach(this);
+  gridItem()->enableX(false);
   item_ = new WaterfallItem(*this);
   item_->attach(this);
-  staleLabel_ = new QwtPlotTextLabel;
-  staleLabel_->setZ(100);
-  staleLabel_->attach(this);
 
   auto* draw = new BarScaleDraw(bars_);
   draw->setLabelRotation(-40.0);
@@ -139,13 +168,13 @@ AuditChart::AuditChart(DisplayUnits& units, QWidget* parent) : QwtPlot(parent), 
   draw->enableComponent(QwtAbstractScaleDraw::Ticks, false);
   setAxisScaleDraw(QwtAxis::XBottom, draw);
 
-  applyPalette();
   retranslateUi();
   connect(&units_, &DisplayUnits::changed, this, [this] {
     retranslateUi();
     rebuild();
   });
   rebuild();
+  finishConstruction();
 }
 
 AuditChart::~AuditChart() = default;
@@ -154,20 +183,9 @@ double AuditChart::figureFactor() const {
   return units_.factor(figure_ == AuditFigure::Tsfc ? Quantity::Tsfc : Quantity::SpecificThrust);
 }
 
-void AuditChart::applyPalette() {
-  const QPalette& p = palette();
-  setCanvasBackground(p.color(QPalette::Base));
-  grid_->setMajorPen(between(p, 0.3), 0.0, Qt::DotLine);
-}
-
-void AuditChart::changeEvent(QEvent* event) {
-  QwtPlot::changeEvent(event);
-  if (event->type() != QEvent::PaletteChange || applyingPalette_ || !grid_) return;
-  applyingPalette_ = true;
-  applyPalette();
+void AuditChart::paletteChanged() {
   retranslateUi();
   replot();
-  applyingPalette_ = false;
 }
 
 void AuditChart::retranslateUi() {
@@ -180,23 +198,14 @@ void AuditChart::retranslateUi() {
   setAxisTitle(QwtAxis::YLeft, figure_ == AuditFigure::Tsfc
                                    ? units_.withUnit(tr("TSFC"), Quantity::Tsfc)
                                    : units_.withUnit(tr("Specific thrust F_s"), Quantity::SpecificThrust));
-  staleLabel_->setText(staleBannerText(palette(), audit_ != nullptr));
-  staleLabel_->setVisible(stale_);
+  showStaleBanner();
 }
 
 void AuditChart::setAudit(std::shared_ptr<const analysis::LossAudit> audit, bool stale) {
   audit_ = std::move(audit);
-  stale_ = stale;
-  staleLabel_->setText(staleBannerText(palette(), audit_ != nullptr));
-  staleLabel_->setVisible(stale_);
+  assignStale(stale);
+  showStaleBanner();
   rebuild();
-}
-
-void AuditChart::setStale(bool stale) {
-  if (stale == stale_) return;
-  stale_ = stale;
-  staleLabel_->setVisible(stale_);
-  replot();
 }
 
 void AuditChart::setFigure(AuditFigure figure) {
@@ -240,7 +249,13 @@ void AuditChart::rebuild() {
     }
     const double span = std::max(high - low, 1e-9 * std::abs(high));
     low = std::max(0.0, low - 0.6 * span);
-    high += 0.18 * span;
+    // Room above the highest bar for three rows of values (they stagger where they would run
+    // together), however small the canvas: a share k of the axis, (high' - high) = k (high' - low).
+    QFont valueFont = font();
+    valueFont.setPointSizeF(valueFont.pointSizeF() * 0.8);
+    const double rows = 3.3 * QFontMetricsF(valueFont).height();
+    const double k = std::min(0.6, std::max(0.15, rows / std::max(60.0, double(canvas()->height()))));
+    high = std::max(high + 0.18 * span, (high - k * low) / (1.0 - k));
   }
   setAxisScale(QwtAxis::YLeft, low / factor, high / factor);
   QList<double> ticks;
@@ -248,6 +263,14 @@ void AuditChart::rebuild() {
   const double n = static_cast<double>(std::max<size_t>(bars_.size(), 1));
   setAxisScaleDiv(QwtAxis::XBottom, QwtScaleDiv(-0.6, n - 0.4, QList<double>(), QList<double>(), ticks));
   replot();
+}
+
+const std::vector<QRectF>& AuditChart::valueLabelRects() const {
+  return item_->labelRects_;
+}
+
+QRectF AuditChart::lastCanvasRect() const {
+  return item_->lastCanvas_;
 }
 
 int AuditChart::barAt(const QPoint& position) const {
@@ -265,6 +288,11 @@ QPoint AuditChart::barCentre(int index) const {
   const QwtScaleMap xMap = canvasMap(QwtAxis::XBottom), yMap = canvasMap(QwtAxis::YLeft);
   const double from = bar.loss.empty() ? yMap.s1() : bar.from / factor;
   return QPoint(qRound(xMap.transform(index)), qRound(yMap.transform(0.5 * (from + bar.to / factor))));
+}
+
+void AuditChart::resizeEvent(QResizeEvent* event) {
+  ChartBase::resizeEvent(event);
+  rebuild();  // the room for the values depends on the canvas's height
 }
 
 bool AuditChart::eventFilter(QObject* object, QEvent* event) {

@@ -7,23 +7,21 @@
 // Draws only the core's audit (core/analysis/loss_audit.h); it computes nothing.
 
 #include "analysis/loss_audit.h"
+#include "charts/chart_base.h"
 #include "document/case_fields.h"
 #include "document/units.h"
 
-#include <qwt_plot.h>
+#include <QRectF>
 
 #include <memory>
 #include <string>
 #include <vector>
 
-class QwtPlotGrid;
-class QwtPlotTextLabel;
-
 namespace cw::gui {
 
 enum class AuditFigure { SpecificThrust, Tsfc };
 
-class AuditChart : public QwtPlot {
+class AuditChart : public ChartBase {
   Q_OBJECT
 
  public:
@@ -40,8 +38,6 @@ class AuditChart : public QwtPlot {
 
   /// Shows an audit (null clears the chart). One replot.
   void setAudit(std::shared_ptr<const analysis::LossAudit> audit, bool stale);
-  void setStale(bool stale);
-  bool isStale() const { return stale_; }
   void setFigure(AuditFigure figure);
   AuditFigure figure() const { return figure_; }
   /// Outlines the bars of the losses set in a section.
@@ -52,6 +48,9 @@ class AuditChart : public QwtPlot {
   int barAt(const QPoint& canvasPosition) const;
   /// The centre of a bar on the canvas [px] (tests).
   QPoint barCentre(int index) const;
+  /// From the last draw (on screen or an export, in its pixels): each bar's value label and the canvas.
+  const std::vector<QRectF>& valueLabelRects() const;
+  QRectF lastCanvasRect() const;
 
   void retranslateUi();
 
@@ -59,25 +58,22 @@ class AuditChart : public QwtPlot {
   void lossClicked(const QString& loss);
 
  protected:
-  void changeEvent(QEvent* event) override;
+  void resizeEvent(QResizeEvent* event) override;
+  void paletteChanged() override;
+  bool hasResult() const override { return audit_ != nullptr; }
   bool eventFilter(QObject* object, QEvent* event) override;
 
  private:
   class WaterfallItem;
   void rebuild();
-  void applyPalette();
   double figureFactor() const;
 
   DisplayUnits& units_;
   std::shared_ptr<const analysis::LossAudit> audit_;
-  bool stale_ = false;
   AuditFigure figure_ = AuditFigure::SpecificThrust;
   Section highlighted_ = Section::Case;
   std::vector<Bar> bars_;
   WaterfallItem* item_ = nullptr;
-  QwtPlotGrid* grid_ = nullptr;
-  QwtPlotTextLabel* staleLabel_ = nullptr;
-  bool applyingPalette_ = false;
 };
 
 }  // namespace cw::gui

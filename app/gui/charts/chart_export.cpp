@@ -1,6 +1,6 @@
 #include "charts/chart_export.h"
 
-#include "document/caution.h"
+#include "charts/chart_base.h"
 
 #include <qwt_plot.h>
 #include <qwt_plot_renderer.h>
@@ -11,27 +11,13 @@
 
 namespace cw::gui {
 
-CautionFooter::CautionFooter(QwtPlot* plot) : plot_(plot) {
-  QwtText footer(cautionText());
-  QFont font = plot_->font();
-  font.setPointSizeF(font.pointSizeF() * 0.75);
-  font.setItalic(true);
-  footer.setFont(font);
-  footer.setRenderFlags(Qt::AlignCenter | Qt::TextWordWrap);
-  plot_->setFooter(footer);
-}
-
-CautionFooter::~CautionFooter() {
-  plot_->setFooter(QwtText());
-}
-
 QImage renderChartImage(QwtPlot* plot, QSize pixels, int dotsPerInch) {
   QImage image(pixels, QImage::Format_ARGB32);
   const int dotsPerMetre = qRound(dotsPerInch / 0.0254);
   image.setDotsPerMeterX(dotsPerMetre);
   image.setDotsPerMeterY(dotsPerMetre);
-  image.fill(plot->palette().color(QPalette::Window));
-  CautionFooter footer(plot);
+  image.fill(Qt::white);  // exported figures on white, never the window's grey
+  ExportScope scope(plot);
   QPainter painter(&image);
   QwtPlotRenderer renderer;
   renderer.setDiscardFlag(QwtPlotRenderer::DiscardBackground, false);
@@ -45,7 +31,7 @@ bool exportChartPng(QwtPlot* plot, const QString& fileName, QSize pixels, int do
 }
 
 bool exportChartDocument(QwtPlot* plot, const QString& fileName, const QString& format, QSizeF millimetres) {
-  CautionFooter footer(plot);
+  ExportScope scope(plot);
   QwtPlotRenderer renderer;
   renderer.setDiscardFlag(QwtPlotRenderer::DiscardBackground, false);
   renderer.renderDocument(plot, fileName, format, millimetres, 85);

@@ -1,6 +1,7 @@
 #pragma once
 // Export of a chart: PNG at a chosen size and resolution, SVG and PDF through QwtPlotRenderer,
-// and an image for the clipboard. Every export carries the caution as the chart's footer.
+// and an image for the clipboard. Every export goes through an ExportScope (chart_base.h): on
+// white in a light palette, the caution as the chart's footer.
 // No dialogs here, so tests call these directly.
 
 #include <QImage>
@@ -21,17 +22,5 @@ bool exportChartPng(QwtPlot* plot, const QString& fileName, QSize pixels, int do
 /// Writes an SVG or PDF (by format "svg" or "pdf") of the given size [mm] at 85 dpi for
 /// raster parts. False when the file cannot be written.
 bool exportChartDocument(QwtPlot* plot, const QString& fileName, const QString& format, QSizeF millimetres);
-
-/// Sets the caution as the plot's footer for its lifetime (exports only).
-class CautionFooter {
- public:
-  explicit CautionFooter(QwtPlot* plot);
-  ~CautionFooter();
-  CautionFooter(const CautionFooter&) = delete;
-  CautionFooter& operator=(const CautionFooter&) = delete;
-
- private:
-  QwtPlot* plot_;
-};
 
 }  // namespace cw::gui

@@ -1,7 +1,6 @@
 #include "charts/cycle_chart.h"
 #include "charts/colours.h"
 #include "charts/readout_picker.h"
-#include "charts/stale_banner.h"
 
 #include "charts/isobar_labels.h"
 #include "charts/log_scale_engine.h"
@@ -40,21 +39,12 @@ const QColor& kBlue = kOkabeItoBlue;
 const QColor& kOrange = kOkabeItoOrange;
 const QColor& kVermillion = kOkabeItoVermillion;
 
-/// A colour between the canvas (Base) and the text on it: t = 0 is the canvas, 1 the text.
 QColor between(const QPalette& palette, double t) {
   return mixColours(palette.color(QPalette::Base), palette.color(QPalette::Text), t);
 }
 
-bool darkCanvas(const QPalette& palette) {
-  return palette.color(QPalette::Base).lightness() <= 128;
-}
-
 QColor isobarColour(const QPalette& palette) {
   return between(palette, 0.22);
-}
-
-QColor gridColour(const QPalette& palette) {
-  return between(palette, 0.3);
 }
 
 QColor isobarLabelColour(const QPalette& palette) {
@@ -80,39 +70,21 @@ QString componentName(const std::string& component) {
 }  // namespace
 
 CycleChart::CycleChart(ChartKind kind, DisplayUnits& units, QWidget* parent)
-    : QwtPlot(parent), kind_(kind), units_(units) {
-  setObjectName(kind == ChartKind::TemperatureEntropy ? "temperatureEntropyChart" : "pressureVolumeChart");
-  setAutoReplot(false);
+    : ChartBase(parent), kind_(kind), units_(units) {
+  setObjectName(kind == ChartKind::TemperatureEntropy ? "temperatureEntropyChart"
+                : kind == ChartKind::PressureVolume   ? "pressureVolumeChart"
+                                                      : "enthalpyEntropyChart");
   setMinimumSize(240, 180);
-  if (auto* canvas = qobject_cast<QwtPlotCanvas*>(this->canvas()))
-    canvas->setFrameStyle(QFrame::Box | QFrame::Plain);
 
-  grid_ = new QwtPlotGrid;
-  grid_->attach(this);
-
-  // The legend: inside the canvas of the temperature-entropy chart, in the corner the cycle
-  // leaves free; below the pressure-volume chart, whose corners the cycle fills.
-  auto* legend = new QwtPlotLegendItem;
-  legend->setMaxColumns(1);
-  legend->setAlignmentInCanvas(kind == ChartKind::TemperatureEntropy ? Qt::AlignTop | Qt::AlignLeft
-                                                                     : Qt::AlignBottom | Qt::AlignLeft);
-  legend->setBorderRadius(3);
-  legend->setMargin(4);
-  legend->setSpacing(2);
-  legend->setItemMargin(1);
-  QFont legendFont = font();
-  legendFont.setPointSizeF(legendFont.pointSizeF() * 0.85);
-  legend->setFont(legendFont);
-  legend->setZ(90);
-  if (kind == ChartKind::TemperatureEntropy) {
-    legend->attach(this);
-    legendItem_ = legend;
+  // The legend: inside the canvas of the temperature-entropy and enthalpy-entropy charts, in
+  // the corner the cycle leaves free; below the pressure-volume chart, whose corners it fills.
+  if (kind != ChartKind::PressureVolume) {
+    legendItem_ = makeLegendItem(Qt::AlignTop | Qt::AlignLeft, 1, 0.85);
+    legendItem_->setMargin(4);
+    legendItem_->setSpacing(2);
+    legendItem_->attach(this);
   } else {
-    delete legend;
-    auto* below = new QwtLegend;
-    below->setMaxColumns(3);
-    below->setFont(legendFont);
-    insertLegend(below, QwtPlot::BottomLegend);
+    insertOuterLegend(QwtPlot::BottomLegend, 3, 0.85);
   }
 
   auto makeCurve = [this](const QPen& pen, double z) {
@@ -132,6 +104,10 @@ CycleChart::CycleChart(ChartKind kind, DisplayUnits& units, QWidget* parent)
   idealHighlight_ = makeCurve(highlightPen, 15);
   idealHighlight_->setItemAttribute(QwtPlotItem::Legend, false);
   isobarLegend_ = makeCurve(QPen(Qt::gray, 1.0), 5);
+  // The markers mix states (stations 0, 8, 9 static, 2 to 7 total); their entry says so.
+  stationLegend_ = makeCurve(QPen(Qt::NoPen), 5);
+  stationLegend_->setLegendAttribute(QwtPlotCurve::LegendShowLine, false);
+  stationLegend_->setLegendAttribute(QwtPlotCurve::LegendShowSymbol, true);
   actualClosure_ = makeCurve(QPen(kBlue, 1.0, Qt::DashDotLine), 18);
   idealClosure_ = makeCurve(QPen(kOrange, 1.0, Qt::DotLine), 18);
   QPen idealPen(kOrange, 2.0, Qt::DashLine);
@@ -141,11 +117,8 @@ CycleChart::CycleChart(ChartKind kind, DisplayUnits& units, QWidget* parent)
 
   isobarLabels_ = new IsobarLabels;
   isobarLabels_->setLegend(legendItem_);
+  isobarLabels_->setCurves({actual_, ideal_, actualClosure_, idealClosure_});
   isobarLabels_->attach(this);
-
-  staleLabel_ = new QwtPlotTextLabel;
-  staleLabel_->setZ(100);
-  staleLabel_->attach(this);
 
   zoomer_ = new QwtPlotZoomer(QwtAxis::XBottom, QwtAxis::YLeft, canvas());
   zoomer_->setTrackerMode(QwtPicker::AlwaysOff);
@@ -159,46 +132,56 @@ CycleChart::CycleChart(ChartKind kind, DisplayUnits& units, QWidget* parent)
     retranslateUi();
     rebuild();
   });
+  finishConstruction();
 }
 
 CycleChart::~CycleChart() = default;
 
 void CycleChart::applyPalette() {
   const QPalette& p = palette();
-  setCanvasBackground(p.color(QPalette::Base));
-  grid_->setMajorPen(gridColour(p), 0.0, Qt::DotLine);
-  if (legendItem_) {
-    QColor background = p.color(QPalette::Base);
-    background.setAlpha(215);
-    legendItem_->setBackgroundBrush(background);
-    legendItem_->setBorderPen(QPen(between(p, 0.4), 1.0));
-    legendItem_->setTextPen(QPen(p.color(QPalette::Text)));
-  }
   isobarLegend_->setPen(QPen(isobarColour(p), 1.0));
+  const QColor ink = inkColour(p);
+  stationLegend_->setSymbol(new QwtSymbol(QwtSymbol::Ellipse, QBrush(ink), QPen(ink, 1.0), QSize(7, 7)));
   zoomer_->setRubberBandPen(QPen(p.color(QPalette::Text), 1.0, Qt::DashLine));
 }
 
-void CycleChart::changeEvent(QEvent* event) {
-  QwtPlot::changeEvent(event);
-  if (event->type() != QEvent::PaletteChange || applyingPalette_ || !zoomer_) return;
-  applyingPalette_ = true;
+void CycleChart::paletteChanged() {
   applyPalette();
   retranslateUi();
   rebuild();
-  applyingPalette_ = false;
+}
+
+void CycleChart::staleChanged() {
+  updateStalePens();
 }
 
 StateValue CycleChart::xValue() const {
-  return kind_ == ChartKind::TemperatureEntropy ? StateValue::Entropy : StateValue::SpecificVolume;
+  return kind_ == ChartKind::PressureVolume ? StateValue::SpecificVolume : StateValue::Entropy;
 }
 StateValue CycleChart::yValue() const {
-  return kind_ == ChartKind::TemperatureEntropy ? StateValue::Temperature : StateValue::Pressure;
+  switch (kind_) {
+    case ChartKind::TemperatureEntropy:
+      return StateValue::Temperature;
+    case ChartKind::PressureVolume:
+      return StateValue::Pressure;
+    case ChartKind::EnthalpyEntropy:
+      return StateValue::Enthalpy;
+  }
+  return StateValue::Temperature;
 }
 Quantity CycleChart::xQuantity() const {
-  return kind_ == ChartKind::TemperatureEntropy ? Quantity::Entropy : Quantity::SpecificVolume;
+  return kind_ == ChartKind::PressureVolume ? Quantity::SpecificVolume : Quantity::Entropy;
 }
 Quantity CycleChart::yQuantity() const {
-  return kind_ == ChartKind::TemperatureEntropy ? Quantity::Temperature : Quantity::Pressure;
+  switch (kind_) {
+    case ChartKind::TemperatureEntropy:
+      return Quantity::Temperature;
+    case ChartKind::PressureVolume:
+      return Quantity::Pressure;
+    case ChartKind::EnthalpyEntropy:
+      return Quantity::SpecificEnergy;
+  }
+  return Quantity::Temperature;
 }
 double CycleChart::xScale() const {
   return units_.factor(xQuantity());
@@ -214,6 +197,12 @@ void CycleChart::retranslateUi() {
         QwtAxis::XBottom,
         units_.withUnit(tr("Specific entropy s (0 at the free-stream static state)"), Quantity::Entropy));
     setAxisTitle(QwtAxis::YLeft, units_.withUnit(tr("Temperature T"), Quantity::Temperature));
+  } else if (kind_ == ChartKind::EnthalpyEntropy) {
+    setTitle(tr("Enthalpy–entropy"));
+    setAxisTitle(
+        QwtAxis::XBottom,
+        units_.withUnit(tr("Specific entropy s (0 at the free-stream static state)"), Quantity::Entropy));
+    setAxisTitle(QwtAxis::YLeft, units_.withUnit(tr("Specific enthalpy h"), Quantity::SpecificEnergy));
   } else {
     setTitle(tr("Pressure–volume"));
     setAxisTitle(QwtAxis::XBottom, units_.withUnit(tr("Specific volume v"), Quantity::SpecificVolume));
@@ -224,10 +213,10 @@ void CycleChart::retranslateUi() {
   actualClosure_->setTitle(tr("Closure to ambient, with losses"));
   idealClosure_->setTitle(tr("Closure to ambient, ideal"));
   isobarLegend_->setTitle(tr("Isobars through station pressures"));
+  stationLegend_->setTitle(tr("Stations: 0, 8, 9 static states;\n2 to 7 total states"));
   highlight_->setTitle(highlighted_.empty() ? tr("Selected component")
                                             : tr("Selected: %1").arg(componentName(highlighted_)));
-  staleLabel_->setText(staleBannerText(palette(), evaluation_ != nullptr));
-  staleLabel_->setVisible(stale_);
+  showStaleBanner();
 }
 
 void CycleChart::clearDynamicItems() {
@@ -247,7 +236,8 @@ void CycleChart::clearDynamicItems() {
 
 void CycleChart::setEvaluation(std::shared_ptr<const engine::Evaluation> evaluation, bool stale) {
   evaluation_ = std::move(evaluation);
-  stale_ = stale;
+  assignStale(stale);
+  showStaleBanner();
   rebuild();
 }
 
@@ -269,7 +259,7 @@ void CycleChart::rebuild() {
   actualClosure_->setData(new PathSeries(evaluation_, false, cyclePaths(actual, true), xv, yv, xs, ys));
   idealClosure_->setData(new PathSeries(evaluation_, true, cyclePaths(ideal, true), xv, yv, xs, ys));
 
-  // Isobars: along T on the T-s chart, horizontal lines on the p-v chart.
+  // Isobars: curves on the T-s and h-s charts, horizontal lines on the p-v chart.
   double tLow = std::numeric_limits<double>::max(), tHigh = 0.0;
   for (const auto* cycle : {&actual, &ideal})
     for (const auto& path : cycle->paths)
@@ -314,7 +304,7 @@ void CycleChart::rebuild() {
     curve->setItemAttribute(QwtPlotItem::Legend, false);
     curve->setItemAttribute(QwtPlotItem::AutoScale, false);
     QVector<QPointF> points;
-    for (const auto& st : isobar.states) points.append({st.entropy / xs, st.temperature / ys});
+    for (const auto& st : isobar.states) points.append({stateValue(st, xv) / xs, stateValue(st, yv) / ys});
     curve->setSamples(points);
     curve->attach(this);
     isobars_.push_back(curve);
@@ -322,8 +312,8 @@ void CycleChart::rebuild() {
     // The label prefers where the isobar reaches the cycle's highest temperature.
     label.along.assign(points.begin(), points.end());
     label.preferred = label.along.size() - 1;
-    for (std::size_t k = 0; k < label.along.size(); ++k)
-      if (label.along[k].y() * ys >= tHigh) {
+    for (std::size_t k = 0; k < isobar.states.size(); ++k)
+      if (isobar.states[k].temperature >= tHigh) {
         label.preferred = k;
         break;
       }
@@ -339,13 +329,13 @@ void CycleChart::rebuild() {
     for (const auto& station : cycle->stations) {
       engine::PathState state;
       if (!stationState(*cycle, station, state)) continue;
-      auto* marker = new QwtPlotMarker;
+      auto* marker = new StationMarker(isobarLabels_);
       marker->setValue(stateValue(state, xv) / xs, stateValue(state, yv) / ys);
       if (isIdeal) {
-        const QColor edge = darkCanvas(palette()) ? kOrange : kOrange.darker(130);
+        const QColor edge = darkCanvas() ? kOrange : kOrange.darker(130);
         marker->setSymbol(new QwtSymbol(QwtSymbol::Diamond, Qt::NoBrush, QPen(edge, 1.0), QSize(6, 6)));
         marker->setZ(21);
-        stations.push_back({marker->value(), QSizeF(6, 6), QSizeF(), Qt::AlignCenter, 0.0});
+        stations.push_back({marker->value(), QSizeF(6, 6), QSizeF(), Qt::AlignCenter, 0.0, marker});
       } else {
         marker->setSymbol(new QwtSymbol(QwtSymbol::Ellipse, QBrush(ink), QPen(ink, 1.0), QSize(7, 7)));
         QwtText label(QString::fromStdString(station.id));
@@ -365,7 +355,7 @@ void CycleChart::rebuild() {
         marker->setSpacing(4);
         marker->setZ(22);
         stations.push_back({marker->value(), QSizeF(7, 7), label.textSize(bold), marker->labelAlignment(),
-                            double(marker->spacing())});
+                            double(marker->spacing()), marker});
       }
       marker->setItemAttribute(QwtPlotItem::AutoScale, false);
       marker->attach(this);
@@ -409,24 +399,16 @@ void CycleChart::rescale() {
   zoomer_->setZoomBase(false);
 }
 
-void CycleChart::setStale(bool stale) {
-  if (stale == stale_) return;
-  stale_ = stale;
-  updateStalePens();
-  replot();
-}
-
 void CycleChart::updateStalePens() {
-  const int alpha = stale_ ? 80 : 255;
+  const bool stale = isStale();
+  const int alpha = stale ? 80 : 255;
   for (auto* c : {actual_, ideal_, actualClosure_, idealClosure_, highlight_, idealHighlight_}) {
     QPen pen = c->pen();
     QColor colour = pen.color();
-    colour.setAlpha(c == highlight_ || c == idealHighlight_ ? (stale_ ? 40 : 110) : alpha);
+    colour.setAlpha(c == highlight_ || c == idealHighlight_ ? (stale ? 40 : 110) : alpha);
     pen.setColor(colour);
     c->setPen(pen);
   }
-  staleLabel_->setText(staleBannerText(palette(), evaluation_ != nullptr));
-  staleLabel_->setVisible(stale_);
 }
 
 void CycleChart::setHighlightedComponent(const std::string& component) {
@@ -498,21 +480,28 @@ QString CycleChart::readoutAt(const QPoint& position) const {
   }
   if (!best) {
     const double x = xMap.invTransform(position.x()), y = yMap.invTransform(position.y());
+    const bool pv = kind_ == ChartKind::PressureVolume;
     return QStringLiteral("%1 = %2\n%3 = %4")
-        .arg(kind_ == ChartKind::TemperatureEntropy ? QStringLiteral("s") : QStringLiteral("v"),
-             units_.format(x * xScale(), xQuantity(), 4),
-             kind_ == ChartKind::TemperatureEntropy ? QStringLiteral("T") : QStringLiteral("p"),
+        .arg(pv ? QStringLiteral("v") : QStringLiteral("s"), units_.format(x * xScale(), xQuantity(), 4),
+             pv                                    ? QStringLiteral("p")
+             : kind_ == ChartKind::EnthalpyEntropy ? QStringLiteral("h")
+                                                   : QStringLiteral("T"),
              units_.format(y * yScale(), yQuantity(), 4));
   }
   const engine::PathState& s = best->state(bestIndex);
   const auto& cycle = bestIdeal ? evaluation_->ideal : evaluation_->actual;
   const auto& path = cycle.paths[static_cast<size_t>(best->pathOf(bestIndex))];
   const QString which = bestIdeal ? tr("Ideal") : tr("With losses");
-  return tr("%1, %2 (%3 → %4)\nT = %5   s = %6\np = %7   v = %8")
-      .arg(which, componentName(path.component), QString::fromStdString(path.fromStation),
-           QString::fromStdString(path.toStation), units_.format(s.temperature, Quantity::Temperature, 5),
-           units_.format(s.entropy, Quantity::Entropy, 4), units_.format(s.pressure, Quantity::Pressure, 5),
-           units_.format(s.specificVolume, Quantity::SpecificVolume, 4));
+  QString text =
+      tr("%1, %2 (%3 → %4)\nT = %5   s = %6\np = %7   v = %8")
+          .arg(which, componentName(path.component), QString::fromStdString(path.fromStation),
+               QString::fromStdString(path.toStation), units_.format(s.temperature, Quantity::Temperature, 5),
+               units_.format(s.entropy, Quantity::Entropy, 4),
+               units_.format(s.pressure, Quantity::Pressure, 5),
+               units_.format(s.specificVolume, Quantity::SpecificVolume, 4));
+  if (kind_ == ChartKind::EnthalpyEntropy)
+    text += QStringLiteral("\nh = %1").arg(units_.format(s.enthalpy, Quantity::SpecificEnergy, 5));
+  return text;
 }
 
 }  // namespace cw::gui

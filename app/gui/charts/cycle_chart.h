@@ -13,21 +13,18 @@
 // Canvas, grid, legend, markers and labels take their colours from the widget's palette
 // (light or dark, and again when it changes); only the Okabe-Ito line colours are fixed.
 
+#include "charts/chart_base.h"
 #include "charts/path_series.h"
 #include "document/units.h"
-
-#include <qwt_plot.h>
 
 #include <memory>
 #include <string>
 #include <vector>
 
 class QwtPlotCurve;
-class QwtPlotGrid;
 class QwtPlotLegendItem;
 class QwtPlotMarker;
 class QwtPlotPanner;
-class QwtPlotTextLabel;
 class QwtPlotZoomer;
 class QwtPlotPicker;
 
@@ -36,9 +33,11 @@ namespace cw::gui {
 class IsobarLabels;
 class ReadoutPicker;
 
-enum class ChartKind { TemperatureEntropy, PressureVolume };
+/// The plane: T-s, p-v, or h-s (the turbomachinery engineer's view; h as the core gives it,
+/// absolute with the enthalpies of formation).
+enum class ChartKind { TemperatureEntropy, PressureVolume, EnthalpyEntropy };
 
-class CycleChart : public QwtPlot {
+class CycleChart : public ChartBase {
   Q_OBJECT
 
  public:
@@ -49,8 +48,6 @@ class CycleChart : public QwtPlot {
 
   /// Shows an evaluation (null clears the chart); stale greys it and says so. One replot.
   void setEvaluation(std::shared_ptr<const engine::Evaluation> evaluation, bool stale);
-  void setStale(bool stale);
-  bool isStale() const { return stale_; }
   /// Highlights a component's path ("compressor"; empty for none). One replot.
   void setHighlightedComponent(const std::string& component);
   const std::string& highlightedComponent() const { return highlighted_; }
@@ -74,6 +71,8 @@ class CycleChart : public QwtPlot {
   const QwtPlotCurve* idealCurve() const { return ideal_; }
   const QwtPlotCurve* actualClosureCurve() const { return actualClosure_; }
   const QwtPlotCurve* highlightCurve() const { return highlight_; }
+  /// The legend entry of the station markers, which says which are static and which total states.
+  const QwtPlotCurve* stationLegendEntry() const { return stationLegend_; }
   int isobarCount() const { return static_cast<int>(isobars_.size()); }
   int markerCount() const { return static_cast<int>(markers_.size()); }
   const std::vector<QwtPlotMarker*>& markers() const { return markers_; }
@@ -81,7 +80,9 @@ class CycleChart : public QwtPlot {
   QwtPlotZoomer* zoomer() const { return zoomer_; }
 
  protected:
-  void changeEvent(QEvent* event) override;
+  void paletteChanged() override;
+  void staleChanged() override;
+  bool hasResult() const override { return evaluation_ != nullptr; }
 
  private:
   /// Colours of the canvas, grid, legend and rubber band from the palette.
@@ -101,7 +102,6 @@ class CycleChart : public QwtPlot {
   ChartKind kind_;
   DisplayUnits& units_;
   std::shared_ptr<const engine::Evaluation> evaluation_;
-  bool stale_ = false;
   bool logAxes_ = false;
   std::string highlighted_;
 
@@ -111,14 +111,12 @@ class CycleChart : public QwtPlot {
   QwtPlotCurve* idealClosure_ = nullptr;
   QwtPlotCurve* highlight_ = nullptr;
   QwtPlotCurve* idealHighlight_ = nullptr;
-  QwtPlotCurve* isobarLegend_ = nullptr;  ///< an empty curve carrying the isobars' legend entry
+  QwtPlotCurve* isobarLegend_ = nullptr;   ///< an empty curve carrying the isobars' legend entry
+  QwtPlotCurve* stationLegend_ = nullptr;  ///< an empty curve: the stations' marker and states
   std::vector<QwtPlotCurve*> isobars_;
   std::vector<QwtPlotMarker*> markers_;
   IsobarLabels* isobarLabels_ = nullptr;
-  QwtPlotGrid* grid_ = nullptr;
   QwtPlotLegendItem* legendItem_ = nullptr;  ///< the T-s chart's legend inside the canvas
-  bool applyingPalette_ = false;
-  QwtPlotTextLabel* staleLabel_ = nullptr;
   QwtPlotZoomer* zoomer_ = nullptr;
   QwtPlotPanner* panner_ = nullptr;
   ReadoutPicker* picker_ = nullptr;

@@ -1,12 +1,19 @@
 #pragma once
-// The labels of a chart's isobars ("p3 = 1434 kPa"), placed on screen at every draw so that
-// none overlaps another label, a station's marker or label, or the legend. A label that does
-// not fit where it prefers slides along its own isobar; one that fits nowhere on the canvas is
-// left out (the isobar itself is always drawn, by its own item). Zooming in makes room again.
+// The labels of a cycle chart: the station numbers and the isobars' labels ("p3 = 1434 kPa"),
+// placed on screen (and on every export's surface) at each draw through the LabelPlacer, so that
+// none overlaps another label, a station's marker or the legend, and none crosses the cycle's
+// curves. Station numbers come first and are always shown (beside their marker, crossing a curve
+// only where no other side is free); an isobar's label slides along its own isobar, to either
+// side of it, and one that fits nowhere on the canvas is left out (the isobar itself is always
+// drawn, by its own item). Zooming in makes room again.
+//
+// A station's marker (StationMarker) draws its number where this item placed it; this item has
+// the lower z, so it is drawn, and places, first.
 //
 // Placement only: the isobars and their pressures come from the core.
 
 #include <qwt_plot_item.h>
+#include <qwt_plot_marker.h>
 #include <qwt_text.h>
 
 #include <QPointF>
@@ -15,6 +22,7 @@
 
 #include <vector>
 
+class QwtPlotCurve;
 class QwtPlotLegendItem;
 
 namespace cw::gui {
@@ -23,20 +31,21 @@ class IsobarLabels : public QwtPlotItem {
  public:
   struct Label {
     QwtText text;
-    /// Plot coordinates along the isobar; the label sits right of one of them.
+    /// Plot coordinates along the isobar; the label sits beside one of them.
     std::vector<QPointF> along;
     /// The point of `along` the label prefers (T-s: where the isobar reaches the cycle's top).
     std::size_t preferred = 0;
-    /// A horizontal isobar (p-v): the label sits above the line, anywhere across the canvas.
+    /// A horizontal isobar (p-v): the label sits above or below the line, anywhere across the canvas.
     bool horizontal = false;
   };
-  /// A station marker's symbol and label, to be kept clear.
+  /// A station marker's symbol and label, to be placed and kept clear.
   struct Station {
-    QPointF at;           ///< plot coordinates
-    QSizeF symbol;        ///< symbol size [px]
-    QSizeF label;         ///< label size [px]
-    Qt::Alignment align;  ///< the label's side, as given to the marker
-    double spacing = 0.0;
+    QPointF at;                             ///< plot coordinates
+    QSizeF symbol;                          ///< symbol size [px]
+    QSizeF label;                           ///< label size [px] (empty: a marker without a number)
+    Qt::Alignment align;                    ///< the side the label prefers
+    double spacing = 0.0;                   ///< from the symbol's edge [px]
+    const QwtPlotMarker* marker = nullptr;  ///< the marker that draws the label
   };
 
   IsobarLabels();
@@ -46,38 +55,63 @@ class IsobarLabels : public QwtPlotItem {
   void setStations(std::vector<Station> stations);
   /// The legend drawn inside the canvas, or nullptr.
   void setLegend(const QwtPlotLegendItem* legend) { legend_ = legend; }
+  /// The curves labels must not cross (the cycle's lines and closures).
+  void setCurves(std::vector<const QwtPlotCurve*> curves) { curves_ = std::move(curves); }
 
   void draw(QPainter* painter, const QwtScaleMap& xMap, const QwtScaleMap& yMap,
             const QRectF& canvasRect) const override;
+
+  /// Where the last draw placed a marker's label; false when it has none.
+  bool stationLabelRect(const QwtPlotMarker* marker, QRectF& rect) const;
 
   // From the last draw (canvas pixels), for tests.
   int labelCount() const { return static_cast<int>(labels_.size()); }
   const std::vector<QRectF>& placedRects() const { return placed_; }
   /// The texts of the labels drawn, in the order of placedRects().
   const std::vector<QString>& placedTexts() const { return placedTexts_; }
+  /// The station numbers' rectangles.
+  const std::vector<QRectF>& stationRects() const { return stationRects_; }
   /// Labels drawn away from their preferred place.
   int movedCount() const { return moved_; }
   /// Labels left out because they fit nowhere.
   int skippedCount() const { return skipped_; }
-  /// Everything the labels kept clear of.
+  /// Everything the isobar labels kept clear of: the station markers and numbers, the legend.
   const std::vector<QRectF>& obstacleRects() const { return obstacles_; }
+  /// The curves of the last draw in pixels.
+  const std::vector<std::vector<QPointF>>& curvePixels() const { return curvePixels_; }
+  const QRectF& canvasRect() const { return canvas_; }
   QColor textColour() const;
 
  private:
   std::vector<Label> labels_;
   std::vector<Station> stations_;
+  std::vector<const QwtPlotCurve*> curves_;
   const QwtPlotLegendItem* legend_ = nullptr;
   mutable std::vector<QRectF> placed_;
   mutable std::vector<QString> placedTexts_;
   mutable std::vector<QRectF> obstacles_;
+  mutable std::vector<QRectF> stationRects_;
+  mutable std::vector<std::pair<const QwtPlotMarker*, QRectF>> stationPlaces_;
+  mutable std::vector<std::vector<QPointF>> curvePixels_;
+  mutable QRectF canvas_;
   mutable int moved_ = 0;
   mutable int skipped_ = 0;
 };
 
-/// Chooses a place for each label in turn: the first of its candidate rectangles that lies inside
-/// `bounds` and overlaps neither `occupied` nor a label placed before it. Returns the index of
-/// the chosen candidate per label, -1 where none fits.
-std::vector<int> placeLabels(const std::vector<std::vector<QRectF>>& candidates, std::vector<QRectF> occupied,
-                             const QRectF& bounds);
+/// A station's marker whose number is drawn where IsobarLabels placed it.
+class StationMarker : public QwtPlotMarker {
+ public:
+  explicit StationMarker(const IsobarLabels* labels) : labels_(labels) {}
+
+ protected:
+  void drawLabel(QPainter* painter, const QRectF& canvasRect, const QPointF& position) const override;
+
+ private:
+  const IsobarLabels* labels_;
+};
+
+/// The size of a text as it is drawn by `painter` [painter's logical px]: measured on the
+/// painter's device (a 200 dpi image, an 85 dpi PDF), through the painter's scale.
+QSizeF textSizeOn(const QPainter* painter, const QwtText& text);
 
 }  // namespace cw::gui

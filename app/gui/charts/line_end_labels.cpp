@@ -1,8 +1,10 @@
 #include "charts/line_end_labels.h"
 
 #include "charts/isobar_labels.h"
+#include "charts/label_placer.h"
 
 #include <qwt_plot.h>
+#include <qwt_plot_curve.h>
 #include <qwt_plot_legenditem.h>
 #include <qwt_scale_map.h>
 
@@ -43,20 +45,28 @@ void LineEndLabels::draw(QPainter* painter, const QwtScaleMap& xMap, const QwtSc
   skipped_ = 0;
   auto toPixel = [&](const QPointF& p) { return QPointF(xMap.transform(p.x()), yMap.transform(p.y())); };
 
-  std::vector<QRectF> occupied;
+  const QRectF bounds = canvasRect.adjusted(1, 1, -1, -1);
+  canvas_ = canvasRect;
+  LabelPlacer placer(bounds);
   for (const Obstacle& o : obstacles_) {
     const QPointF c = toPixel(o.at) + o.offset;
-    occupied.emplace_back(c - QPointF(o.size.width(), o.size.height()) / 2.0, o.size);
+    placer.addObstacle(QRectF(c - QPointF(o.size.width(), o.size.height()) / 2.0, o.size));
+  }
+  if (legend_ && legend_->plot() && legend_->isVisible())
+    placer.addObstacle(QRectF(legend_->geometry(canvasRect)));
+  curvePixels_.clear();
+  for (const QwtPlotCurve* curve : curves_) {
+    if (!curve || !curve->isVisible() || !curve->plot()) continue;
+    std::vector<QPointF> pixels;
+    for (size_t i = 0; i < curve->dataSize(); ++i) pixels.push_back(toPixel(curve->sample(i)));
+    placer.addCurve(pixels);
+    curvePixels_.push_back(std::move(pixels));
   }
 
-  if (legend_ && legend_->plot() && legend_->isVisible())
-    occupied.push_back(QRectF(legend_->geometry(canvasRect)));
-
-  const QRectF bounds = canvasRect.adjusted(1, 1, -1, -1);
   std::vector<std::vector<QRectF>> candidates;
   candidates.reserve(labels_.size());
   for (const Label& label : labels_) {
-    const QSizeF size = label.text.textSize(painter->font());
+    const QSizeF size = textSizeOn(painter, label.text);
     std::vector<QRectF> options;
     const std::size_t n = std::min(label.anchors.size(), kMaxAnchors);
     for (std::size_t k = 0; k < n; ++k) {
@@ -83,7 +93,9 @@ void LineEndLabels::draw(QPainter* painter, const QwtScaleMap& xMap, const QwtSc
     candidates.push_back(std::move(options));
   }
 
-  const std::vector<int> chosen = placeLabels(candidates, occupied, bounds);
+  // Clear of the lines where there is room; crossing a line (never another label) where not.
+  std::vector<int> chosen;
+  for (const auto& options : candidates) chosen.push_back(placer.place(options, true));
   for (std::size_t i = 0; i < labels_.size(); ++i) {
     if (chosen[i] < 0) {
       ++skipped_;

@@ -3,7 +3,8 @@
 // draw so that none overlaps another, a marker or the legend: each label tries the places around
 // its line's end first (beyond the end, then beside it), then the same around points further in
 // along its line; one that fits nowhere on the canvas is left out (the line stays). The labels
-// are placed in the order given, so the caller puts the ones that matter most first.
+// are placed in the order given, so the caller puts the ones that matter most first. Placed
+// through the LabelPlacer (label_placer.h), clear of the chart's lines where there is room.
 //
 // Placement only: the lines and their values come from the core's study.
 
@@ -16,6 +17,7 @@
 
 #include <vector>
 
+class QwtPlotCurve;
 class QwtPlotLegendItem;
 
 namespace cw::gui {
@@ -42,6 +44,8 @@ class LineEndLabels : public QwtPlotItem {
   void setObstacles(std::vector<Obstacle> obstacles);
   /// The legend drawn inside the canvas, kept clear while it is attached and visible; or nullptr.
   void setLegend(const QwtPlotLegendItem* legend) { legend_ = legend; }
+  /// The curves labels keep clear of where they can (not owned; must outlive the next draw).
+  void setCurves(std::vector<const QwtPlotCurve*> curves) { curves_ = std::move(curves); }
 
   void draw(QPainter* painter, const QwtScaleMap& xMap, const QwtScaleMap& yMap,
             const QRectF& canvasRect) const override;
@@ -51,11 +55,16 @@ class LineEndLabels : public QwtPlotItem {
   const std::vector<QRectF>& placedRects() const { return placed_; }
   const std::vector<QString>& placedTexts() const { return placedTexts_; }
   int skippedCount() const { return skipped_; }
+  const std::vector<std::vector<QPointF>>& curvePixels() const { return curvePixels_; }
+  const QRectF& canvasRect() const { return canvas_; }
 
  private:
   std::vector<Label> labels_;
   std::vector<Obstacle> obstacles_;
   const QwtPlotLegendItem* legend_ = nullptr;
+  std::vector<const QwtPlotCurve*> curves_;
+  mutable std::vector<std::vector<QPointF>> curvePixels_;
+  mutable QRectF canvas_;
   mutable std::vector<QRectF> placed_;
   mutable std::vector<QString> placedTexts_;
   mutable int skipped_ = 0;

@@ -17,6 +17,8 @@ double stateValue(const engine::PathState& s, StateValue value) {
       return s.pressure;
     case StateValue::SpecificVolume:
       return s.specificVolume;
+    case StateValue::Enthalpy:
+      return s.enthalpy;
   }
   return 0.0;
 }

@@ -15,7 +15,7 @@
 namespace cw::gui {
 
 /// Which value of a path state an axis shows.
-enum class StateValue { Temperature, Entropy, Pressure, SpecificVolume };
+enum class StateValue { Temperature, Entropy, Pressure, SpecificVolume, Enthalpy };
 
 double stateValue(const engine::PathState& state, StateValue value);
 

@@ -14,6 +14,25 @@ ReadoutPicker::ReadoutPicker(QwtPlot* plot, Readout readout)
   setStateMachine(new QwtPickerTrackerMachine);
 }
 
+QRect ReadoutPicker::trackerRect(const QFont& font) const {
+  const QRect rect = QwtPlotPicker::trackerRect(font);
+  if (rect.isEmpty() || !parentWidget()) return rect;
+  return placeInside(rect.size(), trackerPosition(), parentWidget()->contentsRect());
+}
+
+QRect ReadoutPicker::placeInside(const QSize& size, const QPoint& cursor, const QRect& area) {
+  constexpr int kOffset = 6;  // from the cursor [px]
+  QRect box(QPoint(cursor.x() + kOffset, cursor.y() - kOffset - size.height()), size);
+  if (box.right() > area.right()) box.moveRight(cursor.x() - kOffset);
+  if (box.top() < area.top()) box.moveTop(cursor.y() + kOffset);
+  // Larger than the room on either side: inside the area all the same.
+  if (box.right() > area.right()) box.moveRight(area.right());
+  if (box.left() < area.left()) box.moveLeft(area.left());
+  if (box.bottom() > area.bottom()) box.moveBottom(area.bottom());
+  if (box.top() < area.top()) box.moveTop(area.top());
+  return box;
+}
+
 QwtText ReadoutPicker::trackerText(const QPoint& position) const {
   QwtText text(readout_(position));
   if (text.isEmpty()) return text;

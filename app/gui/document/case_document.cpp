@@ -9,6 +9,7 @@
 #include "engine/evaluate.h"
 
 #include <QCoreApplication>
+#include <QFileInfo>
 #include <QTimer>
 #include <QUndoStack>
 
@@ -106,6 +107,52 @@ void CaseDocument::resultUpdated() {
   for (const QString& key : auditOrder_) order.push_back(key.toStdString());
   auditor_->request(evaluatedCase(), evaluation(), order);
   emit resultChanged();
+}
+
+bool CaseDocument::pinBaseline() {
+  const auto shown = evaluation();
+  if (!shown) return false;
+  const engine::Case& inputs = evaluatedCase();
+  QString title = QString::fromStdString(inputs.title);
+  if (title.isEmpty()) title = filePath_.isEmpty() ? tr("Untitled case") : QFileInfo(filePath_).fileName();
+  baseline_ = shown;
+  baselineCase_ = inputs;
+  baselineTitle_ = title;
+  emit baselineChanged();
+  return true;
+}
+
+bool CaseDocument::setBaseline(const engine::Case& inputs, const QString& title, QString* error) {
+  QString why;
+  try {
+    auto result = std::make_shared<engine::Evaluation>(engine::evaluateCase(inputs));
+    if (finite(result->actual) && finite(result->ideal)) {
+      baseline_ = std::move(result);
+      baselineCase_ = inputs;
+      baselineTitle_ = title;
+      emit baselineChanged();
+      return true;
+    }
+    why = tr("The evaluation gave a value that is not a finite number; the inputs are probably extreme.");
+  } catch (const engine::CaseValidationError& e) {
+    QStringList lines;
+    for (const auto& p : e.problems()) lines << QString::fromStdString(p.message);
+    why = lines.join(QLatin1Char('\n'));
+  } catch (const Error& e) {
+    why = translatedFailure(e);
+  } catch (const std::exception& e) {
+    why = tr("Evaluation failed: %1").arg(QString::fromStdString(e.what()));
+  }
+  if (error) *error = why;
+  return false;
+}
+
+void CaseDocument::clearBaseline() {
+  if (!baseline_) return;
+  baseline_.reset();
+  baselineCase_ = engine::Case{};
+  baselineTitle_.clear();
+  emit baselineChanged();
 }
 
 bool CaseDocument::hasPendingCommit() const {

@@ -78,6 +78,21 @@ class CaseDocument : public QObject {
   /// Sets the order (unknown and repeated keys dropped) and re-audits. False when unchanged.
   bool setAuditOrder(const QStringList& keys);
 
+  /// The baseline a design review compares against: a pinned or opened case, its evaluation
+  /// and its title (null and empty when there is none). Kept until replaced or cleared; edits
+  /// and loads of the current case leave it alone.
+  std::shared_ptr<const engine::Evaluation> baselineEvaluation() const { return baseline_; }
+  const engine::Case& baselineCase() const { return baselineCase_; }
+  QString baselineTitle() const { return baselineTitle_; }
+  bool hasBaseline() const { return baseline_ != nullptr; }
+  /// Pins the shown result as the baseline (false when there is none to pin). The title is the
+  /// case's title, else its file name.
+  bool pinBaseline();
+  /// Evaluates a case and makes it the baseline. Returns false and sets *error (translated, with
+  /// the reason) when it has no cycle; the baseline is then unchanged.
+  bool setBaseline(const engine::Case& inputs, const QString& title, QString* error = nullptr);
+  void clearBaseline();
+
   QUndoStack* undoStack() const { return undoStack_; }
   bool undoEnabled() const { return undoDisabled_ == 0; }
 
@@ -117,6 +132,8 @@ class CaseDocument : public QObject {
   void committed();
   /// audit() or isAuditStale() changed (the audit panel refreshes).
   void auditChanged();
+  /// The baseline was pinned, opened or cleared (tables and chart overlays refresh).
+  void baselineChanged();
 
  private:
   friend class ScopedUndoDisabler;
@@ -132,6 +149,9 @@ class CaseDocument : public QObject {
   bool typing_ = false;  ///< the edit being applied is typed (commit later)
   CaseAuditor* auditor_ = nullptr;
   QStringList auditOrder_;
+  std::shared_ptr<const engine::Evaluation> baseline_;
+  engine::Case baselineCase_;
+  QString baselineTitle_;
   std::vector<engine::CaseProblem> problems_;
   QString failure_;
   QHash<int, QString> entryProblems_;

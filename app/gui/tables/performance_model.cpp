@@ -1,5 +1,6 @@
 #include "tables/performance_model.h"
 
+#include "document/caution.h"
 #include "document/units.h"
 
 #include <QApplication>
@@ -39,20 +40,43 @@ PerformanceModel::PerformanceModel(DisplayUnits& units, QObject* parent)
 void PerformanceModel::setEvaluation(std::shared_ptr<const engine::Evaluation> evaluation, bool stale) {
   evaluation_ = std::move(evaluation);
   stale_ = stale;
-  emit dataChanged(index(0, 0), index(RowCount - 1, ColumnCount - 1));
+  emit dataChanged(index(0, 0), index(RowCount - 1, columnCount() - 1));
+}
+
+void PerformanceModel::setBaseline(std::shared_ptr<const engine::Evaluation> baseline, const QString& title) {
+  beginResetModel();
+  baseline_ = std::move(baseline);
+  baselineTitle_ = title;
+  endResetModel();
+}
+
+QString PerformanceModel::toTabSeparated() const {
+  QString text = QStringLiteral("# ") + cautionText() + QLatin1Char('\n');
+  QStringList header;
+  for (int c = 0; c < columnCount(); ++c) header << headerData(c, Qt::Horizontal).toString();
+  text += header.join(QLatin1Char('\t')) + QLatin1Char('\n');
+  for (int r = 0; r < rowCount(); ++r) {
+    QStringList cells;
+    for (int c = 0; c < columnCount(); ++c) {
+      const QVariant v = data(index(r, c), ValueRole);
+      cells << (v.isValid() ? QString::number(v.toDouble(), 'g', 10) : data(index(r, c)).toString());
+    }
+    text += cells.join(QLatin1Char('\t')) + QLatin1Char('\n');
+  }
+  return text;
 }
 
 void PerformanceModel::setStale(bool stale) {
   if (stale == stale_) return;
   stale_ = stale;
-  emit dataChanged(index(0, 0), index(RowCount - 1, ColumnCount - 1));
+  emit dataChanged(index(0, 0), index(RowCount - 1, columnCount() - 1));
 }
 
 int PerformanceModel::rowCount(const QModelIndex& parent) const {
   return parent.isValid() ? 0 : RowCount;
 }
 int PerformanceModel::columnCount(const QModelIndex& parent) const {
-  return parent.isValid() ? 0 : ColumnCount;
+  return parent.isValid() ? 0 : baseline_ ? ColumnCount : kColumnsWithoutBaseline;
 }
 
 double PerformanceModel::siValue(const engine::Performance& p, int row) {
@@ -116,7 +140,27 @@ QVariant PerformanceModel::data(const QModelIndex& index, int role) const {
   if ((role != Qt::DisplayRole && role != ValueRole) || !evaluation_) return {};
   const double actual = siValue(evaluation_->actual.performance, row);
   const double ideal = siValue(evaluation_->ideal.performance, row);
+  const bool efficiency = row == ThermalEfficiency || row == PropulsiveEfficiency || row == OverallEfficiency;
   double si = 0.0;
+  if (index.column() >= Baseline) {
+    if (!baseline_) return {};
+    const double base = siValue(baseline_->actual.performance, row);
+    if (index.column() == BaselinePercent) {
+      // A relative change of an efficiency says little (its change is in points already).
+      if (efficiency || base == 0.0) return role == ValueRole ? QVariant() : QVariant(QStringLiteral("—"));
+      const double percent = 100.0 * (actual - base) / base;
+      if (role == ValueRole) return percent;
+      QString text = formatNumber(percent, 3);
+      if (percent > 0) text.prepend(QLatin1Char('+'));
+      return text;
+    }
+    si = index.column() == Baseline ? base : actual - base;
+    const double shown = units_.toDisplay(si, rowQuantity(row));
+    if (role == ValueRole) return shown;
+    QString text = formatNumber(shown, efficiency || row == FuelAirRatio ? 4 : 5);
+    if (index.column() == BaselineChange && shown > 0) text.prepend(QLatin1Char('+'));
+    return text;
+  }
   switch (index.column()) {
     case Actual:
       si = actual;
@@ -132,13 +176,14 @@ QVariant PerformanceModel::data(const QModelIndex& index, int role) const {
   }
   const double shown = units_.toDisplay(si, rowQuantity(row));
   if (role == ValueRole) return shown;
-  const bool efficiency = row == ThermalEfficiency || row == PropulsiveEfficiency || row == OverallEfficiency;
   QString text = formatNumber(shown, efficiency || row == FuelAirRatio ? 4 : 5);
   if (index.column() == Difference && shown > 0) text.prepend(QLatin1Char('+'));
   return text;
 }
 
 QVariant PerformanceModel::headerData(int section, Qt::Orientation orientation, int role) const {
+  if (orientation == Qt::Horizontal && role == Qt::ToolTipRole && section >= Baseline && baseline_)
+    return tr("Baseline: %1").arg(baselineTitle_);
   if (orientation != Qt::Horizontal || role != Qt::DisplayRole)
     return QAbstractTableModel::headerData(section, orientation, role);
   switch (section) {
@@ -152,6 +197,12 @@ QVariant PerformanceModel::headerData(int section, Qt::Orientation orientation, 
       return tr("Difference");
     case Unit:
       return tr("Unit");
+    case Baseline:
+      return tr("Baseline");
+    case BaselineChange:
+      return tr("Change from baseline");
+    case BaselinePercent:
+      return tr("Change [%]");
     default:
       return {};
   }

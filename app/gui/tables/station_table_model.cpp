@@ -65,6 +65,12 @@ void StationTableModel::setMode(TableMode mode) {
   endResetModel();
 }
 
+void StationTableModel::setBaseline(std::shared_ptr<const engine::Evaluation> baseline) {
+  beginResetModel();
+  baseline_ = std::move(baseline);
+  endResetModel();
+}
+
 void StationTableModel::setHighlightedStations(const QSet<QString>& stations) {
   if (stations == highlighted_) return;
   highlighted_ = stations;
@@ -125,6 +131,13 @@ const engine::Station* StationTableModel::idealStation(const std::string& id) co
   return nullptr;
 }
 
+const engine::Station* StationTableModel::baselineStation(const std::string& id) const {
+  if (!baseline_) return nullptr;
+  for (const auto& s : baseline_->actual.stations)
+    if (s.id == id) return &s;
+  return nullptr;
+}
+
 bool StationTableModel::displayValue(int row, int column, double& value) const {
   const auto& cycle = mode_ == TableMode::Ideal ? evaluation_->ideal : evaluation_->actual;
   const engine::Station& station = cycle.stations[static_cast<size_t>(row)];
@@ -134,6 +147,11 @@ bool StationTableModel::displayValue(int row, int column, double& value) const {
     const engine::Station* twin = idealStation(station.id);
     double other = 0.0;
     if (!twin || !siValue(*twin, column, other)) return false;
+    si -= other;
+  } else if (mode_ == TableMode::BaselineDifference) {
+    const engine::Station* base = baselineStation(station.id);
+    double other = 0.0;
+    if (!base || !siValue(*base, column, other)) return false;  // no such station in the baseline
     si -= other;
   }
   value = units_.toDisplay(si, columnQuantity(column));
@@ -185,7 +203,10 @@ QVariant StationTableModel::data(const QModelIndex& index, int role) const {
 QVariant StationTableModel::headerData(int section, Qt::Orientation orientation, int role) const {
   if (orientation != Qt::Horizontal || role != Qt::DisplayRole)
     return QAbstractTableModel::headerData(section, orientation, role);
-  const QString prefix = mode_ == TableMode::Difference && section != Id ? QStringLiteral("Δ") : QString();
+  const QString prefix =
+      (mode_ == TableMode::Difference || mode_ == TableMode::BaselineDifference) && section != Id
+          ? QStringLiteral("Δ")
+          : QString();
   auto withUnit = [&](const QString& name) {
     return units_.withUnit(prefix + name, columnQuantity(section));
   };
@@ -221,7 +242,9 @@ QString StationTableModel::toTabSeparated() const {
   QString text = QStringLiteral("# ") + cautionText() + QLatin1Char('\n');
   const QString title = mode_ == TableMode::Actual  ? tr("Stations, cycle with losses")
                         : mode_ == TableMode::Ideal ? tr("Stations, ideal cycle")
-                                                    : tr("Stations, difference (with losses − ideal)");
+                        : mode_ == TableMode::Difference
+                            ? tr("Stations, difference (with losses − ideal)")
+                            : tr("Stations, difference from the baseline (with losses − baseline)");
   text += QStringLiteral("# ") + title + QLatin1Char('\n');
   QStringList header;
   for (int c = 0; c < ColumnCount; ++c) header << headerData(c, Qt::Horizontal).toString();

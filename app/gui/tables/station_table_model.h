@@ -1,6 +1,7 @@
 #pragma once
 // The station table: every station of the evaluation in display units, as the cycle with
-// losses, its ideal twin, or their difference (with losses minus ideal). The selected
+// losses, its ideal twin, their difference (with losses minus ideal), or, with a baseline, the
+// difference from the baseline's cycle with losses (station by station id). The selected
 // component's stations are highlighted; a stale result is greyed.
 
 #include "engine/cycle_result.h"
@@ -14,7 +15,7 @@ namespace cw::gui {
 
 class DisplayUnits;
 
-enum class TableMode { Actual, Ideal, Difference };
+enum class TableMode { Actual, Ideal, Difference, BaselineDifference };
 
 class StationTableModel : public QAbstractTableModel {
   Q_OBJECT
@@ -29,6 +30,8 @@ class StationTableModel : public QAbstractTableModel {
   void setEvaluation(std::shared_ptr<const engine::Evaluation> evaluation, bool stale);
   void setStale(bool stale);
   void setMode(TableMode mode);
+  /// The baseline's evaluation (null: none) for TableMode::BaselineDifference.
+  void setBaseline(std::shared_ptr<const engine::Evaluation> baseline);
   TableMode mode() const { return mode_; }
   void setHighlightedStations(const QSet<QString>& stations);
   const QSet<QString>& highlightedStations() const { return highlighted_; }
@@ -46,9 +49,11 @@ class StationTableModel : public QAbstractTableModel {
   static bool siValue(const engine::Station& station, int column, double& value);
   bool displayValue(int row, int column, double& value) const;
   const engine::Station* idealStation(const std::string& id) const;
+  const engine::Station* baselineStation(const std::string& id) const;
 
   DisplayUnits& units_;
   std::shared_ptr<const engine::Evaluation> evaluation_;
+  std::shared_ptr<const engine::Evaluation> baseline_;
   bool stale_ = false;
   TableMode mode_ = TableMode::Actual;
   QSet<QString> highlighted_;

@@ -3,7 +3,6 @@
 #include "charts/colours.h"
 #include "charts/line_end_labels.h"
 #include "charts/readout_picker.h"
-#include "charts/stale_banner.h"
 #include "trade_study/study_names.h"
 
 #include <qwt_legend.h>
@@ -37,14 +36,6 @@ using study::TradeStudy;
 const char* const kSpecificThrust = "specific_thrust_N_s_per_kg";
 const char* const kTsfc = "tsfc_g_per_kN_s";
 
-QColor between(const QPalette& palette, double t) {
-  return mixColours(palette.color(QPalette::Base), palette.color(QPalette::Text), t);
-}
-
-bool darkCanvas(const QPalette& palette) {
-  return palette.color(QPalette::Base).lightness() <= 128;
-}
-
 /// A value for a line's label: up to five significant digits, no trailing zeros, the locale's
 /// decimal point, never NaN (the study's inputs are finite).
 QString compactNumber(double shown) {
@@ -77,6 +68,19 @@ std::vector<int> spreadOrder(int n) {
   return order;
 }
 
+/// The range an axis scales to: all the values, but no farther than half the span of the middle
+/// nine tenths beyond it on either side, so that a few points at the edge of having a cycle
+/// (thrust near zero, TSFC in the thousands) do not squeeze the rest into a corner.
+std::pair<double, double> bulkRange(std::vector<double> values) {
+  if (values.empty()) return {0.0, -1.0};
+  std::sort(values.begin(), values.end());
+  const auto at = [&](double q) {
+    return values[static_cast<std::size_t>(q * double(values.size() - 1) + 0.5)];
+  };
+  const double q05 = at(0.05), q95 = at(0.95), reach = 0.5 * std::max(q95 - q05, 1e-12 * std::fabs(q95));
+  return {std::max(values.front(), q05 - reach), std::min(values.back(), q95 + reach)};
+}
+
 QPen linePen(StudyChart::Family family, bool overlay, StudyOverlay kind, StudyPlot plot) {
   if (overlay) {
     const QColor colour = kind == StudyOverlay::IdealTwin ? kOkabeItoOrange : kOkabeItoReddishPurple;
@@ -91,27 +95,14 @@ QPen linePen(StudyChart::Family family, bool overlay, StudyOverlay kind, StudyPl
 }  // namespace
 
 StudyChart::StudyChart(DisplayUnits& units, QWidget* parent)
-    : QwtPlot(parent), units_(units), columns_(study::studyColumns(true)) {
+    : ChartBase(parent), units_(units), columns_(study::studyColumns(true)) {
   setObjectName("studyChart");
-  setAutoReplot(false);
   setMinimumSize(240, 180);
-  if (auto* c = qobject_cast<QwtPlotCanvas*>(canvas())) c->setFrameStyle(QFrame::Box | QFrame::Plain);
 
-  grid_ = new QwtPlotGrid;
-  grid_->attach(this);
-
-  insertOuterLegend();
-  legendItem_ = new QwtPlotLegendItem;
-  legendItem_->setMaxColumns(2);
-  legendItem_->setAlignmentInCanvas(Qt::AlignTop | Qt::AlignHCenter);
-  legendItem_->setBorderRadius(3);
+  insertStudyLegend();
+  legendItem_ = makeLegendItem(Qt::AlignTop | Qt::AlignHCenter, 2, 0.8);
   legendItem_->setMargin(2);
-  legendItem_->setSpacing(1);
   legendItem_->setItemMargin(0);
-  QFont inside = font();
-  inside.setPointSizeF(inside.pointSizeF() * 0.8);
-  legendItem_->setFont(inside);
-  legendItem_->setZ(90);
 
   design_ = new QwtPlotMarker;
   design_->setZ(50);
@@ -125,9 +116,6 @@ StudyChart::StudyChart(DisplayUnits& units, QWidget* parent)
   labels_->setLegend(legendItem_);
   labels_->attach(this);
 
-  staleLabel_ = new QwtPlotTextLabel;
-  staleLabel_->setZ(100);
-  staleLabel_->attach(this);
   hintLabel_ = new QwtPlotTextLabel;
   hintLabel_->setZ(99);
   hintLabel_->attach(this);
@@ -141,6 +129,7 @@ StudyChart::StudyChart(DisplayUnits& units, QWidget* parent)
     rebuild();
   });
   rebuild();
+  finishConstruction();
 }
 
 StudyChart::~StudyChart() {
@@ -150,14 +139,8 @@ StudyChart::~StudyChart() {
   if (!compact_) delete legendItem_;  // attached (and so deleted by the plot) only when compact
 }
 
-void StudyChart::insertOuterLegend() {
-  auto* legend = new QwtLegend;
-  legend->setObjectName("studyLegend");
-  legend->setMaxColumns(2);
-  QFont legendFont = font();
-  legendFont.setPointSizeF(legendFont.pointSizeF() * 0.85);
-  legend->setFont(legendFont);
-  insertLegend(legend, QwtPlot::BottomLegend);
+void StudyChart::insertStudyLegend() {
+  insertOuterLegend(QwtPlot::BottomLegend, 2, 0.85)->setObjectName("studyLegend");
 }
 
 void StudyChart::setCompact(bool compact) {
@@ -168,33 +151,21 @@ void StudyChart::setCompact(bool compact) {
     legendItem_->attach(this);
   } else {
     legendItem_->detach();
-    insertOuterLegend();
+    insertStudyLegend();
   }
   retranslateUi();
   rebuild();
 }
 
 void StudyChart::applyPalette() {
-  const QPalette& p = palette();
-  setCanvasBackground(p.color(QPalette::Base));
-  grid_->setMajorPen(between(p, 0.3), 0.0, Qt::DotLine);
-  const QColor ink = p.color(QPalette::Text);
-  QColor legendBackground = p.color(QPalette::Base);
-  legendBackground.setAlpha(215);
-  legendItem_->setBackgroundBrush(legendBackground);
-  legendItem_->setBorderPen(QPen(between(p, 0.4), 1.0));
-  legendItem_->setTextPen(QPen(ink));
+  const QColor ink = palette().color(QPalette::Text);
   design_->setSymbol(new QwtSymbol(QwtSymbol::Star2, QBrush(kOkabeItoYellow), QPen(ink, 1.2), QSize(15, 15)));
 }
 
-void StudyChart::changeEvent(QEvent* event) {
-  QwtPlot::changeEvent(event);
-  if (event->type() != QEvent::PaletteChange || applyingPalette_ || !grid_) return;
-  applyingPalette_ = true;
+void StudyChart::paletteChanged() {
   applyPalette();
   retranslateUi();
   rebuild();
-  applyingPalette_ = false;
 }
 
 const study::StudyColumn* StudyChart::columnNamed(const std::string& name) const {
@@ -237,10 +208,8 @@ void StudyChart::retranslateUi() {
   setAxisTitle(QwtAxis::YLeft, plot_ == StudyPlot::Carpet
                                    ? units_.withUnit(tr("Specific thrust F_s"), Quantity::SpecificThrust)
                                    : units_.withUnit(c ? studyColumnLabel(*c) : QString(), yQuantity()));
-  QwtText stale = staleBannerText(palette());
-  stale.setText(tr("Stale: the case has changed since this study ran; press Run to redo it"));
-  staleLabel_->setText(stale);
-  staleLabel_->setVisible(stale_ && study_);
+  setStaleText(tr("Stale: the case has changed since this study ran; press Run to redo it"));
+  showStaleBanner();
   QwtText designLabel(tr("Design point"));
   QFont bold = font();
   bold.setBold(true);
@@ -257,7 +226,7 @@ void StudyChart::setStudy(std::shared_ptr<const study::TradeStudy> s, std::array
                           bool stale) {
   study_ = std::move(s);
   axes_ = std::move(axes);
-  stale_ = stale;
+  assignStale(stale);
   if (study_ && study_->axes.size() < 2 && plot_ == StudyPlot::Carpet) plot_ = StudyPlot::Output;
   retranslateUi();
   rebuild();
@@ -276,13 +245,6 @@ void StudyChart::setPlot(StudyPlot plot, const std::string& column) {
   if (!column.empty() && columnNamed(column)) column_ = column;
   retranslateUi();
   rebuild();
-}
-
-void StudyChart::setStale(bool stale) {
-  if (stale == stale_) return;
-  stale_ = stale;
-  staleLabel_->setVisible(stale_ && study_);
-  replot();
 }
 
 int StudyChart::lineCount(Family family, bool overlay) const {
@@ -312,7 +274,13 @@ void StudyChart::addLines(const TradeStudy& s, bool overlay, const std::string& 
   const int n0 = s.axes[0].count;
   const int n1 = s.axes.size() > 1 ? s.axes[1].count : 1;
   if (static_cast<long>(s.points.size()) != static_cast<long>(n0) * n1) return;
+  // Only points that have a cycle (with losses) are drawn and scaled to: a failed point, or an
+  // overlay's point where the study itself has no cycle, leaves a gap.
   auto figures = [&](const StudyPoint& p) -> std::optional<QPointF> {
+    if (!p.solved()) return std::nullopt;
+    const std::size_t index = static_cast<std::size_t>(&p - s.points.data());
+    if (overlay && study_ && index < study_->points.size() && !study_->points[index].solved())
+      return std::nullopt;
     const std::optional<double> x = xc ? xc->value(p) : std::optional<double>(p.inputs[0]);
     const std::optional<double> y = yc->value(p);
     if (!x || !y || !std::isfinite(*x) || !std::isfinite(*y)) return std::nullopt;
@@ -380,7 +348,7 @@ void StudyChart::rebuild() {
   const double xf = units_.factor(xQuantity()), yf = units_.factor(yQuantity());
   const QPalette& p = palette();
   std::vector<std::pair<Family, bool>> inLegend;
-  double x0 = std::numeric_limits<double>::infinity(), x1 = -x0, y0 = x0, y1 = -x0;
+  std::vector<double> xs, ys;  // every point drawn, for the autoscale
   for (Line& l : lines_) {
     const QPen pen = linePen(l.family, l.overlay, overlay_, plot_);
     for (const auto& segment : l.segments) {
@@ -388,10 +356,8 @@ void StudyChart::rebuild() {
       shown.reserve(static_cast<qsizetype>(segment.size()));
       for (const QPointF& q : segment) {
         shown.push_back(QPointF(q.x() / xf, q.y() / yf));
-        x0 = std::min(x0, shown.back().x());
-        x1 = std::max(x1, shown.back().x());
-        y0 = std::min(y0, shown.back().y());
-        y1 = std::max(y1, shown.back().y());
+        xs.push_back(shown.back().x());
+        ys.push_back(shown.back().y());
       }
       auto* curve = new QwtPlotCurve;
       curve->setPen(pen);
@@ -439,10 +405,8 @@ void StudyChart::rebuild() {
         design_->setItemAttribute(QwtPlotItem::Legend, !compact_);  // compact: its label says it
         design_->attach(this);
         designShown_ = true;
-        x0 = std::min(x0, *x / xf);
-        x1 = std::max(x1, *x / xf);
-        y0 = std::min(y0, *y / yf);
-        y1 = std::max(y1, *y / yf);
+        xs.push_back(*x / xf);
+        ys.push_back(*y / yf);
         // Its symbol and label (right of and above it), to be kept clear.
         const QSizeF label = design_->label().textSize(font());
         obstacles.push_back({design_->value(), QSizeF(17, 17), {}});
@@ -456,27 +420,37 @@ void StudyChart::rebuild() {
   std::vector<LineEndLabels::Label> labels;
   QFont labelFont = font();
   labelFont.setPointSizeF(labelFont.pointSizeF() * 0.85);
-  // Both families take turns, so that neither takes every place at a corner they share.
-  std::array<std::vector<Line*>, 2> groups;
-  for (Line& l : lines_)
-    if (!l.overlay && l.family != Family::Sweep)
-      groups[l.family == Family::ConstantFirst ? 0 : 1].push_back(&l);
-  std::array<std::vector<int>, 2> orders{spreadOrder(static_cast<int>(groups[0].size())),
-                                         spreadOrder(static_cast<int>(groups[1].size()))};
+  // Both families take turns, so that neither takes every place at a corner they share; the
+  // overlay's lines (the ideal twin, the comparison) after the lines with losses, so that on a
+  // crowded chart theirs are the labels left out.
   std::vector<Line*> turns;
-  for (std::size_t k = 0; k < std::max(orders[0].size(), orders[1].size()); ++k)
-    for (std::size_t g = 0; g < 2; ++g)
-      if (k < orders[g].size()) turns.push_back(groups[g][static_cast<std::size_t>(orders[g][k])]);
+  for (const bool overlay : {false, true}) {
+    std::array<std::vector<Line*>, 2> groups;
+    for (Line& l : lines_)
+      if (l.overlay == overlay) groups[l.family == Family::ConstantFirst ? 0 : 1].push_back(&l);
+    std::array<std::vector<int>, 2> orders{spreadOrder(static_cast<int>(groups[0].size())),
+                                           spreadOrder(static_cast<int>(groups[1].size()))};
+    for (std::size_t k = 0; k < std::max(orders[0].size(), orders[1].size()); ++k)
+      for (std::size_t g = 0; g < 2; ++g)
+        if (k < orders[g].size()) turns.push_back(groups[g][static_cast<std::size_t>(orders[g][k])]);
+  }
   for (Line* line : turns) {
     Line& l = *line;
     const Family family = l.family;
     const int axis = family == Family::ConstantFirst ? 0 : 1;
-    QColor colour = linePen(family, false, overlay_, plot_).color();
-    if (darkCanvas(p)) colour = colour.lighter(150);
-    const QString unit =
-        axes_[axis].quantity == Quantity::Dimensionless ? QString() : units_.symbol(axes_[axis].quantity);
-    const QString number = compactNumber(units_.toDisplay(l.value, axes_[axis].quantity));
-    l.label = unit.isEmpty() ? number : number + QLatin1Char(' ') + unit;
+    QColor colour = linePen(family, l.overlay, overlay_, plot_).color();
+    if (darkCanvas()) colour = colour.lighter(150);
+    if (family == Family::Sweep) {
+      // One curve each: named at its end, as the legend names it.
+      l.label = !l.overlay                            ? tr("with losses")
+                : overlay_ == StudyOverlay::IdealTwin ? tr("ideal twin")
+                                                      : tr("comparison");
+    } else {
+      const QString unit =
+          axes_[axis].quantity == Quantity::Dimensionless ? QString() : units_.symbol(axes_[axis].quantity);
+      const QString number = compactNumber(units_.toDisplay(l.value, axes_[axis].quantity));
+      l.label = unit.isEmpty() ? number : number + QLatin1Char(' ') + unit;
+    }
     if (l.segments.empty()) continue;
     LineEndLabels::Label label;
     label.text = QwtText(l.label);
@@ -492,8 +466,13 @@ void StudyChart::rebuild() {
   }
   labels_->setLabels(std::move(labels));
   labels_->setObstacles(std::move(obstacles));
+  std::vector<const QwtPlotCurve*> curves;
+  for (const Line& l : lines_) curves.insert(curves.end(), l.curves.begin(), l.curves.end());
+  labels_->setCurves(std::move(curves));
 
-  hasBounds_ = x0 <= x1;
+  const auto [x0, x1] = bulkRange(xs);
+  const auto [y0, y1] = bulkRange(ys);
+  hasBounds_ = !xs.empty() && x0 <= x1;
   if (hasBounds_) bounds_ = QRectF(QPointF(x0, y0), QPointF(x1, y1));
   legendEntries_ = static_cast<int>(inLegend.size()) + (designShown_ && !compact_ ? 1 : 0);
   rescale();
@@ -506,11 +485,11 @@ void StudyChart::rebuild() {
                        [](const Line& l) { return l.overlay || l.segments.empty(); }))
     hint = tr("No point of this study has this figure.");
   QwtText hintText(hint);
-  hintText.setColor(between(p, 0.7));
+  hintText.setColor(between(0.7));
   hintText.setRenderFlags(Qt::AlignCenter | Qt::TextWordWrap);
   hintLabel_->setText(hintText);
   hintLabel_->setVisible(!hint.isEmpty());
-  staleLabel_->setVisible(stale_ && study_);
+  showStaleBanner();
   replot();
 }
 

@@ -14,12 +14,11 @@
 // is drawn only through consecutive points that have the figure. Canvas, grid and text take
 // the palette's colours; a banner marks a study of a case that has changed since.
 
+#include "charts/chart_base.h"
 #include "document/units.h"
 
 #include "study/study_columns.h"
 #include "study/trade_study.h"
-
-#include <qwt_plot.h>
 
 #include <QPointF>
 #include <QRectF>
@@ -31,7 +30,6 @@
 #include <vector>
 
 class QwtPlotCurve;
-class QwtPlotGrid;
 class QwtPlotLegendItem;
 class QwtPlotMarker;
 class QwtPlotTextLabel;
@@ -51,7 +49,7 @@ struct StudyAxisName {
   QString shortName;  ///< without the component, for a compact legend; empty for `name`
 };
 
-class StudyChart : public QwtPlot {
+class StudyChart : public ChartBase {
   Q_OBJECT
 
  public:
@@ -82,7 +80,6 @@ class StudyChart : public QwtPlot {
                   const QString& description = {});
   /// The carpet, or the output column `column` (a study column's name) against the first input.
   void setPlot(StudyPlot plot, const std::string& column = {});
-  void setStale(bool stale);
   /// Compact (a low place such as the bottom tabs): no title, the legend inside the canvas in a
   /// band left free above the lines. Otherwise the title on top and the legend below the chart.
   void setCompact(bool compact);
@@ -92,7 +89,6 @@ class StudyChart : public QwtPlot {
   StudyPlot plot() const { return plot_; }
   const std::string& column() const { return column_; }
   StudyOverlay overlay() const { return overlay_; }
-  bool isStale() const { return stale_; }
 
   // For tests and the panel.
   const std::vector<Line>& lines() const { return lines_; }
@@ -109,7 +105,8 @@ class StudyChart : public QwtPlot {
   void retranslateUi();
 
  protected:
-  void changeEvent(QEvent* event) override;
+  void paletteChanged() override;
+  bool wantsStaleBanner() const override { return study_ != nullptr; }
   void resizeEvent(QResizeEvent* event) override;
 
  private:
@@ -117,7 +114,7 @@ class StudyChart : public QwtPlot {
   void rebuild();
   void clearLines();
   void applyPalette();
-  void insertOuterLegend();
+  void insertStudyLegend();
   void rescale();
   void addLines(const study::TradeStudy& s, bool overlay, const std::string& xColumn,
                 const std::string& yColumn);
@@ -136,7 +133,6 @@ class StudyChart : public QwtPlot {
   StudyPlot plot_ = StudyPlot::Carpet;
   std::string column_ = "specific_thrust_N_s_per_kg";
   StudyOverlay overlay_ = StudyOverlay::None;
-  bool stale_ = false;
   bool compact_ = false;
   QString overlayNote_;
 
@@ -147,12 +143,9 @@ class StudyChart : public QwtPlot {
   QwtPlotMarker* design_ = nullptr;
   bool designShown_ = false;
   LineEndLabels* labels_ = nullptr;
-  QwtPlotGrid* grid_ = nullptr;
   QwtPlotLegendItem* legendItem_ = nullptr;  ///< the legend inside the canvas (compact)
-  QwtPlotTextLabel* staleLabel_ = nullptr;
   QwtPlotTextLabel* hintLabel_ = nullptr;
   ReadoutPicker* picker_ = nullptr;
-  bool applyingPalette_ = false;
 };
 
 }  // namespace cw::gui

@@ -1,0 +1,114 @@
+#pragma once
+// The base of every chart (CycleChart, AuditChart, StudyChart): what they share, so that each
+// of them only draws its own items.
+//
+//   palette   the canvas, grid and legend colours from the widget's palette (light or dark),
+//             applied again when the palette changes (then the chart's paletteChanged());
+//   legend    a legend inside the canvas (QwtPlotLegendItem) or beside it (QwtLegend), in one
+//             style: a smaller font, the palette's colours;
+//   stale     the banner over the canvas while the chart shows a result that is no longer current;
+//   export    what an export changes for its duration (ExportScope): a light palette on white,
+//             the caution line as the footer; the chart's beginExport() / endExport() hide what
+//             belongs on screen only.
+
+#include <qwt_plot.h>
+#include <qwt_text.h>
+
+#include <QColor>
+#include <QPalette>
+
+#include <vector>
+
+class QwtLegend;
+class QwtPlotGrid;
+class QwtPlotLegendItem;
+class QwtPlotTextLabel;
+
+namespace cw::gui {
+
+class ChartBase : public QwtPlot {
+  Q_OBJECT
+
+ public:
+  ~ChartBase() override;
+
+  bool isStale() const { return stale_; }
+  /// Marks the chart stale or current (the banner; the chart greys its items in staleChanged()).
+  void setStale(bool stale);
+
+  /// A colour between the canvas (Base) and the text on it: t = 0 is the canvas, 1 the text.
+  QColor between(double t) const;
+  /// True when the canvas is dark (the dark palette).
+  bool darkCanvas() const;
+
+  /// Called by ExportScope around an export; the default does nothing.
+  virtual void beginExport() {}
+  virtual void endExport() {}
+
+  // For tests.
+  const QwtPlotTextLabel* staleBanner() const { return staleLabel_; }
+  const QwtPlotGrid* grid() const { return grid_; }
+
+ protected:
+  explicit ChartBase(QWidget* parent = nullptr);
+
+  /// Call at the end of the derived constructor: from then on a palette change reaches
+  /// paletteChanged().
+  void finishConstruction();
+  /// The palette has changed (the base has recoloured the canvas, grid and legend already).
+  virtual void paletteChanged() {}
+  /// The stale state has changed (the base has shown or hidden the banner already).
+  virtual void staleChanged() {}
+  /// Sets the stale flag without notifying (setEvaluation-like calls that rebuild anyway).
+  void assignStale(bool stale);
+  /// A text of the chart's own for the banner (empty: staleBannerText's, by hasResult()).
+  void setStaleText(const QString& text);
+  /// Shows the banner when stale (and wanted), with the text for the result shown.
+  void showStaleBanner();
+  /// Whether the chart has a result to show: the banner says it shows the last valid one, or
+  /// that there is none (a case opened without a cycle). The default: it has.
+  virtual bool hasResult() const { return true; }
+  /// Whether the banner is wanted while stale; the default: always.
+  virtual bool wantsStaleBanner() const { return true; }
+
+  QwtPlotGrid* gridItem() const { return grid_; }
+  /// A legend inside the canvas in the charts' style; the caller attaches it.
+  QwtPlotLegendItem* makeLegendItem(Qt::Alignment alignment, int columns, double fontScale);
+  /// A legend beside the canvas in the charts' style, inserted at `position`.
+  QwtLegend* insertOuterLegend(QwtPlot::LegendPosition position, int columns, double fontScale);
+
+  void changeEvent(QEvent* event) override;
+
+ private:
+  void applyBasePalette();
+  void styleLegendItem(QwtPlotLegendItem* legend) const;
+
+  bool stale_ = false;
+  bool built_ = false;
+  bool applyingPalette_ = false;
+  QString staleText_;
+  QwtPlotGrid* grid_ = nullptr;
+  QwtPlotTextLabel* staleLabel_ = nullptr;
+  std::vector<QwtPlotLegendItem*> legendItems_;  ///< styled on every palette change (not owned)
+};
+
+/// For its lifetime: the chart in a light palette on white with the caution line as its footer,
+/// and the chart's beginExport() / endExport() around it. Every export goes through one.
+class ExportScope {
+ public:
+  explicit ExportScope(QwtPlot* plot);
+  ~ExportScope();
+  ExportScope(const ExportScope&) = delete;
+  ExportScope& operator=(const ExportScope&) = delete;
+
+  /// The palette of exported figures: near-black on white.
+  static QPalette exportPalette();
+
+ private:
+  QwtPlot* plot_;
+  ChartBase* chart_;
+  QPalette palette_;
+  bool ownPalette_;
+};
+
+}  // namespace cw::gui

@@ -1,0 +1,507 @@
+// The charts on their own, offscreen: the base they share (palette, stale banner, exports on
+// white), the stations' states and the closure, labels that neither overlap nor cross the
+// curves nor leave the canvas at any export size, the h-s chart against the core's stations.
+#include "audit/audit_chart.h"
+#include "charts/chart_base.h"
+#include "charts/chart_export.h"
+#include "charts/cycle_chart.h"
+#include "charts/isobar_labels.h"
+#include "charts/label_placer.h"
+#include "charts/line_end_labels.h"
+#include "charts/readout_picker.h"
+#include "document/units.h"
+#include "gui_test_support.h"
+#include "main_window.h"
+#include "startup/application.h"
+#include "trade_study/study_chart.h"
+
+#include "analysis/loss_audit.h"
+#include "engine/evaluate.h"
+#include "engine/process_paths.h"
+#include "io/case_file.h"
+#include "study/trade_study.h"
+
+#include <nlohmann/json.hpp>
+
+#include <qwt_plot_curve.h>
+#include <qwt_plot_marker.h>
+#include <qwt_plot_textlabel.h>
+
+#include <QAction>
+#include <QApplication>
+#include <QDir>
+#include <QFile>
+#include <QFontMetricsF>
+#include <QImage>
+#include <QPen>
+#include <QTabWidget>
+#include <QTemporaryDir>
+#include <QTest>
+
+#include <memory>
+
+using namespace cw::gui;
+
+namespace {
+
+const QString kDemo = QStringLiteral(CYCLEWRIGHT_SOURCE_DIR "/resources/demo/demo-turbojet.json");
+
+cw::engine::Case demoCase() {
+  QFile file(kDemo);
+  if (!file.open(QIODevice::ReadOnly)) qFatal("cannot read the demo case");
+  return cw::io::parseCaseText(file.readAll().toStdString(), "demo");
+}
+
+std::shared_ptr<const cw::engine::Evaluation> demoEvaluation() {
+  return std::make_shared<const cw::engine::Evaluation>(cw::engine::evaluateCase(demoCase()));
+}
+
+std::shared_ptr<const cw::analysis::LossAudit> demoAudit() {
+  return std::make_shared<const cw::analysis::LossAudit>(cw::analysis::auditCase(demoCase()));
+}
+
+std::shared_ptr<const cw::study::TradeStudy> demoCarpet(double lowestBurnerExit = 1200.0) {
+  QFile file(kDemo);
+  if (!file.open(QIODevice::ReadOnly)) qFatal("cannot read the demo case");
+  cw::study::TradeStudySpec spec;
+  spec.document = nlohmann::json::parse(file.readAll().toStdString());
+  spec.axes = {{"compressor.pressure_ratio", 4.0, 20.0, 9},
+               {"burner.exit_temperature_K", lowestBurnerExit, 1500.0, 4}};
+  spec.threads = 1;
+  return std::make_shared<const cw::study::TradeStudy>(cw::study::runTradeStudy(spec));
+}
+
+/// With CYCLEWRIGHT_TEST_FIGURES set to a folder, the figures the suite renders are kept there
+/// to be looked at.
+void saveFigure(const QImage& image, const QString& name) {
+  const QString folder = qEnvironmentVariable("CYCLEWRIGHT_TEST_FIGURES");
+  if (!folder.isEmpty()) image.save(QDir(folder).filePath(name + ".png"));
+}
+
+/// Whether a rectangle meets any of the curves (pixels).
+bool crossesAny(const QRectF& r, const std::vector<std::vector<QPointF>>& curves) {
+  for (const auto& c : curves)
+    for (std::size_t k = 1; k < c.size(); ++k)
+      if (segmentMeetsRect(c[k - 1], c[k], r)) return true;
+  return false;
+}
+
+QString describe(const QRectF& r) {
+  return QString("(%1, %2 %3 x %4)").arg(r.x()).arg(r.y()).arg(r.width()).arg(r.height());
+}
+
+/// The share of an image's pixels in a border strip that are exactly `colour`.
+double borderShare(const QImage& image, QColor colour) {
+  int same = 0, all = 0;
+  for (int x = 0; x < image.width(); x += 3)
+    for (int y : {1, image.height() - 2}) {
+      ++all;
+      same += image.pixelColor(x, y).rgba() == colour.rgba();
+    }
+  return double(same) / all;
+}
+
+}  // namespace
+
+class TestCharts : public QObject {
+  Q_OBJECT
+
+ private slots:
+  void initTestCase() { cw::test::isolateGuiTest("CyclewrightTestCharts"); }
+
+  void everyChartSharesTheBase() {
+    DisplayUnits units;
+    CycleChart ts(ChartKind::TemperatureEntropy, units);
+    AuditChart audit(units);
+    StudyChart study(units);
+    for (ChartBase* chart : std::initializer_list<ChartBase*>{&ts, &audit, &study}) {
+      QVERIFY(chart->grid());
+      QVERIFY(!chart->staleBanner()->isVisible());
+    }
+    ts.setEvaluation(demoEvaluation(), false);
+    audit.setAudit(demoAudit(), false);
+    for (ChartBase* chart : std::initializer_list<ChartBase*>{&ts, &audit}) {
+      chart->setStale(true);
+      QVERIFY(chart->isStale());
+      QVERIFY(chart->staleBanner()->isVisible());
+      QVERIFY(chart->staleBanner()->text().text().startsWith("Stale"));
+      chart->setStale(false);
+      QVERIFY(!chart->staleBanner()->isVisible());
+    }
+    // The study chart shows no banner without a study, stale or not.
+    study.setStale(true);
+    QVERIFY(study.isStale());
+    QVERIFY(!study.staleBanner()->isVisible());
+  }
+
+  void exportsAreOnWhiteUnderTheDarkPalette() {
+    auto* app = qobject_cast<QApplication*>(QCoreApplication::instance());
+    const QPalette original = QApplication::palette();
+    QVERIFY(applyPaletteNamed(*app, "dark"));
+    {
+      DisplayUnits units;
+      CycleChart ts(ChartKind::TemperatureEntropy, units);
+      AuditChart audit(units);
+      ts.setEvaluation(demoEvaluation(), false);
+      audit.setAudit(demoAudit(), false);
+      for (QwtPlot* chart : std::initializer_list<QwtPlot*>{&ts, &audit}) {
+        chart->resize(700, 460);
+        const QColor base = chart->canvasBackground().color();
+        QVERIFY(base.lightness() < 100);
+        const QImage image = renderChartImage(chart, QSize(900, 600), 96);
+        QCOMPARE(image.size(), QSize(900, 600));
+        QVERIFY2(borderShare(image, Qt::white) > 0.9, qPrintable(chart->objectName()));
+        // The canvas too: its middle is mostly white.
+        int white = 0;
+        for (int x = 300; x < 600; x += 10)
+          white += image.pixelColor(x, 300).rgb() == QColor(Qt::white).rgb();
+        QVERIFY2(white > 15, qPrintable(chart->objectName()));
+        // The chart is back in the dark palette afterwards.
+        QCOMPARE(chart->canvasBackground().color(), base);
+        QVERIFY(chart->footer().isEmpty());
+      }
+    }
+    QApplication::setPalette(original);
+  }
+
+  // The loss audit's PNG at its default 2400 x 1600 px and 200 dpi cut the top half of every
+  // bar's value (a label box of a fixed 14 px). At every size and resolution each value's box
+  // holds the text's height on that device and lies inside the canvas.
+  void auditValueLabelsAreNeverClipped_data() {
+    QTest::addColumn<QSize>("pixels");
+    QTest::addColumn<int>("dpi");
+    QTest::newRow("default 2400 x 1600 at 200 dpi") << QSize(2400, 1600) << 200;
+    QTest::newRow("900 x 600 at 96 dpi") << QSize(900, 600) << 96;
+    QTest::newRow("1200 x 800 at 300 dpi") << QSize(1200, 800) << 300;
+    QTest::newRow("3600 x 1200 at 600 dpi") << QSize(3600, 1200) << 600;
+    QTest::newRow("600 x 400 at 50 dpi") << QSize(600, 400) << 50;
+  }
+  void auditValueLabelsAreNeverClipped() {
+    QFETCH(QSize, pixels);
+    QFETCH(int, dpi);
+    DisplayUnits units;
+    AuditChart chart(units);
+    chart.resize(800, 500);
+    chart.setAudit(demoAudit(), false);
+    const QImage image = renderChartImage(&chart, pixels, dpi);
+    QCOMPARE(image.size(), pixels);
+    saveFigure(image, QString("audit-%1x%2-%3dpi").arg(pixels.width()).arg(pixels.height()).arg(dpi));
+    const QRectF canvas = chart.lastCanvasRect();
+    QVERIFY(canvas.width() > 100);
+    const auto& labels = chart.valueLabelRects();
+    QCOMPARE(labels.size(), chart.bars().size());
+    QFont font = chart.font();
+    font.setPointSizeF(font.pointSizeF() * 0.8);
+    // The renderer scales the painter to the image's resolution: rectangles are in the chart's
+    // logical pixels, where the text is as tall as on screen.
+    const double textHeight = 0.95 * QFontMetricsF(font).height();
+    for (const QRectF& r : labels) {
+      QVERIFY2(canvas.contains(r), qPrintable(QString("label %1,%2 %3x%4 outside the canvas %5,%6 %7x%8")
+                                                  .arg(r.x())
+                                                  .arg(r.y())
+                                                  .arg(r.width())
+                                                  .arg(r.height())
+                                                  .arg(canvas.x())
+                                                  .arg(canvas.y())
+                                                  .arg(canvas.width())
+                                                  .arg(canvas.height())));
+      QVERIFY2(r.height() >= textHeight, qPrintable(QString("%1 < %2").arg(r.height()).arg(textHeight)));
+    }
+  }
+
+  // Stations 0, 8 and 9 are static states, 2 to 7 total ones: the markers' legend entry says so
+  // on every cycle chart.
+  void stationStatesAreNamedInTheLegend() {
+    DisplayUnits units;
+    for (ChartKind kind :
+         {ChartKind::TemperatureEntropy, ChartKind::PressureVolume, ChartKind::EnthalpyEntropy}) {
+      CycleChart chart(kind, units);
+      chart.setEvaluation(demoEvaluation(), false);
+      const QwtPlotCurve* entry = chart.stationLegendEntry();
+      QVERIFY(entry->testItemAttribute(QwtPlotItem::Legend));
+      QVERIFY(entry->testLegendAttribute(QwtPlotCurve::LegendShowSymbol));
+      const QString title = entry->title().text();
+      QVERIFY2(title.contains("0, 8, 9 static") && title.contains("2 to 7 total"), qPrintable(title));
+    }
+  }
+
+  // The p-v chart's closure is the isobar at p0 from the end of the exhaust's expansion to the
+  // free-stream static state (no bulge), drawn dashed, with the core's values.
+  void pressureVolumeClosureIsTheAmbientIsobar() {
+    DisplayUnits units;
+    CycleChart chart(ChartKind::PressureVolume, units);
+    const auto evaluation = demoEvaluation();
+    chart.setEvaluation(evaluation, false);
+    const QwtPlotCurve* closure = chart.actualClosureCurve();
+    QVERIFY(closure->pen().style() != Qt::SolidLine);
+    const auto& s0 = evaluation->actual.station("0");
+    const auto& s9 = evaluation->actual.station("9");
+    QVERIFY(s9.staticPressure > 1.05 * s0.staticPressure);  // the demo's convergent nozzle is choked
+    const double pf = units.factor(Quantity::Pressure), vf = units.factor(Quantity::SpecificVolume);
+    const std::size_t n = closure->dataSize();
+    QCOMPARE(n, std::size_t(cw::engine::kClosureExpansionStates - 1 + cw::engine::kPathStates));
+    QVERIFY(std::abs(closure->sample(0).y() * pf - s9.staticPressure) < 1e-9 * s9.staticPressure);
+    for (std::size_t k = n - cw::engine::kPathStates; k < n; ++k)
+      QVERIFY(std::abs(closure->sample(k).y() * pf - s0.staticPressure) < 1e-9 * s0.staticPressure);
+    // Along the isobar the volume falls monotonically to the free stream's.
+    for (std::size_t k = n - cw::engine::kPathStates + 1; k < n; ++k)
+      QVERIFY(closure->sample(k).x() < closure->sample(k - 1).x());
+    const double v0 = s0.gas->gasConstant() * s0.staticTemperature / s0.staticPressure;
+    QVERIFY(std::abs(closure->sample(n - 1).x() * vf - v0) < 1e-9 * v0);
+  }
+
+  // Charts in tabs: only the current tab's chart is visible, from the first paint on.
+  void tabbedChartsShowOnlyTheCurrentTab() {
+    MainWindow window;
+    QVERIFY(window.openCase(kDemo));
+    window.resize(1400, 900);
+    window.show();
+    QVERIFY(QTest::qWaitForWindowExposed(&window));
+    window.setChartLayout(ChartLayout::Tabbed);
+    QCoreApplication::processEvents();
+    auto* tabs = window.findChild<QTabWidget*>("chartTabs");
+    QVERIFY(tabs && tabs->isVisible());
+    QCOMPARE(tabs->count(), 3);
+    QCOMPARE(tabs->currentWidget(), window.temperatureEntropyChart());
+    QVERIFY(window.temperatureEntropyChart()->isVisible());
+    QVERIFY(!window.pressureVolumeChart()->isVisible());
+    QVERIFY(!window.enthalpyEntropyChart()->isVisible());
+    tabs->setCurrentIndex(1);
+    QVERIFY(window.pressureVolumeChart()->isVisible());
+    QVERIFY(!window.temperatureEntropyChart()->isVisible());
+    window.setChartLayout(ChartLayout::SideBySide);
+    QVERIFY(window.temperatureEntropyChart()->isVisible());
+    QVERIFY(window.pressureVolumeChart()->isVisible());
+    QVERIFY(!window.enthalpyEntropyChart()->isVisible());  // beside the others on request
+    auto* beside = window.findChild<QAction*>("enthalpyEntropyBesideAction");
+    QVERIFY(beside);
+    beside->setChecked(true);
+    for (CycleChart* chart :
+         {window.temperatureEntropyChart(), window.pressureVolumeChart(), window.enthalpyEntropyChart()})
+      QVERIFY2(chart->isVisible(), qPrintable(chart->objectName()));
+    window.setChartLayout(ChartLayout::Tabbed);
+    QVERIFY(!window.enthalpyEntropyChart()->isVisible());
+    tabs->setCurrentIndex(2);
+    QVERIFY(window.enthalpyEntropyChart()->isVisible());
+    QVERIFY(!window.temperatureEntropyChart()->isVisible());
+  }
+
+  // The hover readout's box stays inside the canvas at every edge and corner.
+  void readoutStaysInsideTheCanvas() {
+    const QRect area(0, 0, 400, 300);
+    const QSize box(150, 48);
+    for (const QPoint cursor : {QPoint(395, 5), QPoint(5, 5), QPoint(395, 295), QPoint(5, 295),
+                                QPoint(200, 150), QPoint(399, 150)}) {
+      const QRect r = ReadoutPicker::placeInside(box, cursor, area);
+      QVERIFY2(area.contains(r), qPrintable(QString("%1,%2").arg(cursor.x()).arg(cursor.y())));
+      QCOMPARE(r.size(), box);
+    }
+    // A box larger than the room on either side of the cursor is still inside.
+    QVERIFY(area.contains(ReadoutPicker::placeInside(QSize(380, 48), QPoint(200, 20), area)));
+    // In the middle it sits above right of the cursor, clear of it.
+    const QRect middle = ReadoutPicker::placeInside(box, QPoint(200, 150), area);
+    QVERIFY(middle.left() > 200 && middle.bottom() < 150);
+  }
+
+  // The h-s chart draws the core's enthalpies: its station markers at the core's ht (2 to 7)
+  // and h (0, 9 static) against s; lossy solid, ideal dashed.
+  void enthalpyEntropyChartShowsTheCoresStations() {
+    DisplayUnits units;
+    CycleChart chart(ChartKind::EnthalpyEntropy, units);
+    const auto evaluation = demoEvaluation();
+    chart.setEvaluation(evaluation, false);
+    QCOMPARE(chart.actualCurve()->pen().style(), Qt::SolidLine);
+    QCOMPARE(chart.idealCurve()->pen().style(), Qt::DashLine);
+    QVERIFY(chart.isobarCount() >= 5);
+    const double hf = units.factor(Quantity::SpecificEnergy), sf = units.factor(Quantity::Entropy);
+    int checked = 0;
+    for (const QwtPlotMarker* marker : chart.markers()) {
+      const QString id = marker->label().text();
+      // Station 8 lies on the nozzle's path by interpolation in ln p (path_series.h), not at its own state.
+      if (id.isEmpty() || id == "8") continue;
+      const auto& station = evaluation->actual.station(id.toStdString());
+      const bool statics = id == "0" || id == "9";
+      const double h = statics ? station.gas->enthalpy(station.staticTemperature) : station.totalEnthalpy;
+      QVERIFY2(std::abs(marker->yValue() * hf - h) < 1e-6 * std::max(1.0, std::abs(h)) + 1e-3,
+               qPrintable(QString("station %1: %2 vs %3").arg(id).arg(marker->yValue() * hf).arg(h)));
+      QVERIFY2(
+          std::abs(marker->xValue() * sf - station.entropy) < 1e-6 * 1000.0,
+          qPrintable(
+              QString("station %1 s: %2 vs %3").arg(id).arg(marker->xValue() * sf).arg(station.entropy)));
+      ++checked;
+    }
+    QVERIFY(checked >= 7);
+    // h3 in particular, the compressor's exit: the core's ht3.
+    const QwtPlotMarker* three = nullptr;
+    for (const QwtPlotMarker* m : chart.markers())
+      if (m->label().text() == "3") three = m;
+    QVERIFY(three);
+    QVERIFY(std::abs(three->yValue() * hf - evaluation->actual.station("3").totalEnthalpy) < 1e-3);
+  }
+
+  // The T-s chart's vector exports kept only one isobar label: every label placed on screen is
+  // placed in the SVG and the PDF too, and in PNGs at several sizes, inside the canvas.
+  void exportsKeepEveryIsobarLabel() {
+    DisplayUnits units;
+    CycleChart chart(ChartKind::TemperatureEntropy, units);
+    // On screen at the exports' size: 180 x 120 mm at 96 px per inch.
+    chart.resize(680, 454);
+    chart.setEvaluation(demoEvaluation(), false);
+    chart.grab();
+    const std::size_t onScreen = chart.isobarLabels()->placedRects().size();
+    QVERIFY2(onScreen >= 5, qPrintable(QString::number(onScreen)));
+    QTemporaryDir dir;
+    for (const QString& format : {QStringLiteral("svg"), QStringLiteral("pdf")}) {
+      QVERIFY(exportChartDocument(&chart, dir.filePath("ts." + format), format, QSizeF(180, 120)));
+      const auto& placed = chart.isobarLabels()->placedTexts();
+      QVERIFY2(placed.size() >= onScreen,
+               qPrintable(format + QString(": %1 of %2 on screen: ").arg(placed.size()).arg(onScreen) +
+                          QStringList(placed.begin(), placed.end()).join(", ")));
+    }
+  }
+
+  // One placer for station numbers and isobar labels: none overlaps another, the isobars' labels
+  // cross none of the cycle's curves, the station numbers none at the larger size, all inside
+  // the canvas; on screen at two sizes and in a PNG export.
+  void cycleChartLabelsNeitherOverlapNorCrossCurves_data() {
+    QTest::addColumn<int>("kind");
+    QTest::addColumn<QSize>("size");
+    QTest::addColumn<bool>("exported");
+    for (int kind : {0, 1, 2})
+      for (const QSize size : {QSize(900, 600), QSize(560, 420)})
+        for (bool exported : {false, true})
+          QTest::addRow("kind %d, %dx%d%s", kind, size.width(), size.height(), exported ? ", PNG" : "")
+              << kind << size << exported;
+  }
+  void cycleChartLabelsNeitherOverlapNorCrossCurves() {
+    QFETCH(int, kind);
+    QFETCH(QSize, size);
+    QFETCH(bool, exported);
+    DisplayUnits units;
+    CycleChart chart(static_cast<ChartKind>(kind), units);
+    chart.resize(size);
+    chart.setEvaluation(demoEvaluation(), false);
+    const QString name = QString("cycle-%1-%2x%3%4")
+                             .arg(kind)
+                             .arg(size.width())
+                             .arg(size.height())
+                             .arg(exported ? "-png" : "");
+    if (exported)
+      saveFigure(renderChartImage(&chart, size * 2, 192), name);
+    else
+      saveFigure(chart.grab().toImage(), name);
+    const IsobarLabels* labels = chart.isobarLabels();
+    const QRectF canvas = labels->canvasRect();
+    QVERIFY(labels->curvePixels().size() == 4);
+    const auto& stations = labels->stationRects();
+    QCOMPARE(int(stations.size()), 8);  // every station number shown: 0, 2, 3, 4, 5, 7, 8, 9
+    const auto& isobars = labels->placedRects();
+    QVERIFY2(isobars.size() >= 2, qPrintable(QString::number(isobars.size())));
+    std::vector<QRectF> all(stations.begin(), stations.end());
+    all.insert(all.end(), isobars.begin(), isobars.end());
+    for (std::size_t i = 0; i < all.size(); ++i) {
+      QVERIFY2(canvas.contains(all[i]), qPrintable(describe(all[i]) + " outside " + describe(canvas)));
+      for (std::size_t j = i + 1; j < all.size(); ++j)
+        QVERIFY2(!all[i].intersects(all[j]), qPrintable(describe(all[i]) + " overlaps " + describe(all[j])));
+    }
+    for (const QRectF& r : isobars)
+      QVERIFY2(!crossesAny(r, labels->curvePixels()),
+               qPrintable("isobar label " + describe(r) + " crosses a curve"));
+    // A station number is never left out: where no side of its marker is clear of the lines
+    // (the small h-s chart's 5 and 7), it may cross one; at most one does.
+    int crossing = 0;
+    for (const QRectF& r : stations) crossing += crossesAny(r, labels->curvePixels()) ? 1 : 0;
+    QVERIFY2(crossing <= (size.width() < 700 ? 1 : 0),
+             qPrintable(QString("%1 station numbers cross a curve").arg(crossing)));
+  }
+
+  // The carpet's end labels: inside the canvas, none over another; the lines' ends are labelled
+  // clear of the lines where there is room (at most one in five crosses a line).
+  void carpetLabelsNeitherOverlapNorLeaveTheCanvas() {
+    DisplayUnits units;
+    StudyChart chart(units);
+    chart.resize(760, 520);
+    chart.setStudy(demoCarpet(),
+                   {StudyAxisName{"Compressor pressure ratio", Quantity::Dimensionless, {}},
+                    StudyAxisName{"Burner exit temperature", Quantity::Temperature, {}}},
+                   false);
+    chart.setOverlay(StudyOverlay::IdealTwin);
+    saveFigure(chart.grab().toImage(), "carpet-ideal");
+    const LineEndLabels* labels = chart.lineLabels();
+    const auto& placed = labels->placedRects();
+    QVERIFY2(placed.size() >= 8, qPrintable(QString::number(placed.size())));
+    int crossing = 0;
+    for (std::size_t i = 0; i < placed.size(); ++i) {
+      QVERIFY(labels->canvasRect().contains(placed[i]));
+      for (std::size_t j = i + 1; j < placed.size(); ++j) QVERIFY(!placed[i].intersects(placed[j]));
+      crossing += crossesAny(placed[i], labels->curvePixels()) ? 1 : 0;
+    }
+    QVERIFY2(crossing * 5 <= int(placed.size()),
+             qPrintable(QString("%1 of %2 cross").arg(crossing).arg(placed.size())));
+    // The ideal twin's lines are labelled too.
+    int overlayLabels = 0;
+    for (const auto& line : chart.lines()) overlayLabels += line.overlay && !line.label.isEmpty() ? 1 : 0;
+    QVERIFY(overlayLabels > 0);
+  }
+
+  // A study with points that have no cycle (burner exit temperatures too low for the turbine
+  // to drive the compressor) and some barely having one: the chart scales to the bulk of the
+  // points that have a cycle, the ideal twin's overlay included.
+  void studyScalesToThePointsThatHaveACycle() {
+    const auto study = demoCarpet(700.0);
+    int failed = 0;
+    double low = 1e300, high = -1e300, tsfcHigh = 0.0;
+    for (const auto& p : study->points) {
+      if (!p.solved()) {
+        ++failed;
+        continue;
+      }
+      tsfcHigh = std::max(tsfcHigh, p.actual.thrustSpecificFuelConsumption);
+      low = std::min(low, p.actual.specificThrust);
+      high = std::max(high, p.actual.specificThrust);
+    }
+    QVERIFY2(failed >= 3, qPrintable(QString::number(failed)));
+    DisplayUnits units;
+    StudyChart chart(units);
+    chart.resize(760, 520);
+    chart.setStudy(study,
+                   {StudyAxisName{"Compressor pressure ratio", Quantity::Dimensionless, {}},
+                    StudyAxisName{"Burner exit temperature", Quantity::Temperature, {}}},
+                   false);
+    chart.setOverlay(StudyOverlay::IdealTwin);
+    saveFigure(chart.grab().toImage(), "carpet-with-failed-points");
+    const QwtInterval y = chart.axisInterval(QwtAxis::YLeft);
+    const double span = high - low;
+    // The design point (the case as it is) is among the solved points' range here.
+    QVERIFY2(y.minValue() >= low - 0.1 * span && y.maxValue() <= high + 0.6 * span,
+             qPrintable(QString("axis %1 to %2, solved points %3 to %4")
+                            .arg(y.minValue())
+                            .arg(y.maxValue())
+                            .arg(low)
+                            .arg(high)));
+    // The few points at the edge of having a cycle (thrust near zero, TSFC some fifty times the
+    // design point's) do not squeeze the rest: the TSFC axis ends well short of them.
+    const double tsfcShown = chart.axisInterval(QwtAxis::XBottom).maxValue() * units.factor(Quantity::Tsfc);
+    QVERIFY2(tsfcShown < 0.2 * tsfcHigh, qPrintable(QString("%1 against %2").arg(tsfcShown).arg(tsfcHigh)));
+  }
+
+  // The waterfall docked narrow: its values do not run together.
+  void waterfallValuesDoNotRunTogether() {
+    DisplayUnits units;
+    AuditChart chart(units);
+    chart.resize(380, 300);
+    chart.setAudit(demoAudit(), false);
+    saveFigure(chart.grab().toImage(), "audit-narrow");
+    const auto& labels = chart.valueLabelRects();
+    QCOMPARE(labels.size(), chart.bars().size());
+    for (std::size_t i = 0; i < labels.size(); ++i) {
+      QVERIFY(chart.lastCanvasRect().contains(labels[i]));
+      for (std::size_t j = i + 1; j < labels.size(); ++j)
+        QVERIFY2(!labels[i].intersects(labels[j]), qPrintable(QString("values %1 and %2: ").arg(i).arg(j) +
+                                                              describe(labels[i]) + describe(labels[j])));
+    }
+  }
+};
+
+QTEST_MAIN(TestCharts)
+#include "test_charts.moc"
