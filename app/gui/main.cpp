@@ -2,6 +2,7 @@
 #include "document/case_document.h"
 #include "main_window.h"
 #include "startup/application.h"
+#include "startup/export_figures.h"
 #include "startup/guarded_application.h"
 #include "startup/guarded_main.h"
 #include "startup/scratch_settings.h"
@@ -107,7 +108,12 @@ int runApplication(int argc, char** argv) {
 
   // A picture never changes the user's settings: it reads and writes a copy.
   std::optional<cw::gui::ScratchSettings> scratch;
-  if (!request.screenshotPath.isEmpty()) scratch.emplace();
+  if (!request.screenshotPath.isEmpty() || request.figures) scratch.emplace();
+  if (request.figures) {
+    for (const QString& file : cw::gui::exportFigures(*request.figures))
+      std::cout << file.toStdString() << '\n';
+    return 0;
+  }
   MainWindow window;
   return request.screenshotPath.isEmpty() ? runInteractive(window, request)
                                           : renderScreenshot(window, request);

@@ -25,7 +25,8 @@ void nameApplication() {
 
 bool wantsScreenshot(int argc, char** argv) {
   for (int i = 1; i < argc; ++i)
-    if (std::strcmp(argv[i], "--screenshot") == 0 || std::strncmp(argv[i], "--screenshot=", 13) == 0)
+    if (std::strcmp(argv[i], "--screenshot") == 0 || std::strncmp(argv[i], "--screenshot=", 13) == 0 ||
+        std::strcmp(argv[i], "--export-figures") == 0 || std::strncmp(argv[i], "--export-figures=", 17) == 0)
       return true;
   return false;
 }

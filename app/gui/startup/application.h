@@ -14,7 +14,8 @@ namespace cw::gui {
 /// Names the application (organisation, name, version) for QSettings, QStandardPaths and --version.
 void nameApplication();
 
-/// Returns true when argv asks for an offscreen render (--screenshot), before QApplication exists.
+/// Returns true when argv asks for an offscreen render (--screenshot, --export-figures), before
+/// QApplication exists.
 bool wantsScreenshot(int argc, char** argv);
 
 /// A dark palette (window #202124, base #2b2b2b, white text), for `--palette dark` and tests.
