@@ -2,8 +2,10 @@
 #include "document/case_document.h"
 #include "main_window.h"
 #include "startup/application.h"
+#include "startup/export_figures.h"
 #include "startup/guarded_application.h"
 #include "startup/guarded_main.h"
+#include "startup/scratch_settings.h"
 #include "startup/start_options.h"
 #include "startup/start_study.h"
 #include "trade_study/study_panel.h"
@@ -16,6 +18,7 @@
 
 #include <cstdlib>
 #include <iostream>
+#include <optional>
 
 namespace {
 
@@ -45,6 +48,21 @@ void setUpRequestedStudy(MainWindow& window, const StartRequest& request) {
   if (!request.studyPlot) panel->setPlotColumn(std::string());
 }
 
+/// The trade-study panel alone at the picture's size: out of its dock for the picture, then back.
+QPixmap grabStudyPanel(MainWindow& window, const QSize& size) {
+  cw::gui::TradeStudyPanel* panel = window.tradeStudyPanel();
+  QDockWidget* dock = window.tradeStudyDock();
+  dock->setWidget(nullptr);
+  panel->setParent(nullptr);
+  panel->resize(size);
+  panel->show();
+  QApplication::processEvents();
+  QApplication::processEvents();
+  const QPixmap picture = panel->grab();
+  dock->setWidget(panel);
+  return picture;
+}
+
 int renderScreenshot(MainWindow& window, const StartRequest& request) {
   openRequestedCase(window, request);
   setUpRequestedStudy(window, request);
@@ -56,8 +74,7 @@ int renderScreenshot(MainWindow& window, const StartRequest& request) {
   QApplication::processEvents();
   QApplication::processEvents();
   const bool wholeWindow = request.screenshotOf == QLatin1String("window");
-  if (!wholeWindow) QApplication::processEvents();  // the dock's new size
-  const QPixmap picture = wholeWindow ? window.grab() : window.tradeStudyPanel()->grab();
+  const QPixmap picture = wholeWindow ? window.grab() : grabStudyPanel(window, size);
   if (!picture.save(request.screenshotPath, "PNG"))
     throw cw::InvalidInput(request.screenshotPath.toStdString(), "cannot write the screenshot");
   return 0;
@@ -89,6 +106,14 @@ int runApplication(int argc, char** argv) {
   cw::gui::installTranslation(app, request.language);
   cw::gui::applyPaletteNamed(app, request.palette);
 
+  // A picture never changes the user's settings: it reads and writes a copy.
+  std::optional<cw::gui::ScratchSettings> scratch;
+  if (!request.screenshotPath.isEmpty() || request.figures) scratch.emplace();
+  if (request.figures) {
+    for (const QString& file : cw::gui::exportFigures(*request.figures))
+      std::cout << file.toStdString() << '\n';
+    return 0;
+  }
   MainWindow window;
   return request.screenshotPath.isEmpty() ? runInteractive(window, request)
                                           : renderScreenshot(window, request);

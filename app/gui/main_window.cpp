@@ -259,7 +259,8 @@ QWidget* MainWindow::createPerformanceBox() {
 
 void MainWindow::createBottomTabs(QSplitter* vertical) {
   // Side by side where both fit, else in two tabs (a laptop screen with a dock open).
-  auto* bottom = new TablePair(createStationBox(), tr("Stations"), createPerformanceBox(), tr("Performance"));
+  auto* bottom = tablePair_ =
+      new TablePair(createStationBox(), tr("Stations"), createPerformanceBox(), tr("Performance"));
   bottom->setObjectName("tablePair");
   connect(bottom, &TablePair::arranged, this, [this] {
     if (vertical_->isVisible()) fitTableRows();
@@ -337,34 +338,32 @@ bool MainWindow::chartsInTabs() const {
 }
 
 void MainWindow::arrangeCharts() {
-  // Side by side as chosen while both charts have their minimum width; in tabs when the room is
-  // less (a dock beside them on a laptop screen), back side by side when it grows again.
-  const int besideCount = hsBeside() ? 3 : 2;
-  const int sideBySideWidth =
-      besideCount * kChartMinimum.width() + (besideCount - 1) * chartSplitter_->handleWidth();
+  // Side by side as chosen while each chart shown there has its minimum width; in tabs when the
+  // room is less (a dock beside them on a laptop screen), back side by side when it grows again.
+  const int beside = hsBeside() ? 3 : 2;
+  const int sideBySideWidth = beside * kChartMinimum.width() + (beside - 1) * chartSplitter_->handleWidth();
   const bool narrow = chartHost_->isVisible() && chartHost_->width() < sideBySideWidth;
-  const bool tabs = chartLayout_ == ChartLayout::Tabbed || narrow;
-  if (tabs && (!chartsInTabs() || chartTabs_->count() < 3)) {
-    chartTabs_->addTab(tsChart_, tr("Temperature–entropy"));
-    chartTabs_->addTab(pvChart_, tr("Pressure–volume"));
-    chartTabs_->addTab(hsChart_, tr("Enthalpy–entropy"));
-    chartHost_->setCurrentWidget(chartTabs_);
-    chartTabs_->setCurrentIndex(0);
+  const std::array<QWidget*, 3> charts{tsChart_, pvChart_, hsChart_};
+  if (chartLayout_ == ChartLayout::Tabbed || narrow) {
+    if (!chartsInTabs() || chartTabs_->count() < 3) {
+      chartTabs_->addTab(tsChart_, tr("Temperature–entropy"));
+      chartTabs_->addTab(pvChart_, tr("Pressure–volume"));
+      chartTabs_->addTab(hsChart_, tr("Enthalpy–entropy"));
+      chartTabs_->setCurrentIndex(0);
+      chartHost_->setCurrentWidget(chartTabs_);
+    }
     // Only the current tab's chart is shown: a chart shown on a hidden page paints over the
     // current one until the tabs are switched.
-    for (CycleChart* chart : {tsChart_, pvChart_, hsChart_})
-      chart->setVisible(chart == chartTabs_->currentWidget());
-  } else if (!tabs) {
-    if (chartsInTabs() || chartSplitter_->count() < 3) {
-      chartSplitter_->addWidget(tsChart_);
-      chartSplitter_->addWidget(pvChart_);
-      chartSplitter_->addWidget(hsChart_);
-      chartHost_->setCurrentWidget(chartSplitter_);
-      tsChart_->show();  // a chart that was on a hidden tab page stays hidden in the splitter
-      pvChart_->show();
-    }
-    hsChart_->setVisible(hsBeside());
+    for (QWidget* chart : charts) chart->setVisible(chart == chartTabs_->currentWidget());
+    return;
   }
+  if (chartsInTabs() || chartSplitter_->count() < 3) {
+    for (QWidget* chart : charts) chartSplitter_->addWidget(chart);
+    chartHost_->setCurrentWidget(chartSplitter_);
+  }
+  tsChart_->show();  // a chart that was on a hidden tab page stays hidden in the splitter
+  pvChart_->show();
+  hsChart_->setVisible(hsBeside());
 }
 
 bool MainWindow::hsBeside() const {
@@ -525,6 +524,7 @@ void MainWindow::fitTables() {
     view->setMinimumSize(width, rowsHeight(view, kMinimumTableRows));
   }
   const int rows = std::max(stationModel_->rowCount(), performanceModel_->rowCount());
+  tablePair_->fit();  // the widths changed
   if (rows != tableRows_ && vertical_->isVisible()) fitTableRows();
   tableRows_ = rows;
 }

@@ -43,6 +43,7 @@ class DisplayUnits;
 class PerformanceModel;
 class SelectionRouter;
 class StationTableModel;
+class TablePair;
 class WindowActions;
 class WindowAutosave;
 class WindowExports;
@@ -213,6 +214,7 @@ class MainWindow : public QMainWindow {
   PerformanceModel* performanceModel_ = nullptr;
   QTabWidget* bottomTabs_ = nullptr;
   QSplitter* vertical_ = nullptr;
+  TablePair* tablePair_ = nullptr;
   int tableRows_ = -1;
   AuditPanel* auditPanel_ = nullptr;
   QDockWidget* auditDock_ = nullptr;

@@ -118,6 +118,19 @@ class TestDarkPalette : public QObject {
       QVERIFY(banner->palette().color(QPalette::Window).lightness() < 100);
       QVERIFY(banner->palette().color(QPalette::WindowText).lightness() > 128);
       QVERIFY(contrast(banner->palette().color(QPalette::Window), dark.color(QPalette::Window)) > 5);
+      // Input fields stand out from the window and the canvases: WCAG 2 contrast ratios, 1 for
+      // equal colours; the old base #2b2b2b gave 1.1 against the window.
+      auto* ratio = window.findChild<QLineEdit*>("compressor.pressureRatio");  // a valid field
+      QVERIFY(ratio);
+      const QColor field = ratio->palette().color(QPalette::Base);
+      QCOMPARE(field, QColor("#404349"));
+      QVERIFY2(cw::gui::contrastRatio(field, dark.color(QPalette::Window)) >= 1.6,
+               qPrintable(QString::number(cw::gui::contrastRatio(field, dark.color(QPalette::Window)))));
+      QVERIFY(cw::gui::contrastRatio(field, base) >= 1.4);
+      QVERIFY(cw::gui::contrastRatio(ratio->palette().color(QPalette::Text), field) >= 7.0);  // WCAG AAA
+      // The ratio itself: black on white is 21 (WCAG 2 definition), a colour on itself 1.
+      QCOMPARE(cw::gui::contrastRatio(Qt::black, Qt::white), 21.0);
+      QCOMPARE(cw::gui::contrastRatio(field, field), 1.0);
     }
     QApplication::setPalette(original);
   }

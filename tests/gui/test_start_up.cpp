@@ -6,8 +6,10 @@
 #include "common/version.h"
 
 #include <QDateTime>
+#include <QDir>
 #include <QFile>
 #include <QFileInfo>
+#include <QImage>
 #include <QProcess>
 #include <QTest>
 
@@ -203,15 +205,104 @@ class TestStartUp : public QObject {
     const Run run = runApp(home, {"--screenshot", home.path("window.png"), "--size", "640x480"});
     QCOMPARE(run.status, 0);
     QVERIFY(QFile::exists(home.path("window.png")));
-    // The child wrote its settings (the chart layout, at least) in its own home...
-    const QString ownSettings = home.folderOf("XDG_CONFIG_HOME") + "/Cyclewright/Cyclewright.conf";
-    QVERIFY2(QFile::exists(ownSettings), qPrintable(ownSettings));
-    QFile settings(ownSettings);
-    QVERIFY(settings.open(QIODevice::ReadOnly));
-    QVERIFY(settings.readAll().contains("layout=side-by-side"));
-    // ...and nothing where the user's own settings and data are.
+    // Nothing where the user's own settings and data are (and, a screenshot, no settings at all:
+    // screenshotRunsChangeNoSettings).
     QVERIFY(stateOf(realSettings) == settingsBefore);
     QVERIFY(stateOf(realData) == dataBefore);
+  }
+
+  void screenshotRunsChangeNoSettings() {
+    const cw::test::IsolatedHome home;
+    const QString settingsFile = home.folderOf("XDG_CONFIG_HOME") + "/Cyclewright/Cyclewright.conf";
+    QVERIFY(QDir().mkpath(QFileInfo(settingsFile).absolutePath()));
+    // The user's own: the inputs of their last study, SI units, the charts in tabs.
+    const QByteArray own =
+        "[charts]\nlayout=tabbed\n\n[study]\nfirst_input=nozzle.velocity_coefficient\n"
+        "first_count=7\ncarpet=false\n\n[units]\nsystem=si\n";
+    QVERIFY(writeFile(settingsFile, own));
+    const QString casePath = home.path("case.json");
+    QVERIFY(writeFile(casePath, demoWith("\"pressure_ratio\": 8.0", "\"pressure_ratio\": 9.0")));
+    for (const auto& [of, size] : {std::pair{QStringLiteral("window"), QStringLiteral("1280x800")},
+                                   std::pair{QStringLiteral("trade-study"), QStringLiteral("900x600")}}) {
+      const Run run = runApp(home, {"--screenshot", home.path(of + ".png"), "--screenshot-of", of, "--size",
+                                    size, "--study-vary", "compressor.pressure_ratio=4:12:5", "--study-vary",
+                                    "burner.exit_temperature_K=1200:1500:3", "--study-plot",
+                                    "specific_thrust_N_s_per_kg", casePath});
+      QVERIFY2(run.status == 0, qPrintable(run.err));
+      QFile settings(settingsFile);
+      QVERIFY(settings.open(QIODevice::ReadOnly));
+      QCOMPARE(settings.readAll(), own);  // byte for byte: no study set-up, no recent file
+    }
+    // The panel's picture honours --size too.
+    QCOMPARE(QImage(home.path("trade-study.png")).size(), QSize(900, 600));
+    QCOMPARE(QImage(home.path("window.png")).size(), QSize(1280, 800));
+  }
+
+  void exportFiguresWritesEveryChart() {
+    const cw::test::IsolatedHome home;
+    const QString demo = QStringLiteral(CYCLEWRIGHT_SOURCE_DIR "/resources/demo/demo-turbojet.json");
+    const QString out = home.path("figures/si");  // made when missing
+    const Run run = runApp(
+        home,
+        {"--export-figures", demo, "--output-dir", out, "--format", "svg,png,pdf", "--size", "160x100mm"},
+        home.environmentWithoutDisplay());
+    QVERIFY2(run.status == 0, qPrintable(run.err));
+    for (const QString name : {"temperature-entropy", "pressure-volume", "enthalpy-entropy", "loss-audit"}) {
+      for (const QString format : {"svg", "png", "pdf"}) {
+        const QString file = out + "/" + name + "." + format;
+        QVERIFY2(QFileInfo(file).size() > 1000, qPrintable(file));
+        QVERIFY(run.out.contains(file));
+      }
+      // PNG at 300 dpi: 160 mm = 1889.8 px, 100 mm = 1181.1 px.
+      QCOMPARE(QImage(out + "/" + name + ".png").size(), QSize(1890, 1181));
+      QFile svg(out + "/" + name + ".svg");
+      QVERIFY(svg.open(QIODevice::ReadOnly));
+      const QByteArray text = svg.readAll();
+      // SVG at 85 dpi (charts/chart_export.h): 160 mm = 535.433 units, 100 mm = 334.646.
+      QVERIFY2(text.contains("viewBox=\"0 0 535.433 334.646\""), qPrintable(name));
+      QVERIFY2(text.contains("Results are conceptual-design estimates."), qPrintable(name));
+    }
+    // U.S. customary units on the axes.
+    const QString us = home.path("figures/us");
+    QCOMPARE(runApp(home, {"--export-figures", demo, "--output-dir", us, "--units", "us"},
+                    home.environmentWithoutDisplay())
+                 .status,
+             0);
+    QFile ts(us + "/temperature-entropy.svg");
+    QVERIFY(ts.open(QIODevice::ReadOnly));
+    QVERIFY(ts.readAll().contains("Temperature T [°R]"));
+    QVERIFY(!QFile::exists(us + "/temperature-entropy.png"));  // SVG only by default
+  }
+
+  void exportFiguresRefusesBadInput_data() {
+    QTest::addColumn<QStringList>("arguments");  // after --export-figures
+    QTest::addColumn<QString>("expected");       // on the one line of stderr
+    const QString demo = QStringLiteral(CYCLEWRIGHT_SOURCE_DIR "/resources/demo/demo-turbojet.json");
+    QTest::newRow("missing case") << QStringList{"no-such-case.json", "--output-dir", "out"}
+                                  << "no-such-case.json: cannot read case file";
+    QTest::newRow("format") << QStringList{demo, "--output-dir", "out", "--format", "svg,gif"}
+                            << "--format: expected svg, pdf or png, comma-separated, got \"gif\"";
+    QTest::newRow("size form") << QStringList{demo, "--output-dir", "out", "--size", "1600x1000"}
+                               << "--size: expected WxHmm";
+    QTest::newRow("size range") << QStringList{demo, "--output-dir", "out", "--size", "10x100mm"}
+                                << "--size = 10x100mm is outside the valid range 20x20mm to 1000x1000mm";
+    QTest::newRow("units") << QStringList{demo, "--output-dir", "out", "--units", "imperial"}
+                           << "--units: expected si or us, got \"imperial\"";
+    QTest::newRow("no folder") << QStringList{demo} << "--output-dir: is needed with --export-figures";
+    QTest::newRow("unwritable folder") << QStringList{demo, "--output-dir", "/proc/cyclewright"}
+                                       << "--output-dir: cannot make the folder \"/proc/cyclewright\"";
+  }
+  void exportFiguresRefusesBadInput() {
+    QFETCH(QStringList, arguments);
+    QFETCH(QString, expected);
+    const cw::test::IsolatedHome home;
+    const Run run =
+        runApp(home, QStringList{"--export-figures"} + arguments, home.environmentWithoutDisplay());
+    QCOMPARE(run.status, 2);
+    const QStringList lines = ourLines(run.err);
+    QCOMPARE(lines.size(), 1);
+    QVERIFY2(lines.front().contains(expected), qPrintable(lines.front()));
+    QVERIFY(!QFile::exists(home.folderOf("HOME") + "/out"));  // the child works in its HOME
   }
 };
 

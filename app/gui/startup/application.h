@@ -6,6 +6,7 @@
 #include <QStringList>
 
 class QApplication;
+class QColor;
 class QPalette;
 
 namespace cw::gui {
@@ -13,14 +14,24 @@ namespace cw::gui {
 /// Names the application (organisation, name, version) for QSettings, QStandardPaths and --version.
 void nameApplication();
 
-/// Returns true when argv asks for an offscreen render (--screenshot), before QApplication exists.
+/// Returns true when argv asks for an offscreen render (--screenshot, --export-figures), before
+/// QApplication exists.
 bool wantsScreenshot(int argc, char** argv);
 
 /// A dark palette (window #202124, base #2b2b2b, white text), for `--palette dark` and tests.
 QPalette darkPalette();
 
-/// Applies a named palette to the application: "dark" (Fusion style with darkPalette()) or
-/// "system" (left as it is). Returns false for any other name.
+/// darkPalette() with the input fields' own base (#404349), so that line edits, spin boxes,
+/// editable combo boxes and text fields stand out from the window and the chart canvases.
+QPalette darkFieldPalette();
+
+/// The WCAG 2 contrast ratio of two colours, (L1 + 0.05) / (L2 + 0.05) with L the relative
+/// luminance of the sRGB colour, lighter over darker: 1 (equal) to 21 (black and white).
+double contrastRatio(const QColor& a, const QColor& b);
+
+/// Applies a named palette to the application: "dark" (Fusion style with darkPalette(), and
+/// darkFieldPalette() for input fields) or "system" (left as it is). Returns false for any other
+/// name.
 bool applyPaletteNamed(QApplication& app, const QString& name);
 
 /// The user-interface languages there are: "en" (the source texts) and one per translation

@@ -66,14 +66,24 @@ StartOptions::StartOptions()
       studyPlot_("study-plot",
                  "With --study-vary: plot this output column against the first input (default: "
                  "the carpet for two inputs).",
-                 "COLUMN") {}
+                 "COLUMN"),
+      exportFigures_("export-figures",
+                     "Write every chart of the case (temperature-entropy, pressure-volume, enthalpy-entropy, "
+                     "loss audit) into --output-dir offscreen, and exit.",
+                     "CASE"),
+      outputDir_("output-dir", "With --export-figures: the folder for the figures (made when missing).",
+                 "DIR"),
+      format_("format", "With --export-figures: svg, pdf and/or png, comma-separated (default svg).", "LIST",
+              "svg"),
+      units_("units", "With --export-figures: si (default) or us.", "SYSTEM", "si") {}
 
 void StartOptions::addTo(QCommandLineParser& parser) const {
   parser.setApplicationDescription("Gas-turbine cycle explorer for conceptual design.");
   parser.addHelpOption();
   parser.addVersionOption();
-  for (const QCommandLineOption* option : {&screenshot_, &screenshotOf_, &studyVary_, &studyCompare_,
-                                           &studyPlot_, &palette_, &size_, &language_})
+  for (const QCommandLineOption* option :
+       {&screenshot_, &screenshotOf_, &studyVary_, &studyCompare_, &studyPlot_, &exportFigures_, &outputDir_,
+        &format_, &units_, &palette_, &size_, &language_})
     parser.addOption(*option);
   parser.addPositionalArgument("case", "Case file to open (default: the demo case).", "[case.json]");
 }
@@ -101,12 +111,35 @@ StartRequest StartOptions::read(const QCommandLineParser& parser) const {
            QStringLiteral("needs --study-vary"));
   request.screenshotOf = parser.value(screenshotOf_);
   checkScreenshotOf(request.screenshotOf, !request.studyVary.isEmpty());
-  request.pictureSize = parsePictureSize(parser.value(size_));
+  request.figures = readFigures(parser);
+  if (!request.figures) request.pictureSize = parsePictureSize(parser.value(size_));
   request.language = parser.value(language_);
   checkLanguage(request.language);
   request.palette = parser.value(palette_);
   checkPalette(request.palette);
   return request;
+}
+
+std::optional<FigureRequest> StartOptions::readFigures(const QCommandLineParser& parser) const {
+  if (!parser.isSet(exportFigures_)) {
+    for (const QCommandLineOption* option : {&outputDir_, &format_, &units_})
+      if (parser.isSet(*option))
+        refuse(("--" + option->names().front().toStdString()).c_str(),
+               QStringLiteral("needs --export-figures"));
+    return std::nullopt;
+  }
+  if (parser.isSet(screenshot_))
+    refuse("--export-figures", QStringLiteral("cannot be given with --screenshot"));
+  if (!parser.positionalArguments().isEmpty())
+    refuse("--export-figures", QStringLiteral("takes the case itself; no other case file is expected"));
+  FigureRequest figures;
+  figures.casePath = parser.value(exportFigures_);
+  figures.outputDir = parser.value(outputDir_);
+  if (figures.outputDir.isEmpty()) refuse("--output-dir", QStringLiteral("is needed with --export-figures"));
+  figures.formats = parseFigureFormats(parser.value(format_));
+  if (parser.isSet(size_)) figures.millimetres = parseFigureSize(parser.value(size_));
+  figures.units = parseFigureUnits(parser.value(units_));
+  return figures;
 }
 
 bool StartOptions::mentionsHelpOrVersion(int argc, char** argv) {

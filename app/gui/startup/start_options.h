@@ -9,6 +9,8 @@
 // expects; main() prints them as one line "cyclewright: ..." and exits with status 2. Like
 // cyclewright-cli they are English: the language is itself an option.
 
+#include "startup/export_figures.h"
+
 #include <QCommandLineOption>
 #include <QSize>
 #include <QString>
@@ -31,6 +33,7 @@ struct StartRequest {
   QStringList studyVary;                            ///< PATH=START:STOP:COUNT, once or twice
   QString studyCompare;                             ///< "ideal", PATH=VALUE or empty
   std::optional<QString> studyPlot;                 ///< a study column; unset for the default
+  std::optional<FigureRequest> figures;             ///< --export-figures: write the charts and exit
 };
 
 class StartOptions {
@@ -66,6 +69,12 @@ class StartOptions {
   QCommandLineOption studyVary_;
   QCommandLineOption studyCompare_;
   QCommandLineOption studyPlot_;
+  QCommandLineOption exportFigures_;
+  QCommandLineOption outputDir_;
+  QCommandLineOption format_;
+  QCommandLineOption units_;
+
+  std::optional<FigureRequest> readFigures(const QCommandLineParser& parser) const;
 };
 
 /// "WxH" in pixels, each from 200x150 to 8000x8000. Throws cw::InvalidInput naming --size: the

@@ -52,7 +52,16 @@ QSize TablePair::minimumSizeHint() const {
 
 void TablePair::resizeEvent(QResizeEvent* event) {
   QWidget::resizeEvent(event);
-  const bool both = event->size().width() >= widthOfBoth();
+  fit();
+}
+
+void TablePair::showEvent(QShowEvent* event) {
+  QWidget::showEvent(event);
+  fit();  // a resize while hidden may have been the last one
+}
+
+void TablePair::fit() {
+  const bool both = width() >= widthOfBoth();
   if (both == sideBySide()) return;
   arrange(both);
   emit arranged(both);

@@ -24,6 +24,8 @@ class TablePair : public QWidget {
   void setTitles(const QString& firstTitle, const QString& secondTitle);
 
   QSize minimumSizeHint() const override;
+  /// Side by side or in tabs for the present width (also on every resize and show).
+  void fit();
 
  signals:
   /// The two went side by side or into tabs (the height they need changed).
@@ -31,6 +33,7 @@ class TablePair : public QWidget {
 
  protected:
   void resizeEvent(QResizeEvent* event) override;
+  void showEvent(QShowEvent* event) override;
 
  private:
   /// The width both need side by side [px].
