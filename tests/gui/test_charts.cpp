@@ -506,6 +506,34 @@ class TestCharts : public QObject {
     }
   }
 
+  // The selection's band lies behind every line (cycle, closures, isobars, grid) and is
+  // translucent, on the light and the dark palette.
+  void selectionBandIsBehindTheLinesAndTranslucent() {
+    auto* app = qobject_cast<QApplication*>(QCoreApplication::instance());
+    const QPalette original = QApplication::palette();
+    for (const bool dark : {false, true}) {
+      if (dark) QVERIFY(applyPaletteNamed(*app, "dark"));
+      DisplayUnits units;
+      CycleChart chart(ChartKind::TemperatureEntropy, units);
+      chart.setEvaluation(demoEvaluation(), false);
+      chart.setHighlightedComponent("compressor");
+      const QwtPlotCurve* band = chart.highlightCurve();
+      QVERIFY(band->isVisible());
+      QVERIFY(band->pen().color().alpha() < 128);
+      int lines = 0;
+      for (const QwtPlotItem* item : chart.itemList()) {
+        const bool curve = item->rtti() == QwtPlotItem::Rtti_PlotCurve;
+        if (!curve && item->rtti() != QwtPlotItem::Rtti_PlotGrid) continue;
+        // The ideal cycle's band is the other one of the same width.
+        if (curve && static_cast<const QwtPlotCurve*>(item)->pen().widthF() == band->pen().widthF()) continue;
+        ++lines;
+        QVERIFY2(item->z() > band->z(), qPrintable(item->title().text()));
+      }
+      QVERIFY(lines >= 8);  // the cycle, its twin, two closures, the isobars, the grid
+    }
+    QApplication::setPalette(original);
+  }
+
   // Export options: remembered per chart; a PNG on white (or transparent) at the chosen pixels
   // and resolution; the selection off by default; the SVG with the title, subtitle and the
   // caution; the legend where asked and back as shown afterwards.

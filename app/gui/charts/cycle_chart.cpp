@@ -100,8 +100,10 @@ CycleChart::CycleChart(ChartKind kind, DisplayUnits& units, QWidget* parent)
   };
   QPen highlightPen(kVermillion, 7.0);
   highlightPen.setCapStyle(Qt::RoundCap);
-  highlight_ = makeCurve(highlightPen, 15);
-  idealHighlight_ = makeCurve(highlightPen, 15);
+  // The selection's band lies behind every line, the isobars and the grid included, and is
+  // translucent, so that no line under it is hidden (on the dark canvas too).
+  highlight_ = makeCurve(highlightPen, 4);
+  idealHighlight_ = makeCurve(highlightPen, 4);
   idealHighlight_->setItemAttribute(QwtPlotItem::Legend, false);
   isobarLegend_ = makeCurve(QPen(Qt::gray, 1.0), 5);
   // The markers mix states (stations 0, 8, 9 static, 2 to 7 total); their entry says so.
@@ -425,7 +427,8 @@ void CycleChart::updateStalePens() {
   for (auto* c : {actual_, ideal_, actualClosure_, idealClosure_, highlight_, idealHighlight_}) {
     QPen pen = c->pen();
     QColor colour = pen.color();
-    colour.setAlpha(c == highlight_ || c == idealHighlight_ ? (stale ? 40 : 110) : alpha);
+    const int band = darkCanvas() ? 95 : 110;
+    colour.setAlpha(c == highlight_ || c == idealHighlight_ ? (stale ? 40 : band) : alpha);
     pen.setColor(colour);
     c->setPen(pen);
   }
