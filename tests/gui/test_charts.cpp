@@ -26,8 +26,10 @@
 #include <nlohmann/json.hpp>
 
 #include <qwt_plot_curve.h>
+#include <qwt_plot_legenditem.h>
 #include <qwt_plot_marker.h>
 #include <qwt_plot_textlabel.h>
+#include <qwt_scale_map.h>
 
 #include <QAction>
 #include <QApplication>
@@ -335,6 +337,18 @@ class TestCharts : public QObject {
       ++checked;
     }
     QVERIFY(checked >= 7);
+    // The legend inside the canvas covers no station.
+    chart.resize(900, 600);
+    chart.grab();
+    for (const QwtPlotItem* item : chart.itemList(QwtPlotItem::Rtti_PlotLegend)) {
+      const QRectF legend =
+          static_cast<const QwtPlotLegendItem*>(item)->geometry(chart.isobarLabels()->canvasRect());
+      for (const QwtPlotMarker* m : chart.markers()) {
+        const QPointF at(chart.canvasMap(QwtAxis::XBottom).transform(m->xValue()),
+                         chart.canvasMap(QwtAxis::YLeft).transform(m->yValue()));
+        QVERIFY2(!legend.contains(at), qPrintable("the legend covers station " + m->label().text()));
+      }
+    }
     // h3 in particular, the compressor's exit: the core's ht3.
     const QwtPlotMarker* three = nullptr;
     for (const QwtPlotMarker* m : chart.markers())

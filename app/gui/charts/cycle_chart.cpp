@@ -79,7 +79,11 @@ CycleChart::CycleChart(ChartKind kind, DisplayUnits& units, QWidget* parent)
   // The legend: inside the canvas of the temperature-entropy and enthalpy-entropy charts, in
   // the corner the cycle leaves free; below the pressure-volume chart, whose corners it fills.
   if (kind != ChartKind::PressureVolume) {
-    legendItem_ = makeLegendItem(Qt::AlignTop | Qt::AlignLeft, 1, 0.85);
+    // T-s: the top left; h-s: the bottom left (the compressor climbs to the top left there, the
+    // closures fall to the right).
+    legendItem_ = makeLegendItem(kind == ChartKind::TemperatureEntropy ? Qt::AlignTop | Qt::AlignLeft
+                                                                       : Qt::AlignBottom | Qt::AlignLeft,
+                                 1, 0.85);
     legendItem_->setMargin(4);
     legendItem_->setSpacing(2);
     legendItem_->attach(this);
