@@ -996,6 +996,10 @@ p = %7   v = %8</source>
 T = %5   s = %6
 p = %7   v = %8</translation>
     </message>
+    <message>
+        <source>Baseline: %1</source>
+        <translation>Basis: %1</translation>
+    </message>
 </context>
 <context>
     <name>cw::gui::GuardedApplication</name>

@@ -489,8 +489,9 @@ void MainWindow::refreshBaseline() {
     if (QStandardItem* item = model->item(baselineMode)) item->setEnabled(baseline != nullptr);
   if (!baseline && tableMode_->currentIndex() == baselineMode) tableMode_->setCurrentIndex(0);
   actions_->clearBaseline()->setEnabled(baseline != nullptr);
-  // The hook for the charts' baseline overlay: CaseDocument::baselineChanged with
-  // baselineEvaluation() and baselineTitle() (a third line style, Okabe-Ito grey, dash-dot).
+  // The charts overlay the baseline's cycle with losses (grey, dash-dot-dot, with its title).
+  for (CycleChart* chart : {tsChart_, pvChart_, hsChart_})
+    chart->setBaseline(baseline, document_->baselineTitle());
 }
 
 void MainWindow::pinBaseline() {

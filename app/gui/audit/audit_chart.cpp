@@ -11,6 +11,7 @@
 #include <qwt_scale_div.h>
 #include <qwt_scale_draw.h>
 #include <qwt_scale_map.h>
+#include <qwt_scale_widget.h>
 #include <qwt_text.h>
 
 #include <QCoreApplication>
@@ -276,6 +277,11 @@ void AuditChart::rebuild() {
   for (size_t i = 0; i < bars_.size(); ++i) ticks << static_cast<double>(i);
   const double n = static_cast<double>(std::max<size_t>(bars_.size(), 1));
   setAxisScaleDiv(QwtAxis::XBottom, QwtScaleDiv(-0.6, n - 0.4, QList<double>(), QList<double>(), ticks));
+  // The ticks stay at 0..n while the losses under them change (another order, another case):
+  // the scale draw's cached labels must go, or the names would stay those of the first audit.
+  axisScaleDraw(QwtAxis::XBottom)->invalidateCache();
+  axisWidget(QwtAxis::XBottom)->updateGeometry();
+  axisWidget(QwtAxis::XBottom)->update();
   replot();
 }
 
