@@ -26,8 +26,10 @@
 #include <nlohmann/json.hpp>
 
 #include <qwt_plot_curve.h>
+#include <qwt_plot_legenditem.h>
 #include <qwt_plot_marker.h>
 #include <qwt_plot_textlabel.h>
+#include <qwt_scale_map.h>
 
 #include <QAction>
 #include <QApplication>
@@ -335,6 +337,18 @@ class TestCharts : public QObject {
       ++checked;
     }
     QVERIFY(checked >= 7);
+    // The legend inside the canvas covers no station.
+    chart.resize(900, 600);
+    chart.grab();
+    for (const QwtPlotItem* item : chart.itemList(QwtPlotItem::Rtti_PlotLegend)) {
+      const QRectF legend =
+          static_cast<const QwtPlotLegendItem*>(item)->geometry(chart.isobarLabels()->canvasRect());
+      for (const QwtPlotMarker* m : chart.markers()) {
+        const QPointF at(chart.canvasMap(QwtAxis::XBottom).transform(m->xValue()),
+                         chart.canvasMap(QwtAxis::YLeft).transform(m->yValue()));
+        QVERIFY2(!legend.contains(at), qPrintable("the legend covers station " + m->label().text()));
+      }
+    }
     // h3 in particular, the compressor's exit: the core's ht3.
     const QwtPlotMarker* three = nullptr;
     for (const QwtPlotMarker* m : chart.markers())
@@ -504,6 +518,34 @@ class TestCharts : public QObject {
         QVERIFY2(!labels[i].intersects(labels[j]), qPrintable(QString("values %1 and %2: ").arg(i).arg(j) +
                                                               describe(labels[i]) + describe(labels[j])));
     }
+  }
+
+  // The selection's band lies behind every line (cycle, closures, isobars, grid) and is
+  // translucent, on the light and the dark palette.
+  void selectionBandIsBehindTheLinesAndTranslucent() {
+    auto* app = qobject_cast<QApplication*>(QCoreApplication::instance());
+    const QPalette original = QApplication::palette();
+    for (const bool dark : {false, true}) {
+      if (dark) QVERIFY(applyPaletteNamed(*app, "dark"));
+      DisplayUnits units;
+      CycleChart chart(ChartKind::TemperatureEntropy, units);
+      chart.setEvaluation(demoEvaluation(), false);
+      chart.setHighlightedComponent("compressor");
+      const QwtPlotCurve* band = chart.highlightCurve();
+      QVERIFY(band->isVisible());
+      QVERIFY(band->pen().color().alpha() < 128);
+      int lines = 0;
+      for (const QwtPlotItem* item : chart.itemList()) {
+        const bool curve = item->rtti() == QwtPlotItem::Rtti_PlotCurve;
+        if (!curve && item->rtti() != QwtPlotItem::Rtti_PlotGrid) continue;
+        // The ideal cycle's band is the other one of the same width.
+        if (curve && static_cast<const QwtPlotCurve*>(item)->pen().widthF() == band->pen().widthF()) continue;
+        ++lines;
+        QVERIFY2(item->z() > band->z(), qPrintable(item->title().text()));
+      }
+      QVERIFY(lines >= 8);  // the cycle, its twin, two closures, the isobars, the grid
+    }
+    QApplication::setPalette(original);
   }
 
   // Export options: remembered per chart; a PNG on white (or transparent) at the chosen pixels

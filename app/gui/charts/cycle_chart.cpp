@@ -80,7 +80,11 @@ CycleChart::CycleChart(ChartKind kind, DisplayUnits& units, QWidget* parent)
   // The legend: inside the canvas of the temperature-entropy and enthalpy-entropy charts, in
   // the corner the cycle leaves free; below the pressure-volume chart, whose corners it fills.
   if (kind != ChartKind::PressureVolume) {
-    legendItem_ = makeLegendItem(Qt::AlignTop | Qt::AlignLeft, 1, 0.85);
+    // T-s: the top left; h-s: the bottom left (the compressor climbs to the top left there, the
+    // closures fall to the right).
+    legendItem_ = makeLegendItem(kind == ChartKind::TemperatureEntropy ? Qt::AlignTop | Qt::AlignLeft
+                                                                       : Qt::AlignBottom | Qt::AlignLeft,
+                                 1, 0.85);
     legendItem_->setMargin(4);
     legendItem_->setSpacing(2);
     legendItem_->attach(this);
@@ -101,8 +105,10 @@ CycleChart::CycleChart(ChartKind kind, DisplayUnits& units, QWidget* parent)
   };
   QPen highlightPen(kVermillion, 7.0);
   highlightPen.setCapStyle(Qt::RoundCap);
-  highlight_ = makeCurve(highlightPen, 15);
-  idealHighlight_ = makeCurve(highlightPen, 15);
+  // The selection's band lies behind every line, the isobars and the grid included, and is
+  // translucent, so that no line under it is hidden (on the dark canvas too).
+  highlight_ = makeCurve(highlightPen, 4);
+  idealHighlight_ = makeCurve(highlightPen, 4);
   idealHighlight_->setItemAttribute(QwtPlotItem::Legend, false);
   isobarLegend_ = makeCurve(QPen(Qt::gray, 1.0), 5);
   // The markers mix states (stations 0, 8, 9 static, 2 to 7 total); their entry says so.
@@ -452,7 +458,8 @@ void CycleChart::updateStalePens() {
   for (auto* c : {actual_, ideal_, actualClosure_, idealClosure_, highlight_, idealHighlight_}) {
     QPen pen = c->pen();
     QColor colour = pen.color();
-    colour.setAlpha(c == highlight_ || c == idealHighlight_ ? (stale ? 40 : 110) : alpha);
+    const int band = darkCanvas() ? 95 : 110;
+    colour.setAlpha(c == highlight_ || c == idealHighlight_ ? (stale ? 40 : band) : alpha);
     pen.setColor(colour);
     c->setPen(pen);
   }
