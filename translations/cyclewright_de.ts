@@ -943,8 +943,8 @@ kein Kreisprozess mit diesen Eingaben</translation>
         <translation>Enthalpie–Entropie</translation>
     </message>
     <message>
-        <source>Specific enthalpy h</source>
-        <translation>Spezifische Enthalpie h</translation>
+        <source>Sensible enthalpy h − h(298.15 K)</source>
+        <translation>Fühlbare Enthalpie h − h(298,15 K)</translation>
     </message>
     <message>
         <source>Cycle with losses</source>

@@ -80,11 +80,8 @@ CycleChart::CycleChart(ChartKind kind, DisplayUnits& units, QWidget* parent)
   // The legend: inside the canvas of the temperature-entropy and enthalpy-entropy charts, in
   // the corner the cycle leaves free; below the pressure-volume chart, whose corners it fills.
   if (kind != ChartKind::PressureVolume) {
-    // T-s: the top left; h-s: the bottom left (the compressor climbs to the top left there, the
-    // closures fall to the right).
-    legendItem_ = makeLegendItem(kind == ChartKind::TemperatureEntropy ? Qt::AlignTop | Qt::AlignLeft
-                                                                       : Qt::AlignBottom | Qt::AlignLeft,
-                                 1, 0.85);
+    // The top left on both: on the sensible enthalpy scale the h-s cycle has the T-s cycle's shape.
+    legendItem_ = makeLegendItem(Qt::AlignTop | Qt::AlignLeft, 1, 0.85);
     legendItem_->setMargin(4);
     legendItem_->setSpacing(2);
     legendItem_->attach(this);
@@ -196,7 +193,7 @@ StateValue CycleChart::yValue() const {
     case ChartKind::PressureVolume:
       return StateValue::Pressure;
     case ChartKind::EnthalpyEntropy:
-      return StateValue::Enthalpy;
+      return StateValue::SensibleEnthalpy;
   }
   return StateValue::Temperature;
 }
@@ -233,7 +230,8 @@ void CycleChart::retranslateUi() {
     setAxisTitle(
         QwtAxis::XBottom,
         units_.withUnit(tr("Specific entropy s (0 at the free-stream static state)"), Quantity::Entropy));
-    setAxisTitle(QwtAxis::YLeft, units_.withUnit(tr("Specific enthalpy h"), Quantity::SpecificEnergy));
+    setAxisTitle(QwtAxis::YLeft,
+                 units_.withUnit(tr("Sensible enthalpy h − h(298.15 K)"), Quantity::SpecificEnergy));
   } else {
     setTitle(tr("Pressure–volume"));
     setAxisTitle(QwtAxis::XBottom, units_.withUnit(tr("Specific volume v"), Quantity::SpecificVolume));
@@ -538,7 +536,7 @@ QString CycleChart::readoutAt(const QPoint& position) const {
     return QStringLiteral("%1 = %2\n%3 = %4")
         .arg(pv ? QStringLiteral("v") : QStringLiteral("s"), units_.format(x * xScale(), xQuantity(), 4),
              pv                                    ? QStringLiteral("p")
-             : kind_ == ChartKind::EnthalpyEntropy ? QStringLiteral("h")
+             : kind_ == ChartKind::EnthalpyEntropy ? QStringLiteral("h − h(298.15 K)")
                                                    : QStringLiteral("T"),
              units_.format(y * yScale(), yQuantity(), 4));
   }
@@ -554,7 +552,8 @@ QString CycleChart::readoutAt(const QPoint& position) const {
                units_.format(s.pressure, Quantity::Pressure, 5),
                units_.format(s.specificVolume, Quantity::SpecificVolume, 4));
   if (kind_ == ChartKind::EnthalpyEntropy)
-    text += QStringLiteral("\nh = %1").arg(units_.format(s.enthalpy, Quantity::SpecificEnergy, 5));
+    text += QStringLiteral("\nh − h(298.15 K) = %1")
+                .arg(units_.format(s.sensibleEnthalpy, Quantity::SpecificEnergy, 5));
   return text;
 }
 

@@ -35,8 +35,9 @@ namespace cw::gui {
 class IsobarLabels;
 class ReadoutPicker;
 
-/// The plane: T-s, p-v, or h-s (the turbomachinery engineer's view; h as the core gives it,
-/// absolute with the enthalpies of formation).
+/// The plane: T-s, p-v, or h-s (the turbomachinery engineer's view: the sensible enthalpy
+/// h - h(298.15 K) at each state's composition, as the core gives it, so that heat added shows as
+/// the rise it is and the compressor's and turbine's work as vertical distances).
 enum class ChartKind { TemperatureEntropy, PressureVolume, EnthalpyEntropy };
 
 class CycleChart : public ChartBase {
