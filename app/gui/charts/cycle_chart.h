@@ -19,6 +19,8 @@
 #include "charts/path_series.h"
 #include "document/units.h"
 
+#include <QStringList>
+
 #include <memory>
 #include <string>
 #include <vector>
@@ -79,6 +81,8 @@ class CycleChart : public ChartBase {
   const QwtPlotCurve* baselineCurve() const { return baselineCurve_; }
   /// The legend entry of the station markers, which says which are static and which total states.
   const QwtPlotCurve* stationLegendEntry() const { return stationLegend_; }
+  /// The legend entry that says where entropy is zero (T-s and h-s charts).
+  const QwtPlotCurve* entropyNoteEntry() const { return entropyNote_; }
   int isobarCount() const { return static_cast<int>(isobars_.size()); }
   int markerCount() const { return static_cast<int>(markers_.size()); }
   const std::vector<QwtPlotMarker*>& markers() const { return markers_; }
@@ -92,6 +96,7 @@ class CycleChart : public ChartBase {
   void beginExport(const ExportOptions& options) override;
   void endExport() override;
   bool hasResult() const override { return evaluation_ != nullptr; }
+  void updateLayout() override;
 
  private:
   /// Colours of the canvas, grid, legend and rubber band from the palette.
@@ -107,6 +112,8 @@ class CycleChart : public ChartBase {
   void updateStalePens();
   void rescale();
   void clearDynamicItems();
+  /// Each axis's title in full where it fits along the axis on one line, else its brief form.
+  void fitAxisTitles();
 
   ChartKind kind_;
   DisplayUnits& units_;
@@ -115,6 +122,7 @@ class CycleChart : public ChartBase {
   QString baselineTitle_;
   bool logAxes_ = false;
   std::string highlighted_;
+  QStringList xTitles_, yTitles_;  ///< each axis's title, in full first, then brief
 
   QwtPlotCurve* actual_ = nullptr;
   QwtPlotCurve* ideal_ = nullptr;
@@ -125,6 +133,7 @@ class CycleChart : public ChartBase {
   QwtPlotCurve* idealHighlight_ = nullptr;
   QwtPlotCurve* isobarLegend_ = nullptr;   ///< an empty curve carrying the isobars' legend entry
   QwtPlotCurve* stationLegend_ = nullptr;  ///< an empty curve: the stations' marker and states
+  QwtPlotCurve* entropyNote_ = nullptr;    ///< an empty curve: where s is zero (T-s, h-s)
   std::vector<QwtPlotCurve*> isobars_;
   std::vector<QwtPlotMarker*> markers_;
   IsobarLabels* isobarLabels_ = nullptr;
