@@ -996,6 +996,10 @@ p = %7   v = %8</source>
 T = %5   s = %6
 p = %7   v = %8</translation>
     </message>
+    <message>
+        <source>Baseline: %1</source>
+        <translation>Basis: %1</translation>
+    </message>
 </context>
 <context>
     <name>cw::gui::GuardedApplication</name>
@@ -1023,6 +1027,94 @@ p = %7   v = %8</translation>
         <translation>Als PNG exportieren</translation>
     </message>
     <message>
+        <source>Export as SVG</source>
+        <translation>Als SVG exportieren</translation>
+    </message>
+    <message>
+        <source>Export as PDF</source>
+        <translation>Als PDF exportieren</translation>
+    </message>
+    <message>
+        <source>White</source>
+        <translation>Weiß</translation>
+    </message>
+    <message>
+        <source>Transparent</source>
+        <translation>Transparent</translation>
+    </message>
+    <message>
+        <source>&amp;Background:</source>
+        <translation>Hinter&amp;grund:</translation>
+    </message>
+    <message>
+        <source>Show the selected component</source>
+        <translation>Die gewählte Komponente zeigen</translation>
+    </message>
+    <message>
+        <source>&amp;Selection:</source>
+        <translation>Aus&amp;wahl:</translation>
+    </message>
+    <message>
+        <source>The chart's own title</source>
+        <translation>Der eigene Titel des Diagramms</translation>
+    </message>
+    <message>
+        <source>&amp;Title:</source>
+        <translation>&amp;Titel:</translation>
+    </message>
+    <message>
+        <source>No subtitle</source>
+        <translation>Kein Untertitel</translation>
+    </message>
+    <message>
+        <source>None</source>
+        <translation>Keine</translation>
+    </message>
+    <message>
+        <source>Subt&amp;itle:</source>
+        <translation>&amp;Untertitel:</translation>
+    </message>
+    <message>
+        <source>As on screen</source>
+        <translation>Wie am Bildschirm</translation>
+    </message>
+    <message>
+        <source>Inside the plot</source>
+        <translation>Im Diagramm</translation>
+    </message>
+    <message>
+        <source>Outside, right</source>
+        <translation>Außen, rechts</translation>
+    </message>
+    <message>
+        <source>Below</source>
+        <translation>Darunter</translation>
+    </message>
+    <message>
+        <source>&amp;Legend:</source>
+        <translation>&amp;Legende:</translation>
+    </message>
+    <message>
+        <source> pt</source>
+        <translation> pt</translation>
+    </message>
+    <message>
+        <source>&amp;Font:</source>
+        <translation>&amp;Schrift:</translation>
+    </message>
+    <message>
+        <source>× </source>
+        <translation>× </translation>
+    </message>
+    <message>
+        <source>The lines' widths as on screen times this factor</source>
+        <translation>Die Linienbreiten wie am Bildschirm, mal diesem Faktor</translation>
+    </message>
+    <message>
+        <source>Li&amp;ne widths:</source>
+        <translation>Li&amp;nienbreiten:</translation>
+    </message>
+    <message>
         <source> px</source>
         <translation> px</translation>
     </message>
@@ -1045,6 +1137,26 @@ p = %7   v = %8</translation>
     <message>
         <source>&amp;Resolution:</source>
         <translation>&amp;Auflösung:</translation>
+    </message>
+    <message>
+        <source>mm</source>
+        <translation>mm</translation>
+    </message>
+    <message>
+        <source>in</source>
+        <translation>in</translation>
+    </message>
+    <message>
+        <source>&amp;Unit:</source>
+        <translation>&amp;Einheit:</translation>
+    </message>
+    <message>
+        <source> in</source>
+        <translation> in</translation>
+    </message>
+    <message>
+        <source> mm</source>
+        <translation> mm</translation>
     </message>
 </context>
 <context>

@@ -340,8 +340,7 @@ bool MainWindow::chartsInTabs() const {
 void MainWindow::arrangeCharts() {
   // Side by side as chosen while each chart shown there has its minimum width; in tabs when the
   // room is less (a dock beside them on a laptop screen), back side by side when it grows again.
-  const bool hsBeside = enthalpyEntropyBeside_ && enthalpyEntropyBeside_->isChecked();
-  const int beside = hsBeside ? 3 : 2;
+  const int beside = hsBeside() ? 3 : 2;
   const int sideBySideWidth = beside * kChartMinimum.width() + (beside - 1) * chartSplitter_->handleWidth();
   const bool narrow = chartHost_->isVisible() && chartHost_->width() < sideBySideWidth;
   const std::array<QWidget*, 3> charts{tsChart_, pvChart_, hsChart_};
@@ -364,7 +363,11 @@ void MainWindow::arrangeCharts() {
   }
   tsChart_->show();  // a chart that was on a hidden tab page stays hidden in the splitter
   pvChart_->show();
-  hsChart_->setVisible(hsBeside);
+  hsChart_->setVisible(hsBeside());
+}
+
+bool MainWindow::hsBeside() const {
+  return enthalpyEntropyBeside_ && enthalpyEntropyBeside_->isChecked();
 }
 
 bool MainWindow::eventFilter(QObject* watched, QEvent* event) {
@@ -475,6 +478,36 @@ void MainWindow::refreshResult() {
   updateBanner();
 }
 
+void MainWindow::refreshBaseline() {
+  const auto baseline = document_->baselineEvaluation();
+  stationModel_->setBaseline(baseline);
+  performanceModel_->setBaseline(baseline, document_->baselineTitle());
+  // The station table's difference from the baseline only while there is one.
+  const int baselineMode = static_cast<int>(TableMode::BaselineDifference);
+  if (auto* model = qobject_cast<QStandardItemModel*>(tableMode_->model()))
+    if (QStandardItem* item = model->item(baselineMode)) item->setEnabled(baseline != nullptr);
+  if (!baseline && tableMode_->currentIndex() == baselineMode) tableMode_->setCurrentIndex(0);
+  actions_->clearBaseline()->setEnabled(baseline != nullptr);
+  // The charts overlay the baseline's cycle with losses (grey, dash-dot-dot, with its title).
+  for (CycleChart* chart : {tsChart_, pvChart_, hsChart_})
+    chart->setBaseline(baseline, document_->baselineTitle());
+}
+
+void MainWindow::pinBaseline() {
+  if (document_->pinBaseline())
+    statusBar()->showMessage(tr("Baseline: %1").arg(document_->baselineTitle()));
+  else
+    statusBar()->showMessage(tr("There is no result to pin as the baseline."));
+}
+
+bool MainWindow::openBaseline(const QString& path, QString* error) {
+  return files_->openBaseline(path, error);
+}
+
+QString MainWindow::performanceTableText() const {
+  return performanceModel_->toTabSeparated();
+}
+
 int MainWindow::rowsHeight(const QTableView* view, int rows) {
   return view->horizontalHeader()->sizeHint().height() + rows * view->verticalHeader()->defaultSectionSize() +
          2 * view->frameWidth();
@@ -506,35 +539,6 @@ void MainWindow::fitTableRows() {
   const int total = vertical_->height() - vertical_->handleWidth();
   const int top = std::max(total - wanted, vertical_->widget(0)->minimumSizeHint().height());
   vertical_->setSizes({top, total - top});
-}
-
-void MainWindow::refreshBaseline() {
-  const auto baseline = document_->baselineEvaluation();
-  stationModel_->setBaseline(baseline);
-  performanceModel_->setBaseline(baseline, document_->baselineTitle());
-  // The station table's difference from the baseline only while there is one.
-  const int baselineMode = static_cast<int>(TableMode::BaselineDifference);
-  if (auto* model = qobject_cast<QStandardItemModel*>(tableMode_->model()))
-    if (QStandardItem* item = model->item(baselineMode)) item->setEnabled(baseline != nullptr);
-  if (!baseline && tableMode_->currentIndex() == baselineMode) tableMode_->setCurrentIndex(0);
-  actions_->clearBaseline()->setEnabled(baseline != nullptr);
-  // The hook for the charts' baseline overlay: CaseDocument::baselineChanged with
-  // baselineEvaluation() and baselineTitle() (a third line style, Okabe-Ito grey, dash-dot).
-}
-
-void MainWindow::pinBaseline() {
-  if (document_->pinBaseline())
-    statusBar()->showMessage(tr("Baseline: %1").arg(document_->baselineTitle()));
-  else
-    statusBar()->showMessage(tr("There is no result to pin as the baseline."));
-}
-
-bool MainWindow::openBaseline(const QString& path, QString* error) {
-  return files_->openBaseline(path, error);
-}
-
-QString MainWindow::performanceTableText() const {
-  return performanceModel_->toTabSeparated();
 }
 
 void MainWindow::updateBanner() {

@@ -175,6 +175,7 @@ class MainWindow : public QMainWindow {
   /// Puts the charts side by side or in tabs: as chosen, and in tabs while too narrow for two.
   void arrangeCharts();
   bool chartsInTabs() const;
+  bool hsBeside() const;  ///< the h-s chart shown beside the others (View menu)
   void updateBanner();
   /// The tables follow the document's baseline (columns, difference mode, action states).
   void refreshBaseline();

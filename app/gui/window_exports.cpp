@@ -7,6 +7,7 @@
 #include "charts/cycle_chart.h"
 #include "dialogs/dialogs.h"
 #include "document/case_document.h"
+#include "document/settings.h"
 #include "tables/station_table_model.h"
 #include "trade_study/study_panel.h"
 
@@ -87,22 +88,26 @@ bool WindowExports::studyJson(const QString& path) {
 }
 
 void WindowExports::chart(QwtPlot* chart, const QString& base, const QString& format) {
-  QSize pixels;
-  int dpi = 0;
+  // The options last used for this chart; the title is the case's, the subtitle the chart's own.
+  AppSettings settings;
+  ExportOptions options = settings.exportOptions(base);
+  options.title = QString::fromStdString(window_.document().currentCase().title);
+  options.subtitle = chart->title().text();
+  ImageExportDialog dialog(format, options, &window_);
+  if (dialog.exec() != QDialog::Accepted) return;
+  options = dialog.options();
+  ExportOptions remembered = options;
+  remembered.title.clear();
+  remembered.subtitle.clear();
+  settings.setExportOptions(base, remembered);
   const bool png = format == QLatin1String("png");
-  if (png) {
-    ImageExportDialog dialog(&window_);
-    if (dialog.exec() != QDialog::Accepted) return;
-    pixels = dialog.pixels();
-    dpi = dialog.dotsPerInch();
-  }
   const QString filter = png                              ? tr("PNG images (*.png)")
                          : format == QLatin1String("svg") ? tr("SVG drawings (*.svg)")
                                                           : tr("PDF documents (*.pdf)");
   const QString path = askForFile(tr("Export Chart"), base + QLatin1Char('.') + format, filter);
   if (path.isEmpty()) return;
-  const bool ok = png ? exportChartPng(chart, path, pixels, dpi)
-                      : exportChartDocument(chart, path, format, QSizeF(180.0, 120.0));
+  const bool ok =
+      png ? exportChartPng(chart, path, options) : exportChartDocument(chart, path, format, options);
   showStatus(ok ? tr("Exported %1").arg(path) : tr("Cannot write %1").arg(path));
 }
 

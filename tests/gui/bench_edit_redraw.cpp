@@ -1,5 +1,6 @@
 // One edit-to-redraw cycle: a compressor-efficiency edit as the user types it, one evaluation,
-// both charts replotted and the station table and summary repainted. Goal: under 16 ms.
+// both charts replotted and the station table and summary repainted. Goal: under 16 ms, also
+// with a baseline pinned (its overlay on the charts, its columns in the summary).
 #include "charts/cycle_chart.h"
 #include "document/case_document.h"
 #include "main_window.h"
@@ -14,7 +15,14 @@ class BenchEditRedraw : public QObject {
   Q_OBJECT
 
  private slots:
+  void editToRedraw_data() {
+    QTest::addColumn<bool>("baseline");
+    QTest::newRow("alone") << false;
+    QTest::newRow("with baseline") << true;
+  }
+
   void editToRedraw() {
+    QFETCH(bool, baseline);
     QLocale::setDefault(QLocale::c());
     cw::gui::MainWindow window;
     QVERIFY(window.openCase(":/demo/demo-turbojet.json"));
@@ -25,6 +33,7 @@ class BenchEditRedraw : public QObject {
     auto* stations = window.findChild<QTableView*>("stationTable");
     auto* summary = window.findChild<QTableView*>("performanceTable");
     QVERIFY(field && stations && summary);
+    if (baseline) QVERIFY(window.document().pinBaseline());
     int k = 0;
     QBENCHMARK {
       const QString text = (k++ % 2) ? QStringLiteral("0.85") : QStringLiteral("0.86");

@@ -2,6 +2,7 @@
 // performance table's "Baseline" and "Change from baseline" columns and the station table's
 // difference from the baseline equal the core's results of the two cases (each evaluated here
 // with cw::engine::evaluateCase) to 1e-12; the exports carry them.
+#include "charts/cycle_chart.h"
 #include "document/case_document.h"
 #include "gui_test_support.h"
 #include "main_window.h"
@@ -11,8 +12,12 @@
 #include "engine/evaluate.h"
 #include "io/case_file.h"
 
+#include <qwt_plot_curve.h>
+#include <qwt_text.h>
+
 #include <QComboBox>
 #include <QFile>
+#include <QPen>
 #include <QSignalSpy>
 #include <QTemporaryDir>
 #include <QTest>
@@ -107,6 +112,30 @@ class TestBaseline : public QObject {
     checkAgainstCore(window, cw::engine::evaluateCase(variant), cw::engine::evaluateCase(demoCase()));
     if (QTest::currentTestFailed()) return;
 
+    // The charts overlay the baseline's cycle with losses: its states, in T-s (SI on screen).
+    const cw::engine::Evaluation base = cw::engine::evaluateCase(demoCase());
+    const QwtPlotCurve* overlay = window.temperatureEntropyChart()->baselineCurve();
+    std::vector<QPointF> wanted;
+    for (const auto& path : base.actual.paths)
+      if (!path.closure)
+        for (const auto& st : path.states) wanted.push_back({st.entropy, st.temperature});
+    QCOMPARE(overlay->dataSize(), wanted.size());
+    for (size_t i = 0; i < wanted.size(); ++i) {
+      QVERIFY(near(overlay->sample(i).x(), wanted[i].x()));
+      QVERIFY(near(overlay->sample(i).y(), wanted[i].y()));
+    }
+    // "Baseline: " and the title, cut to 32 characters for the legend.
+    QVERIFY2(overlay->title().text().startsWith("Baseline: " + window.document().baselineTitle().left(31)),
+             qPrintable(overlay->title().text()));
+    QVERIFY(overlay->title().text().size() <= QStringLiteral("Baseline: ").size() + 32);
+    QVERIFY(overlay->testItemAttribute(QwtPlotItem::Legend));
+    QCOMPARE(overlay->pen().color(), QColor(0x99, 0x99, 0x99));
+    QVERIFY(overlay->pen().style() != window.temperatureEntropyChart()->actualCurve()->pen().style());
+    QVERIFY(overlay->pen().style() != window.temperatureEntropyChart()->idealCurve()->pen().style());
+    QVERIFY(overlay->pen().style() != window.temperatureEntropyChart()->actualClosureCurve()->pen().style());
+    QVERIFY(window.pressureVolumeChart()->baselineCurve()->dataSize() > 0);
+    QVERIFY(window.enthalpyEntropyChart()->baselineCurve()->dataSize() > 0);
+
     // The exports carry the comparison: the station CSV of the difference from the baseline.
     QTemporaryDir dir;
     const QString csv = dir.filePath("stations.csv");
@@ -130,6 +159,8 @@ class TestBaseline : public QObject {
     window.document().clearBaseline();
     QCOMPARE(window.performanceModel()->columnCount(), P::kColumnsWithoutBaseline);
     QCOMPARE(window.stationModel()->mode(), cw::gui::TableMode::Actual);
+    QCOMPARE(window.temperatureEntropyChart()->baselineCurve()->dataSize(), size_t(0));
+    QVERIFY(!window.temperatureEntropyChart()->baselineCurve()->testItemAttribute(QwtPlotItem::Legend));
   }
 
   void openedBaselineFromASavedCase() {

@@ -9,6 +9,8 @@
 #include "charts/label_placer.h"
 #include "charts/line_end_labels.h"
 #include "charts/readout_picker.h"
+#include "dialogs/dialogs.h"
+#include "document/settings.h"
 #include "document/units.h"
 #include "gui_test_support.h"
 #include "main_window.h"
@@ -29,7 +31,9 @@
 
 #include <QAction>
 #include <QApplication>
+#include <QComboBox>
 #include <QDir>
+#include <QDoubleSpinBox>
 #include <QFile>
 #include <QFontMetricsF>
 #include <QImage>
@@ -500,6 +504,110 @@ class TestCharts : public QObject {
         QVERIFY2(!labels[i].intersects(labels[j]), qPrintable(QString("values %1 and %2: ").arg(i).arg(j) +
                                                               describe(labels[i]) + describe(labels[j])));
     }
+  }
+
+  // Export options: remembered per chart; a PNG on white (or transparent) at the chosen pixels
+  // and resolution; the selection off by default; the SVG with the title, subtitle and the
+  // caution; the legend where asked and back as shown afterwards.
+  void exportOptionsShapeTheFigure() {
+    {
+      AppSettings settings;
+      ExportOptions options;
+      options.transparent = true;
+      options.legend = LegendPlacement::OutsideRight;
+      options.paperUnit = PaperUnit::Inches;
+      options.paperSize = QSizeF(7.0, 5.0);
+      options.lineWidthScale = 1.5;
+      settings.setExportOptions("pressure-volume", options);
+      const ExportOptions back = settings.exportOptions("pressure-volume");
+      QVERIFY(back.transparent);
+      QCOMPARE(back.legend, LegendPlacement::OutsideRight);
+      QCOMPARE(back.paperUnit, PaperUnit::Inches);
+      QCOMPARE(back.millimetres(), QSizeF(177.8, 127.0));
+      QCOMPARE(back.lineWidthScale, 1.5);
+      QVERIFY(!settings.exportOptions("temperature-entropy").transparent);  // per chart
+    }
+    DisplayUnits units;
+    CycleChart chart(ChartKind::PressureVolume, units);
+    chart.resize(800, 560);
+    chart.setEvaluation(demoEvaluation(), false);
+    chart.setHighlightedComponent("compressor");
+    QVERIFY(chart.highlightCurve()->isVisible());
+    ExportOptions options;
+    options.pixels = QSize(1000, 700);
+    options.dotsPerInch = 150;
+    const QImage white = renderChartImage(&chart, options);
+    QCOMPARE(white.size(), QSize(1000, 700));
+    QCOMPARE(white.dotsPerMeterX(), qRound(150 / 0.0254));
+    QCOMPARE(white.pixelColor(2, 2), QColor(Qt::white));
+    QVERIFY(chart.highlightCurve()->isVisible());  // back on screen
+    QVERIFY(chart.legend());                       // the legend below, as shown
+    // The selection: off by default, on when asked (vermillion pixels of the band).
+    auto vermillion = [](const QImage& image) {
+      int n = 0;
+      for (int y = 0; y < image.height(); y += 2)
+        for (int x = 0; x < image.width(); x += 2) {
+          const QColor c = image.pixelColor(x, y);
+          n += c.red() > 200 && c.green() > 120 && c.green() < 200 && c.blue() < 150 ? 1 : 0;
+        }
+      return n;
+    };
+    options.selectionHighlight = true;
+    const QImage selected = renderChartImage(&chart, options);
+    QVERIFY2(vermillion(selected) > vermillion(white) + 50,
+             qPrintable(QString("%1 against %2").arg(vermillion(selected)).arg(vermillion(white))));
+    options.selectionHighlight = false;
+    options.transparent = true;
+    const QImage clear = renderChartImage(&chart, options);
+    QCOMPARE(clear.pixelColor(2, 2).alpha(), 0);
+    saveFigure(clear, "pv-transparent");
+    // SVG: the title, the subtitle and the caution line; no legend when asked for none.
+    QTemporaryDir dir;
+    ExportOptions vector;
+    vector.title = "Review figure A";
+    vector.subtitle = "Demo & variant";
+    vector.legend = LegendPlacement::None;
+    vector.paperUnit = PaperUnit::Inches;
+    vector.paperSize = QSizeF(7.0, 5.0);
+    const QString svg = dir.filePath("pv.svg");
+    QVERIFY(exportChartDocument(&chart, svg, "svg", vector));
+    QFile file(svg);
+    QVERIFY(file.open(QIODevice::ReadOnly));
+    const QString text = QString::fromUtf8(file.readAll());
+    QVERIFY(text.contains("Review figure A"));
+    QVERIFY(text.contains("Demo &amp; variant"));
+    QVERIFY(text.contains("Results are conceptual-design estimates"));
+    QVERIFY(!text.contains("Isobars through station pressures"));  // no legend
+    // 7 x 5 in at the renderer's 85 dpi.
+    QVERIFY2(text.contains("viewBox=\"0 0 595 425\""), qPrintable(text.left(400)));
+    QVERIFY(chart.legend());  // the legend back as shown
+    QCOMPARE(chart.title().text(), QString("Pressure–volume"));
+  }
+
+  // The export dialog (the image-export dialog, extended) starts from the options given and
+  // returns what is shown; switching mm to inches keeps the size on paper.
+  void exportDialogKeepsTheOptions() {
+    ExportOptions given;
+    given.transparent = true;
+    given.legend = LegendPlacement::Below;
+    given.title = "Case A";
+    given.paperSize = QSizeF(254.0, 127.0);
+    ImageExportDialog dialog("pdf", given);
+    ExportOptions shown = dialog.options();
+    QVERIFY(shown.transparent);
+    QCOMPARE(shown.legend, LegendPlacement::Below);
+    QCOMPARE(shown.title, QString("Case A"));
+    QVERIFY(!shown.selectionHighlight);
+    QCOMPARE(shown.millimetres(), QSizeF(254.0, 127.0));
+    dialog.findChild<QComboBox*>("exportPaperUnit")->setCurrentIndex(1);
+    shown = dialog.options();
+    QCOMPARE(shown.paperUnit, PaperUnit::Inches);
+    QVERIFY(std::abs(dialog.findChild<QDoubleSpinBox*>("exportPaperWidth")->value() - 10.0) < 1e-9);
+    QVERIFY(std::abs(shown.millimetres().width() - 254.0) < 1e-9);
+    ImageExportDialog png("png", ExportOptions());
+    QCOMPARE(png.pixels(), QSize(2400, 1600));
+    QCOMPARE(png.dotsPerInch(), 200);
+    QVERIFY(!png.options().transparent);
   }
 };
 

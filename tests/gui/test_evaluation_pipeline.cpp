@@ -4,6 +4,7 @@
 // rewrites its widgets on an edit.
 #include "audit/audit_chart.h"
 #include "audit/audit_panel.h"
+#include "charts/chart_export.h"
 #include "document/case_auditor.h"
 #include "document/case_document.h"
 #include "document/selection_router.h"
@@ -17,6 +18,7 @@
 #include <QFile>
 #include <QLineEdit>
 #include <QSignalSpy>
+#include <QTemporaryDir>
 #include <QTest>
 #include <QUndoStack>
 
@@ -94,6 +96,18 @@ class TestEvaluationPipeline : public QObject {
     window.auditPanel()->setOrder({QStringLiteral("turbine_efficiency")});
     QCOMPARE(window.document().auditOrder(), QStringList{QStringLiteral("turbine_efficiency")});
     QCOMPARE(window.auditPanel()->audit(), window.document().audit());
+    QCOMPARE(window.auditPanel()->chart()->bars()[1].loss, std::string("turbine_efficiency"));
+    // The names under the bars follow the order (the scale's label cache is renewed): in the
+    // drawing, the turbine's name now comes before the inlet's.
+    QTemporaryDir dir;
+    const QString svg = dir.filePath("audit.svg");
+    QVERIFY(cw::gui::exportChartDocument(window.auditPanel()->chart(), svg, "svg", QSizeF(180.0, 120.0)));
+    QFile file(svg);
+    QVERIFY(file.open(QIODevice::ReadOnly));
+    const QByteArray drawing = file.readAll();
+    const qsizetype turbine = drawing.indexOf(">Turbine<"), inlet = drawing.indexOf(">Inlet<");
+    QVERIFY(turbine >= 0 && inlet >= 0);
+    QVERIFY(turbine < inlet);
   }
 
   void onlyTheVisibleFormRefreshes() {

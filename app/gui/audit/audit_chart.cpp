@@ -11,6 +11,7 @@
 #include <qwt_scale_div.h>
 #include <qwt_scale_draw.h>
 #include <qwt_scale_map.h>
+#include <qwt_scale_widget.h>
 #include <qwt_text.h>
 
 #include <QCoreApplication>
@@ -93,7 +94,8 @@ class AuditChart::WaterfallItem : public QwtPlotItem {
         const bool costs = tsfc ? step > 0.0 : step < 0.0;
         fill = std::abs(step) <= 1e-9 * std::abs(bar.to) ? chart_.between(0.5) : costs ? kVermillion : kGreen;
       }
-      const bool selected = !total && lossSection(bar.loss) == chart_.highlighted_;
+      const bool selected =
+          !total && !chart_.exportingWithoutSelection_ && lossSection(bar.loss) == chart_.highlighted_;
       painter->setPen(selected ? QPen(p.color(QPalette::Text), 2.5) : QPen(fill.darker(130), 1.0));
       painter->setBrush(fill);
       painter->drawRect(r.height() < 1.0 ? r.adjusted(0, -0.5, 0, 0.5) : r);
@@ -183,6 +185,19 @@ double AuditChart::figureFactor() const {
   return units_.factor(figure_ == AuditFigure::Tsfc ? Quantity::Tsfc : Quantity::SpecificThrust);
 }
 
+void AuditChart::refresh() {
+  retranslateUi();
+  rebuild();
+}
+
+void AuditChart::beginExport(const ExportOptions& options) {
+  exportingWithoutSelection_ = !options.selectionHighlight;
+}
+
+void AuditChart::endExport() {
+  exportingWithoutSelection_ = false;
+}
+
 void AuditChart::paletteChanged() {
   retranslateUi();
   replot();
@@ -262,6 +277,11 @@ void AuditChart::rebuild() {
   for (size_t i = 0; i < bars_.size(); ++i) ticks << static_cast<double>(i);
   const double n = static_cast<double>(std::max<size_t>(bars_.size(), 1));
   setAxisScaleDiv(QwtAxis::XBottom, QwtScaleDiv(-0.6, n - 0.4, QList<double>(), QList<double>(), ticks));
+  // The ticks stay at 0..n while the losses under them change (another order, another case):
+  // the scale draw's cached labels must go, or the names would stay those of the first audit.
+  axisScaleDraw(QwtAxis::XBottom)->invalidateCache();
+  axisWidget(QwtAxis::XBottom)->updateGeometry();
+  axisWidget(QwtAxis::XBottom)->update();
   replot();
 }
 

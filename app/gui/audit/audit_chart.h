@@ -60,6 +60,9 @@ class AuditChart : public ChartBase {
  protected:
   void resizeEvent(QResizeEvent* event) override;
   void paletteChanged() override;
+  void refresh() override;
+  void beginExport(const ExportOptions& options) override;
+  void endExport() override;
   bool hasResult() const override { return audit_ != nullptr; }
   bool eventFilter(QObject* object, QEvent* event) override;
 
@@ -72,6 +75,7 @@ class AuditChart : public ChartBase {
   std::shared_ptr<const analysis::LossAudit> audit_;
   AuditFigure figure_ = AuditFigure::SpecificThrust;
   Section highlighted_ = Section::Case;
+  bool exportingWithoutSelection_ = false;
   std::vector<Bar> bars_;
   WaterfallItem* item_ = nullptr;
 };

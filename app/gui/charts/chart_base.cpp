@@ -6,12 +6,16 @@
 
 #include <qwt_legend.h>
 #include <qwt_plot_canvas.h>
+#include <qwt_plot_curve.h>
 #include <qwt_plot_grid.h>
+#include <qwt_plot_layout.h>
 #include <qwt_plot_legenditem.h>
 #include <qwt_plot_textlabel.h>
 
 #include <QEvent>
+
 #include <QPen>
+#include <algorithm>
 
 namespace cw::gui {
 
@@ -116,6 +120,25 @@ void ChartBase::changeEvent(QEvent* event) {
   applyingPalette_ = false;
 }
 
+namespace {
+
+/// The layout of an exported figure: the caution line below the legend (a plain layout puts the
+/// footer between the canvas and a legend below it).
+class CautionBelowLegendLayout : public QwtPlotLayout {
+ public:
+  void activate(const QwtPlot* plot, const QRectF& rect, Options options) override {
+    QwtPlotLayout::activate(plot, rect, options);
+    const QRectF footer = footerRect(), legend = legendRect();
+    if (footer.isEmpty() || legend.isEmpty() || legend.top() < footer.top()) return;
+    const double top = footer.top();
+    setLegendRect(QRectF(legend.left(), top, legend.width(), legend.height()));
+    setFooterRect(QRectF(footer.left(), legend.bottom() - footer.height() + (top - footer.top()),
+                         footer.width(), footer.height()));
+  }
+};
+
+}  // namespace
+
 QPalette ExportScope::exportPalette() {
   QPalette p;
   const QColor white(Qt::white), ink(0x1a, 0x1a, 0x1a);
@@ -133,12 +156,38 @@ QPalette ExportScope::exportPalette() {
   return p;
 }
 
-ExportScope::ExportScope(QwtPlot* plot)
+ExportScope::ExportScope(QwtPlot* plot, const ExportOptions& options)
     : plot_(plot),
       chart_(qobject_cast<ChartBase*>(plot)),
+      options_(options),
       palette_(plot->palette()),
-      ownPalette_(plot->testAttribute(Qt::WA_SetPalette)) {
+      ownPalette_(plot->testAttribute(Qt::WA_SetPalette)),
+      font_(plot->font()),
+      ownFont_(plot->testAttribute(Qt::WA_SetFont)) {
+  if (!options_.fontFamily.isEmpty() || options_.fontPointSize > 0.0) {
+    QFont font = plot_->font();
+    if (!options_.fontFamily.isEmpty()) font.setFamily(options_.fontFamily);
+    if (options_.fontPointSize > 0.0) font.setPointSizeF(options_.fontPointSize);
+    plot_->setFont(font);
+  }
   plot_->setPalette(exportPalette());
+  if (chart_) chart_->refresh();
+  placeLegend(options_.legend);
+  // The title and subtitle (rich text: the subtitle a line of its own, smaller).
+  if (!options_.title.isEmpty() || !options_.subtitle.isEmpty()) {
+    const QString title = options_.title.isEmpty() ? plot_->title().text() : options_.title;
+    QString html = QStringLiteral("<div align=\"center\"><b>%1</b>").arg(title.toHtmlEscaped());
+    if (!options_.subtitle.isEmpty())
+      html += QStringLiteral("<br/><span style=\"font-size:small; font-weight:normal\">%1</span>")
+                  .arg(options_.subtitle.toHtmlEscaped());
+    html += QStringLiteral("</div>");
+    QwtText text(html, QwtText::RichText);
+    QFont titleFont = plot_->font();
+    titleFont.setPointSizeF(titleFont.pointSizeF() * 1.15);
+    text.setFont(titleFont);
+    plot_->setTitle(text);
+  }
+  // The caution: below the legend, small.
   QwtText footer(cautionText());
   QFont font = plot_->font();
   font.setPointSizeF(font.pointSizeF() * 0.75);
@@ -146,20 +195,111 @@ ExportScope::ExportScope(QwtPlot* plot)
   footer.setFont(font);
   footer.setRenderFlags(Qt::AlignCenter | Qt::TextWordWrap);
   plot_->setFooter(footer);
-  if (chart_) chart_->beginExport();
+  layoutBefore_ = plot_->plotLayout()->legendPosition();
+  plot_->setPlotLayout(new CautionBelowLegendLayout);
+  plot_->plotLayout()->setLegendPosition(layoutBefore_);
+  if (chart_) chart_->beginExport(options_);
+  if (options_.lineWidthScale != 1.0) scaleLines(options_.lineWidthScale);
   plot_->replot();
 }
 
 ExportScope::~ExportScope() {
   if (chart_) chart_->endExport();
+  // Pens back on the items still there (the refresh below rebuilds the others).
+  const QwtPlotItemList items = plot_->itemList();
+  for (const auto& [item, pen] : pens_)
+    if (items.contains(item) && item->rtti() == QwtPlotItem::Rtti_PlotCurve)
+      static_cast<QwtPlotCurve*>(item)->setPen(pen);
   plot_->setFooter(QwtText());
+  const QwtPlot::LegendPosition position = plot_->plotLayout()->legendPosition();
+  plot_->setPlotLayout(new QwtPlotLayout);
+  plot_->plotLayout()->setLegendPosition(position);
+  if (ownFont_)
+    plot_->setFont(font_);
+  else {
+    plot_->setFont(QFont());
+    plot_->setAttribute(Qt::WA_SetFont, false);
+  }
+  restoreLegend();
   if (ownPalette_)
     plot_->setPalette(palette_);
   else {
     plot_->setPalette(QPalette());
     plot_->setAttribute(Qt::WA_SetPalette, false);
   }
+  if (chart_) chart_->refresh();
   plot_->replot();
+}
+
+void ExportScope::scaleLines(double factor) {
+  for (QwtPlotItem* item : plot_->itemList(QwtPlotItem::Rtti_PlotCurve)) {
+    auto* curve = static_cast<QwtPlotCurve*>(item);
+    pens_.emplace_back(item, curve->pen());
+    QPen pen = curve->pen();
+    pen.setWidthF(std::max(0.5, pen.widthF() * factor));
+    curve->setPen(pen);
+  }
+}
+
+void ExportScope::placeLegend(LegendPlacement placement) {
+  if (placement == LegendPlacement::AsShown) return;
+  if (auto* outer = qobject_cast<QwtLegend*>(plot_->legend())) {
+    hadOuterLegend_ = true;
+    outerPosition_ = plot_->plotLayout()->legendPosition();
+    outerColumns_ = static_cast<int>(outer->maxColumns());
+    outerName_ = outer->objectName();
+  }
+  plot_->insertLegend(nullptr);
+  for (QwtPlotItem* item : plot_->itemList(QwtPlotItem::Rtti_PlotLegend)) {
+    auto* legend = static_cast<QwtPlotLegendItem*>(item);
+    attachedItems_.push_back(legend);
+    legend->detach();
+  }
+  switch (placement) {
+    case LegendPlacement::Inside:
+      if (!attachedItems_.empty()) {
+        attachedItems_.front()->attach(plot_);
+      } else if (chart_) {
+        extraItem_ = chart_->makeLegendItem(Qt::AlignTop | Qt::AlignRight, 1, 0.85);
+        extraItem_->attach(plot_);
+      }
+      break;
+    case LegendPlacement::OutsideRight:
+    case LegendPlacement::Below: {
+      const bool right = placement == LegendPlacement::OutsideRight;
+      auto* legend = new QwtLegend;
+      legend->setMaxColumns(right ? 1 : 3);
+      QFont legendFont = plot_->font();
+      legendFont.setPointSizeF(legendFont.pointSizeF() * 0.85);
+      legend->setFont(legendFont);
+      plot_->insertLegend(legend, right ? QwtPlot::RightLegend : QwtPlot::BottomLegend);
+      break;
+    }
+    case LegendPlacement::AsShown:
+    case LegendPlacement::None:
+      break;
+  }
+}
+
+void ExportScope::restoreLegend() {
+  if (options_.legend == LegendPlacement::AsShown) return;
+  plot_->insertLegend(nullptr);
+  for (QwtPlotItem* item : plot_->itemList(QwtPlotItem::Rtti_PlotLegend)) item->detach();
+  if (extraItem_) {
+    auto& items = chart_->legendItems_;
+    items.erase(std::remove(items.begin(), items.end(), extraItem_), items.end());
+    delete extraItem_;
+  }
+  for (QwtPlotLegendItem* legend : attachedItems_) legend->attach(plot_);
+  if (hadOuterLegend_) {
+    auto* legend = new QwtLegend;
+    legend->setMaxColumns(static_cast<uint>(outerColumns_));
+    legend->setObjectName(outerName_);
+    QFont legendFont = plot_->font();
+    legendFont.setPointSizeF(legendFont.pointSizeF() * 0.85);
+    legend->setFont(legendFont);
+    plot_->insertLegend(legend, outerPosition_);
+  }
 }
 
 }  // namespace cw::gui

@@ -11,16 +11,21 @@
 //             the caution line as the footer; the chart's beginExport() / endExport() hide what
 //             belongs on screen only.
 
+#include "document/export_options.h"
+
 #include <qwt_plot.h>
 #include <qwt_text.h>
 
 #include <QColor>
+#include <QFont>
 #include <QPalette>
+#include <QPen>
 
 #include <vector>
 
 class QwtLegend;
 class QwtPlotGrid;
+class QwtPlotItem;
 class QwtPlotLegendItem;
 class QwtPlotTextLabel;
 
@@ -41,9 +46,13 @@ class ChartBase : public QwtPlot {
   /// True when the canvas is dark (the dark palette).
   bool darkCanvas() const;
 
-  /// Called by ExportScope around an export; the default does nothing.
-  virtual void beginExport() {}
+  /// Called by ExportScope around an export, after the chart is redrawn in the export's palette
+  /// and font: hide what belongs on screen only (the selection, unless asked for). The default
+  /// does nothing.
+  virtual void beginExport(const ExportOptions& options) { Q_UNUSED(options); }
   virtual void endExport() {}
+  /// Rebuilds every item from the chart's data in the current palette, font and language.
+  virtual void refresh() { replot(); }
 
   // For tests.
   const QwtPlotTextLabel* staleBanner() const { return staleLabel_; }
@@ -90,13 +99,15 @@ class ChartBase : public QwtPlot {
   QwtPlotGrid* grid_ = nullptr;
   QwtPlotTextLabel* staleLabel_ = nullptr;
   std::vector<QwtPlotLegendItem*> legendItems_;  ///< styled on every palette change (not owned)
+
+  friend class ExportScope;
 };
 
 /// For its lifetime: the chart in a light palette on white with the caution line as its footer,
 /// and the chart's beginExport() / endExport() around it. Every export goes through one.
 class ExportScope {
  public:
-  explicit ExportScope(QwtPlot* plot);
+  explicit ExportScope(QwtPlot* plot, const ExportOptions& options = {});
   ~ExportScope();
   ExportScope(const ExportScope&) = delete;
   ExportScope& operator=(const ExportScope&) = delete;
@@ -105,10 +116,26 @@ class ExportScope {
   static QPalette exportPalette();
 
  private:
+  void placeLegend(LegendPlacement placement);
+  void restoreLegend();
+  void scaleLines(double factor);
+
   QwtPlot* plot_;
   ChartBase* chart_;
+  ExportOptions options_;
   QPalette palette_;
   bool ownPalette_;
+  QFont font_;
+  bool ownFont_;
+  // The legend as shown, to put back.
+  bool hadOuterLegend_ = false;
+  QwtPlot::LegendPosition outerPosition_ = QwtPlot::BottomLegend;
+  int outerColumns_ = 1;
+  QString outerName_;
+  std::vector<QwtPlotLegendItem*> attachedItems_;
+  QwtPlotLegendItem* extraItem_ = nullptr;  ///< an inside legend for a chart that has none
+  QwtPlot::LegendPosition layoutBefore_ = QwtPlot::BottomLegend;
+  std::vector<std::pair<QwtPlotItem*, QPen>> pens_;
 };
 
 }  // namespace cw::gui

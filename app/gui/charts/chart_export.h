@@ -4,6 +4,8 @@
 // white in a light palette, the caution as the chart's footer.
 // No dialogs here, so tests call these directly.
 
+#include "document/export_options.h"
+
 #include <QImage>
 #include <QSize>
 #include <QSizeF>
@@ -22,5 +24,12 @@ bool exportChartPng(QwtPlot* plot, const QString& fileName, QSize pixels, int do
 /// Writes an SVG or PDF (by format "svg" or "pdf") of the given size [mm] at 85 dpi for
 /// raster parts. False when the file cannot be written.
 bool exportChartDocument(QwtPlot* plot, const QString& fileName, const QString& format, QSizeF millimetres);
+
+/// The same with the export's options (background, selection, title, legend, font, lines; the
+/// PNG's pixels and resolution, the document's size from the options).
+QImage renderChartImage(QwtPlot* plot, const ExportOptions& options);
+bool exportChartPng(QwtPlot* plot, const QString& fileName, const ExportOptions& options);
+bool exportChartDocument(QwtPlot* plot, const QString& fileName, const QString& format,
+                         const ExportOptions& options);
 
 }  // namespace cw::gui

@@ -13,6 +13,7 @@ inline const QColor kOkabeItoVermillion(0xD5, 0x5E, 0x00);     ///< selection, s
 inline const QColor kOkabeItoGreen(0x00, 0x9E, 0x73);          ///< bluish green: losses that gain
 inline const QColor kOkabeItoReddishPurple(0xCC, 0x79, 0xA7);  ///< a trade study's second loss level
 inline const QColor kOkabeItoYellow(0xF0, 0xE4, 0x42);         ///< a trade study's design point marker
+inline const QColor kOkabeItoGrey(0x99, 0x99, 0x99);           ///< the baseline's cycle (neutral)
 
 /// The colour a fraction t of the way from a to b (t = 0 gives a, 1 gives b).
 inline QColor mixColours(const QColor& a, const QColor& b, double t) {

@@ -37,6 +37,7 @@ namespace {
 // The Okabe-Ito palette (colours.h), under this file's short names.
 const QColor& kBlue = kOkabeItoBlue;
 const QColor& kOrange = kOkabeItoOrange;
+constexpr qsizetype kBaselineTitleChars = 32;  ///< of the baseline's title in the legend
 const QColor& kVermillion = kOkabeItoVermillion;
 
 QColor between(const QPalette& palette, double t) {
@@ -114,6 +115,10 @@ CycleChart::CycleChart(ChartKind kind, DisplayUnits& units, QWidget* parent)
   ideal_ = makeCurve(idealPen, 19);
   actual_ = makeCurve(QPen(kBlue, 2.0, Qt::SolidLine), 20);
   ideal_->setSymbol(new QwtSymbol(QwtSymbol::NoSymbol));
+  // The baseline under both: neutral grey, dash-dot-dot (the closure with losses is dash-dot
+  // already), in the legend only while there is one.
+  baselineCurve_ = makeCurve(QPen(kOkabeItoGrey, 2.0, Qt::DashDotDotLine), 17);
+  baselineCurve_->setItemAttribute(QwtPlotItem::Legend, false);
 
   isobarLabels_ = new IsobarLabels;
   isobarLabels_->setLegend(legendItem_);
@@ -149,6 +154,26 @@ void CycleChart::paletteChanged() {
   applyPalette();
   retranslateUi();
   rebuild();
+}
+
+void CycleChart::refresh() {
+  applyPalette();
+  retranslateUi();
+  rebuild();
+}
+
+void CycleChart::beginExport(const ExportOptions& options) {
+  // The selection belongs on screen; a figure shows it only when asked to.
+  if (!options.selectionHighlight) {
+    highlight_->setVisible(false);
+    idealHighlight_->setVisible(false);
+    highlight_->setItemAttribute(QwtPlotItem::Legend, false);
+  }
+}
+
+void CycleChart::endExport() {
+  highlight_->setItemAttribute(QwtPlotItem::Legend, true);
+  updateHighlight();
 }
 
 void CycleChart::staleChanged() {
@@ -210,6 +235,7 @@ void CycleChart::retranslateUi() {
   }
   actual_->setTitle(tr("Cycle with losses"));
   ideal_->setTitle(tr("Ideal cycle"));
+  baselineCurve_->setTitle(tr("Baseline: %1").arg(baselineTitle_));
   actualClosure_->setTitle(tr("Closure to ambient, with losses"));
   idealClosure_->setTitle(tr("Closure to ambient, ideal"));
   isobarLegend_->setTitle(tr("Isobars through station pressures"));
@@ -241,7 +267,28 @@ void CycleChart::setEvaluation(std::shared_ptr<const engine::Evaluation> evaluat
   rebuild();
 }
 
+void CycleChart::setBaseline(std::shared_ptr<const engine::Evaluation> baseline, const QString& title) {
+  baseline_ = std::move(baseline);
+  // A long case title would widen the legend over the plot: it is cut, the full one is in the
+  // tables' header tooltip.
+  baselineTitle_ =
+      title.size() > kBaselineTitleChars ? title.left(kBaselineTitleChars - 1) + QChar(0x2026) : title;
+  baselineCurve_->setTitle(tr("Baseline: %1").arg(baselineTitle_));
+  baselineCurve_->setItemAttribute(QwtPlotItem::Legend, baseline_ != nullptr);
+  // The labels keep clear of the baseline's line too, while there is one.
+  if (baseline_)
+    isobarLabels_->setCurves({actual_, ideal_, actualClosure_, idealClosure_, baselineCurve_});
+  else
+    isobarLabels_->setCurves({actual_, ideal_, actualClosure_, idealClosure_});
+  rebuild();
+}
+
 void CycleChart::rebuild() {
+  if (baseline_)
+    baselineCurve_->setData(new PathSeries(baseline_, false, cyclePaths(baseline_->actual, false), xValue(),
+                                           yValue(), xScale(), yScale()));
+  else
+    baselineCurve_->setSamples(QVector<QPointF>());
   clearDynamicItems();
   const double xs = xScale(), ys = yScale();
   const StateValue xv = xValue(), yv = yValue();
@@ -371,7 +418,7 @@ void CycleChart::rebuild() {
 
 void CycleChart::rescale() {
   QRectF box;
-  for (const QwtPlotCurve* c : {actual_, ideal_, actualClosure_, idealClosure_})
+  for (const QwtPlotCurve* c : {actual_, ideal_, actualClosure_, idealClosure_, baselineCurve_})
     if (c->dataSize() > 0) box = box.isNull() ? c->boundingRect() : box.united(c->boundingRect());
   if (box.isNull() || !box.isValid()) {
     if (box.width() <= 0 && box.height() <= 0) return;

@@ -8,7 +8,9 @@
 // dashed, 2 px), each closure to ambient thin (dash-dot and dotted), isobars through the
 // station pressures (thin, between the palette's base and text colours) with labels placed
 // clear of each other (IsobarLabels), station markers with their SAE numbers, and the
-// selected component's path in vermillion #D55E00 (a wide band under the curves).
+// selected component's path in vermillion #D55E00 (a wide band under the curves). With a
+// baseline (setBaseline), its cycle with losses in neutral grey #999999, dash-dot-dot, 2 px,
+// labelled with the baseline's title: a third line style beside the solid and the dashed.
 //
 // Canvas, grid, legend, markers and labels take their colours from the widget's palette
 // (light or dark, and again when it changes); only the Okabe-Ito line colours are fixed.
@@ -48,6 +50,8 @@ class CycleChart : public ChartBase {
 
   /// Shows an evaluation (null clears the chart); stale greys it and says so. One replot.
   void setEvaluation(std::shared_ptr<const engine::Evaluation> evaluation, bool stale);
+  /// Overlays a baseline's cycle with losses (null: none), labelled "Baseline: title". One replot.
+  void setBaseline(std::shared_ptr<const engine::Evaluation> baseline, const QString& title);
   /// Highlights a component's path ("compressor"; empty for none). One replot.
   void setHighlightedComponent(const std::string& component);
   const std::string& highlightedComponent() const { return highlighted_; }
@@ -71,6 +75,7 @@ class CycleChart : public ChartBase {
   const QwtPlotCurve* idealCurve() const { return ideal_; }
   const QwtPlotCurve* actualClosureCurve() const { return actualClosure_; }
   const QwtPlotCurve* highlightCurve() const { return highlight_; }
+  const QwtPlotCurve* baselineCurve() const { return baselineCurve_; }
   /// The legend entry of the station markers, which says which are static and which total states.
   const QwtPlotCurve* stationLegendEntry() const { return stationLegend_; }
   int isobarCount() const { return static_cast<int>(isobars_.size()); }
@@ -82,6 +87,9 @@ class CycleChart : public ChartBase {
  protected:
   void paletteChanged() override;
   void staleChanged() override;
+  void refresh() override;
+  void beginExport(const ExportOptions& options) override;
+  void endExport() override;
   bool hasResult() const override { return evaluation_ != nullptr; }
 
  private:
@@ -102,11 +110,14 @@ class CycleChart : public ChartBase {
   ChartKind kind_;
   DisplayUnits& units_;
   std::shared_ptr<const engine::Evaluation> evaluation_;
+  std::shared_ptr<const engine::Evaluation> baseline_;
+  QString baselineTitle_;
   bool logAxes_ = false;
   std::string highlighted_;
 
   QwtPlotCurve* actual_ = nullptr;
   QwtPlotCurve* ideal_ = nullptr;
+  QwtPlotCurve* baselineCurve_ = nullptr;
   QwtPlotCurve* actualClosure_ = nullptr;
   QwtPlotCurve* idealClosure_ = nullptr;
   QwtPlotCurve* highlight_ = nullptr;

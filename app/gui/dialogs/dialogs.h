@@ -1,6 +1,6 @@
 #pragma once
-// The small dialogs of the main window: preferences, the PNG export size and the order of the
-// loss audit's waterfall.
+// The small dialogs of the main window: preferences, a chart's export options and the order of
+// the loss audit's waterfall.
 
 #include "document/settings.h"
 
@@ -8,7 +8,11 @@
 #include <QSize>
 #include <QStringList>
 
+class QCheckBox;
 class QComboBox;
+class QDoubleSpinBox;
+class QFontComboBox;
+class QLineEdit;
 class QListWidget;
 class QSpinBox;
 
@@ -34,19 +38,40 @@ class PreferencesDialog : public QDialog {
   QSpinBox* autosave_ = nullptr;
 };
 
+/// A chart's export options: background, selection, title and subtitle, legend, font, lines,
+/// and the size (PNG: pixels and resolution; SVG and PDF: width and height in mm or inches).
 class ImageExportDialog : public QDialog {
   Q_OBJECT
 
  public:
+  /// format: "png", "svg" or "pdf"; the fields start from `options`.
+  ImageExportDialog(const QString& format, const ExportOptions& options, QWidget* parent = nullptr);
+  /// The PNG dialog with the default options.
   explicit ImageExportDialog(QWidget* parent = nullptr);
 
+  ExportOptions options() const;
   QSize pixels() const;
   int dotsPerInch() const;
 
  private:
+  void setPaperUnit(PaperUnit unit);
+
+  QString format_;
+  QComboBox* background_ = nullptr;
+  QCheckBox* highlight_ = nullptr;
+  QLineEdit* title_ = nullptr;
+  QLineEdit* subtitle_ = nullptr;
+  QComboBox* legend_ = nullptr;
+  QFontComboBox* fontFamily_ = nullptr;
+  QDoubleSpinBox* fontSize_ = nullptr;
+  QDoubleSpinBox* lineWidths_ = nullptr;
   QSpinBox* width_ = nullptr;
   QSpinBox* height_ = nullptr;
   QSpinBox* dpi_ = nullptr;
+  QDoubleSpinBox* paperWidth_ = nullptr;
+  QDoubleSpinBox* paperHeight_ = nullptr;
+  QComboBox* paperUnit_ = nullptr;
+  PaperUnit shownUnit_ = PaperUnit::Millimetres;
 };
 
 /// Reorders the waterfall's losses by drag and drop (keys of core/analysis/loss_catalogue.h,

@@ -1,6 +1,7 @@
 #pragma once
-// The open case: its inputs, the last valid evaluation, the problems of the current inputs,
-// the undo stack and the file it came from. One evaluateCase per change of the inputs.
+// The open case: its inputs, the last valid evaluation and its loss audit (the one evaluation
+// pipeline per edit), the problems of the current inputs, the undo stack, the file it came from
+// and the baseline it is compared with. One evaluateCase per change of the inputs.
 //
 // Live and committed results: every edit is evaluated at once and shown while valid (the live
 // result), but only a committed result becomes "the last valid result" that stays on screen,

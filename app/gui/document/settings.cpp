@@ -35,6 +35,13 @@ void AppSettings::setChartLayout(ChartLayout layout) {
   settings_.setValue("charts/layout", layout == ChartLayout::Tabbed ? "tabbed" : "side-by-side");
 }
 
+ExportOptions AppSettings::exportOptions(const QString& chart) const {
+  return ExportOptions::fromMap(settings_.value("export/" + chart).toMap());
+}
+void AppSettings::setExportOptions(const QString& chart, const ExportOptions& options) {
+  settings_.setValue("export/" + chart, options.toMap());
+}
+
 bool AppSettings::pressureVolumeLogAxes() const {
   return settings_.value("charts/pv_log_axes", true).toBool();
 }

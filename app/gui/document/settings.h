@@ -3,6 +3,8 @@
 
 #include "document/units.h"
 
+#include "document/export_options.h"
+
 #include <QByteArray>
 #include <QSettings>
 #include <QStringList>
@@ -42,6 +44,10 @@ class AppSettings {
 
   ChartLayout chartLayout() const;
   void setChartLayout(ChartLayout layout);
+
+  /// The export options last used for a chart ("temperature-entropy", "loss-audit", ...).
+  ExportOptions exportOptions(const QString& chart) const;
+  void setExportOptions(const QString& chart, const ExportOptions& options);
 
   bool pressureVolumeLogAxes() const;
   void setPressureVolumeLogAxes(bool on);

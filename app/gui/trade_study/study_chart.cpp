@@ -162,6 +162,12 @@ void StudyChart::applyPalette() {
   design_->setSymbol(new QwtSymbol(QwtSymbol::Star2, QBrush(kOkabeItoYellow), QPen(ink, 1.2), QSize(15, 15)));
 }
 
+void StudyChart::refresh() {
+  applyPalette();
+  retranslateUi();
+  rebuild();
+}
+
 void StudyChart::paletteChanged() {
   applyPalette();
   retranslateUi();

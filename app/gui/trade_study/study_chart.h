@@ -106,6 +106,7 @@ class StudyChart : public ChartBase {
 
  protected:
   void paletteChanged() override;
+  void refresh() override;
   bool wantsStaleBanner() const override { return study_ != nullptr; }
   void resizeEvent(QResizeEvent* event) override;
 
