@@ -41,6 +41,7 @@
 #include <QComboBox>
 #include <QDockWidget>
 #include <QFile>
+#include <QHeaderView>
 #include <QImage>
 #include <QLabel>
 #include <QLineEdit>
@@ -51,6 +52,7 @@
 #include <QSignalSpy>
 #include <QSpinBox>
 #include <QTabWidget>
+#include <QTableView>
 #include <QTemporaryDir>
 #include <QTest>
 #include <QUndoStack>
@@ -711,25 +713,101 @@ class TestTradeStudy : public QObject {
     QCOMPARE(panel->secondAxis()->count(), 5);
     QCOMPARE(panel->compareBox()->currentIndex(), 1);
     QVERIFY(panel->auditBox()->isChecked());
-    // The ranges follow the case: the demo flies at Mach 0.8, so -50 % to +50 %.
-    QVERIFY(near(panel->firstAxis()->start(), 0.4));
+    // The ranges as they were set, per input (not the defaults: Mach 0 to 0.9, 4 to 16).
+    QVERIFY(near(panel->firstAxis()->start(), 0.2));
     QVERIFY(near(panel->firstAxis()->stop(), 1.2));
+    QVERIFY(near(panel->secondAxis()->start(), 4.0));
+    QVERIFY(near(panel->secondAxis()->stop(), 20.0));
     QSettings().remove("study");
+  }
+
+  void typedRangesAreRememberedPerInput() {
+    {
+      MainWindow window;
+      QVERIFY(window.openCase(kDemo));
+      cw::gui::StudyAxisEditor* axis = window.tradeStudyPanel()->firstAxis();
+      QVERIFY(axis->setPath("burner.exit_temperature_K"));
+      typeInto(axis->startEdit(), "1250");
+      typeInto(axis->stopEdit(), "1450");
+      QVERIFY(axis->setPath("compressor.pressure_ratio"));  // another input: its own range
+      QVERIFY(near(axis->start(), 4.0));
+      typeInto(axis->stopEdit(), "14");
+      typeInto(axis->startEdit(), "abc");  // not a number: the last valid range stays kept
+    }
+    MainWindow again;
+    QVERIFY(again.openCase(kDemo));
+    cw::gui::StudyAxisEditor* axis = again.tradeStudyPanel()->firstAxis();
+    QVERIFY(axis->setPath("burner.exit_temperature_K"));
+    QCOMPARE(axis->start(), 1250.0);
+    QCOMPARE(axis->stop(), 1450.0);
+    QVERIFY(axis->setPath("compressor.pressure_ratio"));
+    QCOMPARE(axis->start(), 4.0);
+    QCOMPARE(axis->stop(), 14.0);
+  }
+
+  void editingARangeMarksTheStudyStale() {
+    MainWindow window;
+    QVERIFY(window.openCase(kDemo));
+    TradeStudyPanel* panel = window.tradeStudyPanel();
+    QVERIFY(panel->setAxes({{"compressor.pressure_ratio", 4.0, 12.0, 5}}));
+    QVERIFY(runAndWait(panel));
+    QVERIFY(!panel->isStale());
+    typeInto(panel->firstAxis()->stopEdit(), "14");
+    QVERIFY(panel->isStale());
+    typeInto(panel->firstAxis()->stopEdit(), "12");  // back to the study's range
+    QVERIFY(!panel->isStale());
+    panel->firstAxis()->setCount(6);
+    QVERIFY(panel->isStale());
+  }
+
+  void tableHeadersAreNotClipped() {
+    MainWindow window;
+    QVERIFY(window.openCase(kDemo));
+    TradeStudyPanel* panel = window.tradeStudyPanel();
+    auto* table = panel->findChild<QTableView*>("studyTable");
+    QVERIFY(table);
+    for (int round = 0; round < 2; ++round) {  // before the first study, then with one
+      for (int c = 0; c < table->model()->columnCount(); ++c)
+        QVERIFY2(table->columnWidth(c) >= table->horizontalHeader()->sectionSizeHint(c),
+                 qPrintable(table->model()->headerData(c, Qt::Horizontal).toString()));
+      QVERIFY(panel->setAxes({{"compressor.pressure_ratio", 4.0, 12.0, 3}}));
+      QVERIFY(runAndWait(panel));
+      QVERIFY(table->model()->columnCount() > 3);
+    }
+  }
+
+  void defaultCarpetHasACycleAtEveryPoint() {
+    // The default carpet on the demo (pressure ratio 4 to 16 against Tt4 1100 to 1700 K): every
+    // point has a cycle (with -50 % to +50 %, 675 to 2025 K, 13 of 126 points had none).
+    MainWindow window;
+    QVERIFY(window.openCase(kDemo));
+    TradeStudyPanel* panel = window.tradeStudyPanel();
+    QCOMPARE(panel->firstAxis()->path(), std::string("compressor.pressure_ratio"));
+    QCOMPARE(panel->secondAxis()->path(), std::string("burner.exit_temperature_K"));
+    QVERIFY(runAndWait(panel));
+    QVERIFY(panel->study());
+    QCOMPARE(panel->study()->points.size(), std::size_t(21 * 6));
+    QCOMPARE(panel->study()->count(cw::study::PointStatus::Solved), panel->study()->points.size());
   }
 
   void defaultRangesFollowTheCaseWithinTheValidRange() {
     MainWindow window;
     QVERIFY(window.openCase(kDemo));
     TradeStudyPanel* panel = window.tradeStudyPanel();
+    // A practitioner's starting ranges (common practice, no source; docs/user-guide.md).
     QVERIFY(panel->firstAxis()->setPath("compressor.pressure_ratio"));
-    QVERIFY(near(panel->firstAxis()->start(), 4.0));  // the demo's 8, -50 % to +50 %
-    QVERIFY(near(panel->firstAxis()->stop(), 12.0));
+    QCOMPARE(panel->firstAxis()->start(), 4.0);
+    QCOMPARE(panel->firstAxis()->stop(), 16.0);
     QVERIFY(panel->firstAxis()->setPath("compressor.isentropic_efficiency"));
-    QVERIFY(near(panel->firstAxis()->start(), 0.42));
-    QCOMPARE(panel->firstAxis()->stop(), 1.0);  // 1.26 clipped to the valid range (0, 1]
+    QCOMPARE(panel->firstAxis()->start(), 0.75);
+    QCOMPARE(panel->firstAxis()->stop(), 0.90);
     QVERIFY(panel->secondAxis()->setPath("burner.exit_temperature_K"));
-    QCOMPARE(panel->secondAxis()->start(), 675.0);
-    QCOMPARE(panel->secondAxis()->stop(), 2025.0);
+    QCOMPARE(panel->secondAxis()->start(), 1100.0);
+    QCOMPARE(panel->secondAxis()->stop(), 1700.0);
+    // An input without one: the case's value -50 % to +50 % (the demo's 4 kg/s of air).
+    QVERIFY(panel->firstAxis()->setPath("design.air_mass_flow_kg_per_s"));
+    QVERIFY(near(panel->firstAxis()->start(), 2.0));
+    QVERIFY(near(panel->firstAxis()->stop(), 6.0));
     QCOMPARE(panel->secondAxis()->count(), 6);
     // Only inputs the case has: the demo sizes by air mass flow, not by thrust.
     QComboBox* box = panel->firstAxis()->inputBox();

@@ -1,6 +1,7 @@
 #include "document/settings.h"
 
 #include <algorithm>
+#include <cmath>
 
 namespace cw::gui {
 
@@ -78,6 +79,20 @@ void AppSettings::setStudySetup(const StudySetup& s) {
   settings_.setValue("study/compare", s.compare);
   settings_.setValue("study/changed_input", s.changedInput);
   settings_.setValue("study/plot", s.plot);
+}
+
+std::optional<std::pair<double, double>> AppSettings::studyRange(const QString& path) const {
+  const QStringList parts = settings_.value("study/ranges/" + path).toString().split(QLatin1Char(':'));
+  if (parts.size() != 2) return std::nullopt;
+  bool okStart = false, okStop = false;
+  const double start = parts[0].toDouble(&okStart), stop = parts[1].toDouble(&okStop);
+  if (!okStart || !okStop || !std::isfinite(start) || !std::isfinite(stop)) return std::nullopt;
+  return std::pair{start, stop};
+}
+void AppSettings::setStudyRange(const QString& path, double start, double stop) {
+  // Round-trip text (17 significant digits), independent of the locale.
+  settings_.setValue("study/ranges/" + path,
+                     QString::number(start, 'g', 17) + QLatin1Char(':') + QString::number(stop, 'g', 17));
 }
 
 int AppSettings::autosaveWithinSeconds() const {

@@ -9,6 +9,9 @@
 #include <QSettings>
 #include <QStringList>
 
+#include <optional>
+#include <utility>
+
 namespace cw::gui {
 
 enum class ChartLayout { SideBySide, Tabbed };
@@ -56,6 +59,9 @@ class AppSettings {
   /// The trade-study panel's choices.
   StudySetup studySetup() const;
   void setStudySetup(const StudySetup& setup);
+  /// The range the user last typed for a study input (its --set path), SI; none when never typed.
+  std::optional<std::pair<double, double>> studyRange(const QString& path) const;
+  void setStudyRange(const QString& path, double start, double stop);
 
   /// The autosave's limit: unsaved edits are autosaved 2 s after the last edit, and at the latest
   /// this many seconds after the first, in [kMinAutosaveWithin, kMaxAutosaveWithin], default 5 [s].

@@ -1,5 +1,6 @@
 #include "trade_study/study_axis_editor.h"
 
+#include "document/settings.h"
 #include "document/units.h"
 #include "forms/case_form.h"
 
@@ -124,6 +125,7 @@ void StudyAxisEditor::setRange(double start, double stop, int count) {
     countBox_->setValue(count);
   }
   writeRange();
+  keepTypedRange();
   validate();
   emit changed();
 }
@@ -149,12 +151,29 @@ void StudyAxisEditor::inputChosen(int index) {
 }
 
 void StudyAxisEditor::applyDefaultRange() {
-  if (!choice_.input().field) return;
-  const StudyRange range = defaultStudyRange(*choice_.input().field, choice_.input().field->get(case_));
-  start_ = range.start;
-  stop_ = range.stop;
+  const StudyInput input = choice_.input();
+  if (!input.field) return;
+  // The range the user last typed for this input (kept in the settings), while it is valid.
+  const auto typed = AppSettings().studyRange(QString::fromStdString(input.path));
+  if (typed && inValidRange(*input.field, typed->first) && inValidRange(*input.field, typed->second)) {
+    start_ = typed->first;
+    stop_ = typed->second;
+    userRange_ = true;
+  } else {
+    const StudyRange range = defaultStudyRange(*input.field, input.field->get(case_), input.path);
+    start_ = range.start;
+    stop_ = range.stop;
+  }
   startOk_ = stopOk_ = true;
   writeRange();
+}
+
+void StudyAxisEditor::keepTypedRange() {
+  const StudyInput input = choice_.input();
+  if (!input.field || !startOk_ || !stopOk_ || !inValidRange(*input.field, start_) ||
+      !inValidRange(*input.field, stop_))
+    return;
+  AppSettings().setStudyRange(QString::fromStdString(input.path), start_, stop_);
 }
 
 void StudyAxisEditor::writeRange() {
@@ -180,6 +199,7 @@ void StudyAxisEditor::textEdited() {
   stopOk_ = parseTypedNumber(stopEdit_->text(), shown);
   if (stopOk_) stop_ = units_.fromDisplay(shown, q);
   userRange_ = true;
+  keepTypedRange();
   validate();
   emit changed();
 }

@@ -1,10 +1,11 @@
 #pragma once
 // One varied input of a trade study as the panel edits it: the input (a choice among the case's
 // numeric inputs, labelled with units), its start and stop (display units; SI kept inside) and
-// its number of values. The range follows the case's value (its default, -50 % to +50 % clipped
-// to the valid range) until the user types one. An entry that is no number, outside the input's
-// valid range, or inconsistent with the count turns its field red and says why, naming the valid
-// range; axis() is then empty and the panel's Run button is disabled.
+// its number of values. The range is the one last typed for the input (kept in the settings per
+// input), else its default (a practitioner's starting range, or -50 % to +50 % of the case's
+// value, clipped to the valid range), which follows the case until the user types one. An entry that is no
+// number, outside the input's valid range, or inconsistent with the count turns its field red and says why,
+// naming the valid range; axis() is then empty and the panel's Run button is disabled.
 
 #include "trade_study/study_input_choice.h"
 #include "trade_study/study_inputs.h"
@@ -73,7 +74,10 @@ class StudyAxisEditor : public QWidget {
 
  private:
   void inputChosen(int index);
+  /// The range typed for this input, else its default range (practitionerRange, else +/-50 %).
   void applyDefaultRange();
+  /// Keeps a valid typed range in the settings, per input, for the next start.
+  void keepTypedRange();
   void textEdited();
   void validate();
   void writeRange();

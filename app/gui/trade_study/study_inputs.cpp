@@ -111,13 +111,47 @@ QString typedNumberText(double shown) {
   return locale.toString(shown, 'g', 10);
 }
 
-StudyRange defaultStudyRange(const FieldSpec& field, double value) {
+std::optional<StudyRange> practitionerRange(const std::string& path) {
+  // Where a conceptual study of a small turbojet usually starts; common practice, no source
+  // (docs/user-guide.md, "Default ranges", lists the same). Inputs not listed take +/-50 %.
+  struct Entry {
+    const char* path;
+    StudyRange range;
+  };
+  static constexpr Entry kRanges[] = {
+      {"flight.altitude_m", {0.0, 11000.0}},
+      {"flight.mach", {0.0, 0.9}},
+      {"inlet.pressure_recovery", {0.90, 1.0}},
+      {"inlet.ram_efficiency", {0.85, 1.0}},
+      {"compressor.pressure_ratio", {4.0, 16.0}},
+      {"compressor.isentropic_efficiency", {0.75, 0.90}},
+      {"compressor.polytropic_efficiency", {0.80, 0.92}},
+      {"compressor.bleed_fraction", {0.0, 0.05}},
+      {"burner.exit_temperature_K", {1100.0, 1700.0}},
+      {"burner.pressure_loss_fraction", {0.02, 0.08}},
+      {"burner.combustion_efficiency", {0.95, 1.0}},
+      {"turbine.isentropic_efficiency", {0.80, 0.92}},
+      {"turbine.polytropic_efficiency", {0.82, 0.92}},
+      {"turbine.mechanical_efficiency", {0.95, 1.0}},
+      {"jet_pipe.pressure_loss_fraction", {0.0, 0.05}},
+      {"afterburner.exit_temperature_K", {1600.0, 2200.0}},
+      {"nozzle.velocity_coefficient", {0.95, 1.0}},
+      {"nozzle.isentropic_efficiency", {0.90, 1.0}},
+      {"nozzle.discharge_coefficient", {0.95, 1.0}},
+  };
+  for (const Entry& entry : kRanges)
+    if (path == entry.path) return entry.range;
+  return std::nullopt;
+}
+
+StudyRange defaultStudyRange(const FieldSpec& field, double value, const std::string& path) {
   // Just inside an open bound: a thousandth of the valid range.
   const double margin = 1e-3 * (field.high - field.low);
   const double low = field.lowOpen ? field.low + margin : field.low;
   const double high = field.highOpen ? field.high - margin : field.high;
-  double start = std::clamp(std::min(0.5 * value, 1.5 * value), low, high);
-  double stop = std::clamp(std::max(0.5 * value, 1.5 * value), low, high);
+  const std::optional<StudyRange> usual = practitionerRange(path);
+  double start = std::clamp(usual ? usual->start : std::min(0.5 * value, 1.5 * value), low, high);
+  double stop = std::clamp(usual ? usual->stop : std::max(0.5 * value, 1.5 * value), low, high);
   if (!(stop - start > 1e-9 * std::max(1.0, std::fabs(value)))) {
     start = low;
     stop = high;

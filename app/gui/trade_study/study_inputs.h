@@ -11,6 +11,7 @@
 
 #include <QString>
 
+#include <optional>
 #include <string>
 #include <vector>
 
@@ -52,8 +53,13 @@ struct StudyRange {
   double stop = 0.0;   ///< [SI]
 };
 
-/// The case's value -50 % to +50 %, clipped to the valid range (just inside an open bound); the
-/// whole valid range when that leaves nothing (a value of 0, or one at a bound) [SI].
-StudyRange defaultStudyRange(const FieldSpec& field, double value);
+/// The range a practitioner would start a study of this input from (docs/user-guide.md lists
+/// them), e.g. 1100-1700 K for the burner exit temperature; none for an input without one [SI].
+std::optional<StudyRange> practitionerRange(const std::string& path);
+
+/// The practitioner's range of the input where it has one; else the case's value -50 % to +50 %;
+/// either clipped to the valid range (just inside an open bound); the whole valid range when that
+/// leaves nothing (a value of 0, or one at a bound) [SI].
+StudyRange defaultStudyRange(const FieldSpec& field, double value, const std::string& path = {});
 
 }  // namespace cw::gui

@@ -154,6 +154,12 @@ TradeStudyPanel::TradeStudyPanel(CaseDocument& document, DisplayUnits& units, QW
   table_->setAlternatingRowColors(true);
   table_->setSelectionBehavior(QAbstractItemView::SelectRows);
   table_->verticalHeader()->setDefaultSectionSize(QFontMetrics(table_->font()).height() + 6);
+  // Every column as wide as its header and values whenever the columns change (before the first
+  // study too), so that no header is clipped; the user may resize them after.
+  connect(model_, &QAbstractItemModel::modelReset, table_, &QTableView::resizeColumnsToContents);
+  connect(model_, &QAbstractItemModel::headerDataChanged, table_, &QTableView::resizeColumnsToContents);
+  connect(model_, &QAbstractItemModel::layoutChanged, table_, &QTableView::resizeColumnsToContents);
+  table_->resizeColumnsToContents();
 
   split_ = new QSplitter(Qt::Horizontal, this);
   split_->setObjectName("studySplitter");
@@ -234,19 +240,39 @@ void TradeStudyPanel::caseChanged() {
   first_->setCase(c);
   second_->setCase(c);
   change_->setCase(c);
-  if (study_) {
-    const bool stale = comparable(io::caseToJson(c)) != studiedDocument_;
-    if (stale != stale_) {
-      stale_ = stale;
-      chart_->setStale(stale_);
-      model_->setStale(stale_);
-    }
-  }
+  updateStale();
   validateControls();
+}
+
+std::vector<study::SweepAxis> TradeStudyPanel::editedAxes() const {
+  std::vector<study::SweepAxis> axes;
+  const std::optional<study::SweepAxis> first = first_->axis();
+  if (!first) return {};
+  axes.push_back(*first);
+  if (!carpet_->isChecked()) return axes;
+  const std::optional<study::SweepAxis> second = second_->axis();
+  if (!second) return {};
+  axes.push_back(*second);
+  return axes;
+}
+
+bool TradeStudyPanel::studyIsStale() const {
+  // The case changed since the study ran, or the inputs' ranges and counts were edited.
+  return study_ && (comparable(io::caseToJson(document_.currentCase())) != studiedDocument_ ||
+                    editedAxes() != study_->axes);
+}
+
+void TradeStudyPanel::updateStale() {
+  const bool stale = studyIsStale();
+  if (!study_ || stale == stale_) return;
+  stale_ = stale;
+  chart_->setStale(stale_);
+  model_->setStale(stale_);
 }
 
 void TradeStudyPanel::controlsChanged() {
   validateControls();
+  updateStale();
   emit setupChanged();
 }
 
@@ -446,7 +472,7 @@ void TradeStudyPanel::finished(const StudyOutcome& outcome) {
   studiedNames_ = pendingNames_;
   changedAssignment_ = outcome.overlay ? pendingAssignment_ : std::string();
   changedDescription_ = pendingDescription_;
-  stale_ = comparable(io::caseToJson(document_.currentCase())) != studiedDocument_;
+  stale_ = studyIsStale();
   if (outcome.overlayFailed) {
     status_->setText(tr("The comparison cannot run: %1").arg(QString::fromStdString(outcome.error)));
     errorStyled(status_);

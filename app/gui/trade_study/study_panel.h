@@ -64,6 +64,7 @@ class TradeStudyPanel : public QWidget {
   std::shared_ptr<const study::TradeStudy> changedStudy() const { return changed_; }
   /// The spec the shown study ran (the same one the core got).
   const study::TradeStudySpec& studiedSpec() const { return studiedSpec_; }
+  /// The chart and table show a study of another case, or of other ranges than the ones entered.
   bool isStale() const { return stale_; }
 
   /// Sets the controls from a list of axes (one or two, as the command line's --vary gives them).
@@ -113,6 +114,11 @@ class TradeStudyPanel : public QWidget {
   void setupChanged();
 
  private:
+  /// The axes as entered (empty while an entry is invalid).
+  std::vector<study::SweepAxis> editedAxes() const;
+  bool studyIsStale() const;
+  /// Marks the chart and table stale when the case or the entered axes differ from the study's.
+  void updateStale();
   void caseChanged();
   void controlsChanged();
   void validateControls();
