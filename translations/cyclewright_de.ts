@@ -935,8 +935,12 @@ kein Kreisprozess mit diesen Eingaben</translation>
         <translation>Temperatur–Entropie</translation>
     </message>
     <message>
-        <source>Specific entropy s (0 at the free-stream static state)</source>
-        <translation>Spezifische Entropie s (0 im statischen Zustand der Anströmung)</translation>
+        <source>Specific entropy s</source>
+        <translation>Spezifische Entropie s</translation>
+    </message>
+    <message>
+        <source>Entropy s</source>
+        <translation>Entropie s</translation>
     </message>
     <message>
         <source>Temperature T</source>
@@ -959,8 +963,12 @@ kein Kreisprozess mit diesen Eingaben</translation>
         <translation>Enthalpie–Entropie</translation>
     </message>
     <message>
-        <source>Specific enthalpy h</source>
-        <translation>Spezifische Enthalpie h</translation>
+        <source>Sensible enthalpy h − h(298.15 K)</source>
+        <translation>Fühlbare Enthalpie h − h(298,15 K)</translation>
+    </message>
+    <message>
+        <source>h − h(298.15 K)</source>
+        <translation>h − h(298,15 K)</translation>
     </message>
     <message>
         <source>Cycle with losses</source>
@@ -971,26 +979,28 @@ kein Kreisprozess mit diesen Eingaben</translation>
         <translation>Idealer Kreisprozess</translation>
     </message>
     <message>
-        <source>Closure to ambient, with losses</source>
-        <translation>Schließung zur Umgebung, mit Verlusten</translation>
+        <source>Closure, with losses</source>
+        <translation>Schließung, mit Verlusten</translation>
     </message>
     <message>
-        <source>Closure to ambient, ideal</source>
-        <translation>Schließung zur Umgebung, ideal</translation>
+        <source>Closure, ideal</source>
+        <translation>Schließung, ideal</translation>
     </message>
     <message>
-        <source>Isobars through station pressures</source>
-        <translation>Isobaren durch die Stationsdrücke</translation>
+        <source>Station isobars</source>
+        <translation>Isobaren der Stationen</translation>
     </message>
     <message>
-        <source>Stations: 0, 8, 9 static states;
-2 to 7 total states</source>
-        <translation>Stationen: 0, 8, 9 statische Zustände;
-2 bis 7 Totalzustände</translation>
+        <source>Stations: 0, 8, 9 static;
+2 to 7 total</source>
+        <translation>Stationen: 0, 8, 9 statisch;
+2 bis 7 total</translation>
     </message>
     <message>
-        <source>Selected component</source>
-        <translation>Gewählte Komponente</translation>
+        <source>s = 0 at the free-stream
+static state</source>
+        <translation>s = 0 im statischen Zustand
+der Anströmung</translation>
     </message>
     <message>
         <source>Selected: %1</source>

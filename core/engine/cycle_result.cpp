@@ -67,8 +67,8 @@ void requireFinite(const CycleResult& result, const std::string& which) {
   }
   for (const ProcessPath& path : result.paths)
     for (const PathState& state : path.states)
-      for (double value :
-           {state.temperature, state.entropy, state.pressure, state.specificVolume, state.enthalpy})
+      for (double value : {state.temperature, state.entropy, state.pressure, state.specificVolume,
+                           state.enthalpy, state.sensibleEnthalpy})
         check(value, which, "state", " on the path of the ", path.component);
 }
 

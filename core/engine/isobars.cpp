@@ -31,6 +31,7 @@ std::vector<Isobar> stationIsobars(const CycleResult& cycle, double tLow, double
         s.entropy = gas.entropy(tk, p) + offset;
         s.specificVolume = gas.gasConstant() * tk / p;
         s.enthalpy = gas.enthalpy(tk);
+        s.sensibleEnthalpy = gas.sensibleEnthalpy(tk);
         isobar.states.push_back(s);
       }
       out.push_back(std::move(isobar));

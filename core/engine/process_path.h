@@ -7,13 +7,15 @@
 namespace cw::engine {
 
 /// One thermodynamic state on a path. Units: T [K], s [J/(kg K)] (zero at the free-stream
-/// static state), p [Pa], v [m^3/kg], h [J/kg].
+/// static state), p [Pa], v [m^3/kg], h [J/kg] (on the gas model's reference, absolute for the
+/// thermally perfect model), h_s = h - h(298.15 K) at the gas's composition [J/kg] (the h-s chart's).
 struct PathState {
   double temperature = 0.0;
   double entropy = 0.0;
   double pressure = 0.0;
   double specificVolume = 0.0;
   double enthalpy = 0.0;
+  double sensibleEnthalpy = 0.0;
 };
 
 /// The states a process passes through, from its entry station to its exit station.

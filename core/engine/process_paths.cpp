@@ -7,7 +7,12 @@ namespace cw::engine {
 namespace {
 
 PathState stateOf(const thermo::Gas& gas, double T, double p, double entropyReference) {
-  return {T, gas.entropy(T, p) - entropyReference, p, gas.gasConstant() * T / p, gas.enthalpy(T)};
+  return {T,
+          gas.entropy(T, p) - entropyReference,
+          p,
+          gas.gasConstant() * T / p,
+          gas.enthalpy(T),
+          gas.sensibleEnthalpy(T)};
 }
 
 double lerp(double a, double b, double x) {
@@ -43,7 +48,7 @@ ProcessPath heatingPath(std::string component, std::string from, std::string to,
     const PathState a = stateOf(entryGas, T, p, entropyReference),
                     b = stateOf(exitGas, T, p, entropyReference);
     path.states.push_back({T, lerp(a.entropy, b.entropy, x), p, lerp(a.specificVolume, b.specificVolume, x),
-                           lerp(a.enthalpy, b.enthalpy, x)});
+                           lerp(a.enthalpy, b.enthalpy, x), lerp(a.sensibleEnthalpy, b.sensibleEnthalpy, x)});
   }
   return path;
 }
@@ -73,7 +78,7 @@ ProcessPath closurePath(const thermo::Gas& exhaustGas, double t9, double p9, dou
     const PathState a = stateOf(exhaustGas, T, p0, entropyReference),
                     b = stateOf(air, T, p0, entropyReference);
     path.states.push_back({T, lerp(a.entropy, b.entropy, x), p0, lerp(a.specificVolume, b.specificVolume, x),
-                           lerp(a.enthalpy, b.enthalpy, x)});
+                           lerp(a.enthalpy, b.enthalpy, x), lerp(a.sensibleEnthalpy, b.sensibleEnthalpy, x)});
   }
   return path;
 }

@@ -27,6 +27,10 @@ struct Station {
   /// cp and gamma at the total temperature. [J/(kg K)], [-]
   double cp() const { return gas->cp(totalTemperature); }
   double gamma() const { return gas->gamma(totalTemperature); }
+  /// Sensible enthalpy h - h(298.15 K) at the station's composition, of the total and of the
+  /// static state (thermo::Gas::sensibleEnthalpy). [J/kg]
+  double totalSensibleEnthalpy() const { return gas->sensibleEnthalpy(totalTemperature); }
+  double staticSensibleEnthalpy() const { return gas->sensibleEnthalpy(staticTemperature); }
 };
 
 /// A stream's total state: the part of a station that a component changes.

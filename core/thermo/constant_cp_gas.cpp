@@ -56,6 +56,11 @@ double ConstantCpGas::enthalpy(double temperature) const {
   return cp_ * (temperature - enthalpyReference_);
 }
 
+double ConstantCpGas::sensibleEnthalpy(double temperature) const {
+  checkTemperature(temperature, "temperature");
+  return cp_ * (temperature - kSensibleEnthalpyReference);
+}
+
 double ConstantCpGas::standardEntropy(double temperature) const {
   checkTemperature(temperature, "temperature");
   return cp_ * std::log(temperature / kReferenceTemperature) + entropyOffset_;

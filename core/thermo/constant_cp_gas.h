@@ -42,6 +42,8 @@ class ConstantCpGas : public Gas {
   double molarMass() const override { return kMolarGasConstant / gasConstant_; }
   double cp(double temperature) const override;
   double enthalpy(double temperature) const override;
+  /// cp (T - 298.15 K), whatever the enthalpy reference. [J/kg]
+  double sensibleEnthalpy(double temperature) const override;
   double standardEntropy(double temperature) const override;
   double minimumTemperature() const override { return kMinimumTemperature; }
   double maximumTemperature() const override { return kMaximumTemperature; }

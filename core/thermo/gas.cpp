@@ -46,6 +46,10 @@ void Gas::checkTemperature(double temperature, const char* where) const {
     throw OutOfRange(where, temperature, "K", temperatureRange(*this));
 }
 
+double Gas::sensibleEnthalpy(double temperature) const {
+  return enthalpy(temperature) - enthalpy(kSensibleEnthalpyReference);
+}
+
 double Gas::entropy(double temperature, double pressure) const {
   if (!std::isfinite(pressure) || pressure <= 0.0)
     throw InvalidInput("pressure", pressure, "Pa", "(0, inf) Pa");

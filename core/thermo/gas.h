@@ -16,6 +16,9 @@ namespace cw::thermo {
 
 /// Standard-state pressure of the NASA polynomials and JANAF tables: 1 bar.
 inline constexpr double kReferencePressure = 1.0e5;  // Pa
+/// Reference temperature of the sensible enthalpy h_s(T) = h(T) - h(298.15 K) (the JANAF tables'
+/// H - H(298.15 K), per unit mass at fixed composition). [K]
+inline constexpr double kSensibleEnthalpyReference = 298.15;  // K
 /// Molar gas constant (CODATA 2018, exact).
 inline constexpr double kMolarGasConstant = 8.314462618;  // J/(mol K)
 
@@ -34,6 +37,9 @@ class Gas {
   virtual double cp(double temperature) const = 0;
   /// Specific enthalpy. [J/kg]
   virtual double enthalpy(double temperature) const = 0;
+  /// Sensible specific enthalpy h(T) - h(298.15 K) at this gas's (fixed) composition: the part of
+  /// h that temperature changes, free of formation enthalpies and of the model's h reference. [J/kg]
+  virtual double sensibleEnthalpy(double temperature) const;
   /// Standard-state specific entropy s°(T) at p_ref. [J/(kg K)]
   virtual double standardEntropy(double temperature) const = 0;
 

@@ -97,6 +97,27 @@ class TestConstantCpGas : public QObject {
              std::string("enthalpy reference temperature = -1 K is outside the valid range [0, 10000] K"));
   }
 
+  void sensibleEnthalpyIsCpTimesTheRiseAboveTheReference() {
+    // Closed form of the calorically perfect gas ([M] sec. 2.3): h(T) - h(298.15 K) = cp (T - 298.15 K),
+    // whichever temperature the model measures h from. By hand: 1004 x (1000 - 298.15) = 704657.4 J/kg,
+    // 1239 x (1600 - 298.15) = 1612992.15 J/kg.
+    const ConstantCpGas zeroKelvin(1004.0, 1.4, "air", 0.0);
+    const ConstantCpGas standard(1004.0, 1.4, "air");
+    for (const ConstantCpGas* gas : {&zeroKelvin, &standard}) {
+      QVERIFY(std::abs(gas->sensibleEnthalpy(1000.0) - 704657.4) < 1e-6);
+      QCOMPARE(gas->sensibleEnthalpy(298.15), 0.0);
+      QVERIFY(std::abs(gas->sensibleEnthalpy(200.0) - 1004.0 * (200.0 - 298.15)) < 1e-9);
+      // The same as the base definition h(T) - h(298.15 K).
+      QVERIFY(std::abs(gas->sensibleEnthalpy(1234.5) - (gas->enthalpy(1234.5) - gas->enthalpy(298.15))) <
+              1e-6);
+    }
+    TwoGammaModel model;
+    model.enthalpyReferenceTemperature = 0.0;
+    QVERIFY(std::abs(model.hotGas()->sensibleEnthalpy(1600.0) - 1612992.15) < 1e-6);
+    QVERIFY(std::abs(model.coldGas()->sensibleEnthalpy(1000.0) - 704657.4) < 1e-6);
+    QVERIFY_THROWS_EXCEPTION(cw::OutOfRange, standard.sensibleEnthalpy(0.5));
+  }
+
   void constructorValidates() {
     QCOMPARE(invalidMessage([] { ConstantCpGas(0.0, 1.4); }),
              std::string("cp = 0 J/(kg K) is outside the valid range (0, inf) J/(kg K)"));

@@ -6,6 +6,9 @@
 //      (values from memory of the document).
 //  [K] A kerosene-like fuel, H/C = 1.9, LHV = 43.0 MJ/kg, burns stoichiometrically at f of about
 //      0.068 (common practice, no source).
+//  [J] NIST-JANAF Thermochemical Tables, 4th ed., M.W. Chase, 1998: H - H(298.15 K) of N2, O2, Ar and
+//      CO2 in kJ/mol, the rows of tests/core/test_species.cpp (values from memory of the printed
+//      tables, as said there).
 //  Identities (no source needed beyond their definitions): cp = dh/dT, ds°/dT = cp/T, T(h(T)) = T,
 //  T(s(T, p), p) = T, conservation of atoms, the LHV as the enthalpy of reaction at 298.15 K.
 #include "common/error.h"
@@ -143,6 +146,43 @@ class TestMixtures : public QObject {
               1e-12 * gas.standardEntropy(below));
       QVERIFY(relNear(gas.cp(above), gas.cp(below), 1e-7));
     }
+  }
+
+  void sensibleEnthalpyOfAirAgainstJanaf() {
+    // Dry air's h(T) - h(298.15 K) per kg: the mole-fraction sum of [J]'s H - H(298.15 K) over the
+    // molar mass (ideal mixture). At 1000 K: N2 21.463, O2 22.703, Ar 14.589, CO2 33.397 kJ/mol;
+    // at 1500 K: 38.405, 40.599, 24.982, 61.705 kJ/mol. Tolerance 0.5 %, as test_species allows
+    // the species fits against [J].
+    const Composition composition = dryAir();
+    const ThermallyPerfectGas air(composition, "air");
+    struct Row {
+      double t, n2, o2, ar, co2;  // K, kJ/mol
+    };
+    for (const Row& r :
+         {Row{1000.0, 21.463, 22.703, 14.589, 33.397}, Row{1500.0, 38.405, 40.599, 24.982, 61.705}}) {
+      const double molar = composition.moleFraction("N2") * r.n2 + composition.moleFraction("O2") * r.o2 +
+                           composition.moleFraction("Ar") * r.ar + composition.moleFraction("CO2") * r.co2;
+      const double expected = 1e3 * molar / composition.molarMass();  // J/kg
+      QVERIFY2(
+          relNear(air.sensibleEnthalpy(r.t), expected, 0.005),
+          qPrintable(QString("%1 K: %2 vs %3 J/kg").arg(r.t).arg(air.sensibleEnthalpy(r.t)).arg(expected)));
+    }
+    // By hand from the 1000 K row: 21.662 kJ/mol / 28.9644 g/mol = 0.7479 MJ/kg, the rise the h-s
+    // chart shows from 298.15 K to 1000 K.
+    QVERIFY(std::abs(air.sensibleEnthalpy(1000.0) - 0.7479e6) < 0.004e6);
+  }
+
+  void sensibleEnthalpyIsZeroAtTheReferenceForEveryComposition() {
+    // h_s(298.15 K) = 0 by definition at every composition, while the absolute h of the products is
+    // far below zero there (their CO2 and H2O); h_s differences equal h differences at one composition.
+    for (const auto& gas : gases()) {
+      QVERIFY(std::abs(gas.sensibleEnthalpy(298.15)) < 1e-9);
+      QVERIFY(std::abs((gas.sensibleEnthalpy(1700.0) - gas.sensibleEnthalpy(600.0)) -
+                       (gas.enthalpy(1700.0) - gas.enthalpy(600.0))) < 1e-6);
+      QVERIFY(gas.sensibleEnthalpy(1000.0) > 0.0 && gas.sensibleEnthalpy(250.0) < 0.0);
+    }
+    const auto all = gases();
+    QVERIFY(all[3].enthalpy(298.15) < -1e5);  // stoichiometric products: formation enthalpies
   }
 
   void cpIsTheDerivativeOfEnthalpy() {

@@ -1,6 +1,7 @@
 #pragma once
 // Shared set-up of the GUI suites: the C locale for typed numbers, and settings, autosaves and
-// recent files kept in Qt's test locations under an application name of the suite's own.
+// recent files kept in Qt's test locations under a temporary home of the suite's own (removed
+// when it ends) and an application name of the suite's own.
 //
 // Child processes (the application run by QProcess) get a home of their own, IsolatedHome:
 // every launch of CYCLEWRIGHT_GUI_PATH or a test helper goes through IsolatedHome::start, so a
@@ -19,8 +20,22 @@
 
 namespace cw::test {
 
+/// Points this process's HOME and XDG base folders into a temporary folder of its own, removed
+/// when the suite ends, so no suite reads what another (or an earlier run) left in Qt's test
+/// locations. Call before the first QSettings or QStandardPaths use.
+inline void useTemporaryHome() {
+  static QTemporaryDir home;
+  if (!home.isValid()) qFatal("cannot create a temporary home for the suite");
+  for (const char* name : {"HOME", "XDG_CONFIG_HOME", "XDG_DATA_HOME", "XDG_CACHE_HOME", "XDG_STATE_HOME"}) {
+    const QString folder = home.filePath(QString::fromLatin1(name).toLower());
+    QDir().mkpath(folder);
+    qputenv(name, folder.toUtf8());
+  }
+}
+
 inline void isolateGuiTest(const QString& applicationName) {
   QLocale::setDefault(QLocale::c());
+  useTemporaryHome();
   QStandardPaths::setTestModeEnabled(true);
   QCoreApplication::setOrganizationName("CyclewrightTest");
   QCoreApplication::setApplicationName(applicationName);

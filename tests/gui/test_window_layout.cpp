@@ -2,17 +2,21 @@
 // at 1280 x 800 and 1920 x 1080, with and without the docks, no control is below its minimum
 // size or cut off, and the station and performance tables show every column (scrolling, if at
 // all, only vertically; at 1280 x 800 without a dock every station).
+#include "charts/cycle_chart.h"
 #include "document/case_document.h"
 #include "gui_test_support.h"
 #include "main_window.h"
 
 #include <qwt_plot.h>
+#include <qwt_scale_widget.h>
+#include <qwt_text.h>
 
 #include <QAbstractButton>
 #include <QAbstractSpinBox>
 #include <QAction>
 #include <QComboBox>
 #include <QDockWidget>
+#include <QFontMetricsF>
 #include <QHeaderView>
 #include <QLineEdit>
 #include <QScrollBar>
@@ -209,6 +213,55 @@ class TestWindowLayout : public QObject {
       // Stations 8 and 9 in view at the laptop size too; the performance summary in one view.
       QVERIFY2(everyRowInView(table), name);
     }
+  }
+
+  // Every cycle chart's axis titles stand on one line: the entropy axis's title once wrapped to
+  // two at 1280 x 800 ("Specific entropy s (0 at the free-stream static state) [J/(kg·K)]").
+  // With the h-s chart beside the others, the narrowest they get.
+  void axisTitlesFitOnOneLine_data() {
+    QTest::addColumn<QSize>("size");
+    QTest::addColumn<bool>("beside");
+    for (const QSize size : {QSize(1280, 800), QSize(1920, 1080)})
+      for (const bool beside : {false, true})
+        QTest::addRow("%dx%d %s", size.width(), size.height(), beside ? "three charts" : "two charts")
+            << size << beside;
+  }
+  void axisTitlesFitOnOneLine() {
+    QFETCH(QSize, size);
+    QFETCH(bool, beside);
+    cw::gui::MainWindow window;
+    QVERIFY(window.openCase(":/demo/demo-turbojet.json"));
+    window.resize(size);
+    window.show();
+    QVERIFY(QTest::qWaitForWindowExposed(&window));
+    auto* besideAction = window.findChild<QAction*>("enthalpyEntropyBesideAction");
+    QVERIFY(besideAction);
+    besideAction->setChecked(beside);
+    settle();
+    if (!qEnvironmentVariableIsEmpty("CYCLEWRIGHT_LAYOUT_PICTURES"))
+      window.grab().save(QStringLiteral("%1/axes-%2x%3-%4.png")
+                             .arg(qEnvironmentVariable("CYCLEWRIGHT_LAYOUT_PICTURES"))
+                             .arg(size.width())
+                             .arg(size.height())
+                             .arg(beside ? "three" : "two"));
+    int checked = 0;
+    for (cw::gui::CycleChart* chart : window.findChildren<cw::gui::CycleChart*>()) {
+      if (!chart->isVisible()) continue;
+      for (const QwtAxisId axis : {QwtAxis::XBottom, QwtAxis::YLeft}) {
+        const QwtText title = chart->axisTitle(axis);
+        const QwtScaleWidget* scale = chart->axisWidget(axis);
+        const double room =
+            axis == QwtAxis::XBottom ? scale->contentsRect().width() : scale->contentsRect().height();
+        const double needed = title.textSize(scale->font()).width();
+        QVERIFY2(!title.text().contains('\n') && needed <= room,
+                 qPrintable(QString("%1: \"%2\" needs %3 px of %4")
+                                .arg(chart->objectName(), title.text())
+                                .arg(needed)
+                                .arg(room)));
+        ++checked;
+      }
+    }
+    QCOMPARE(checked, beside ? 6 : 4);
   }
 };
 

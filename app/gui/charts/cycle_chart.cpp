@@ -20,6 +20,7 @@
 #include <qwt_plot_zoomer.h>
 #include <qwt_scale_engine.h>
 #include <qwt_scale_map.h>
+#include <qwt_scale_widget.h>
 #include <qwt_symbol.h>
 #include <qwt_text.h>
 
@@ -29,6 +30,7 @@
 #include <algorithm>
 #include <cmath>
 #include <limits>
+#include <utility>
 
 namespace cw::gui {
 
@@ -80,16 +82,14 @@ CycleChart::CycleChart(ChartKind kind, DisplayUnits& units, QWidget* parent)
   // The legend: inside the canvas of the temperature-entropy and enthalpy-entropy charts, in
   // the corner the cycle leaves free; below the pressure-volume chart, whose corners it fills.
   if (kind != ChartKind::PressureVolume) {
-    // T-s: the top left; h-s: the bottom left (the compressor climbs to the top left there, the
-    // closures fall to the right).
-    legendItem_ = makeLegendItem(kind == ChartKind::TemperatureEntropy ? Qt::AlignTop | Qt::AlignLeft
-                                                                       : Qt::AlignBottom | Qt::AlignLeft,
-                                 1, 0.85);
+    // The top left on both: on the sensible enthalpy scale the h-s cycle has the T-s cycle's shape.
+    legendItem_ = makeLegendItem(Qt::AlignTop | Qt::AlignLeft, 1, 0.85);
     legendItem_->setMargin(4);
     legendItem_->setSpacing(2);
     legendItem_->attach(this);
   } else {
-    insertOuterLegend(QwtPlot::BottomLegend, 3, 0.85);
+    // Three columns of short entries: two rows, so that the plot keeps most of the height.
+    insertOuterLegend(QwtPlot::BottomLegend, 3, 0.8);
   }
 
   auto makeCurve = [this](const QPen& pen, double z) {
@@ -115,6 +115,11 @@ CycleChart::CycleChart(ChartKind kind, DisplayUnits& units, QWidget* parent)
   stationLegend_ = makeCurve(QPen(Qt::NoPen), 5);
   stationLegend_->setLegendAttribute(QwtPlotCurve::LegendShowLine, false);
   stationLegend_->setLegendAttribute(QwtPlotCurve::LegendShowSymbol, true);
+  // The entropy axis's reference, a legend entry without a line (not on the p-v chart).
+  entropyNote_ = makeCurve(QPen(Qt::NoPen), 5);
+  entropyNote_->setLegendAttribute(QwtPlotCurve::LegendShowLine, false);
+  entropyNote_->setStyle(QwtPlotCurve::NoCurve);  // a blank icon: no line, no symbol, no fill
+  entropyNote_->setItemAttribute(QwtPlotItem::Legend, kind != ChartKind::PressureVolume);
   actualClosure_ = makeCurve(QPen(kBlue, 1.0, Qt::DashDotLine), 18);
   idealClosure_ = makeCurve(QPen(kOrange, 1.0, Qt::DotLine), 18);
   QPen idealPen(kOrange, 2.0, Qt::DashLine);
@@ -178,7 +183,6 @@ void CycleChart::beginExport(const ExportOptions& options) {
 }
 
 void CycleChart::endExport() {
-  highlight_->setItemAttribute(QwtPlotItem::Legend, true);
   updateHighlight();
 }
 
@@ -196,7 +200,7 @@ StateValue CycleChart::yValue() const {
     case ChartKind::PressureVolume:
       return StateValue::Pressure;
     case ChartKind::EnthalpyEntropy:
-      return StateValue::Enthalpy;
+      return StateValue::SensibleEnthalpy;
   }
   return StateValue::Temperature;
 }
@@ -222,33 +226,64 @@ double CycleChart::yScale() const {
 }
 
 void CycleChart::retranslateUi() {
+  // Each axis title in full, and a brief form for an axis too short for it on one line.
+  const QString entropy = units_.withUnit(tr("Specific entropy s"), Quantity::Entropy);
+  const QString entropyBrief = units_.withUnit(tr("Entropy s"), Quantity::Entropy);
   if (kind_ == ChartKind::TemperatureEntropy) {
     setTitle(tr("Temperature–entropy"));
-    setAxisTitle(
-        QwtAxis::XBottom,
-        units_.withUnit(tr("Specific entropy s (0 at the free-stream static state)"), Quantity::Entropy));
-    setAxisTitle(QwtAxis::YLeft, units_.withUnit(tr("Temperature T"), Quantity::Temperature));
+    xTitles_ = {entropy, entropyBrief};
+    yTitles_ = {units_.withUnit(tr("Temperature T"), Quantity::Temperature)};
   } else if (kind_ == ChartKind::EnthalpyEntropy) {
     setTitle(tr("Enthalpy–entropy"));
-    setAxisTitle(
-        QwtAxis::XBottom,
-        units_.withUnit(tr("Specific entropy s (0 at the free-stream static state)"), Quantity::Entropy));
-    setAxisTitle(QwtAxis::YLeft, units_.withUnit(tr("Specific enthalpy h"), Quantity::SpecificEnergy));
+    xTitles_ = {entropy, entropyBrief};
+    yTitles_ = {units_.withUnit(tr("Sensible enthalpy h − h(298.15 K)"), Quantity::SpecificEnergy),
+                units_.withUnit(tr("h − h(298.15 K)"), Quantity::SpecificEnergy)};
   } else {
     setTitle(tr("Pressure–volume"));
-    setAxisTitle(QwtAxis::XBottom, units_.withUnit(tr("Specific volume v"), Quantity::SpecificVolume));
-    setAxisTitle(QwtAxis::YLeft, units_.withUnit(tr("Pressure p"), Quantity::Pressure));
+    xTitles_ = {units_.withUnit(tr("Specific volume v"), Quantity::SpecificVolume),
+                units_.withUnit(QStringLiteral("v"), Quantity::SpecificVolume)};
+    yTitles_ = {units_.withUnit(tr("Pressure p"), Quantity::Pressure)};
   }
+  fitAxisTitles();
   actual_->setTitle(tr("Cycle with losses"));
   ideal_->setTitle(tr("Ideal cycle"));
   baselineCurve_->setTitle(tr("Baseline: %1").arg(baselineTitle_));
-  actualClosure_->setTitle(tr("Closure to ambient, with losses"));
-  idealClosure_->setTitle(tr("Closure to ambient, ideal"));
-  isobarLegend_->setTitle(tr("Isobars through station pressures"));
-  stationLegend_->setTitle(tr("Stations: 0, 8, 9 static states;\n2 to 7 total states"));
-  highlight_->setTitle(highlighted_.empty() ? tr("Selected component")
-                                            : tr("Selected: %1").arg(componentName(highlighted_)));
+  // Short entries, so that the legend takes few rows (the p-v chart's lies below its plot).
+  actualClosure_->setTitle(tr("Closure, with losses"));
+  idealClosure_->setTitle(tr("Closure, ideal"));
+  isobarLegend_->setTitle(tr("Station isobars"));
+  stationLegend_->setTitle(tr("Stations: 0, 8, 9 static;\n2 to 7 total"));
+  // The entropy axis's reference, said here so that the axis title stays on one line.
+  entropyNote_->setTitle(tr("s = 0 at the free-stream\nstatic state"));
+  highlight_->setTitle(tr("Selected: %1").arg(componentName(highlighted_)));
   showStaleBanner();
+}
+
+void CycleChart::updateLayout() {
+  ChartBase::updateLayout();  // the axes' lengths first
+  fitAxisTitles();            // a changed title asks for another layout, which keeps it
+}
+
+void CycleChart::fitAxisTitles() {
+  // Three charts beside each other on a laptop leave the axes too short for the full titles on
+  // one line (a wrapped title takes a second line from the plot): the brief form then.
+  for (const auto& [axis, titles] :
+       {std::pair{QwtAxis::XBottom, &xTitles_}, std::pair{QwtAxis::YLeft, &yTitles_}}) {
+    if (titles->isEmpty()) continue;
+    const QwtScaleWidget* scale = axisWidget(axis);
+    const QRect area = scale->contentsRect();
+    const double room = axis == QwtAxis::XBottom ? area.width() : area.height();
+    QString wanted = titles->last();
+    QwtText shown = axisTitle(axis);  // the chart's title font and flags
+    for (const QString& title : *titles) {
+      shown.setText(title);
+      if (room <= 0 || shown.textSize(scale->font()).width() <= room) {
+        wanted = title;
+        break;
+      }
+    }
+    if (axisTitle(axis).text() != wanted) setAxisTitle(axis, wanted);
+  }
 }
 
 void CycleChart::clearDynamicItems() {
@@ -478,6 +513,8 @@ void CycleChart::updateHighlight() {
   idealHighlight_->setVisible(false);
   highlight_->setSamples(QVector<QPointF>());
   idealHighlight_->setSamples(QVector<QPointF>());
+  // The legend names the selection only while there is one.
+  highlight_->setItemAttribute(QwtPlotItem::Legend, !highlighted_.empty());
   if (!evaluation_ || highlighted_.empty()) return;
   const int a = componentPath(evaluation_->actual, highlighted_);
   const int i = componentPath(evaluation_->ideal, highlighted_);
@@ -538,7 +575,7 @@ QString CycleChart::readoutAt(const QPoint& position) const {
     return QStringLiteral("%1 = %2\n%3 = %4")
         .arg(pv ? QStringLiteral("v") : QStringLiteral("s"), units_.format(x * xScale(), xQuantity(), 4),
              pv                                    ? QStringLiteral("p")
-             : kind_ == ChartKind::EnthalpyEntropy ? QStringLiteral("h")
+             : kind_ == ChartKind::EnthalpyEntropy ? QStringLiteral("h − h(298.15 K)")
                                                    : QStringLiteral("T"),
              units_.format(y * yScale(), yQuantity(), 4));
   }
@@ -554,7 +591,8 @@ QString CycleChart::readoutAt(const QPoint& position) const {
                units_.format(s.pressure, Quantity::Pressure, 5),
                units_.format(s.specificVolume, Quantity::SpecificVolume, 4));
   if (kind_ == ChartKind::EnthalpyEntropy)
-    text += QStringLiteral("\nh = %1").arg(units_.format(s.enthalpy, Quantity::SpecificEnergy, 5));
+    text += QStringLiteral("\nh − h(298.15 K) = %1")
+                .arg(units_.format(s.sensibleEnthalpy, Quantity::SpecificEnergy, 5));
   return text;
 }
 

@@ -19,6 +19,8 @@
 #include "charts/path_series.h"
 #include "document/units.h"
 
+#include <QStringList>
+
 #include <memory>
 #include <string>
 #include <vector>
@@ -35,8 +37,9 @@ namespace cw::gui {
 class IsobarLabels;
 class ReadoutPicker;
 
-/// The plane: T-s, p-v, or h-s (the turbomachinery engineer's view; h as the core gives it,
-/// absolute with the enthalpies of formation).
+/// The plane: T-s, p-v, or h-s (the turbomachinery engineer's view: the sensible enthalpy
+/// h - h(298.15 K) at each state's composition, as the core gives it, so that heat added shows as
+/// the rise it is and the compressor's and turbine's work as vertical distances).
 enum class ChartKind { TemperatureEntropy, PressureVolume, EnthalpyEntropy };
 
 class CycleChart : public ChartBase {
@@ -78,6 +81,8 @@ class CycleChart : public ChartBase {
   const QwtPlotCurve* baselineCurve() const { return baselineCurve_; }
   /// The legend entry of the station markers, which says which are static and which total states.
   const QwtPlotCurve* stationLegendEntry() const { return stationLegend_; }
+  /// The legend entry that says where entropy is zero (T-s and h-s charts).
+  const QwtPlotCurve* entropyNoteEntry() const { return entropyNote_; }
   int isobarCount() const { return static_cast<int>(isobars_.size()); }
   int markerCount() const { return static_cast<int>(markers_.size()); }
   const std::vector<QwtPlotMarker*>& markers() const { return markers_; }
@@ -91,6 +96,7 @@ class CycleChart : public ChartBase {
   void beginExport(const ExportOptions& options) override;
   void endExport() override;
   bool hasResult() const override { return evaluation_ != nullptr; }
+  void updateLayout() override;
 
  private:
   /// Colours of the canvas, grid, legend and rubber band from the palette.
@@ -106,6 +112,8 @@ class CycleChart : public ChartBase {
   void updateStalePens();
   void rescale();
   void clearDynamicItems();
+  /// Each axis's title in full where it fits along the axis on one line, else its brief form.
+  void fitAxisTitles();
 
   ChartKind kind_;
   DisplayUnits& units_;
@@ -114,6 +122,7 @@ class CycleChart : public ChartBase {
   QString baselineTitle_;
   bool logAxes_ = false;
   std::string highlighted_;
+  QStringList xTitles_, yTitles_;  ///< each axis's title, in full first, then brief
 
   QwtPlotCurve* actual_ = nullptr;
   QwtPlotCurve* ideal_ = nullptr;
@@ -124,6 +133,7 @@ class CycleChart : public ChartBase {
   QwtPlotCurve* idealHighlight_ = nullptr;
   QwtPlotCurve* isobarLegend_ = nullptr;   ///< an empty curve carrying the isobars' legend entry
   QwtPlotCurve* stationLegend_ = nullptr;  ///< an empty curve: the stations' marker and states
+  QwtPlotCurve* entropyNote_ = nullptr;    ///< an empty curve: where s is zero (T-s, h-s)
   std::vector<QwtPlotCurve*> isobars_;
   std::vector<QwtPlotMarker*> markers_;
   IsobarLabels* isobarLabels_ = nullptr;

@@ -19,6 +19,8 @@ double stateValue(const engine::PathState& s, StateValue value) {
       return s.specificVolume;
     case StateValue::Enthalpy:
       return s.enthalpy;
+    case StateValue::SensibleEnthalpy:
+      return s.sensibleEnthalpy;
   }
   return 0.0;
 }
@@ -103,6 +105,7 @@ bool stationState(const engine::CycleResult& cycle, const engine::Station& stati
       state.pressure = target;
       state.specificVolume = a.specificVolume * std::pow(b.specificVolume / a.specificVolume, t);
       state.enthalpy = mix(a.enthalpy, b.enthalpy);
+      state.sensibleEnthalpy = mix(a.sensibleEnthalpy, b.sensibleEnthalpy);
       return true;
     }
   }

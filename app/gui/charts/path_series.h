@@ -15,7 +15,8 @@
 namespace cw::gui {
 
 /// Which value of a path state an axis shows.
-enum class StateValue { Temperature, Entropy, Pressure, SpecificVolume, Enthalpy };
+/// SensibleEnthalpy: h - h(298.15 K) at the state's composition, as the core gives it (the h-s chart's).
+enum class StateValue { Temperature, Entropy, Pressure, SpecificVolume, Enthalpy, SensibleEnthalpy };
 
 double stateValue(const engine::PathState& state, StateValue value);
 
