@@ -715,6 +715,14 @@ kein Kreisprozess mit diesen Eingaben</translation>
         <source>Waterfall of specific thrust</source>
         <translation>Wasserfall des spezifischen Schubs</translation>
     </message>
+    <message>
+        <source>F_s</source>
+        <translation>F_s</translation>
+    </message>
+    <message>
+        <source>Baseline: %1</source>
+        <translation>Basis: %1</translation>
+    </message>
 </context>
 <context>
     <name>cw::gui::AuditPanel</name>
@@ -753,6 +761,14 @@ kein Kreisprozess mit diesen Eingaben</translation>
     <message>
         <source>&amp;Order…</source>
         <translation>&amp;Reihenfolge…</translation>
+    </message>
+    <message>
+        <source>&amp;Baseline beside</source>
+        <translation>Basis &amp;daneben</translation>
+    </message>
+    <message>
+        <source>Show the baseline&apos;s waterfall, in grey, beside the current one (Edit &gt; Pin as Baseline)</source>
+        <translation>Den Wasserfall der Basis grau neben dem aktuellen zeigen (Bearbeiten &gt; Als Basis festhalten)</translation>
     </message>
     <message>
         <source>The order in which the waterfall adds the losses to the ideal cycle</source>
@@ -1366,6 +1382,22 @@ p = %7   v = %8</translation>
     <message>
         <source>Change [%]</source>
         <translation>Änderung [%]</translation>
+    </message>
+    <message>
+        <source>Δ</source>
+        <translation>Δ</translation>
+    </message>
+    <message>
+        <source>Δ [%]</source>
+        <translation>Δ [%]</translation>
+    </message>
+    <message>
+        <source>Change from the baseline: with losses minus the baseline, in the row&apos;s unit (baseline: %1)</source>
+        <translation>Änderung zur Basis: mit Verlusten minus Basis, in der Einheit der Zeile (Basis: %1)</translation>
+    </message>
+    <message>
+        <source>Change from the baseline in percent of the baseline (baseline: %1)</source>
+        <translation>Änderung zur Basis in Prozent der Basis (Basis: %1)</translation>
     </message>
     <message>
         <source>Baseline: %1</source>

@@ -491,6 +491,8 @@ void MainWindow::refreshBaseline() {
   // The charts overlay the baseline's cycle with losses (grey, dash-dot-dot, with its title).
   for (CycleChart* chart : {tsChart_, pvChart_, hsChart_})
     chart->setBaseline(baseline, document_->baselineTitle());
+  // Three columns more or fewer: the performance table's width, and so the pair's arrangement.
+  fitTables();
 }
 
 void MainWindow::pinBaseline() {

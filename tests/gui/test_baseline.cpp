@@ -1,7 +1,7 @@
 // Baseline against variant: pin the shown case or open a saved one as the baseline; the
-// performance table's "Baseline" and "Change from baseline" columns and the station table's
-// difference from the baseline equal the core's results of the two cases (each evaluated here
-// with cw::engine::evaluateCase) to 1e-12; the exports carry them.
+// performance table's "Baseline" and "Change from baseline" columns (Δ and Δ [%] on screen) and the station
+// table's difference from the baseline equal the core's results of the two cases (each evaluated here with
+// cw::engine::evaluateCase) to 1e-12; the exports carry them.
 #include "charts/cycle_chart.h"
 #include "document/case_document.h"
 #include "gui_test_support.h"
@@ -148,6 +148,15 @@ class TestBaseline : public QObject {
     // The performance table's text has the baseline's columns.
     const QString table = window.performanceTableText();
     QVERIFY(table.contains("Baseline\tChange from baseline\tChange [%]"));
+    // On screen the headers are short (the table fits beside the station table); tooltips say them whole.
+    QCOMPARE(window.performanceModel()->headerData(P::BaselineChange, Qt::Horizontal).toString(),
+             QString("Δ"));
+    QCOMPARE(window.performanceModel()->headerData(P::BaselinePercent, Qt::Horizontal).toString(),
+             QString("Δ [%]"));
+    QVERIFY(window.performanceModel()
+                ->headerData(P::BaselineChange, Qt::Horizontal, Qt::ToolTipRole)
+                .toString()
+                .startsWith("Change from the baseline"));
     // The results JSON holds the baseline beside the result.
     const QString json = dir.filePath("results.json");
     QVERIFY(window.exportResultJson(json));

@@ -17,9 +17,13 @@
 
 #include "analysis/loss_audit.h"
 #include "common/version.h"
+#include "engine/evaluate.h"
 
+#include <qwt_scale_widget.h>
 #include <qwt_text.h>
 
+#include <QApplication>
+#include <QCheckBox>
 #include <QComboBox>
 #include <QDockWidget>
 #include <QFile>
@@ -36,6 +40,7 @@
 #include <QTest>
 #include <QTimer>
 
+#include <algorithm>
 #include <cmath>
 
 using cw::gui::AuditChart;
@@ -60,6 +65,28 @@ std::vector<std::string> keysOf(const QStringList& keys) {
   std::vector<std::string> out;
   for (const QString& key : keys) out.push_back(key.toStdString());
   return out;
+}
+
+bool near12(double a, double b) {
+  return std::fabs(a - b) <= 1e-12 * std::max(1.0, std::fabs(b));
+}
+
+// A chart's bars (the current or the baseline's) against the core's audit: the totals and each
+// step to 1e-12, each loss in the slot named by the axis (the chart's slot of that loss).
+void checkBarsEqual(const std::vector<AuditChart::Bar>& bars, const cw::analysis::LossAudit& reference,
+                    bool tsfc) {
+  QCOMPARE(bars.size(), reference.waterfall.size() + 2);
+  QVERIFY(bars.front().loss.empty() && bars.back().loss.empty());
+  QVERIFY(near12(bars.front().to,
+                 tsfc ? reference.ideal.thrustSpecificFuelConsumption : reference.ideal.specificThrust));
+  QVERIFY(near12(bars.back().to,
+                 tsfc ? reference.actual.thrustSpecificFuelConsumption : reference.actual.specificThrust));
+  for (size_t i = 0; i < reference.waterfall.size(); ++i) {
+    QCOMPARE(bars[i + 1].loss, reference.waterfall[i].loss);
+    const double step = tsfc ? reference.waterfall[i].deltaTsfc : reference.waterfall[i].deltaSpecificThrust;
+    QVERIFY2(near12(bars[i + 1].to - bars[i + 1].from, step), bars[i + 1].loss.c_str());
+    QVERIFY(bars[i + 1].slot > bars[i].slot);  // left to right in the audit's order
+  }
 }
 
 // The chart's loss bars are the core's waterfall in that order, and telescope.
@@ -181,6 +208,133 @@ class TestLossAudit : public QObject {
     // A total bar selects nothing.
     QTest::mouseClick(chart->canvas(), Qt::LeftButton, Qt::NoModifier, chart->barCentre(0));
     QCOMPARE(window.selection().current(), cw::gui::Section::Turbine);
+  }
+
+  void baselineWaterfallBesideTheCurrentOne() {
+    MainWindow window;
+    window.units().setSystem(cw::gui::UnitSystem::SI);
+    QVERIFY(window.openCase(kDemo));
+    cw::gui::AuditPanel* panel = window.auditPanel();
+    AuditChart* chart = panel->chart();
+    QCheckBox* beside = panel->baselineBox();
+    QVERIFY(beside);
+    QVERIFY(!beside->isEnabled());  // no baseline yet
+    QVERIFY(chart->baselineBars().empty());
+
+    // The baseline: the demo with an unlit afterburner's loss, a loss the current case lacks.
+    cw::engine::Case baseline = window.document().currentCase();
+    baseline.afterburner.pressureLossFractionUnlit = 0.03;
+    QVERIFY(window.document().setBaseline(baseline, QStringLiteral("Review A")));
+    QVERIFY(beside->isEnabled());
+    QVERIFY(!beside->isChecked());
+    QVERIFY(chart->baselineBars().empty());  // only when asked
+    beside->setChecked(true);
+    QTRY_VERIFY(window.document().baselineAudit() != nullptr);
+    QVERIFY(chart->hasBaseline());
+
+    // A variant in the window; both waterfalls are the core's audits of their cases.
+    cw::engine::Case variant = window.document().currentCase();
+    variant.compressor.pressureRatio = 11.0;
+    window.document().applyEdit(-1, QStringLiteral("edit"), variant);
+    QTRY_VERIFY(!window.document().isAuditStale());
+    const auto currentReference = cw::analysis::auditCase(variant);
+    const auto baselineReference = cw::analysis::auditCase(baseline);
+    for (const bool tsfc : {false, true}) {
+      panel->figureBox()->setCurrentIndex(tsfc ? 1 : 0);
+      checkBarsEqual(chart->bars(), currentReference, tsfc);
+      if (QTest::currentTestFailed()) return;
+      checkBarsEqual(chart->baselineBars(), baselineReference, tsfc);
+      if (QTest::currentTestFailed()) return;
+    }
+    // The slots: a loss of both cases shares one; the afterburner's loss has the baseline's bar alone.
+    const auto& bars = chart->bars();
+    const auto& base = chart->baselineBars();
+    QCOMPARE(base.size(), bars.size() + 1);
+    QVERIFY(
+        std::none_of(bars.begin(), bars.end(), [](const auto& b) { return b.loss == "afterburner_loss"; }));
+    QVERIFY(
+        std::any_of(base.begin(), base.end(), [](const auto& b) { return b.loss == "afterburner_loss"; }));
+    for (const auto& b : base)
+      for (const auto& c : bars)
+        if (b.loss == c.loss && !b.loss.empty()) QCOMPARE(b.slot, c.slot);
+    QCOMPARE(base.back().slot, bars.back().slot);
+    // Named in the legend in neutral grey, with the baseline's title.
+    QCOMPARE(chart->baselineLegendText(), QStringLiteral("Baseline: Review A"));
+
+    // Drawn (an export at 1400 x 700 px): every value label inside the canvas, none over another.
+    panel->figureBox()->setCurrentIndex(0);
+    QTemporaryDir dir;
+    const QString png = dir.filePath("baseline.png");
+    QVERIFY(cw::gui::exportChartPng(chart, png, QSize(1400, 700), 96));
+    if (!qEnvironmentVariableIsEmpty("CYCLEWRIGHT_LAYOUT_PICTURES"))
+      QFile::copy(png, qEnvironmentVariable("CYCLEWRIGHT_LAYOUT_PICTURES") + "/audit-baseline.png");
+    const QRectF canvas = chart->lastCanvasRect();
+    std::vector<QRectF> labels = chart->valueLabelRects();
+    QCOMPARE(labels.size(), bars.size());
+    for (const QRectF& r : chart->baselineValueLabelRects()) labels.push_back(r);
+    QVERIFY(chart->baselineValueLabelRects().size() >= base.size() / 2);  // most fit at this size
+    for (size_t i = 0; i < labels.size(); ++i) {
+      QVERIFY(canvas.contains(labels[i]));
+      for (size_t j = i + 1; j < labels.size(); ++j) QVERIFY(!labels[i].intersects(labels[j]));
+    }
+
+    // Unticked, or the baseline cleared: the current waterfall alone.
+    beside->setChecked(false);
+    QVERIFY(chart->baselineBars().empty());
+    QVERIFY(chart->baselineLegendText().isEmpty());
+    beside->setChecked(true);
+    QVERIFY(!chart->baselineBars().empty());
+    window.document().clearBaseline();
+    QVERIFY(chart->baselineBars().empty());
+    QVERIFY(!beside->isEnabled());
+    checkBarsEqual(chart->bars(), currentReference, false);
+  }
+
+  void valueAxisTitleFitsInTheBottomTab() {
+    // At 1280 x 800 the audit's tab is low: the whole title "Specific thrust F_s [N·s/kg]" is
+    // longer than the axis and was cut at both ends; the chart takes the short one that fits.
+    MainWindow window;
+    window.units().setSystem(cw::gui::UnitSystem::SI);
+    QVERIFY(window.openCase(kDemo));
+    window.resize(1280, 800);
+    window.show();
+    QVERIFY(QTest::qWaitForWindowExposed(&window));
+    auto* tabs = window.findChild<QTabWidget*>("bottomTabs");
+    tabs->setCurrentWidget(window.auditPanel());
+    for (int i = 0; i < 4; ++i) QApplication::processEvents();
+    AuditChart* chart = window.auditPanel()->chart();
+    QVERIFY(chart->isVisible());
+    const auto* axis = chart->axisWidget(QwtAxis::YLeft);
+    if (!qEnvironmentVariableIsEmpty("CYCLEWRIGHT_LAYOUT_PICTURES"))
+      window.grab().save(qEnvironmentVariable("CYCLEWRIGHT_LAYOUT_PICTURES") + "/audit-tab-1280x800.png");
+    QVERIFY2(
+        chart->valueAxisTitleFits(),
+        qPrintable(QString("%1 on %2 px").arg(chart->axisTitle(QwtAxis::YLeft).text()).arg(axis->height())));
+    QCOMPARE(chart->axisTitle(QwtAxis::YLeft).text(), QString("F_s [N·s/kg]"));
+    QVERIFY(chart->axisTitle(QwtAxis::YLeft).font().pointSizeF() >=
+            0.7 * 12.0);  // Qwt's 12 pt at most 30 % smaller
+    window.auditPanel()->figureBox()->setCurrentIndex(1);
+    QVERIFY(chart->valueAxisTitleFits());
+    QVERIFY(chart->axisTitle(QwtAxis::YLeft).text().contains("[g/(kN·s)]"));  // the unit at least
+    window.auditPanel()->figureBox()->setCurrentIndex(0);
+    // In the dock, as tall as the window: the whole title.
+    window.auditDock()->show();
+    window.placeAudit();
+    for (int i = 0; i < 4; ++i) QApplication::processEvents();
+    QVERIFY(chart->valueAxisTitleFits());
+    QCOMPARE(chart->axisTitle(QwtAxis::YLeft).text(), QString("Specific thrust F_s [N·s/kg]"));
+    // An export has the whole title too.
+    QTemporaryDir dir;
+    window.auditDock()->hide();
+    window.placeAudit();
+    tabs->setCurrentWidget(window.auditPanel());
+    for (int i = 0; i < 4; ++i) QApplication::processEvents();
+    QCOMPARE(chart->axisTitle(QwtAxis::YLeft).text(), QString("F_s [N·s/kg]"));
+    {
+      cw::gui::ExportScope scope(chart);
+      QCOMPARE(chart->axisTitle(QwtAxis::YLeft).text(), QString("Specific thrust F_s [N·s/kg]"));
+    }
+    QCOMPARE(chart->axisTitle(QwtAxis::YLeft).text(), QString("F_s [N·s/kg]"));
   }
 
   void exportsReadBack() {

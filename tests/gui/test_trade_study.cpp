@@ -641,6 +641,43 @@ class TestTradeStudy : public QObject {
     QCOMPARE(panel->firstAxis()->stopEdit()->text(), QString("1700"));
   }
 
+  void rangeFieldsAtTheFormsDisplayPrecision() {
+    // The start, stop and comparison fields and the valid range in the forms' precision
+    // (DisplayUnits::inputText): in SI as the value is, in U.S. units the SI text's significant
+    // digits, at least five (ft = 0.3048 m, lbm = 0.45359237 kg: NIST SP 811, units.h).
+    MainWindow window;
+    QVERIFY(window.openCase(kDemo));
+    window.setUnitSystem(cw::gui::UnitSystem::SI);
+    TradeStudyPanel* panel = window.tradeStudyPanel();
+    auto* axis = panel->firstAxis();
+    QVERIFY(axis->setPath("flight.altitude_m"));  // 0 to 11 000 m (practitionerRange)
+    QCOMPARE(axis->startEdit()->text(), QString("0"));
+    QCOMPARE(axis->stopEdit()->text(), QString("11000"));
+    QVERIFY2(axis->stopEdit()->toolTip().contains("[-5000, 84852] m"),
+             qPrintable(axis->stopEdit()->toolTip()));
+    QVERIFY(panel->setChangedInput("flight.altitude_m", 6000.0));
+    QCOMPARE(panel->changeEditor()->valueEdit()->text(), QString("6000"));
+
+    window.setUnitSystem(cw::gui::UnitSystem::USCustomary);
+    QCOMPARE(axis->startEdit()->text(), QString("0"));
+    QCOMPARE(axis->stopEdit()->text(), QString("36089"));  // not 36089.23885
+    QVERIFY2(axis->stopEdit()->toolTip().contains("[-16404, 278386] ft"),
+             qPrintable(axis->stopEdit()->toolTip()));                       // not -16404.2, 278385.8
+    QCOMPARE(panel->changeEditor()->valueEdit()->text(), QString("19685"));  // not 19685.03937
+    typeInto(axis->startEdit(), "-20000");  // outside: the message says the range at that precision
+    QVERIFY2(axis->errorLabel()->text().contains(
+                 "Start = -20000 ft is outside the valid range [-16404, 278386] ft"),
+             qPrintable(axis->errorLabel()->text()));
+
+    // An input without a practitioner's range: the demo's 4 kg/s -50 % to +50 %.
+    QVERIFY(axis->setPath("design.air_mass_flow_kg_per_s"));
+    QCOMPARE(axis->startEdit()->text(), QString("4.4092"));  // 2 kg/s, not 4.409245244
+    QCOMPARE(axis->stopEdit()->text(), QString("13.228"));   // 6 kg/s, not 13.22773573
+    window.setUnitSystem(cw::gui::UnitSystem::SI);
+    QCOMPARE(axis->startEdit()->text(), QString("2"));
+    QCOMPARE(axis->stopEdit()->text(), QString("6"));
+  }
+
   void editingTheCaseMarksTheStudyStale() {
     MainWindow window;
     QVERIFY(window.openCase(kDemo));

@@ -4,9 +4,11 @@
 
 #include "document/loss_names.h"
 
+#include <qwt_graphic.h>
 #include <qwt_plot_canvas.h>
 #include <qwt_plot_grid.h>
 #include <qwt_plot_item.h>
+#include <qwt_plot_legenditem.h>
 #include <qwt_plot_textlabel.h>
 #include <qwt_scale_div.h>
 #include <qwt_scale_draw.h>
@@ -19,6 +21,7 @@
 #include <QFontMetricsF>
 #include <QMouseEvent>
 #include <QPainter>
+#include <QStringList>
 
 #include <algorithm>
 #include <cmath>
@@ -32,28 +35,82 @@ const QColor& kBlue = kOkabeItoBlue;
 const QColor& kOrange = kOkabeItoOrange;
 const QColor& kVermillion = kOkabeItoVermillion;
 const QColor& kGreen = kOkabeItoGreen;
+const QColor& kGrey = kOkabeItoGrey;
 
-constexpr double kHalfWidth = 0.36;  // half a bar's width [bar pitch]
+constexpr double kHalfWidth = 0.36;      // half a bar's width [bar pitch]
+constexpr double kPairHalfWidth = 0.19;  // half of each bar of a pair (current, baseline)
+constexpr double kPairOffset = 0.2;      // of each bar of a pair from the slot's centre
+constexpr qsizetype kBaselineTitleChars =
+    32;  ///< of the baseline's title in the legend, as on the cycle charts
 
-/// The loss names under the bars, at the integer positions.
+/// The losses of two waterfall orders, each kept in its order: both are taken from one order
+/// (the asked keys, then the flow order) with the losses that do not apply left out, so the
+/// merge is consistent with both.
+std::vector<std::string> mergedOrder(const std::vector<std::string>& a, const std::vector<std::string>& b) {
+  std::vector<std::string> out;
+  std::size_t i = 0, j = 0;
+  auto in = [](const std::vector<std::string>& v, std::size_t from, const std::string& key) {
+    return std::find(v.begin() + static_cast<std::ptrdiff_t>(from), v.end(), key) != v.end();
+  };
+  while (i < a.size() || j < b.size()) {
+    if (i < a.size() && j < b.size() && a[i] == b[j]) {
+      out.push_back(a[i++]);
+      ++j;
+    } else if (i < a.size() && (j >= b.size() || !in(b, j, a[i]))) {
+      out.push_back(a[i++]);
+    } else if (j < b.size() && (i >= a.size() || !in(a, i, b[j]))) {
+      out.push_back(b[j++]);
+    } else {
+      out.push_back(a[i++]);  // not from one order (does not happen): the current's first
+    }
+  }
+  std::vector<std::string> unique;
+  for (auto& key : out)
+    if (std::find(unique.begin(), unique.end(), key) == unique.end()) unique.push_back(key);
+  return unique;
+}
+
+/// The loss names under the slots, at the integer positions.
 class BarScaleDraw : public QwtScaleDraw {
  public:
-  explicit BarScaleDraw(const std::vector<AuditChart::Bar>& bars) : bars_(bars) {}
+  explicit BarScaleDraw(const std::vector<std::string>& names) : slots_(names) {}
   QwtText label(double value) const override {
     const long i = std::lround(value);
-    if (i < 0 || i >= static_cast<long>(bars_.size()) || std::abs(value - static_cast<double>(i)) > 1e-6)
+    if (i < 0 || i >= static_cast<long>(slots_.size()) || std::abs(value - static_cast<double>(i)) > 1e-6)
       return {};
-    const auto& bar = bars_[static_cast<size_t>(i)];
-    if (!bar.loss.empty()) return lossShortName(bar.loss);
+    const auto& loss = slots_[static_cast<size_t>(i)];
+    if (!loss.empty()) return lossShortName(loss);
     return i == 0 ? QCoreApplication::translate("cw::gui::AuditChart", "Ideal twin")
                   : QCoreApplication::translate("cw::gui::AuditChart", "With losses");
   }
 
  private:
-  const std::vector<AuditChart::Bar>& bars_;
+  const std::vector<std::string>& slots_;
 };
 
 }  // namespace
+
+/// The baseline's entry in the legend: a grey bar; it draws nothing on the canvas.
+class AuditChart::BaselineKeyItem : public QwtPlotItem {
+ public:
+  BaselineKeyItem() {
+    setItemAttribute(QwtPlotItem::AutoScale, false);
+    setItemAttribute(QwtPlotItem::Legend, false);
+    setLegendIconSize(QSize(10, 10));
+  }
+  int rtti() const override { return QwtPlotItem::Rtti_PlotUserItem + 8; }
+  void draw(QPainter*, const QwtScaleMap&, const QwtScaleMap&, const QRectF&) const override {}
+  QwtGraphic legendIcon(int, const QSizeF& size) const override {
+    QwtGraphic icon;
+    icon.setDefaultSize(size);
+    icon.setRenderHint(QwtGraphic::RenderPensUnscaled, true);
+    QPainter painter(&icon);
+    painter.setPen(QPen(kGrey.darker(130), 1.0));
+    painter.setBrush(kGrey);
+    painter.drawRect(QRectF(QPointF(1, 1), size - QSizeF(2, 2)));
+    return icon;
+  }
+};
 
 class AuditChart::WaterfallItem : public QwtPlotItem {
  public:
@@ -66,27 +123,87 @@ class AuditChart::WaterfallItem : public QwtPlotItem {
   void draw(QPainter* painter, const QwtScaleMap& xMap, const QwtScaleMap& yMap,
             const QRectF& canvasRect) const override {
     labelRects_.clear();
-    const auto& bars = chart_.bars_;
+    baselineLabelRects_.clear();
+    const QPalette& p = chart_.palette();
+    const bool paired = !chart_.baselineBars_.empty();
+    QFont font = chart_.font();
+    font.setPointSizeF(font.pointSizeF() * 0.8);
+    painter->setFont(font);
+    Labels current, baseline;
+    drawBars(painter, xMap, yMap, chart_.bars_, false, paired, current);
+    if (paired) drawBars(painter, xMap, yMap, chart_.baselineBars_, true, paired, baseline);
+    // The values: clear of every bar, the legend and each other, inside the canvas. The current
+    // case's first: one that fits nowhere goes where it prefers, moved inside the canvas; a
+    // baseline's value that fits nowhere is left out (its bar and the table still tell it).
+    LabelPlacer placer(canvasRect.adjusted(1, 1, -1, -1));
+    for (const QRectF& r : current.bars) placer.addObstacle(r);
+    for (const QRectF& r : baseline.bars) placer.addObstacle(r);
+    if (paired && chart_.legend_ && chart_.legend_->plot())
+      placer.addObstacle(chart_.legend_->geometry(canvasRect).adjusted(-2, -2, 2, 2));
+    painter->setPen(p.color(QPalette::Text));
+    auto drawValue = [&](const QString& text, const QRectF& textRect) {
+      QwtText value(text);
+      value.setFont(font);
+      value.setColor(p.color(QPalette::Text));
+      value.setRenderFlags(Qt::AlignCenter);
+      value.draw(painter, textRect);
+    };
+    for (std::size_t i = 0; i < current.candidates.size(); ++i) {
+      const int k = placer.place(current.candidates[i]);
+      QRectF textRect = current.candidates[i][static_cast<std::size_t>(std::max(k, 0))];
+      if (k < 0) {
+        textRect.moveTop(std::max(textRect.top(), canvasRect.top() + 1.0));
+        textRect.moveLeft(std::max(textRect.left(), canvasRect.left() + 1.0));
+        textRect.moveRight(std::min(textRect.right(), canvasRect.right() - 1.0));
+        placer.addObstacle(textRect);
+      }
+      drawValue(current.texts[i], textRect);
+      labelRects_.push_back(textRect);
+    }
+    for (std::size_t i = 0; i < baseline.candidates.size(); ++i) {
+      const int k = placer.place(baseline.candidates[i]);
+      if (k < 0) continue;
+      const QRectF& textRect = baseline.candidates[i][static_cast<std::size_t>(k)];
+      drawValue(baseline.texts[i], textRect);
+      baselineLabelRects_.push_back(textRect);
+    }
+    lastCanvas_ = canvasRect;
+  }
+
+  /// From the last draw [canvas px], for tests: the value labels and the canvas.
+  mutable std::vector<QRectF> labelRects_;
+  mutable std::vector<QRectF> baselineLabelRects_;
+  mutable QRectF lastCanvas_;
+
+ private:
+  /// The bars drawn and their value labels' candidate places.
+  struct Labels {
+    std::vector<QString> texts;
+    std::vector<std::vector<QRectF>> candidates;
+    std::vector<QRectF> bars;
+  };
+
+  /// Draws one audit's bars and connectors (the baseline's in grey, on the right of each slot).
+  void drawBars(QPainter* painter, const QwtScaleMap& xMap, const QwtScaleMap& yMap,
+                const std::vector<Bar>& bars, bool baseline, bool paired, Labels& labels) const {
     const QPalette& p = chart_.palette();
     const double factor = chart_.figureFactor();
     const bool tsfc = chart_.figure_ == AuditFigure::Tsfc;
     const double bottom = yMap.s1();
-    QFont font = chart_.font();
-    font.setPointSizeF(font.pointSizeF() * 0.8);
-    painter->setFont(font);
-    std::vector<QString> texts;
-    std::vector<std::vector<QRectF>> candidates;
-    std::vector<QRectF> barRects;
+    const double half = paired ? kPairHalfWidth : kHalfWidth;
+    const double offset = paired ? (baseline ? kPairOffset : -kPairOffset) : 0.0;
     for (size_t i = 0; i < bars.size(); ++i) {
       const auto& bar = bars[i];
       const bool total = bar.loss.empty();
-      const double x = static_cast<double>(i);
+      const double x = static_cast<double>(bar.slot) + offset;
       const double y0 = total ? bottom : bar.from / factor, y1 = bar.to / factor;
-      const QRectF r(QPointF(xMap.transform(x - kHalfWidth), yMap.transform(std::max(y0, y1))),
-                     QPointF(xMap.transform(x + kHalfWidth), yMap.transform(std::min(y0, y1))));
+      const QRectF r(QPointF(xMap.transform(x - half), yMap.transform(std::max(y0, y1))),
+                     QPointF(xMap.transform(x + half), yMap.transform(std::min(y0, y1))));
       QColor fill;
-      if (chart_.isStale())
-        fill = chart_.between(0.4);
+      if (baseline)
+        fill = kGrey;
+      else if (chart_.isStale())
+        fill = chart_.between(paired ? 0.25 : 0.4);  // lighter than the baseline's grey beside it
       else if (total)
         fill = i == 0 ? kOrange : kBlue;
       else {
@@ -94,17 +211,17 @@ class AuditChart::WaterfallItem : public QwtPlotItem {
         const bool costs = tsfc ? step > 0.0 : step < 0.0;
         fill = std::abs(step) <= 1e-9 * std::abs(bar.to) ? chart_.between(0.5) : costs ? kVermillion : kGreen;
       }
-      const bool selected =
-          !total && !chart_.exportingWithoutSelection_ && lossSection(bar.loss) == chart_.highlighted_;
+      const bool selected = !baseline && !total && !chart_.exportingWithoutSelection_ &&
+                            lossSection(bar.loss) == chart_.highlighted_;
       painter->setPen(selected ? QPen(p.color(QPalette::Text), 2.5) : QPen(fill.darker(130), 1.0));
       painter->setBrush(fill);
       painter->drawRect(r.height() < 1.0 ? r.adjusted(0, -0.5, 0, 0.5) : r);
       // Connector to the next bar at the running figure.
       if (i + 1 < bars.size()) {
-        painter->setPen(QPen(chart_.between(0.5), 1.0, Qt::DotLine));
+        painter->setPen(QPen(baseline ? kGrey : chart_.between(0.5), 1.0, Qt::DotLine));
         const double yc = yMap.transform(y1);
-        painter->drawLine(QPointF(xMap.transform(x + kHalfWidth), yc),
-                          QPointF(xMap.transform(x + 1 - kHalfWidth), yc));
+        const double next = static_cast<double>(bars[i + 1].slot) + offset;
+        painter->drawLine(QPointF(xMap.transform(x + half), yc), QPointF(xMap.transform(next - half), yc));
       }
       // The bar's value: the total, or the step with its sign.
       const double shown = (total ? bar.to : bar.to - bar.from) / factor;
@@ -119,39 +236,12 @@ class AuditChart::WaterfallItem : public QwtPlotItem {
       for (int row = 0; row < 3; ++row)  // above the bar, then staggered a line or two higher
         options.emplace_back(
             QPointF(r.center().x() - size.width() / 2.0, r.top() - 2.0 - size.height() - row * lift), size);
-      texts.push_back(text);
-      candidates.push_back(std::move(options));
-      barRects.push_back(r);
+      labels.texts.push_back(text);
+      labels.candidates.push_back(std::move(options));
+      labels.bars.push_back(r);
     }
-    // The values: clear of every bar and of each other, inside the canvas; one that fits nowhere
-    // goes where it prefers, moved inside the canvas.
-    LabelPlacer placer(canvasRect.adjusted(1, 1, -1, -1));
-    for (const QRectF& r : barRects) placer.addObstacle(r);
-    painter->setPen(p.color(QPalette::Text));
-    for (std::size_t i = 0; i < candidates.size(); ++i) {
-      const int k = placer.place(candidates[i]);
-      QRectF textRect = candidates[i][static_cast<std::size_t>(std::max(k, 0))];
-      if (k < 0) {
-        textRect.moveTop(std::max(textRect.top(), canvasRect.top() + 1.0));
-        textRect.moveLeft(std::max(textRect.left(), canvasRect.left() + 1.0));
-        textRect.moveRight(std::min(textRect.right(), canvasRect.right() - 1.0));
-        placer.addObstacle(textRect);
-      }
-      QwtText value(texts[i]);
-      value.setFont(font);
-      value.setColor(p.color(QPalette::Text));
-      value.setRenderFlags(Qt::AlignCenter);
-      value.draw(painter, textRect);
-      labelRects_.push_back(textRect);
-    }
-    lastCanvas_ = canvasRect;
   }
 
-  /// From the last draw [canvas px], for tests: the value labels and the canvas.
-  mutable std::vector<QRectF> labelRects_;
-  mutable QRectF lastCanvas_;
-
- private:
   const AuditChart& chart_;
 };
 
@@ -164,7 +254,12 @@ AuditChart::AuditChart(DisplayUnits& units, QWidget* parent) : ChartBase(parent)
   item_ = new WaterfallItem(*this);
   item_->attach(this);
 
-  auto* draw = new BarScaleDraw(bars_);
+  key_ = new BaselineKeyItem;
+  key_->attach(this);
+  legend_ = makeLegendItem(Qt::AlignTop | Qt::AlignRight, 1, 0.8);
+  legend_->attach(this);
+
+  auto* draw = new BarScaleDraw(slots_);
   draw->setLabelRotation(-40.0);
   draw->setLabelAlignment(Qt::AlignLeft | Qt::AlignBottom);
   draw->enableComponent(QwtAbstractScaleDraw::Ticks, false);
@@ -192,10 +287,12 @@ void AuditChart::refresh() {
 
 void AuditChart::beginExport(const ExportOptions& options) {
   exportingWithoutSelection_ = !options.selectionHighlight;
+  fitValueAxisTitle(true);  // a figure has the room for the whole title
 }
 
 void AuditChart::endExport() {
   exportingWithoutSelection_ = false;
+  fitValueAxisTitle();
 }
 
 void AuditChart::paletteChanged() {
@@ -210,10 +307,73 @@ void AuditChart::retranslateUi() {
   titleFont.setPointSizeF(font().pointSizeF() * 1.1);
   title.setFont(titleFont);
   setTitle(title);
-  setAxisTitle(QwtAxis::YLeft, figure_ == AuditFigure::Tsfc
-                                   ? units_.withUnit(tr("TSFC"), Quantity::Tsfc)
-                                   : units_.withUnit(tr("Specific thrust F_s"), Quantity::SpecificThrust));
+  fitValueAxisTitle();
   showStaleBanner();
+}
+
+QStringList AuditChart::valueAxisTitles() const {
+  if (figure_ == AuditFigure::Tsfc) return {units_.withUnit(tr("TSFC"), Quantity::Tsfc)};
+  return {units_.withUnit(tr("Specific thrust F_s"), Quantity::SpecificThrust),
+          units_.withUnit(tr("F_s"), Quantity::SpecificThrust)};
+}
+
+void AuditChart::fitValueAxisTitle(bool whole) {
+  // The longest title that fits along the axis on one line: in the low bottom tab of a laptop
+  // screen the whole one is longer than the axis and was wrapped and cut. The short one is
+  // drawn smaller where it must (down to 70 %), then the unit alone (the chart's title names
+  // the figure).
+  QStringList titles = valueAxisTitles();
+  titles << units_
+                .withUnit(QString(), figure_ == AuditFigure::Tsfc ? Quantity::Tsfc : Quantity::SpecificThrust)
+                .trimmed();
+  const QwtScaleWidget* axis = axisWidget(QwtAxis::YLeft);
+  const double length =
+      axis->height() - std::max(0, axis->startBorderDist()) - std::max(0, axis->endBorderDist());
+  QFont font = axisTitleFont();
+  if (titleFontSize_ <= 0.0) titleFontSize_ = font.pointSizeF();
+  font.setPointSizeF(titleFontSize_);
+  auto fits = [&](const QString& text, const QFont& f) {
+    return QFontMetricsF(f).horizontalAdvance(text) + 4.0 <= length;
+  };
+  QString chosen = titles.front();
+  QFont chosenFont = font;
+  if (!whole) {
+    bool found = false;
+    for (int i = 0; i < titles.size() && !found; ++i)
+      for (const double scale : {1.0, 0.9, 0.8, 0.7}) {
+        if (scale < 1.0 && i == 0) break;  // the whole title only at full size
+        QFont f = font;
+        f.setPointSizeF(titleFontSize_ * scale);
+        if (fits(titles[i], f)) {
+          chosen = titles[i];
+          chosenFont = f;
+          found = true;
+          break;
+        }
+      }
+    if (!found) {
+      chosen = titles.back();
+      chosenFont.setPointSizeF(titleFontSize_ * 0.7);
+    }
+  }
+  const QwtText current = axisTitle(QwtAxis::YLeft);
+  if (current.text() == chosen && current.font() == chosenFont) return;
+  QwtText title(chosen);
+  title.setFont(chosenFont);
+  setAxisTitle(QwtAxis::YLeft, title);
+}
+
+QFont AuditChart::axisTitleFont() const {
+  const QwtText title = axisWidget(QwtAxis::YLeft)->title();
+  return title.testPaintAttribute(QwtText::PaintUsingTextFont) ? title.font()
+                                                               : axisWidget(QwtAxis::YLeft)->font();
+}
+
+bool AuditChart::valueAxisTitleFits() const {
+  const QwtScaleWidget* axis = axisWidget(QwtAxis::YLeft);
+  const double length =
+      axis->height() - std::max(0, axis->startBorderDist()) - std::max(0, axis->endBorderDist());
+  return QFontMetricsF(axisTitleFont()).horizontalAdvance(axisTitle(QwtAxis::YLeft).text()) + 4.0 <= length;
 }
 
 void AuditChart::setAudit(std::shared_ptr<const analysis::LossAudit> audit, bool stale) {
@@ -221,6 +381,41 @@ void AuditChart::setAudit(std::shared_ptr<const analysis::LossAudit> audit, bool
   assignStale(stale);
   showStaleBanner();
   rebuild();
+}
+
+void AuditChart::setBaseline(std::shared_ptr<const analysis::LossAudit> baseline, const QString& title) {
+  if (baseline == baseline_ && title == baselineTitle_) return;
+  baseline_ = std::move(baseline);
+  baselineTitle_ = title;
+  key_->setTitle(baselineLegendText());
+  key_->setItemAttribute(QwtPlotItem::Legend, baseline_ != nullptr);
+  rebuild();
+}
+
+QString AuditChart::baselineLegendText() const {
+  if (!baseline_) return {};
+  const QString title = baselineTitle_.size() > kBaselineTitleChars
+                            ? baselineTitle_.left(kBaselineTitleChars - 1) + QChar(0x2026)
+                            : baselineTitle_;
+  return tr("Baseline: %1").arg(title);
+}
+
+std::vector<AuditChart::Bar> AuditChart::barsOf(const analysis::LossAudit& audit) const {
+  const bool tsfc = figure_ == AuditFigure::Tsfc;
+  auto value = [tsfc](const analysis::AuditFigures& f) {
+    return tsfc ? f.thrustSpecificFuelConsumption : f.specificThrust;
+  };
+  std::vector<Bar> bars;
+  double running = value(audit.ideal);
+  bars.push_back({std::string(), 0.0, running, 0});
+  for (const auto& d : audit.waterfall) {
+    const double step = tsfc ? d.deltaTsfc : d.deltaSpecificThrust;
+    const auto at = std::find(slots_.begin() + 1, slots_.end() - 1, d.loss);
+    bars.push_back({d.loss, running, running + step, static_cast<int>(at - slots_.begin())});
+    running += step;
+  }
+  bars.push_back({std::string(), 0.0, value(audit.actual), static_cast<int>(slots_.size()) - 1});
+  return bars;
 }
 
 void AuditChart::setFigure(AuditFigure figure) {
@@ -238,30 +433,32 @@ void AuditChart::setHighlightedSection(Section section) {
 
 void AuditChart::rebuild() {
   bars_.clear();
+  baselineBars_.clear();
+  slots_.clear();
   if (audit_) {
-    const bool tsfc = figure_ == AuditFigure::Tsfc;
-    auto value = [tsfc](const analysis::AuditFigures& f) {
-      return tsfc ? f.thrustSpecificFuelConsumption : f.specificThrust;
-    };
-    double running = value(audit_->ideal);
-    bars_.push_back({std::string(), 0.0, running});
-    for (const auto& d : audit_->waterfall) {
-      const double step = tsfc ? d.deltaTsfc : d.deltaSpecificThrust;
-      bars_.push_back({d.loss, running, running + step});
-      running += step;
-    }
-    bars_.push_back({std::string(), 0.0, value(audit_->actual)});
+    const std::vector<std::string> none;
+    slots_.push_back(std::string());
+    for (auto& key : mergedOrder(audit_->waterfallOrder, baseline_ ? baseline_->waterfallOrder : none))
+      slots_.push_back(key);
+    slots_.push_back(std::string());
+    bars_ = barsOf(*audit_);
+    if (baseline_) baselineBars_ = barsOf(*baseline_);
   }
+  // The legend's corner: the one the bars leave free (specific thrust falls to the right, TSFC
+  // rises to it).
+  legend_->setAlignmentInCanvas(Qt::AlignTop |
+                                (figure_ == AuditFigure::Tsfc ? Qt::AlignLeft : Qt::AlignRight));
   // The value axis spans the running figures with a margin (the totals start at its foot),
   // so that steps of a fraction of a percent stay visible.
   const double factor = figureFactor();
   double low = 0.0, high = 1.0;
   if (!bars_.empty()) {
     low = high = bars_.front().to;
-    for (const auto& b : bars_) {
-      low = std::min({low, b.to, b.loss.empty() ? b.to : b.from});
-      high = std::max({high, b.to, b.loss.empty() ? b.to : b.from});
-    }
+    for (const auto* set : {&bars_, &baselineBars_})
+      for (const auto& b : *set) {
+        low = std::min({low, b.to, b.loss.empty() ? b.to : b.from});
+        high = std::max({high, b.to, b.loss.empty() ? b.to : b.from});
+      }
     const double span = std::max(high - low, 1e-9 * std::abs(high));
     low = std::max(0.0, low - 0.6 * span);
     // Room above the highest bar for three rows of values (they stagger where they would run
@@ -274,8 +471,8 @@ void AuditChart::rebuild() {
   }
   setAxisScale(QwtAxis::YLeft, low / factor, high / factor);
   QList<double> ticks;
-  for (size_t i = 0; i < bars_.size(); ++i) ticks << static_cast<double>(i);
-  const double n = static_cast<double>(std::max<size_t>(bars_.size(), 1));
+  for (size_t i = 0; i < slots_.size(); ++i) ticks << static_cast<double>(i);
+  const double n = static_cast<double>(std::max<size_t>(slots_.size(), 1));
   setAxisScaleDiv(QwtAxis::XBottom, QwtScaleDiv(-0.6, n - 0.4, QList<double>(), QList<double>(), ticks));
   // The ticks stay at 0..n while the losses under them change (another order, another case):
   // the scale draw's cached labels must go, or the names would stay those of the first audit.
@@ -289,6 +486,10 @@ const std::vector<QRectF>& AuditChart::valueLabelRects() const {
   return item_->labelRects_;
 }
 
+const std::vector<QRectF>& AuditChart::baselineValueLabelRects() const {
+  return item_->baselineLabelRects_;
+}
+
 QRectF AuditChart::lastCanvasRect() const {
   return item_->lastCanvas_;
 }
@@ -296,10 +497,12 @@ QRectF AuditChart::lastCanvasRect() const {
 int AuditChart::barAt(const QPoint& position) const {
   const QwtScaleMap xMap = canvasMap(QwtAxis::XBottom);
   const double x = xMap.invTransform(position.x());
-  const long i = std::lround(x);
-  if (i < 0 || i >= static_cast<long>(bars_.size()) || std::abs(x - static_cast<double>(i)) > kHalfWidth)
-    return -1;
-  return static_cast<int>(i);
+  const bool paired = !baselineBars_.empty();
+  const double half = paired ? kPairHalfWidth : kHalfWidth;
+  const double offset = paired ? -kPairOffset : 0.0;
+  for (size_t i = 0; i < bars_.size(); ++i)
+    if (std::abs(x - (bars_[i].slot + offset)) <= half) return static_cast<int>(i);
+  return -1;
 }
 
 QPoint AuditChart::barCentre(int index) const {
@@ -307,11 +510,14 @@ QPoint AuditChart::barCentre(int index) const {
   const double factor = figureFactor();
   const QwtScaleMap xMap = canvasMap(QwtAxis::XBottom), yMap = canvasMap(QwtAxis::YLeft);
   const double from = bar.loss.empty() ? yMap.s1() : bar.from / factor;
-  return QPoint(qRound(xMap.transform(index)), qRound(yMap.transform(0.5 * (from + bar.to / factor))));
+  const double offset = baselineBars_.empty() ? 0.0 : -kPairOffset;
+  return QPoint(qRound(xMap.transform(bar.slot + offset)),
+                qRound(yMap.transform(0.5 * (from + bar.to / factor))));
 }
 
 void AuditChart::resizeEvent(QResizeEvent* event) {
   ChartBase::resizeEvent(event);
+  fitValueAxisTitle();
   rebuild();  // the room for the values depends on the canvas's height
 }
 

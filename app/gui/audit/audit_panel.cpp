@@ -10,6 +10,7 @@
 
 #include "analysis/loss_catalogue.h"
 
+#include <QCheckBox>
 #include <QComboBox>
 #include <QHBoxLayout>
 #include <QHeaderView>
@@ -59,7 +60,19 @@ AuditPanel::AuditPanel(CaseDocument& document, DisplayUnits& units, SelectionRou
   orderButton_->setEnabled(false);  // until there is an audit
   orderButton_->setToolTip(tr("The order in which the waterfall adds the losses to the ideal cycle"));
   controls->addWidget(orderButton_);
+  baselineBox_ = new QCheckBox(tr("&Baseline beside"), this);
+  baselineBox_->setObjectName("auditBaselineBeside");
+  baselineBox_->setToolTip(
+      tr("Show the baseline's waterfall, in grey, beside the current one "
+         "(Edit > Pin as Baseline)"));
+  controls->addWidget(baselineBox_);
   layout->addLayout(controls);
+  // In a dock the box goes to a row of its own (the dock must not be wider for it).
+  secondRow_ = new QHBoxLayout;
+  secondRow_->setContentsMargins(0, 0, 0, 0);
+  secondRow_->addStretch(1);
+  layout->addLayout(secondRow_);
+  controls_ = controls;
 
   split_ = new QSplitter(Qt::Vertical, this);
   auto* split = split_;
@@ -105,7 +118,11 @@ AuditPanel::AuditPanel(CaseDocument& document, DisplayUnits& units, SelectionRou
   chart_->setHighlightedSection(router_.current());
   connect(&document_, &CaseDocument::auditChanged, this, &AuditPanel::refresh);
   connect(&document_, &CaseDocument::resultChanged, this, &AuditPanel::refresh);
+  connect(&document_, &CaseDocument::baselineChanged, this, &AuditPanel::refreshBaseline);
+  connect(&document_, &CaseDocument::baselineAuditChanged, this, &AuditPanel::refreshBaseline);
+  connect(baselineBox_, &QCheckBox::toggled, this, &AuditPanel::refreshBaseline);
   refresh();
+  refreshBaseline();
 }
 
 std::shared_ptr<const analysis::LossAudit> AuditPanel::audit() const {
@@ -134,6 +151,12 @@ void AuditPanel::refresh() {
   }
 }
 
+void AuditPanel::refreshBaseline() {
+  baselineBox_->setEnabled(document_.hasBaseline());
+  const bool shown = baselineBox_->isChecked() && document_.hasBaseline();
+  chart_->setBaseline(shown ? document_.baselineAudit() : nullptr, document_.baselineTitle());
+}
+
 void AuditPanel::setOrder(const QStringList& keys) {
   if (document_.setAuditOrder(keys)) emit orderChanged(document_.auditOrder());
 }
@@ -158,6 +181,13 @@ void AuditPanel::editOrder() {
 
 void AuditPanel::setSideBySide(bool sideBySide) {
   split_->setOrientation(sideBySide ? Qt::Horizontal : Qt::Vertical);
+  controls_->removeWidget(baselineBox_);
+  secondRow_->removeWidget(baselineBox_);
+  if (sideBySide) {
+    controls_->addWidget(baselineBox_);
+  } else {
+    secondRow_->insertWidget(0, baselineBox_);
+  }
   chart_->setMinimumHeight(sideBySide ? 40 : 200);  // low: it must not squeeze the cycle charts
 }
 

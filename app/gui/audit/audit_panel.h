@@ -2,8 +2,9 @@
 // The loss-audit panel: the waterfall chart (specific thrust or TSFC) over a table of the
 // audit's four views. It shows the document's audit (CaseDocument::audit(), the last step of
 // the one evaluation pipeline per edit) and keeps no copy: while the inputs are invalid the
-// document keeps the last audit, marked stale. The waterfall's order is the user's (setOrder,
-// or the "Order…" dialog), kept in the document.
+// document keeps the last audit, marked stale. With a baseline pinned, "Baseline beside" shows
+// the document's audit of the baseline (CaseDocument::baselineAudit) beside the current one. The waterfall's
+// order is the user's (setOrder, or the "Order…" dialog), kept in the document.
 
 #include "analysis/loss_audit.h"
 
@@ -12,6 +13,8 @@
 
 #include <memory>
 
+class QCheckBox;
+class QHBoxLayout;
 class QComboBox;
 class QLabel;
 class QPushButton;
@@ -40,6 +43,9 @@ class AuditPanel : public QWidget {
   QComboBox* viewBox() const { return view_; }
   QPushButton* orderButton() const { return orderButton_; }
   QLabel* orderNote() const { return note_; }
+  /// "Baseline beside": the baseline's waterfall beside the current one (enabled while there is
+  /// a baseline; the document audits it in the same order).
+  QCheckBox* baselineBox() const { return baselineBox_; }
 
   /// The waterfall order asked for (loss keys; empty for the flow order). The audit puts these
   /// first and the remaining losses after them in flow order (analysis::waterfallOrderOf).
@@ -61,6 +67,8 @@ class AuditPanel : public QWidget {
  private:
   /// The document's audit changed: chart, table and the order button follow.
   void refresh();
+  /// The baseline or its audit changed, or the box was ticked: the chart shows it or not.
+  void refreshBaseline();
 
   CaseDocument& document_;
   SelectionRouter& router_;
@@ -71,6 +79,9 @@ class AuditPanel : public QWidget {
   QTableView* table_ = nullptr;
   QSplitter* split_ = nullptr;
   QPushButton* orderButton_ = nullptr;
+  QCheckBox* baselineBox_ = nullptr;
+  QHBoxLayout* controls_ = nullptr;   ///< the figure, table and order controls (and the box beside)
+  QHBoxLayout* secondRow_ = nullptr;  ///< the box, in a dock
   QLabel* note_ = nullptr;
   std::shared_ptr<const analysis::LossAudit> shown_;  ///< what the chart holds (to rebuild only on change)
 };

@@ -63,6 +63,8 @@ CaseDocument::CaseDocument(QObject* parent) : QObject(parent), undoStack_(new QU
   settle_ = new QTimer(this);
   auditor_ = new CaseAuditor(this);
   connect(auditor_, &CaseAuditor::auditChanged, this, &CaseDocument::auditChanged);
+  baselineAuditor_ = new CaseAuditor(this);
+  connect(baselineAuditor_, &CaseAuditor::auditChanged, this, &CaseDocument::baselineAuditChanged);
   connect(undoStack_, &QUndoStack::cleanChanged, this, [this] { emit modifiedChanged(isModified()); });
   settle_->setSingleShot(true);
   settle_->setInterval(kSettleMilliseconds);
@@ -106,7 +108,22 @@ void CaseDocument::resultUpdated() {
   std::vector<std::string> order;
   for (const QString& key : auditOrder_) order.push_back(key.toStdString());
   auditor_->request(evaluatedCase(), evaluation(), order);
+  requestBaselineAudit();
   emit resultChanged();
+}
+
+std::shared_ptr<const analysis::LossAudit> CaseDocument::baselineAudit() const {
+  if (!baseline_ || baselineAuditor_->auditedEvaluation() != baseline_ || baselineAuditor_->failed())
+    return nullptr;
+  return baselineAuditor_->audit();
+}
+
+void CaseDocument::requestBaselineAudit() {
+  // The same order as the current audit, so that the two waterfalls compare step by step
+  // (a loss that does not apply to one of the cases is left out of its waterfall).
+  std::vector<std::string> order;
+  for (const QString& key : auditOrder_) order.push_back(key.toStdString());
+  baselineAuditor_->request(baselineCase_, baseline_, order);
 }
 
 bool CaseDocument::pinBaseline() {
@@ -118,6 +135,7 @@ bool CaseDocument::pinBaseline() {
   baseline_ = shown;
   baselineCase_ = inputs;
   baselineTitle_ = title;
+  requestBaselineAudit();
   emit baselineChanged();
   return true;
 }
@@ -130,6 +148,7 @@ bool CaseDocument::setBaseline(const engine::Case& inputs, const QString& title,
       baseline_ = std::move(result);
       baselineCase_ = inputs;
       baselineTitle_ = title;
+      requestBaselineAudit();
       emit baselineChanged();
       return true;
     }
@@ -152,6 +171,7 @@ void CaseDocument::clearBaseline() {
   baseline_.reset();
   baselineCase_ = engine::Case{};
   baselineTitle_.clear();
+  requestBaselineAudit();
   emit baselineChanged();
 }
 

@@ -73,6 +73,10 @@ class CaseDocument : public QObject {
   /// shown evaluation failed, or it is still running.
   bool isAuditStale() const;
   CaseAuditor& auditor() const { return *auditor_; }
+  /// The loss audit of the baseline in the same waterfall order (the audit panel shows it beside
+  /// the current one), by its own CaseAuditor; null without a baseline or before it is done.
+  std::shared_ptr<const analysis::LossAudit> baselineAudit() const;
+  CaseAuditor& baselineAuditor() const { return *baselineAuditor_; }
   /// The waterfall order asked for (loss keys; empty for the flow order). The audit puts these
   /// first and the remaining losses after them in flow order (analysis::waterfallOrderOf).
   QStringList auditOrder() const { return auditOrder_; }
@@ -135,12 +139,16 @@ class CaseDocument : public QObject {
   void auditChanged();
   /// The baseline was pinned, opened or cleared (tables and chart overlays refresh).
   void baselineChanged();
+  /// baselineAudit() changed.
+  void baselineAuditChanged();
 
  private:
   friend class ScopedUndoDisabler;
   void evaluate();
   /// Emits resultChanged after asking for the audit of the evaluation now shown.
   void resultUpdated();
+  /// Asks for the baseline's audit in the current order (none without a baseline).
+  void requestBaselineAudit();
 
   engine::Case case_;
   std::shared_ptr<const engine::Evaluation> live_;       ///< of the current inputs; null if none
@@ -149,6 +157,7 @@ class CaseDocument : public QObject {
   QTimer* settle_ = nullptr;
   bool typing_ = false;  ///< the edit being applied is typed (commit later)
   CaseAuditor* auditor_ = nullptr;
+  CaseAuditor* baselineAuditor_ = nullptr;
   QStringList auditOrder_;
   std::shared_ptr<const engine::Evaluation> baseline_;
   engine::Case baselineCase_;

@@ -53,7 +53,11 @@ void PerformanceModel::setBaseline(std::shared_ptr<const engine::Evaluation> bas
 QString PerformanceModel::toTabSeparated() const {
   QString text = QStringLiteral("# ") + cautionText() + QLatin1Char('\n');
   QStringList header;
-  for (int c = 0; c < columnCount(); ++c) header << headerData(c, Qt::Horizontal).toString();
+  // The baseline's columns under their whole names (on screen: short, "Δ" and "Δ [%]").
+  for (int c = 0; c < columnCount(); ++c)
+    header << (c == BaselineChange    ? tr("Change from baseline")
+               : c == BaselinePercent ? tr("Change [%]")
+                                      : headerData(c, Qt::Horizontal).toString());
   text += header.join(QLatin1Char('\t')) + QLatin1Char('\n');
   for (int r = 0; r < rowCount(); ++r) {
     QStringList cells;
@@ -182,8 +186,16 @@ QVariant PerformanceModel::data(const QModelIndex& index, int role) const {
 }
 
 QVariant PerformanceModel::headerData(int section, Qt::Orientation orientation, int role) const {
-  if (orientation == Qt::Horizontal && role == Qt::ToolTipRole && section >= Baseline && baseline_)
+  // Short headers (the table fits beside the station table without scrolling sideways); the
+  // tooltips say them in full.
+  if (orientation == Qt::Horizontal && role == Qt::ToolTipRole && section >= Baseline && baseline_) {
+    if (section == BaselineChange)
+      return tr("Change from the baseline: with losses minus the baseline, in the row's unit (baseline: %1)")
+          .arg(baselineTitle_);
+    if (section == BaselinePercent)
+      return tr("Change from the baseline in percent of the baseline (baseline: %1)").arg(baselineTitle_);
     return tr("Baseline: %1").arg(baselineTitle_);
+  }
   if (orientation != Qt::Horizontal || role != Qt::DisplayRole)
     return QAbstractTableModel::headerData(section, orientation, role);
   switch (section) {
@@ -200,9 +212,9 @@ QVariant PerformanceModel::headerData(int section, Qt::Orientation orientation, 
     case Baseline:
       return tr("Baseline");
     case BaselineChange:
-      return tr("Change from baseline");
+      return tr("Δ");
     case BaselinePercent:
-      return tr("Change [%]");
+      return tr("Δ [%]");
     default:
       return {};
   }

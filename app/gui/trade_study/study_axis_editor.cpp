@@ -18,7 +18,7 @@
 namespace cw::gui {
 
 QString typedWithUnit(double si, Quantity q, const DisplayUnits& units) {
-  const QString number = typedNumberText(units.toDisplay(si, q));
+  const QString number = studyFieldText(si, q, units);
   return q == Quantity::Dimensionless ? number : number + QLatin1Char(' ') + units.symbol(q);
 }
 
@@ -179,8 +179,8 @@ void StudyAxisEditor::keepTypedRange() {
 void StudyAxisEditor::writeRange() {
   const Quantity q = choice_.input().field ? choice_.input().field->quantity : Quantity::Dimensionless;
   // A field whose text is no number keeps the user's text.
-  if (startOk_) startEdit_->setText(typedNumberText(units_.toDisplay(start_, q)));
-  if (stopOk_) stopEdit_->setText(typedNumberText(units_.toDisplay(stop_, q)));
+  if (startOk_) startEdit_->setText(studyFieldText(start_, q, units_));
+  if (stopOk_) stopEdit_->setText(studyFieldText(stop_, q, units_));
   const QString unit = q == Quantity::Dimensionless ? QString() : units_.symbol(q);
   startEdit_->setPlaceholderText(unit);
   stopEdit_->setPlaceholderText(unit);

@@ -124,7 +124,7 @@ void StudyChangeEditor::applyDefault() {
 
 void StudyChangeEditor::writeValue() {
   const Quantity q = choice_.input().field ? choice_.input().field->quantity : Quantity::Dimensionless;
-  if (valueOk_) valueEdit_->setText(typedNumberText(units_.toDisplay(value_, q)));
+  if (valueOk_) valueEdit_->setText(studyFieldText(value_, q, units_));
   const QString unit = q == Quantity::Dimensionless ? QStringLiteral("–") : units_.symbol(q);
   valueEdit_->setToolTip(
       tr("The value of this input in the second study [%1]. %2")

@@ -84,13 +84,17 @@ bool inValidRange(const FieldSpec& field, double si) {
 }
 
 QString validRangeText(const FieldSpec& field, const DisplayUnits& units) {
+  // The ends at the forms' display precision (DisplayUnits::inputText), as the case forms say it.
   const bool plain = field.quantity == Quantity::Dimensionless;
-  QLocale locale;
-  locale.setNumberOptions(QLocale::OmitGroupSeparator);
-  auto compact = [&](double si) { return locale.toString(units.toDisplay(si, field.quantity), 'g', 7); };
   return QStringLiteral("%1%2, %3%4%5")
-      .arg(field.lowOpen ? "(" : "[", compact(field.low), compact(field.high), field.highOpen ? ")" : "]",
+      .arg(field.lowOpen ? "(" : "[", units.inputText(field.low, field.quantity),
+           units.inputText(field.high, field.quantity), field.highOpen ? ")" : "]",
            plain ? QString() : QStringLiteral(" ") + units.symbol(field.quantity));
+}
+
+QString studyFieldText(double si, Quantity quantity, const DisplayUnits& units) {
+  if (std::fabs(si) < 1e-12) si = 0.0;  // a range's end computed as zero, not "1e-17"
+  return units.inputText(si, quantity);
 }
 
 QString valueText(double si, Quantity quantity, const DisplayUnits& units, int significantDigits) {
