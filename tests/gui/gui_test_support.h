@@ -10,6 +10,7 @@
 #include <QCoreApplication>
 #include <QDir>
 #include <QFile>
+#include <QLineEdit>
 #include <QLocale>
 #include <QProcess>
 #include <QProcessEnvironment>
@@ -17,6 +18,18 @@
 #include <QString>
 #include <QStringList>
 #include <QTemporaryDir>
+#include <QTest>
+
+#include <string_view>
+
+#include "engine/case_inputs.h"
+#include "io/case_file.h"
+
+// The application's resources live in its static library: registered before a suite reads one
+// without a main window (Q_INIT_RESOURCE declares its function in the global namespace).
+inline void initialiseGuiResources() {
+  Q_INIT_RESOURCE(resources);
+}
 
 namespace cw::test {
 
@@ -39,6 +52,25 @@ inline void isolateGuiTest(const QString& applicationName) {
   QStandardPaths::setTestModeEnabled(true);
   QCoreApplication::setOrganizationName("CyclewrightTest");
   QCoreApplication::setApplicationName(applicationName);
+}
+
+/// The demo case, read from the application's resources.
+inline cw::engine::Case demoCase() {
+  initialiseGuiResources();
+  QFile file(QStringLiteral(":/demo/demo-turbojet.json"));
+  if (!file.open(QIODevice::ReadOnly)) qFatal("cannot read the demo case");
+  const QByteArray bytes = file.readAll();
+  return cw::io::parseCaseText(std::string_view(bytes.constData(), static_cast<std::size_t>(bytes.size())),
+                               "demo");
+}
+
+/// Types text into a field as a user would: select all, delete, then one key click per
+/// character (textEdited per key), with no event loop in between (a fast typist).
+inline void typeInto(QLineEdit* field, const QString& text) {
+  field->setFocus();
+  field->selectAll();
+  QTest::keyClick(field, Qt::Key_Backspace);
+  QTest::keyClicks(field, text);
 }
 
 /// A temporary home for child processes: HOME and the XDG base folders (config, data, cache,

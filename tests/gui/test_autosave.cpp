@@ -40,17 +40,11 @@
 using cw::gui::AutosaveStore;
 using cw::gui::MainWindow;
 
+using cw::test::typeInto;
+
 namespace {
 
 const QString kDemo = QStringLiteral(":/demo/demo-turbojet.json");
-
-/// Types text into a field as a user would (select all, then key clicks: textEdited per key).
-void typeInto(QLineEdit* field, const QString& text) {
-  field->setFocus();
-  field->selectAll();
-  QTest::keyClick(field, Qt::Key_Backspace);
-  QTest::keyClicks(field, text);
-}
 
 /// Answers every message box the window opens (polled from a timer, as a user would click) and
 /// collects their texts. Stops with the window.

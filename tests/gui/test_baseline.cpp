@@ -28,15 +28,9 @@ using cw::gui::MainWindow;
 using P = cw::gui::PerformanceModel;
 using S = cw::gui::StationTableModel;
 
-namespace {
+using cw::test::demoCase;
 
-cw::engine::Case demoCase() {
-  QFile file(QStringLiteral(":/demo/demo-turbojet.json"));
-  file.open(QIODevice::ReadOnly);
-  const QByteArray bytes = file.readAll();
-  return cw::io::parseCaseText(std::string_view(bytes.constData(), static_cast<std::size_t>(bytes.size())),
-                               "demo");
-}
+namespace {
 
 bool near(double a, double b) {
   return std::fabs(a - b) <= 1e-12 * std::max(1.0, std::fabs(b));

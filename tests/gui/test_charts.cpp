@@ -49,15 +49,11 @@
 
 using namespace cw::gui;
 
+using cw::test::demoCase;
+
 namespace {
 
 const QString kDemo = QStringLiteral(CYCLEWRIGHT_SOURCE_DIR "/resources/demo/demo-turbojet.json");
-
-cw::engine::Case demoCase() {
-  QFile file(kDemo);
-  if (!file.open(QIODevice::ReadOnly)) qFatal("cannot read the demo case");
-  return cw::io::parseCaseText(file.readAll().toStdString(), "demo");
-}
 
 std::shared_ptr<const cw::engine::Evaluation> demoEvaluation() {
   return std::make_shared<const cw::engine::Evaluation>(cw::engine::evaluateCase(demoCase()));

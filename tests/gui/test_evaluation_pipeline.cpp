@@ -26,17 +26,9 @@ using cw::gui::CaseAuditor;
 using cw::gui::CaseDocument;
 using cw::gui::MainWindow;
 
-namespace {
+using cw::test::demoCase;
 
-cw::engine::Case demoCase() {
-  QFile file(QStringLiteral(":/demo/demo-turbojet.json"));
-  file.open(QIODevice::ReadOnly);
-  const QByteArray bytes = file.readAll();
-  return cw::io::parseCaseText(std::string_view(bytes.constData(), static_cast<std::size_t>(bytes.size())),
-                               "demo");
-}
-
-}  // namespace
+namespace {}  // namespace
 
 class TestEvaluationPipeline : public QObject {
   Q_OBJECT

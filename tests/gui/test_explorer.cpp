@@ -42,6 +42,8 @@
 
 using cw::gui::MainWindow;
 
+using cw::test::typeInto;
+
 namespace {
 
 const QString kDemo = QStringLiteral(":/demo/demo-turbojet.json");
@@ -50,14 +52,6 @@ QVector<QPointF> samples(const QwtPlotCurve* curve) {
   QVector<QPointF> out;
   for (size_t i = 0; i < curve->dataSize(); ++i) out.append(curve->sample(i));
   return out;
-}
-
-/// Types text into a field as a user would (select all, then key clicks: textEdited per key).
-void typeInto(QLineEdit* field, const QString& text) {
-  field->setFocus();
-  field->selectAll();
-  QTest::keyClick(field, Qt::Key_Backspace);
-  QTest::keyClicks(field, text);
 }
 
 int stationRow(const cw::gui::StationTableModel* model, const QString& id) {

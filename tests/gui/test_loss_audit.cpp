@@ -46,16 +46,11 @@
 using cw::gui::AuditChart;
 using cw::gui::MainWindow;
 
+using cw::test::typeInto;
+
 namespace {
 
 const QString kDemo = QStringLiteral(":/demo/demo-turbojet.json");
-
-void typeInto(QLineEdit* field, const QString& text) {
-  field->setFocus();
-  field->selectAll();
-  QTest::keyClick(field, Qt::Key_Backspace);
-  QTest::keyClicks(field, text);
-}
 
 bool near(double a, double b) {
   return std::fabs(a - b) <= 1e-9 * std::max(1.0, std::fabs(b));

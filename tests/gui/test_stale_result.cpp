@@ -30,18 +30,11 @@ using cw::gui::CaseDocument;
 using cw::gui::MainWindow;
 using P = cw::gui::PerformanceModel;
 
+using cw::test::typeInto;
+
 namespace {
 
 const QString kDemo = QStringLiteral(":/demo/demo-turbojet.json");
-
-/// Types text into a field as a user would: select all, delete, then one key click per
-/// character (textEdited per key), with no event loop in between (a fast typist).
-void typeInto(QLineEdit* field, const QString& text) {
-  field->setFocus();
-  field->selectAll();
-  QTest::keyClick(field, Qt::Key_Backspace);
-  QTest::keyClicks(field, text);
-}
 
 /// Types over a field's text: select all, then one key click per character, so the first key
 /// replaces the old value directly (no empty field on the way).

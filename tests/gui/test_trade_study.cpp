@@ -70,6 +70,8 @@ using cw::study::SweepAxis;
 using cw::study::TradeStudy;
 using Family = StudyChart::Family;
 
+using cw::test::typeInto;
+
 namespace {
 
 const QString kDemo = QStringLiteral(":/demo/demo-turbojet.json");
@@ -77,13 +79,6 @@ constexpr int kLong = 300000;  // [ms] an upper bound for a background study on 
 
 bool near(double a, double b, double relative = 1e-12) {
   return std::fabs(a - b) <= relative * std::max(1.0, std::fabs(b));
-}
-
-void typeInto(QLineEdit* field, const QString& text) {
-  field->setFocus();
-  field->selectAll();
-  QTest::keyClick(field, Qt::Key_Backspace);
-  QTest::keyClicks(field, text);
 }
 
 /// Runs the panel's study and waits for it to come back from its thread.
