@@ -422,6 +422,31 @@ class TestCharts : public QObject {
     QVERIFY(std::abs(three->yValue() * hf - a.station("3").totalSensibleEnthalpy()) < 1e-3);
   }
 
+  // A figure is written whole or not at all: through a temporary beside the target, renamed
+  // over an existing file, nothing left behind; a folder that does not exist fails cleanly.
+  void figuresAreWrittenAtomically() {
+    DisplayUnits units;
+    CycleChart chart(ChartKind::TemperatureEntropy, units);
+    chart.resize(680, 454);
+    chart.setEvaluation(demoEvaluation(), false);
+    QTemporaryDir dir;
+    const QString png = dir.filePath("ts.png"), svg = dir.filePath("ts.svg");
+    {
+      QFile old(png);
+      QVERIFY(old.open(QIODevice::WriteOnly));
+      old.write("an older figure");
+    }
+    QVERIFY(exportChartPng(&chart, png, QSize(600, 400), 96));
+    QCOMPARE(QImage(png).size(), QSize(600, 400));  // replaced, not appended to
+    QVERIFY(exportChartDocument(&chart, svg, "svg", QSizeF(120, 80)));
+    QVERIFY(exportChartDocument(&chart, svg, "svg", QSizeF(120, 80)));
+    QCOMPARE(QDir(dir.path()).entryList(QDir::Files | QDir::Hidden), (QStringList{"ts.png", "ts.svg"}));
+    const QString missing = dir.filePath("no-such-folder/ts.png");
+    QVERIFY(!exportChartPng(&chart, missing, QSize(600, 400), 96));
+    QVERIFY(!exportChartDocument(&chart, dir.filePath("no-such-folder/ts.pdf"), "pdf", QSizeF(120, 80)));
+    QCOMPARE(QDir(dir.path()).entryList(QDir::Files | QDir::Hidden), (QStringList{"ts.png", "ts.svg"}));
+  }
+
   // The T-s chart's vector exports kept only one isobar label: every label placed on screen is
   // placed in the SVG and the PDF too, and in PNGs at several sizes, inside the canvas.
   void exportsKeepEveryIsobarLabel() {

@@ -6,10 +6,42 @@
 #include <qwt_plot_renderer.h>
 #include <qwt_text.h>
 
+#include <QCoreApplication>
+#include <QDir>
+#include <QFile>
 #include <QFileInfo>
 #include <QPainter>
 
+#include <atomic>
+#include <cstdio>
+#include <functional>
+
 namespace cw::gui {
+
+namespace {
+
+/// Writes a figure through a temporary file beside the target, renamed over it once whole, so a
+/// crash or a full disk never leaves a half-written figure under the user's file name. The
+/// temporary's name is that of io::writeFileAtomically (".<name>.tmp-<pid>-<n>"), so
+/// io::removeStaleTemporaries clears one a killed process left.
+bool writeThroughTemporary(const QString& fileName, const std::function<bool(const QString&)>& write) {
+  static std::atomic<int> counter{0};
+  const QFileInfo target(fileName);
+  const QString temporary = target.absoluteDir().filePath(QStringLiteral(".%1.tmp-%2-%3")
+                                                              .arg(target.fileName())
+                                                              .arg(QCoreApplication::applicationPid())
+                                                              .arg(counter++));
+  const bool written = write(temporary) && QFileInfo(temporary).size() > 0;
+  // POSIX rename() replaces the target in one step; QFile::rename would refuse an existing one.
+  if (!written || std::rename(QFile::encodeName(temporary).constData(),
+                              QFile::encodeName(target.absoluteFilePath()).constData()) != 0) {
+    QFile::remove(temporary);
+    return false;
+  }
+  return true;
+}
+
+}  // namespace
 
 QImage renderChartImage(QwtPlot* plot, const ExportOptions& options) {
   QImage image(options.pixels, QImage::Format_ARGB32);
@@ -36,11 +68,13 @@ QImage renderChartImage(QwtPlot* plot, QSize pixels, int dotsPerInch) {
 }
 
 bool exportChartPng(QwtPlot* plot, const QString& fileName, const ExportOptions& options) {
-  return renderChartImage(plot, options).save(fileName, "PNG");
+  const QImage image = renderChartImage(plot, options);
+  return writeThroughTemporary(fileName, [&](const QString& path) { return image.save(path, "PNG"); });
 }
 
 bool exportChartPng(QwtPlot* plot, const QString& fileName, QSize pixels, int dotsPerInch) {
-  return renderChartImage(plot, pixels, dotsPerInch).save(fileName, "PNG");
+  const QImage image = renderChartImage(plot, pixels, dotsPerInch);
+  return writeThroughTemporary(fileName, [&](const QString& path) { return image.save(path, "PNG"); });
 }
 
 bool exportChartDocument(QwtPlot* plot, const QString& fileName, const QString& format,
@@ -49,9 +83,10 @@ bool exportChartDocument(QwtPlot* plot, const QString& fileName, const QString& 
   QwtPlotRenderer renderer;
   renderer.setDiscardFlag(QwtPlotRenderer::DiscardBackground, options.transparent);
   renderer.setDiscardFlag(QwtPlotRenderer::DiscardCanvasBackground, options.transparent);
-  renderer.renderDocument(plot, fileName, format, options.millimetres(), 85);
-  const QFileInfo info(fileName);
-  return info.exists() && info.size() > 0;
+  return writeThroughTemporary(fileName, [&](const QString& path) {
+    renderer.renderDocument(plot, path, format, options.millimetres(), 85);
+    return true;  // writeThroughTemporary checks that something was written
+  });
 }
 
 bool exportChartDocument(QwtPlot* plot, const QString& fileName, const QString& format, QSizeF millimetres) {
