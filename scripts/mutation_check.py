@@ -211,7 +211,8 @@ def print_table(rows):
 def summary(rows, total):
     counts = {k: sum(1 for r in rows if r[1] == k) for k in ("killed", "survived", "invalid")}
     scored = counts["killed"] + counts["survived"]
-    score = f"{100.0 * counts['killed'] / scored:.0f} % killed of the valid ones" if scored else "none valid"
+    killed_share = counts["killed"] / scored if scored else 0.0
+    score = f"{killed_share:.0%} killed of the valid ones" if scored else "none valid"
     line = (f"{len(rows)} of {total} mutants run: {counts['killed']} killed, {counts['survived']} survived, "
             f"{counts['invalid']} invalid ({score})")
     if counts["invalid"]:
