@@ -64,8 +64,9 @@ class ChartBase : public QwtPlot {
   /// Call at the end of the derived constructor: from then on a palette change reaches
   /// paletteChanged().
   void finishConstruction();
-  /// The palette has changed (the base has recoloured the canvas, grid and legend already).
-  virtual void paletteChanged() {}
+  /// The palette has changed (the base has recoloured the canvas, grid and legend already). The
+  /// default rebuilds everything (refresh()); a chart with a lighter way overrides it.
+  virtual void paletteChanged() { refresh(); }
   /// The stale state has changed (the base has shown or hidden the banner already).
   virtual void staleChanged() {}
   /// Sets the stale flag without notifying (setEvaluation-like calls that rebuild anyway).

@@ -161,12 +161,6 @@ void CycleChart::applyPalette() {
   zoomer_->setRubberBandPen(QPen(p.color(QPalette::Text), 1.0, Qt::DashLine));
 }
 
-void CycleChart::paletteChanged() {
-  applyPalette();
-  retranslateUi();
-  rebuild();
-}
-
 void CycleChart::refresh() {
   applyPalette();
   retranslateUi();

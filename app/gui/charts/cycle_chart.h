@@ -90,7 +90,6 @@ class CycleChart : public ChartBase {
   QwtPlotZoomer* zoomer() const { return zoomer_; }
 
  protected:
-  void paletteChanged() override;
   void staleChanged() override;
   void refresh() override;
   void beginExport(const ExportOptions& options) override;

@@ -168,12 +168,6 @@ void StudyChart::refresh() {
   rebuild();
 }
 
-void StudyChart::paletteChanged() {
-  applyPalette();
-  retranslateUi();
-  rebuild();
-}
-
 const study::StudyColumn* StudyChart::columnNamed(const std::string& name) const {
   for (const auto& c : columns_)
     if (c.name == name) return &c;

@@ -105,7 +105,6 @@ class StudyChart : public ChartBase {
   void retranslateUi();
 
  protected:
-  void paletteChanged() override;
   void refresh() override;
   bool wantsStaleBanner() const override { return study_ != nullptr; }
   void resizeEvent(QResizeEvent* event) override;
