@@ -104,10 +104,14 @@ bool CaseDocument::setAuditOrder(const QStringList& keys) {
   return true;
 }
 
-void CaseDocument::resultUpdated() {
+std::vector<std::string> CaseDocument::auditOrderKeys() const {
   std::vector<std::string> order;
   for (const QString& key : auditOrder_) order.push_back(key.toStdString());
-  auditor_->request(evaluatedCase(), evaluation(), order);
+  return order;
+}
+
+void CaseDocument::resultUpdated() {
+  auditor_->request(evaluatedCase(), evaluation(), auditOrderKeys());
   requestBaselineAudit();
   emit resultChanged();
 }
@@ -121,9 +125,7 @@ std::shared_ptr<const analysis::LossAudit> CaseDocument::baselineAudit() const {
 void CaseDocument::requestBaselineAudit() {
   // The same order as the current audit, so that the two waterfalls compare step by step
   // (a loss that does not apply to one of the cases is left out of its waterfall).
-  std::vector<std::string> order;
-  for (const QString& key : auditOrder_) order.push_back(key.toStdString());
-  baselineAuditor_->request(baselineCase_, baseline_, order);
+  baselineAuditor_->request(baselineCase_, baseline_, auditOrderKeys());
 }
 
 bool CaseDocument::pinBaseline() {

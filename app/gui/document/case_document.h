@@ -149,6 +149,8 @@ class CaseDocument : public QObject {
   void resultUpdated();
   /// Asks for the baseline's audit in the current order (none without a baseline).
   void requestBaselineAudit();
+  /// The audit order as the core takes it.
+  std::vector<std::string> auditOrderKeys() const;
 
   engine::Case case_;
   std::shared_ptr<const engine::Evaluation> live_;       ///< of the current inputs; null if none

@@ -111,10 +111,6 @@ QString DisplayUnits::format(double si, Quantity q, int significantDigits) const
   return q == Quantity::Dimensionless ? number : QStringLiteral("%1 %2").arg(number, unit);
 }
 
-}  // namespace cw::gui
-
-namespace cw::gui {
-
 namespace {
 
 /// Significant digits of a number's text ("6000" 1, "0.845" 3, "1350.5" 5).
