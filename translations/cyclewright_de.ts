@@ -798,8 +798,8 @@ kein Kreisprozess mit diesen Eingaben</translation>
         <translation>Stufe</translation>
     </message>
     <message>
-        <source>Loss added to the ideal twin</source>
-        <translation>Dem idealen Zwilling hinzugefügter Verlust</translation>
+        <source>Loss added</source>
+        <translation>Hinzugefügter Verlust</translation>
     </message>
     <message>
         <source>F_s step [%1]</source>
@@ -994,7 +994,7 @@ kein Kreisprozess mit diesen Eingaben</translation>
         <source>Stations: 0, 8, 9 static;
 2 to 7 total</source>
         <translation>Stationen: 0, 8, 9 statisch;
-2 bis 7 total</translation>
+2 bis 7 Totalzustände</translation>
     </message>
     <message>
         <source>s = 0 at the free-stream

@@ -96,10 +96,15 @@ AuditPanel::AuditPanel(CaseDocument& document, DisplayUnits& units, SelectionRou
   table_->setObjectName("auditTable");
   table_->setModel(model_);
   table_->verticalHeader()->hide();
-  table_->horizontalHeader()->setSectionResizeMode(QHeaderView::ResizeToContents);
-  table_->horizontalHeader()->setStretchLastSection(true);
   table_->setAlternatingRowColors(true);
   table_->verticalHeader()->setDefaultSectionSize(QFontMetrics(table_->font()).height() + 6);
+  // Never sideways: the numbers as wide as they need, the name the rest (elided in a narrow
+  // dock, whole in its tooltip).
+  table_->setHorizontalScrollBarPolicy(Qt::ScrollBarAlwaysOff);
+  table_->setTextElideMode(Qt::ElideRight);
+  table_->horizontalHeader()->setTextElideMode(Qt::ElideRight);
+  fitColumns();
+  connect(model_, &QAbstractItemModel::modelReset, this, &AuditPanel::fitColumns);
   split->addWidget(chartBox);
   split->addWidget(table_);
   split->setStretchFactor(0, 3);
@@ -149,6 +154,13 @@ void AuditPanel::refresh() {
     chart_->setStale(stale);
     model_->setStale(stale);
   }
+}
+
+void AuditPanel::fitColumns() {
+  QHeaderView* header = table_->horizontalHeader();
+  header->setStretchLastSection(false);
+  header->setSectionResizeMode(QHeaderView::ResizeToContents);
+  header->setSectionResizeMode(model_->nameColumn(), QHeaderView::Stretch);
 }
 
 void AuditPanel::refreshBaseline() {

@@ -69,6 +69,7 @@ class AuditPanel : public QWidget {
   void refresh();
   /// The baseline or its audit changed, or the box was ticked: the chart shows it or not.
   void refreshBaseline();
+  void fitColumns();
 
   CaseDocument& document_;
   SelectionRouter& router_;

@@ -67,7 +67,8 @@ int AuditTableModel::columnCount(const QModelIndex& parent) const {
 }
 
 QVariant AuditTableModel::headerData(int section, Qt::Orientation orientation, int role) const {
-  if (orientation != Qt::Horizontal || role != Qt::DisplayRole) return {};
+  // The tooltip the whole header, where a narrow dock elides it.
+  if (orientation != Qt::Horizontal || (role != Qt::DisplayRole && role != Qt::ToolTipRole)) return {};
   const QString fs = units_.symbol(Quantity::SpecificThrust), tsfc = units_.symbol(Quantity::Tsfc);
   switch (view_) {
     case AuditView::OneAtATime: {
@@ -75,7 +76,7 @@ QVariant AuditTableModel::headerData(int section, Qt::Orientation orientation, i
       return h[section];
     }
     case AuditView::Waterfall: {
-      const QString h[] = {tr("Step"), tr("Loss added to the ideal twin"), tr("F_s step [%1]").arg(fs),
+      const QString h[] = {tr("Step"), tr("Loss added"), tr("F_s step [%1]").arg(fs),
                            tr("TSFC step [%1]").arg(tsfc)};
       return h[section];
     }
@@ -165,6 +166,8 @@ QVariant AuditTableModel::data(const QModelIndex& index, int role) const {
   switch (role) {
     case Qt::DisplayRole:
       return text(index.row(), index.column());
+    case Qt::ToolTipRole:  // the whole name where a narrow dock elides it
+      return index.column() == nameColumn() ? QVariant(text(index.row(), index.column())) : QVariant();
     case Qt::TextAlignmentRole: {
       const bool numeric =
           (view_ == AuditView::Sensitivities && index.column() >= 2 && index.column() <= 3) ||

@@ -24,6 +24,8 @@ class AuditTableModel : public QAbstractTableModel {
   void setStale(bool stale);
   bool isStale() const { return stale_; }
   void setView(AuditView view);
+  /// The column of the loss's or component's name (the one that gives way in a narrow dock).
+  int nameColumn() const { return view_ == AuditView::Waterfall ? 1 : 0; }
   AuditView view() const { return view_; }
 
   int rowCount(const QModelIndex& parent = QModelIndex()) const override;

@@ -164,9 +164,6 @@ TradeStudyPanel::TradeStudyPanel(CaseDocument& document, DisplayUnits& units, QW
   split_ = new QSplitter(Qt::Horizontal, this);
   split_->setObjectName("studySplitter");
   split_->setChildrenCollapsible(false);
-  lower_ = new QSplitter(Qt::Horizontal, split_);
-  lower_->setChildrenCollapsible(false);
-  split_->addWidget(lower_);
   setSideBySide(true);
   auto* layout = new QVBoxLayout(this);
   layout->setContentsMargins(4, 4, 4, 4);
@@ -365,25 +362,23 @@ void TradeStudyPanel::setSideBySide(bool sideBySide) {
     split_->insertWidget(0, controlsPane_);
     split_->insertWidget(1, chartBox_);
     split_->insertWidget(2, table_);
-    lower_->hide();
     split_->setStretchFactor(0, 0);
     split_->setStretchFactor(1, 3);
     split_->setStretchFactor(2, 2);
     chart_->setMinimumHeight(40);  // low: it must not squeeze the cycle charts
     chart_->setCompact(true);
   } else {
+    // In a dock: the chart, the controls and the results one above the other, each the dock's
+    // whole width (beside the controls the table was a sliver on a laptop screen).
     chartLayout_->insertWidget(0, plotRow_);
     chartLayout_->addWidget(note_);
     split_->setOrientation(Qt::Vertical);
     split_->insertWidget(0, chartBox_);
-    lower_->insertWidget(0, controlsPane_);
-    lower_->insertWidget(1, table_);
-    split_->insertWidget(1, lower_);
-    lower_->show();
-    lower_->setStretchFactor(0, 0);
-    lower_->setStretchFactor(1, 1);
+    split_->insertWidget(1, controlsPane_);
+    split_->insertWidget(2, table_);
     split_->setStretchFactor(0, 3);
     split_->setStretchFactor(1, 2);
+    split_->setStretchFactor(2, 2);
     chart_->setMinimumHeight(220);
     chart_->setCompact(false);
   }

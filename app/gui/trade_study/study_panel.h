@@ -152,8 +152,7 @@ class TradeStudyPanel : public QWidget {
   StudyChart* chart_ = nullptr;
   StudyTableModel* model_ = nullptr;
   QTableView* table_ = nullptr;
-  QSplitter* split_ = nullptr;  ///< controls, chart, table side by side; or the chart over `lower_`
-  QSplitter* lower_ = nullptr;  ///< stacked: the controls beside the table
+  QSplitter* split_ = nullptr;  ///< controls, chart, table side by side; or one above the other
   QWidget* chartBox_ = nullptr;
   QVBoxLayout* chartLayout_ = nullptr;  ///< the chart and, stacked, the plot choice and the note
   QVBoxLayout* form_ = nullptr;         ///< the controls and, side by side, the plot choice and the note
