@@ -301,7 +301,8 @@ CycleResult Assembly::design() const {
   // Net thrust rises with air mass flow (linearly but for the fixed power offtake): the core's
   // Newton solver on W2, started from the linear estimate through the cycle at 10 kg/s, to
   // 1e-12 relative in thrust.
-  const double firstGuess = 10.0 * required / at(10.0).performance.netThrust;
+  const double linearEstimate = 10.0 * required / at(10.0).performance.netThrust;
+  const double w0 = std::isfinite(linearEstimate) && linearEstimate > 0.0 ? linearEstimate : 10.0;
   solve::NonlinearSystem thrustMatch{[this, required](const Eigen::VectorXd& w) {
                                        Eigen::VectorXd f(1);
                                        f(0) = w(0) > 0.0 ? at(w(0)).performance.netThrust - required
@@ -312,8 +313,8 @@ CycleResult Assembly::design() const {
   solve::NewtonOptions options;
   options.maxIterations = 60;
   options.residualScale = Eigen::VectorXd::Constant(1, required);
-  options.typicalX = Eigen::VectorXd::Constant(1, std::abs(firstGuess));
-  const Eigen::VectorXd start = Eigen::VectorXd::Constant(1, std::isfinite(firstGuess) && firstGuess > 0.0 ? firstGuess : 10.0);
+  options.typicalX = Eigen::VectorXd::Constant(1, w0);
+  const Eigen::VectorXd start = Eigen::VectorXd::Constant(1, w0);
   return at(solve::solveNewtonOrThrow(thrustMatch, start, "design.required_net_thrust_N: air mass flow", options)(0));
 }
 

@@ -18,8 +18,6 @@ Eigen::VectorXd orOnes(const Eigen::VectorXd& v, Eigen::Index n) {
   return v.size() == n ? v : Eigen::VectorXd::Ones(n);
 }
 
-bool allFinite(const Eigen::VectorXd& v) { return v.allFinite(); }
-
 double scaledMax(const Eigen::VectorXd& f, const Eigen::VectorXd& scale) {
   return f.size() == 0 ? 0.0 : f.cwiseAbs().cwiseQuotient(scale).maxCoeff();
 }
@@ -52,7 +50,7 @@ NewtonResult solveNewton(const NonlinearSystem& system, const Eigen::VectorXd& x
   result.residuals = system.residuals(x0);
   const Eigen::VectorXd scale = orOnes(options.residualScale, result.residuals.size());
   const Eigen::VectorXd typicalX = orOnes(options.typicalX, x0.size());
-  if (!allFinite(result.residuals)) {
+  if (!result.residuals.allFinite()) {
     result.status = NewtonStatus::NotFinite;
     result.scaledResidual = std::numeric_limits<double>::max();
     return result;
@@ -78,7 +76,7 @@ NewtonResult solveNewton(const NonlinearSystem& system, const Eigen::VectorXd& x
     for (double lambda = 1.0; lambda >= kMinimumStep; lambda *= 0.5) {
       Eigen::VectorXd trial = result.x + lambda * step;
       Eigen::VectorXd f = system.residuals(trial);
-      if (!allFinite(f)) continue;
+      if (!f.allFinite()) continue;
       anyFinite = true;
       if (merit(f, scale) <= (1.0 - 2.0 * kArmijo * lambda) * meritNow) {
         result.x = std::move(trial);

@@ -8,7 +8,7 @@
 //        are exact in the paper; the root of (3) is quoted from memory of its table to four
 //        significant digits; (30) has no closed-form root, so the check is F(x) = 0.
 //  [DS]  J. E. Dennis and R. B. Schnabel, Numerical Methods for Unconstrained Optimization and
-//        Nonlinear Equations, SIAM 1996: x^2 + 1 = 0 has no real root (closed form).
+//        Nonlinear Equations, SIAM 1996: x*x = -1 has no real root (closed form).
 #include "common/error.h"
 #include "solve/newton_solver.h"
 
@@ -142,7 +142,7 @@ class TestNewtonSolver : public QObject {
   }
 
   void noRealRootIsAPlainFailure() {
-    // [DS] x^2 + 1 = 0: from x = 1 the first Newton step lands on x = 0, where F' = 0.
+    // [DS] x*x = -1 has no real root: from x = 1 the first Newton step lands on x = 0, where dF/dx = 0.
     NonlinearSystem system{[](const VectorXd& x) { return vec({x(0) * x(0) + 1.0}); }, {}};
     const auto r = cw::solve::solveNewton(system, vec({1.0}));
     QVERIFY(!r.converged());
@@ -161,7 +161,7 @@ class TestNewtonSolver : public QObject {
     for (double start : {0.3, -2.0, 7.0}) {
       const auto r = cw::solve::solveNewton(system, vec({start}));
       QVERIFY(!r.converged());
-      QVERIFY(r.scaledResidual >= 1.0 - 1e-12);  // |x^2 + 1| >= 1 everywhere
+      QVERIFY(r.scaledResidual >= 1.0 - 1e-12);  // x*x + 1 >= 1 everywhere
     }
   }
 
