@@ -18,8 +18,8 @@
 #include "trade_study/study_chart.h"
 
 #include "analysis/loss_audit.h"
-#include "engine/evaluate.h"
 #include "engine/process_paths.h"
+#include "evaluation/evaluate.h"
 #include "io/case_file.h"
 #include "study/trade_study.h"
 

@@ -25,8 +25,8 @@
 
 #include "common/version.h"
 #include "io/case_file.h"
-#include "io/study_export.h"
 #include "study/study_columns.h"
+#include "study/study_export.h"
 #include "study/trade_study.h"
 
 #include <qwt_plot_curve.h>

@@ -4,7 +4,7 @@
 #include "trade_study/study_inputs.h"
 #include "trade_study/study_names.h"
 
-#include "io/study_export.h"
+#include "study/study_export.h"
 
 #include <QApplication>
 #include <QPalette>
