@@ -1,5 +1,5 @@
 #pragma once
-// The inputs of one turbojet design-point case: plain structs, SI units, no behaviour.
+// The inputs of one turbojet design-point case (single or two spools): plain structs, SI units, no behaviour.
 //
 // The defaults describe a sensible lossy single-spool turbojet at sea-level static on a
 // standard day (invented round numbers, common practice, no source): pressure ratio 10,
@@ -95,8 +95,41 @@ struct SizingInputs {
 };
 
 // ---------------------------------------------------------------------------------------------
+// Architecture: which network of components the case describes
 
-/// One design-point case of a single-spool turbojet.
+/// The engine's architecture. Each names a topology (the components, streams, shafts and
+/// nozzles); the case holds the inputs of every role a topology may use, and a role's inputs
+/// apply only to the architectures that have it.
+enum class Architecture {
+  Turbojet,          ///< single spool: compressor and turbine on one shaft
+  TwoSpoolTurbojet,  ///< LP compressor and turbine on the LP shaft, HP ones on the HP shaft
+};
+
+/// The roles of the case's compressor and turbine inputs by architecture (one place; the
+/// registry of parameters and the topologies name roles through it):
+///   Turbojet:          compressor -> "compressor", turbine -> "turbine";
+///   TwoSpoolTurbojet:  lowPressureCompressor -> "low_pressure_compressor",
+///                      compressor -> "high_pressure_compressor",
+///                      turbine -> "high_pressure_turbine",
+///                      lowPressureTurbine -> "low_pressure_turbine".
+/// Defaults of the low-pressure spool (invented round numbers, common practice, no source): a
+/// new two-spool case splits an overall pressure ratio of 10 as 2.5 (LP) times 4 (HP), setting
+/// the HP compressor's ratio where the case is created.
+inline CompressorInputs defaultLowPressureCompressor() {
+  CompressorInputs lp;
+  lp.pressureRatio = 2.5;
+  lp.efficiency = Efficiency{EfficiencyBasis::Isentropic, 0.87};
+  return lp;
+}
+inline TurbineInputs defaultLowPressureTurbine() {
+  TurbineInputs lp;
+  lp.efficiency = Efficiency{EfficiencyBasis::Isentropic, 0.89};
+  return lp;
+}
+
+// ---------------------------------------------------------------------------------------------
+
+/// One design-point case of a turbojet (single or two spools, per architecture).
 struct Case {
   std::string title;
   std::string notes;
@@ -112,6 +145,11 @@ struct Case {
   AfterburnerInputs afterburner;
   NozzleInputs nozzle;
   SizingInputs sizing;
+  Architecture architecture = Architecture::Turbojet;
+  /// Two-spool turbojet only: the LP compressor (pt25 / pt2) and the LP turbine; `compressor`
+  /// and `turbine` are then the high-pressure ones.
+  CompressorInputs lowPressureCompressor = defaultLowPressureCompressor();
+  TurbineInputs lowPressureTurbine = defaultLowPressureTurbine();
   bool operator==(const Case&) const = default;
 };
 
