@@ -13,6 +13,7 @@
 #include <algorithm>
 #include <array>
 #include <cmath>
+#include <functional>
 #include <limits>
 
 namespace cw::gui {
@@ -152,7 +153,7 @@ int LineEndLabels::placeOne(LabelPlacer& placer, std::size_t label, bool mayCros
   return -1;
 }
 
-void LineEndLabels::placeGroup(LabelPlacer& placer, int group, std::vector<Choice>& choices) const {
+void LineEndLabels::placeGroup(LabelPlacer& placer, int group, std::vector<int>& choices) const {
   // The lines between the first and last: every k-th, the smallest k for which all of them fit.
   std::vector<std::size_t> inner;
   int size = 0;
@@ -178,24 +179,32 @@ void LineEndLabels::placeGroup(LabelPlacer& placer, int group, std::vector<Choic
     }
     if (!all) continue;
     placer = std::move(trial);
-    for (const auto& [i, pick] : chosen) choices[i].index = pick;
+    for (const auto& [i, pick] : chosen) choices[i] = pick;
     return;
   }
 }
 
 void LineEndLabels::draw(QPainter* painter, const QwtScaleMap& xMap, const QwtScaleMap& yMap,
                          const QRectF& canvasRect) const {
-  placed_.clear();
-  placedTexts_.clear();
-  placedIds_.clear();
-  leaders_.clear();
-  obstacleRects_.clear();
-  skipped_ = 0;
   auto toPixel = [&](const QPointF& p) { return QPointF(xMap.transform(p.x()), yMap.transform(p.y())); };
-
-  const QRectF bounds = canvasRect.adjusted(1, 1, -1, -1);
   canvas_ = canvasRect;
-  LabelPlacer placer(bounds);
+  LabelPlacer placer(canvasRect.adjusted(1, 1, -1, -1));
+  keepClear(placer, toPixel, canvasRect);
+  linePixels_.assign(labels_.size(), {});
+  startPixels_.assign(labels_.size(), {});
+  candidates_.clear();
+  for (std::size_t i = 0; i < labels_.size(); ++i) {
+    for (const QPointF& a : labels_[i].anchors) linePixels_[i].push_back(toPixel(a));
+    for (const QPointF& a : labels_[i].startAnchors) startPixels_[i].push_back(toPixel(a));
+    candidates_.push_back(candidatesFor(i, textSizeOn(painter, labels_[i].text)));
+  }
+  drawPlaced(painter, placeAll(placer));
+}
+
+void LineEndLabels::keepClear(LabelPlacer& placer, const std::function<QPointF(const QPointF&)>& toPixel,
+                              const QRectF& canvasRect) const {
+  // The markers, the legend inside the canvas and the curves.
+  obstacleRects_.clear();
   for (const Obstacle& o : obstacles_) {
     const QPointF c = toPixel(o.at) + o.offset;
     obstacleRects_.emplace_back(c - QPointF(o.size.width(), o.size.height()) / 2.0, o.size);
@@ -211,32 +220,33 @@ void LineEndLabels::draw(QPainter* painter, const QwtScaleMap& xMap, const QwtSc
     placer.addCurve(pixels);
     curvePixels_.push_back(std::move(pixels));
   }
+}
 
-  linePixels_.assign(labels_.size(), {});
-  startPixels_.assign(labels_.size(), {});
-  candidates_.clear();
-  for (std::size_t i = 0; i < labels_.size(); ++i) {
-    for (const QPointF& a : labels_[i].anchors) linePixels_[i].push_back(toPixel(a));
-    for (const QPointF& a : labels_[i].startAnchors) startPixels_[i].push_back(toPixel(a));
-    candidates_.push_back(candidatesFor(i, textSizeOn(painter, labels_[i].text)));
-  }
-
+std::vector<int> LineEndLabels::placeAll(LabelPlacer& placer) const {
   // The first and last line of every group, in the order given; then each group's lines between.
-  std::vector<Choice> choices(labels_.size());
+  std::vector<int> choices(labels_.size(), -1);
   std::vector<int> groups;
   for (std::size_t i = 0; i < labels_.size(); ++i) {
     const Label& l = labels_[i];
     if (std::find(groups.begin(), groups.end(), l.group) == groups.end()) groups.push_back(l.group);
-    if (l.rank == 0 || l.rank == l.groupSize - 1) choices[i].index = placeOne(placer, i, true);
+    if (l.rank == 0 || l.rank == l.groupSize - 1) choices[i] = placeOne(placer, i, true);
   }
   for (const int group : groups) placeGroup(placer, group, choices);
+  return choices;
+}
 
+void LineEndLabels::drawPlaced(QPainter* painter, const std::vector<int>& choices) const {
+  placed_.clear();
+  placedTexts_.clear();
+  placedIds_.clear();
+  leaders_.clear();
+  skipped_ = 0;
   for (std::size_t i = 0; i < labels_.size(); ++i) {
-    if (choices[i].index < 0) {
+    if (choices[i] < 0) {
       ++skipped_;
       continue;
     }
-    const Candidate& c = candidates_[i][static_cast<std::size_t>(choices[i].index)];
+    const Candidate& c = candidates_[i][static_cast<std::size_t>(choices[i])];
     if (c.leader) {
       const QLineF leader(c.from, nearestOn(c.rect, c.from));
       painter->save();

@@ -23,6 +23,7 @@
 #include <QRectF>
 #include <QSizeF>
 
+#include <functional>
 #include <vector>
 
 class QwtPlotCurve;
@@ -86,13 +87,16 @@ class LineEndLabels : public QwtPlotItem {
     bool leader = false;
     QPointF from;  ///< the line's end a leader starts at
   };
-  struct Choice {
-    int index = -1;  ///< into the label's candidates, -1: left out
-  };
   std::vector<Candidate> candidatesFor(std::size_t label, const QSizeF& size) const;
   bool nearestIsOwn(std::size_t label, const QRectF& rect) const;
   int placeOne(LabelPlacer& placer, std::size_t label, bool mayCrossCurves) const;
-  void placeGroup(LabelPlacer& placer, int group, std::vector<Choice>& choices) const;
+  /// The candidate chosen per label (-1: left out) into `choices`, for one group's lines between.
+  void placeGroup(LabelPlacer& placer, int group, std::vector<int>& choices) const;
+  /// The markers, the legend and the curves into the placer (obstacleRects_, curvePixels_).
+  void keepClear(LabelPlacer& placer, const std::function<QPointF(const QPointF&)>& toPixel,
+                 const QRectF& canvasRect) const;
+  std::vector<int> placeAll(LabelPlacer& placer) const;
+  void drawPlaced(QPainter* painter, const std::vector<int>& choices) const;
 
   std::vector<Label> labels_;
   std::vector<Obstacle> obstacles_;
