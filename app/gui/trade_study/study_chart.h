@@ -6,7 +6,9 @@
 //
 // Lines of constant first input: Okabe-Ito blue #0072B2, solid; of constant second input:
 // bluish green #009E73, dotted; each labelled with its input's value and unit at its end
-// (LineEndLabels keeps the labels clear of each other, the design point and the canvas edge).
+// (LineEndLabels keeps the labels clear of each other, the design point and the canvas edge, and
+// labels the first and last line of each family; the legend gives each family's step). Both axis
+// titles take the longest form that fits their axis (ChartBase::fitAxisTitle).
 // The overlay of a second loss level is dashed: the ideal twin orange #E69F00 (as the ideal
 // cycle on the cycle charts), a study with one input set differently reddish purple #CC79A7.
 // The case's design point is a yellow star (#F0E442, outlined in the text colour), labelled.
