@@ -1670,6 +1670,14 @@ p = %7   v = %8</translation>
         <source>comparison</source>
         <translation>Vergleich</translation>
     </message>
+    <message>
+        <source>F_s</source>
+        <translation>F_s</translation>
+    </message>
+    <message>
+        <source>%1, step %2</source>
+        <translation>%1, Schrittweite %2</translation>
+    </message>
 </context>
 <context>
     <name>cw::gui::StudyInputs</name>

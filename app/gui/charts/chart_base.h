@@ -7,6 +7,8 @@
 //   legend    a legend inside the canvas (QwtPlotLegendItem) or beside it (QwtLegend), in one
 //             style: a smaller font, the palette's colours;
 //   stale     the banner over the canvas while the chart shows a result that is no longer current;
+//   titles    an axis title that fits its axis: the longest of its forms that fits on one line
+//             (fitAxisTitle), the whole one on an export;
 //   export    what an export changes for its duration (ExportScope): a light palette on white,
 //             the caution line as the footer; the chart's beginExport() / endExport() hide what
 //             belongs on screen only.
@@ -20,6 +22,9 @@
 #include <QFont>
 #include <QPalette>
 #include <QPen>
+#include <QStringList>
+
+#include <array>
 
 #include <vector>
 
@@ -54,6 +59,9 @@ class ChartBase : public QwtPlot {
   /// Rebuilds every item from the chart's data in the current palette, font and language.
   virtual void refresh() { replot(); }
 
+  /// Whether an axis's title fits along the axis on one line (tests).
+  bool axisTitleFits(QwtAxisId axis) const;
+
   // For tests.
   const QwtPlotTextLabel* staleBanner() const { return staleLabel_; }
   const QwtPlotGrid* grid() const { return grid_; }
@@ -81,6 +89,11 @@ class ChartBase : public QwtPlot {
   /// Whether the banner is wanted while stale; the default: always.
   virtual bool wantsStaleBanner() const { return true; }
 
+  /// Sets the longest of an axis's `titles` (longest first) that fits along the axis on one
+  /// line: the first at its full size only, the others drawn down to 70 % of it, else the last
+  /// at 70 %. With `whole` (an export, which has the room): the first at full size.
+  void fitAxisTitle(QwtAxisId axis, const QStringList& titles, bool whole = false);
+
   QwtPlotGrid* gridItem() const { return grid_; }
   /// A legend inside the canvas in the charts' style; the caller attaches it.
   QwtPlotLegendItem* makeLegendItem(Qt::Alignment alignment, int columns, double fontScale);
@@ -91,6 +104,9 @@ class ChartBase : public QwtPlot {
 
  private:
   void applyBasePalette();
+  /// The length along an axis that its title may take [px].
+  double axisTitleRoom(QwtAxisId axis) const;
+  QFont axisTitleFont(QwtAxisId axis) const;
   void styleLegendItem(QwtPlotLegendItem* legend) const;
 
   bool stale_ = false;
@@ -100,6 +116,7 @@ class ChartBase : public QwtPlot {
   QwtPlotGrid* grid_ = nullptr;
   QwtPlotTextLabel* staleLabel_ = nullptr;
   std::vector<QwtPlotLegendItem*> legendItems_;  ///< styled on every palette change (not owned)
+  std::array<double, QwtAxis::AxisPositions> titleFontSizes_{};  ///< each title's full size [pt] (Qwt's)
 
   friend class ExportScope;
 };
