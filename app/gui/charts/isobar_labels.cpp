@@ -2,6 +2,7 @@
 
 #include "charts/label_placer.h"
 
+#include <qwt_plot.h>
 #include <qwt_plot_curve.h>
 #include <qwt_plot_legenditem.h>
 #include <qwt_scale_map.h>
@@ -17,11 +18,15 @@ namespace cw::gui {
 
 namespace {
 
-/// The side a station prefers first, then the other seven around its symbol.
+/// Rings of places around a station's symbol, each a label's height further out than the one
+/// before; the first beside the symbol, the others with a leader line.
+constexpr int kStationRings = 4;
+
+/// The side a station prefers first, then the other seven around its symbol; then the same
+/// eight again on each ring further out.
 std::vector<QRectF> stationCandidates(const IsobarLabels::Station& s, const QPointF& pixel,
                                       const QSizeF& size) {
   const QRectF symbol(pixel - QPointF(s.symbol.width(), s.symbol.height()) / 2.0, s.symbol);
-  std::vector<QRectF> all = LabelPlacer::around(symbol, size, s.spacing);
   const bool left = s.align & Qt::AlignLeft, right = s.align & Qt::AlignRight;
   const bool top = s.align & Qt::AlignTop, bottom = s.align & Qt::AlignBottom;
   // around(): right, left, above, below, above right, above left, below right, below left.
@@ -42,8 +47,47 @@ std::vector<QRectF> stationCandidates(const IsobarLabels::Station& s, const QPoi
     first = 2;
   else if (bottom)
     first = 3;
-  std::rotate(all.begin(), all.begin() + first, all.begin() + first + 1);
+  std::vector<QRectF> all;
+  for (int ring = 0; ring < kStationRings; ++ring) {
+    std::vector<QRectF> places = LabelPlacer::around(symbol, size, s.spacing + ring * size.height());
+    std::rotate(places.begin(), places.begin() + first, places.begin() + first + 1);
+    all.insert(all.end(), places.begin(), places.end());
+  }
   return all;
+}
+
+/// A thin line from a symbol's edge to the nearest point of its label's rectangle [px].
+QLineF leaderLine(const QPointF& centre, double radius, const QRectF& label) {
+  const QPointF nearest(std::clamp(centre.x(), label.left(), label.right()),
+                        std::clamp(centre.y(), label.top(), label.bottom()));
+  const QPointF d = nearest - centre;
+  const double length = std::hypot(d.x(), d.y());
+  if (length <= radius + 2.0) return {};
+  return {centre + d * ((radius + 1.0) / length), nearest - d * (1.0 / length)};
+}
+
+/// How many segments of the curves meet the rectangle [px].
+int segmentsMeeting(const QRectF& rect, const std::vector<std::vector<QPointF>>& curves) {
+  int n = 0;
+  for (const auto& c : curves)
+    for (std::size_t k = 1; k < c.size(); ++k) n += segmentMeetsRect(c[k - 1], c[k], rect) ? 1 : 0;
+  return n;
+}
+
+std::vector<std::vector<QPointF>> toPixels(const std::vector<const QwtPlotCurve*>& curves,
+                                           const QwtScaleMap& xMap, const QwtScaleMap& yMap) {
+  std::vector<std::vector<QPointF>> out;
+  for (const QwtPlotCurve* curve : curves) {
+    if (!curve || !curve->isVisible()) continue;
+    std::vector<QPointF> pixels;
+    pixels.reserve(curve->dataSize());
+    for (size_t i = 0; i < curve->dataSize(); ++i) {
+      const QPointF p = curve->sample(i);
+      pixels.emplace_back(xMap.transform(p.x()), yMap.transform(p.y()));
+    }
+    out.push_back(std::move(pixels));
+  }
+  return out;
 }
 
 }  // namespace
@@ -73,12 +117,48 @@ QColor IsobarLabels::textColour() const {
 }
 
 bool IsobarLabels::stationLabelRect(const QwtPlotMarker* marker, QRectF& rect) const {
-  for (const auto& [m, r] : stationPlaces_)
-    if (m == marker) {
-      rect = r;
+  for (const auto& place : stationPlaces_)
+    if (place.marker == marker) {
+      rect = place.rect;
       return true;
     }
   return false;
+}
+
+QLineF IsobarLabels::stationLeader(const QwtPlotMarker* marker) const {
+  for (const auto& place : stationPlaces_)
+    if (place.marker == marker) return place.leader;
+  return {};
+}
+
+int IsobarLabels::fitLegend(QwtPlotLegendItem* legend, const QwtScaleMap& xMap, const QwtScaleMap& yMap,
+                            const QRectF& canvasRect) const {
+  const auto avoided = toPixels(legendAvoids_, xMap, yMap);
+  const auto others = toPixels(curves_, xMap, yMap);
+  std::vector<QPointF> symbols;
+  for (const auto& s : stations_) symbols.emplace_back(xMap.transform(s.at.x()), yMap.transform(s.at.y()));
+  // Blocked: the cycles' segments and the markers under it; then, among equals, the closures'.
+  auto cost = [&](const QRectF& rect, int& blocked) {
+    const QRectF r = rect.adjusted(-2, -2, 2, 2);
+    blocked = segmentsMeeting(r, avoided);
+    for (const QPointF& p : symbols) blocked += r.contains(p) ? 1 : 0;
+    return 1000 * blocked + segmentsMeeting(r, others);
+  };
+  Qt::Alignment best = legend->alignmentInCanvas();
+  int bestCost = -1, bestBlocked = 0;
+  for (const Qt::Alignment corner : {Qt::AlignTop | Qt::AlignLeft, Qt::AlignTop | Qt::AlignRight,
+                                     Qt::AlignBottom | Qt::AlignRight, Qt::AlignBottom | Qt::AlignLeft}) {
+    legend->setAlignmentInCanvas(corner);
+    int blocked = 0;
+    const int c = cost(QRectF(legend->geometry(canvasRect)), blocked);
+    if (bestCost < 0 || c < bestCost) {
+      bestCost = c;
+      bestBlocked = blocked;
+      best = corner;
+    }
+  }
+  legend->setAlignmentInCanvas(best);
+  return bestBlocked;
 }
 
 void IsobarLabels::draw(QPainter* painter, const QwtScaleMap& xMap, const QwtScaleMap& yMap,
@@ -89,6 +169,8 @@ void IsobarLabels::draw(QPainter* painter, const QwtScaleMap& xMap, const QwtSca
   stationRects_.clear();
   stationPlaces_.clear();
   curvePixels_.clear();
+  legendRects_.clear();
+  legendBlocked_ = false;
   canvas_ = canvasRect;
   moved_ = 0;
   skipped_ = 0;
@@ -96,14 +178,8 @@ void IsobarLabels::draw(QPainter* painter, const QwtScaleMap& xMap, const QwtSca
 
   const QRectF bounds = canvasRect.adjusted(1, 1, -1, -1);
   LabelPlacer placer(bounds);
-  for (const QwtPlotCurve* curve : curves_) {
-    if (!curve || !curve->isVisible()) continue;
-    std::vector<QPointF> pixels;
-    pixels.reserve(curve->dataSize());
-    for (size_t i = 0; i < curve->dataSize(); ++i) pixels.push_back(toPixel(curve->sample(i)));
-    placer.addCurve(pixels);
-    curvePixels_.push_back(std::move(pixels));
-  }
+  curvePixels_ = toPixels(curves_, xMap, yMap);
+  for (const auto& pixels : curvePixels_) placer.addCurve(pixels);
   // The markers' symbols and the legend first, then the station numbers, then the isobars'.
   for (const auto& s : stations_) {
     const QPointF pixel = toPixel(s.at);
@@ -111,10 +187,15 @@ void IsobarLabels::draw(QPainter* painter, const QwtScaleMap& xMap, const QwtSca
     placer.addObstacle(symbol);
     obstacles_.push_back(symbol);
   }
-  if (legend_ && legend_->isVisible() && legend_->plot()) {
-    const QRectF legend(legend_->geometry(canvasRect));
-    placer.addObstacle(legend);
-    obstacles_.push_back(legend);
+  // Every legend inside the canvas, whichever placement put it there, into its freest corner.
+  for (QwtPlotItem* item : plot() ? plot()->itemList(QwtPlotItem::Rtti_PlotLegend) : QwtPlotItemList()) {
+    auto* legend = static_cast<QwtPlotLegendItem*>(item);
+    if (!legend->isVisible()) continue;
+    legendBlocked_ = fitLegend(legend, xMap, yMap, canvasRect) > 0 || legendBlocked_;
+    const QRectF rect(legend->geometry(canvasRect));
+    placer.addObstacle(rect);
+    obstacles_.push_back(rect);
+    legendRects_.push_back(rect);
   }
   for (const auto& s : stations_) {
     if (!s.marker || s.marker->label().isEmpty()) continue;
@@ -124,7 +205,9 @@ void IsobarLabels::draw(QPainter* painter, const QwtScaleMap& xMap, const QwtSca
     // Crowded beyond every side: its preferred side all the same (a number is never left out).
     const QRectF r = k >= 0 ? options[static_cast<std::size_t>(k)] : options.front();
     if (k < 0) placer.addObstacle(r);
-    stationPlaces_.emplace_back(s.marker, r);
+    const QLineF leader =
+        k >= 8 ? leaderLine(toPixel(s.at), std::max(s.symbol.width(), s.symbol.height()) / 2.0, r) : QLineF();
+    stationPlaces_.push_back({s.marker, r, leader});
     stationRects_.push_back(r);
     obstacles_.push_back(r);
   }
@@ -186,6 +269,13 @@ void IsobarLabels::draw(QPainter* painter, const QwtScaleMap& xMap, const QwtSca
 void StationMarker::drawLabel(QPainter* painter, const QRectF& canvasRect, const QPointF& position) const {
   QRectF rect;
   if (labels_ && labels_->stationLabelRect(this, rect)) {
+    if (const QLineF leader = labels_->stationLeader(this); !leader.isNull()) {
+      painter->save();
+      painter->setPen(QPen(label().color(), 0.8));
+      painter->setRenderHint(QPainter::Antialiasing, true);
+      painter->drawLine(leader);
+      painter->restore();
+    }
     label().draw(painter, rect);
     return;
   }
