@@ -352,6 +352,30 @@ class TestCharts : public QObject {
     QVERIFY(middle.left() > 200 && middle.bottom() < 150);
   }
 
+  // The readout names the station whose marker is under the cursor (so a number the placer
+  // had to leave out is still found), and only there.
+  void readoutNamesTheStationUnderTheCursor() {
+    DisplayUnits units;
+    CycleChart chart(ChartKind::TemperatureEntropy, units);
+    chart.resize(800, 560);
+    chart.setEvaluation(demoEvaluation(), false);
+    chart.grab();
+    const QwtScaleMap xMap = chart.canvasMap(QwtAxis::XBottom), yMap = chart.canvasMap(QwtAxis::YLeft);
+    int named = 0;
+    for (const QwtPlotMarker* m : chart.markers()) {
+      if (m->label().isEmpty()) continue;
+      const QPoint at(qRound(xMap.transform(m->xValue())), qRound(yMap.transform(m->yValue())));
+      const QString text = chart.readoutAt(at);
+      // 7 and 8 lie within a few pixels of 5 and 9 (one pressure, nearly one state): the nearest
+      // number is named, either of the pair.
+      QVERIFY2(text.startsWith("Station "), qPrintable(text));
+      named += text.startsWith("Station " + m->label().text() + "\n") ? 1 : 0;
+    }
+    QVERIFY2(named >= 6, qPrintable(QString::number(named)));
+    const QPoint away(qRound(xMap.transform(600.0)), qRound(yMap.transform(1300.0)));
+    QVERIFY(!chart.readoutAt(away).startsWith("Station "));
+  }
+
   // The h-s chart draws the core's sensible enthalpies h - h(298.15 K) (engine::Station,
   // thermo::Gas::sensibleEnthalpy): its station markers at h_s of the total state (2 to 7) and
   // of the static state (0, 9) against s; lossy solid, ideal dashed. The absolute h with the

@@ -42,6 +42,7 @@ namespace {
 const QColor& kBlue = kOkabeItoBlue;
 const QColor& kOrange = kOkabeItoOrange;
 constexpr qsizetype kBaselineTitleChars = 32;  ///< of the baseline's title in the legend
+constexpr double kStationPickPx = 6.0;         ///< a station is read within this of its marker [px]
 constexpr int kBaselineMarkerPx = 5;           ///< the baseline's station markers [px]
 const QColor& kVermillion = kOkabeItoVermillion;
 
@@ -673,6 +674,20 @@ void CycleChart::resetZoom() {
   replot();
 }
 
+QString CycleChart::stationAt(const QPoint& position) const {
+  // The numbered markers (the cycle with losses): its number names it also where the placer
+  // had to leave the number out.
+  const QwtScaleMap xMap = canvasMap(QwtAxis::XBottom), yMap = canvasMap(QwtAxis::YLeft);
+  for (const QwtPlotMarker* m : markers_) {
+    if (m->label().isEmpty()) continue;
+    const double dx = xMap.transform(m->xValue()) - position.x(),
+                 dy = yMap.transform(m->yValue()) - position.y();
+    if (dx * dx + dy * dy <= kStationPickPx * kStationPickPx)
+      return tr("Station %1").arg(m->label().text()) + QLatin1Char('\n');
+  }
+  return {};
+}
+
 QString CycleChart::readoutAt(const QPoint& position) const {
   const QwtScaleMap xMap = canvasMap(QwtAxis::XBottom);
   const QwtScaleMap yMap = canvasMap(QwtAxis::YLeft);
@@ -705,16 +720,18 @@ QString CycleChart::readoutAt(const QPoint& position) const {
              units_.format(y * yScale(), yQuantity(), 4));
   }
   const engine::PathState& s = best->state(bestIndex);
+  const QString station = stationAt(position);
   const auto& cycle = bestIdeal ? evaluation_->ideal : evaluation_->actual;
   const auto& path = cycle.paths[static_cast<size_t>(best->pathOf(bestIndex))];
   const QString which = bestIdeal ? tr("Ideal") : tr("With losses");
   QString text =
-      tr("%1, %2 (%3 → %4)\nT = %5   s = %6\np = %7   v = %8")
-          .arg(which, componentName(path.component), QString::fromStdString(path.fromStation),
-               QString::fromStdString(path.toStation), units_.format(s.temperature, Quantity::Temperature, 5),
-               units_.format(s.entropy, Quantity::Entropy, 4),
-               units_.format(s.pressure, Quantity::Pressure, 5),
-               units_.format(s.specificVolume, Quantity::SpecificVolume, 4));
+      station + tr("%1, %2 (%3 → %4)\nT = %5   s = %6\np = %7   v = %8")
+                    .arg(which, componentName(path.component), QString::fromStdString(path.fromStation),
+                         QString::fromStdString(path.toStation),
+                         units_.format(s.temperature, Quantity::Temperature, 5),
+                         units_.format(s.entropy, Quantity::Entropy, 4),
+                         units_.format(s.pressure, Quantity::Pressure, 5),
+                         units_.format(s.specificVolume, Quantity::SpecificVolume, 4));
   if (kind_ == ChartKind::EnthalpyEntropy)
     text += QStringLiteral("\nh − h(298.15 K) = %1")
                 .arg(units_.format(s.sensibleEnthalpy, Quantity::SpecificEnergy, 5));

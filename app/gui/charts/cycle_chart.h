@@ -73,8 +73,12 @@ class CycleChart : public ChartBase {
   void replot() override;
 
   /// The readout for a point of the canvas (pixels): the nearest path state's T, s, p, v
-  /// with units, or the cursor's coordinates when no state is near.
+  /// with units (first the station's number on a station's marker), or the cursor's
+  /// coordinates when no state is near.
   QString readoutAt(const QPoint& canvasPosition) const;
+
+  /// "Station 4" and a line break when the point is on a numbered station marker, else empty.
+  QString stationAt(const QPoint& canvasPosition) const;
 
   /// Axis titles, legend and labels in the current language and units.
   void retranslateUi();

@@ -171,6 +171,7 @@ void IsobarLabels::draw(QPainter* painter, const QwtScaleMap& xMap, const QwtSca
   curvePixels_.clear();
   legendRects_.clear();
   legendBlocked_ = false;
+  stationsLeftOut_ = 0;
   canvas_ = canvasRect;
   moved_ = 0;
   skipped_ = 0;
@@ -202,9 +203,14 @@ void IsobarLabels::draw(QPainter* painter, const QwtScaleMap& xMap, const QwtSca
     const QSizeF size = textSizeOn(painter, s.marker->label());
     const std::vector<QRectF> options = stationCandidates(s, toPixel(s.at), size);
     const int k = placer.place(options, true);
-    // Crowded beyond every side: its preferred side all the same (a number is never left out).
-    const QRectF r = k >= 0 ? options[static_cast<std::size_t>(k)] : options.front();
-    if (k < 0) placer.addObstacle(r);
+    // Crowded beyond every place, even across a curve: left out (the readout names the
+    // station under the cursor), never over another label.
+    if (k < 0) {
+      stationPlaces_.push_back({s.marker, QRectF(), QLineF()});
+      ++stationsLeftOut_;
+      continue;
+    }
+    const QRectF r = options[static_cast<std::size_t>(k)];
     const QLineF leader =
         k >= 8 ? leaderLine(toPixel(s.at), std::max(s.symbol.width(), s.symbol.height()) / 2.0, r) : QLineF();
     stationPlaces_.push_back({s.marker, r, leader});
@@ -269,6 +275,7 @@ void IsobarLabels::draw(QPainter* painter, const QwtScaleMap& xMap, const QwtSca
 void StationMarker::drawLabel(QPainter* painter, const QRectF& canvasRect, const QPointF& position) const {
   QRectF rect;
   if (labels_ && labels_->stationLabelRect(this, rect)) {
+    if (rect.isEmpty()) return;  // left out: no room anywhere
     if (const QLineF leader = labels_->stationLeader(this); !leader.isNull()) {
       painter->save();
       painter->setPen(QPen(label().color(), 0.8));

@@ -2,8 +2,9 @@
 // The labels of a cycle chart: the station numbers and the isobars' labels ("p3 = 1434 kPa"),
 // placed on screen (and on every export's surface) at each draw through the LabelPlacer, so that
 // none overlaps another label, a station's marker or the legend, and none crosses the cycle's
-// curves. Station numbers come first and are always shown: beside their marker, else further
-// out with a thin leader line to it, crossing a curve only where no place of those is free; an
+// curves. Station numbers come first: beside their marker, else further out with a thin leader
+// line to it, crossing a curve only where no place of those is free, left out only where every
+// place is taken by another label (the chart's readout names the station under the cursor); an
 // isobar's label slides along its own isobar, to either side of it, and one that fits nowhere on
 // the canvas is left out (the isobar itself is always drawn, by its own item). Zooming in makes
 // room again.
@@ -80,7 +81,7 @@ class IsobarLabels : public QwtPlotItem {
   void draw(QPainter* painter, const QwtScaleMap& xMap, const QwtScaleMap& yMap,
             const QRectF& canvasRect) const override;
 
-  /// Where the last draw placed a marker's label; false when it has none.
+  /// Where the last draw placed a marker's label (empty: left out); false when it has none.
   bool stationLabelRect(const QwtPlotMarker* marker, QRectF& rect) const;
   /// The leader line from a marker to its label when the label stands away from it (null
   /// line when it stands beside it).
@@ -97,6 +98,8 @@ class IsobarLabels : public QwtPlotItem {
   int movedCount() const { return moved_; }
   /// Labels left out because they fit nowhere.
   int skippedCount() const { return skipped_; }
+  /// Station numbers left out because every place was taken by another label.
+  int stationsLeftOut() const { return stationsLeftOut_; }
   /// Everything the isobar labels kept clear of: the station markers and numbers, the legend.
   const std::vector<QRectF>& obstacleRects() const { return obstacles_; }
   /// The curves of the last draw in pixels.
@@ -125,6 +128,7 @@ class IsobarLabels : public QwtPlotItem {
   mutable QRectF canvas_;
   mutable int moved_ = 0;
   mutable int skipped_ = 0;
+  mutable int stationsLeftOut_ = 0;
 };
 
 /// A station's marker whose number is drawn where IsobarLabels placed it.
