@@ -90,6 +90,61 @@ std::vector<std::vector<QPointF>> toPixels(const std::vector<const QwtPlotCurve*
   return out;
 }
 
+/// A horizontal isobar's label (p-v): above the line, from the left edge rightwards in steps
+/// of a third of the label; then below.
+std::vector<QRectF> lineLabelCandidates(const IsobarLabels::Label& label, const QSizeF& size,
+                                        const QRectF& bounds, const QwtScaleMap& yMap) {
+  std::vector<QRectF> options;
+  if (label.along.empty()) return options;
+  const double y = yMap.transform(label.along.front().y());
+  const double step = std::max(8.0, size.width() / 3.0);
+  for (double top : {y - size.height() - 1.0, y + 2.0})
+    for (double x = bounds.left() + LabelPlacer::kGap; x + size.width() <= bounds.right(); x += step)
+      options.emplace_back(QPointF(x, top), size);
+  return options;
+}
+
+/// The points of an isobar in the order its label tries them: the preferred one, then its
+/// neighbours outwards.
+std::vector<std::size_t> outwardsFrom(std::size_t preferred, std::size_t n) {
+  const long first = static_cast<long>(std::min(preferred, n - 1));
+  std::vector<std::size_t> order;
+  order.reserve(n);
+  for (long d = 0; d < static_cast<long>(n); ++d)
+    for (long k : {first - d, first + d})
+      if (k >= 0 && k < static_cast<long>(n) && (d > 0 || k == first - d) &&
+          (order.empty() || order.back() != static_cast<std::size_t>(k)))
+        order.push_back(static_cast<std::size_t>(k));
+  return order;
+}
+
+/// An isobar's label beside a point of it (right, left, above, below): the preferred one, then
+/// its neighbours outwards. When the preferred point is off the canvas (zoomed in), the nearest
+/// visible one stands in. No farther than 45 % of the canvas height from it: a label far down
+/// its isobar would sit among the cycle's own lines.
+std::vector<QRectF> isobarLabelCandidates(const IsobarLabels::Label& label, const QSizeF& size,
+                                          const QRectF& bounds, const QwtScaleMap& xMap,
+                                          const QwtScaleMap& yMap) {
+  std::vector<QRectF> options;
+  if (label.along.empty()) return options;
+  std::optional<QPointF> home;
+  const double reach = 0.45 * (bounds.height() + 2.0);
+  const double w = size.width(), h = size.height(), gap = LabelPlacer::kGap;
+  for (std::size_t k : outwardsFrom(label.preferred, label.along.size())) {
+    const QPointF p(xMap.transform(label.along[k].x()), yMap.transform(label.along[k].y()));
+    if (!home) {
+      if (!bounds.contains(p)) continue;
+      home = p;
+    }
+    if (std::hypot(p.x() - home->x(), p.y() - home->y()) > reach) continue;
+    options.emplace_back(QPointF(p.x() + gap, p.y() - h / 2.0), size);
+    options.emplace_back(QPointF(p.x() - gap - w, p.y() - h / 2.0), size);
+    options.emplace_back(QPointF(p.x() - w / 2.0, p.y() - gap - h), size);
+    options.emplace_back(QPointF(p.x() - w / 2.0, p.y() + gap), size);
+  }
+  return options;
+}
+
 }  // namespace
 
 QSizeF textSizeOn(const QPainter* painter, const QwtText& text) {
@@ -163,6 +218,23 @@ int IsobarLabels::fitLegend(QwtPlotLegendItem* legend, const QwtScaleMap& xMap, 
 
 void IsobarLabels::draw(QPainter* painter, const QwtScaleMap& xMap, const QwtScaleMap& yMap,
                         const QRectF& canvasRect) const {
+  forgetLastDraw(canvasRect);
+  LabelPlacer placer(canvasRect.adjusted(1, 1, -1, -1));
+  curvePixels_ = toPixels(curves_, xMap, yMap);
+  for (const auto& pixels : curvePixels_) placer.addCurve(pixels);
+  // The markers' symbols and the legend first, then the station numbers, then the isobars'.
+  for (const auto& s : stations_) {
+    const QPointF pixel(xMap.transform(s.at.x()), yMap.transform(s.at.y()));
+    const QRectF symbol(pixel - QPointF(s.symbol.width(), s.symbol.height()) / 2.0, s.symbol);
+    placer.addObstacle(symbol);
+    obstacles_.push_back(symbol);
+  }
+  placeLegends(placer, xMap, yMap, canvasRect);
+  placeStationNumbers(placer, painter, xMap, yMap);
+  placeIsobarLabels(placer, painter, xMap, yMap);
+}
+
+void IsobarLabels::forgetLastDraw(const QRectF& canvasRect) const {
   placed_.clear();
   placedTexts_.clear();
   obstacles_.clear();
@@ -175,19 +247,10 @@ void IsobarLabels::draw(QPainter* painter, const QwtScaleMap& xMap, const QwtSca
   canvas_ = canvasRect;
   moved_ = 0;
   skipped_ = 0;
-  auto toPixel = [&](const QPointF& p) { return QPointF(xMap.transform(p.x()), yMap.transform(p.y())); };
+}
 
-  const QRectF bounds = canvasRect.adjusted(1, 1, -1, -1);
-  LabelPlacer placer(bounds);
-  curvePixels_ = toPixels(curves_, xMap, yMap);
-  for (const auto& pixels : curvePixels_) placer.addCurve(pixels);
-  // The markers' symbols and the legend first, then the station numbers, then the isobars'.
-  for (const auto& s : stations_) {
-    const QPointF pixel = toPixel(s.at);
-    const QRectF symbol(pixel - QPointF(s.symbol.width(), s.symbol.height()) / 2.0, s.symbol);
-    placer.addObstacle(symbol);
-    obstacles_.push_back(symbol);
-  }
+void IsobarLabels::placeLegends(LabelPlacer& placer, const QwtScaleMap& xMap, const QwtScaleMap& yMap,
+                                const QRectF& canvasRect) const {
   // Every legend inside the canvas, whichever placement put it there, into its freest corner.
   for (QwtPlotItem* item : plot() ? plot()->itemList(QwtPlotItem::Rtti_PlotLegend) : QwtPlotItemList()) {
     auto* legend = static_cast<QwtPlotLegendItem*>(item);
@@ -198,10 +261,14 @@ void IsobarLabels::draw(QPainter* painter, const QwtScaleMap& xMap, const QwtSca
     obstacles_.push_back(rect);
     legendRects_.push_back(rect);
   }
+}
+
+void IsobarLabels::placeStationNumbers(LabelPlacer& placer, const QPainter* painter, const QwtScaleMap& xMap,
+                                       const QwtScaleMap& yMap) const {
   for (const auto& s : stations_) {
     if (!s.marker || s.marker->label().isEmpty()) continue;
-    const QSizeF size = textSizeOn(painter, s.marker->label());
-    const std::vector<QRectF> options = stationCandidates(s, toPixel(s.at), size);
+    const QPointF pixel(xMap.transform(s.at.x()), yMap.transform(s.at.y()));
+    const std::vector<QRectF> options = stationCandidates(s, pixel, textSizeOn(painter, s.marker->label()));
     const int k = placer.place(options, true);
     // Crowded beyond every place, even across a curve: left out (the readout names the
     // station under the cursor), never over another label.
@@ -211,54 +278,20 @@ void IsobarLabels::draw(QPainter* painter, const QwtScaleMap& xMap, const QwtSca
       continue;
     }
     const QRectF r = options[static_cast<std::size_t>(k)];
-    const QLineF leader =
-        k >= 8 ? leaderLine(toPixel(s.at), std::max(s.symbol.width(), s.symbol.height()) / 2.0, r) : QLineF();
-    stationPlaces_.push_back({s.marker, r, leader});
+    const double radius = std::max(s.symbol.width(), s.symbol.height()) / 2.0;
+    stationPlaces_.push_back({s.marker, r, k >= 8 ? leaderLine(pixel, radius, r) : QLineF()});
     stationRects_.push_back(r);
     obstacles_.push_back(r);
   }
+}
 
+void IsobarLabels::placeIsobarLabels(LabelPlacer& placer, QPainter* painter, const QwtScaleMap& xMap,
+                                     const QwtScaleMap& yMap) const {
   for (const auto& label : labels_) {
     const QSizeF size = textSizeOn(painter, label.text);
-    std::vector<QRectF> options;
-    if (label.horizontal && !label.along.empty()) {
-      // Above the line, from the left edge rightwards in steps of a third of the label; then below.
-      const double y = toPixel(label.along.front()).y();
-      const double step = std::max(8.0, size.width() / 3.0);
-      for (double top : {y - size.height() - 1.0, y + 2.0})
-        for (double x = bounds.left() + LabelPlacer::kGap; x + size.width() <= bounds.right(); x += step)
-          options.emplace_back(QPointF(x, top), size);
-    } else if (!label.along.empty()) {
-      // Beside a point of the isobar (right, left, above, below): the preferred one, then its neighbours
-      // outwards. When the preferred point is off the canvas (zoomed in), the nearest visible
-      // one stands in. No farther than 45 % of the canvas height from it: a label far down
-      // its isobar would sit among the cycle's own lines.
-      const std::size_t n = label.along.size();
-      const long first = static_cast<long>(std::min(label.preferred, n - 1));
-      std::vector<std::size_t> order;
-      order.reserve(n);
-      for (long d = 0; d < static_cast<long>(n); ++d)
-        for (long k : {first - d, first + d})
-          if (k >= 0 && k < static_cast<long>(n) && (d > 0 || k == first - d) &&
-              (order.empty() || order.back() != static_cast<std::size_t>(k)))
-            order.push_back(static_cast<std::size_t>(k));
-      std::optional<QPointF> home;
-      const double reach = 0.45 * canvasRect.height();
-      for (std::size_t k : order) {
-        const QPointF p = toPixel(label.along[k]);
-        if (!home) {
-          if (!bounds.contains(p)) continue;
-          home = p;
-        }
-        if (std::hypot(p.x() - home->x(), p.y() - home->y()) > reach) continue;
-        options.emplace_back(QPointF(p.x() + LabelPlacer::kGap, p.y() - size.height() / 2.0), size);
-        options.emplace_back(QPointF(p.x() - LabelPlacer::kGap - size.width(), p.y() - size.height() / 2.0),
-                             size);
-        options.emplace_back(QPointF(p.x() - size.width() / 2.0, p.y() - LabelPlacer::kGap - size.height()),
-                             size);
-        options.emplace_back(QPointF(p.x() - size.width() / 2.0, p.y() + LabelPlacer::kGap), size);
-      }
-    }
+    const std::vector<QRectF> options = label.horizontal
+                                            ? lineLabelCandidates(label, size, placer.bounds(), yMap)
+                                            : isobarLabelCandidates(label, size, placer.bounds(), xMap, yMap);
     const int chosen = placer.place(options);
     if (chosen < 0) {
       ++skipped_;

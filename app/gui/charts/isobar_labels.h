@@ -36,6 +36,8 @@ class QwtScaleMap;
 
 namespace cw::gui {
 
+class LabelPlacer;
+
 class IsobarLabels : public QwtPlotItem {
  public:
   struct Label {
@@ -108,6 +110,14 @@ class IsobarLabels : public QwtPlotItem {
   QColor textColour() const;
 
  private:
+  void forgetLastDraw(const QRectF& canvasRect) const;
+  void placeLegends(LabelPlacer& placer, const QwtScaleMap& xMap, const QwtScaleMap& yMap,
+                    const QRectF& canvasRect) const;
+  void placeStationNumbers(LabelPlacer& placer, const QPainter* painter, const QwtScaleMap& xMap,
+                           const QwtScaleMap& yMap) const;
+  void placeIsobarLabels(LabelPlacer& placer, QPainter* painter, const QwtScaleMap& xMap,
+                         const QwtScaleMap& yMap) const;
+
   std::vector<Label> labels_;
   std::vector<Station> stations_;
   std::vector<const QwtPlotCurve*> curves_;
