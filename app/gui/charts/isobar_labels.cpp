@@ -200,18 +200,28 @@ int IsobarLabels::fitLegend(QwtPlotLegendItem* legend, const QwtScaleMap& xMap, 
     return 1000 * blocked + segmentsMeeting(r, others);
   };
   Qt::Alignment best = legend->alignmentInCanvas();
+  uint bestColumns = legend->maxColumns();
   int bestCost = -1, bestBlocked = 0;
-  for (const Qt::Alignment corner : {Qt::AlignTop | Qt::AlignLeft, Qt::AlignTop | Qt::AlignRight,
-                                     Qt::AlignBottom | Qt::AlignRight, Qt::AlignBottom | Qt::AlignLeft}) {
-    legend->setAlignmentInCanvas(corner);
-    int blocked = 0;
-    const int c = cost(QRectF(legend->geometry(canvasRect)), blocked);
-    if (bestCost < 0 || c < bestCost) {
-      bestCost = c;
-      bestBlocked = blocked;
-      best = corner;
+  // One column first; two or three (wider, lower) where a single one covers the cycle, as in
+  // a small chart's corner below the cycle.
+  for (const uint columns : {1u, 2u, 3u}) {
+    legend->setMaxColumns(columns);
+    for (const Qt::Alignment corner : {Qt::AlignTop | Qt::AlignLeft, Qt::AlignTop | Qt::AlignRight,
+                                       Qt::AlignBottom | Qt::AlignRight, Qt::AlignBottom | Qt::AlignLeft}) {
+      legend->setAlignmentInCanvas(corner);
+      const QRectF rect(legend->geometry(canvasRect));
+      int blocked = 0;
+      int c = cost(rect, blocked);
+      if (!canvasRect.contains(rect)) c += 1000000;  // wider or higher than the canvas
+      if (bestCost < 0 || c < bestCost) {
+        bestCost = c;
+        bestBlocked = blocked + (canvasRect.contains(rect) ? 0 : 1);
+        best = corner;
+        bestColumns = columns;
+      }
     }
   }
+  legend->setMaxColumns(bestColumns);
   legend->setAlignmentInCanvas(best);
   return bestBlocked;
 }

@@ -70,7 +70,8 @@ class IsobarLabels : public QwtPlotItem {
   void setLegendAvoids(std::vector<const QwtPlotCurve*> curves) { legendAvoids_ = std::move(curves); }
 
   /// Puts a legend inside the canvas into the corner it covers least of the curves and the
-  /// station markers (top left, top right, bottom right, bottom left, the first of equals).
+  /// station markers (top left, top right, bottom right, bottom left, the first of equals), in
+  /// one column, else two or three where that covers less.
   /// Returns how many segments of the legend-avoided curves and markers that corner still
   /// covers (0: it is free).
   int fitLegend(QwtPlotLegendItem* legend, const QwtScaleMap& xMap, const QwtScaleMap& yMap,
