@@ -374,6 +374,21 @@ class TestCharts : public QObject {
     QVERIFY2(named >= 6, qPrintable(QString::number(named)));
     const QPoint away(qRound(xMap.transform(600.0)), qRound(yMap.transform(1300.0)));
     QVERIFY(!chart.readoutAt(away).startsWith("Station "));
+    // At the smallest size a chart is given, every station has its number or none at all (left
+    // out where every place is taken by another label, never drawn over one).
+    for (auto kind : {ChartKind::TemperatureEntropy, ChartKind::PressureVolume, ChartKind::EnthalpyEntropy}) {
+      CycleChart small(kind, units);
+      small.resize(small.minimumSize());
+      small.setEvaluation(demoEvaluation(), false);
+      saveFigure(small.grab().toImage(), QString("smallest-%1").arg(int(kind)));
+      const IsobarLabels* labels = small.isobarLabels();
+      QCOMPARE(int(labels->stationRects().size()) + labels->stationsLeftOut(), 8);
+      const auto& rects = labels->stationRects();
+      for (std::size_t i = 0; i < rects.size(); ++i)
+        for (std::size_t j = i + 1; j < rects.size(); ++j)
+          QVERIFY2(!rects[i].intersects(rects[j]),
+                   qPrintable(describe(rects[i]) + " over " + describe(rects[j])));
+    }
   }
 
   // The h-s chart draws the core's sensible enthalpies h - h(298.15 K) (engine::Station,

@@ -42,6 +42,7 @@ namespace {
 const QColor& kBlue = kOkabeItoBlue;
 const QColor& kOrange = kOkabeItoOrange;
 constexpr qsizetype kBaselineTitleChars = 32;  ///< of the baseline's title in the legend
+constexpr double kBelowLegendRatio = 0.5;      ///< of the chart's height, at most, for a legend below
 constexpr double kStationPickPx = 6.0;         ///< a station is read within this of its marker [px]
 constexpr int kBaselineMarkerPx = 5;           ///< the baseline's station markers [px]
 const QColor& kVermillion = kOkabeItoVermillion;
@@ -195,7 +196,7 @@ void CycleChart::fitExportLegend(const std::function<void()>& drawOnce) {
   if (!legendItem_ || exportLegend_ != LegendPlacement::AsShown) return;
   setLegendBelow(false);
   drawOnce();
-  if (isobarLabels_->legendBlocked()) setLegendBelow(true);
+  if (isobarLabels_->legendBlocked() && roomBelow(isobarLabels_->canvasRect())) setLegendBelow(true);
 }
 
 void CycleChart::replot() {
@@ -215,7 +216,20 @@ void CycleChart::fitLegend() {
     yMap.setPaintInterval(yMap.p1() + extra, yMap.p2());
   }
   if (area.width() < 1.0 || area.height() < 1.0) return;
-  setLegendBelow(isobarLabels_->fitLegend(legendItem_, xMap, yMap, area) > 0);
+  const bool blocked = isobarLabels_->fitLegend(legendItem_, xMap, yMap, area) > 0;
+  setLegendBelow(blocked && roomBelow(area));
+}
+
+bool CycleChart::roomBelow(const QRectF& insideCanvas) const {
+  // The legend below, in two columns as a small chart has them, takes at most this share of
+  // the canvas it would have inside; on a smaller chart it stays inside (in its freest corner):
+  // a plot squeezed to a strip shows nothing.
+  constexpr double kMostBelow = 0.6;
+  const uint columns = legendItem_->maxColumns();
+  legendItem_->setMaxColumns(2);
+  const double height = legendItem_->geometry(insideCanvas).height();
+  legendItem_->setMaxColumns(columns);
+  return height <= kMostBelow * insideCanvas.height();
 }
 
 void CycleChart::setLegendBelow(bool below) {
@@ -303,6 +317,9 @@ void CycleChart::retranslateUi() {
 }
 
 void CycleChart::updateLayout() {
+  // A legend below may take up to half the height (Qwt's default, a third, hides its last
+  // rows behind a scroll bar); roomBelow() keeps it from taking more than the plot can give.
+  if (legendItem_) plotLayout()->setLegendRatio(kBelowLegendRatio);
   ChartBase::updateLayout();  // the axes' lengths first
   fitAxisTitles();            // a changed title asks for another layout, which keeps it
   fitLegend();                // inside while a corner is free, else below

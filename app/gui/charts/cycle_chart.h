@@ -143,6 +143,8 @@ class CycleChart : public ChartBase {
   /// The screen's legend: inside in the freest corner while one is free, else below the plot.
   void fitLegend();
   void setLegendBelow(bool below);
+  /// Whether the plot keeps most of its height with the legend below it.
+  bool roomBelow(const QRectF& insideCanvas) const;
   void updateHighlight();
   void updateStalePens();
   void rescale();
