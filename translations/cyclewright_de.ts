@@ -1026,6 +1026,10 @@ p = %7   v = %8</translation>
         <source>Baseline: %1</source>
         <translation>Basis: %1</translation>
     </message>
+    <message>
+        <source>Station %1</source>
+        <translation>Station %1</translation>
+    </message>
 </context>
 <context>
     <name>cw::gui::GuardedApplication</name>

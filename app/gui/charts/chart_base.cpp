@@ -217,7 +217,9 @@ ExportScope::ExportScope(QwtPlot* plot, const ExportOptions& options)
       palette_(plot->palette()),
       ownPalette_(plot->testAttribute(Qt::WA_SetPalette)),
       font_(plot->font()),
-      ownFont_(plot->testAttribute(Qt::WA_SetFont)) {
+      ownFont_(plot->testAttribute(Qt::WA_SetFont)),
+      plainChartTitle_(plot->title().text()) {
+  if (chart_) chart_->inExport_ = true;
   if (!options_.fontFamily.isEmpty() || options_.fontPointSize > 0.0) {
     QFont font = plot_->font();
     if (!options_.fontFamily.isEmpty()) font.setFamily(options_.fontFamily);
@@ -281,8 +283,14 @@ ExportScope::~ExportScope() {
     plot_->setPalette(QPalette());
     plot_->setAttribute(Qt::WA_SetPalette, false);
   }
+  if (chart_) chart_->inExport_ = false;
   if (chart_) chart_->refresh();
   plot_->replot();
+}
+
+QString ExportScope::plainTitle() const {
+  const QString title = options_.title.isEmpty() ? plainChartTitle_ : options_.title;
+  return options_.subtitle.isEmpty() ? title : title + QStringLiteral(" - ") + options_.subtitle;
 }
 
 void ExportScope::scaleLines(double factor) {

@@ -26,6 +26,7 @@
 
 #include <array>
 
+#include <functional>
 #include <vector>
 
 class QwtLegend;
@@ -56,6 +57,10 @@ class ChartBase : public QwtPlot {
   /// does nothing.
   virtual void beginExport(const ExportOptions& options) { Q_UNUSED(options); }
   virtual void endExport() {}
+  /// Within an export: the chart may place its legend for the export's surface; `drawOnce`
+  /// renders the figure once on that surface (nowhere to be seen), so that the chart learns
+  /// where its items land. The default does nothing.
+  virtual void fitExportLegend(const std::function<void()>& drawOnce) { Q_UNUSED(drawOnce); }
   /// Rebuilds every item from the chart's data in the current palette, font and language.
   virtual void refresh() { replot(); }
 
@@ -95,6 +100,9 @@ class ChartBase : public QwtPlot {
   void fitAxisTitle(QwtAxisId axis, const QStringList& titles, bool whole = false);
 
   QwtPlotGrid* gridItem() const { return grid_; }
+  /// True while an ExportScope holds the chart (from before it changes anything to after it
+  /// has put everything back but the last refresh).
+  bool inExport() const { return inExport_; }
   /// A legend inside the canvas in the charts' style; the caller attaches it.
   QwtPlotLegendItem* makeLegendItem(Qt::Alignment alignment, int columns, double fontScale);
   /// A legend beside the canvas in the charts' style, inserted at `position`.
@@ -112,6 +120,7 @@ class ChartBase : public QwtPlot {
   bool stale_ = false;
   bool built_ = false;
   bool applyingPalette_ = false;
+  bool inExport_ = false;
   QString staleText_;
   QwtPlotGrid* grid_ = nullptr;
   QwtPlotTextLabel* staleLabel_ = nullptr;
@@ -132,6 +141,9 @@ class ExportScope {
 
   /// The palette of exported figures: near-black on white.
   static QPalette exportPalette();
+  /// The figure's title as plain text, for a document's metadata (an SVG's <title>, a PDF's
+  /// title): the options' title and subtitle, or the chart's own title.
+  QString plainTitle() const;
 
  private:
   void placeLegend(LegendPlacement placement);
@@ -145,6 +157,7 @@ class ExportScope {
   bool ownPalette_;
   QFont font_;
   bool ownFont_;
+  QString plainChartTitle_;  ///< the chart's own title, before the export's rich one
   // The legend as shown, to put back.
   bool hadOuterLegend_ = false;
   QwtPlot::LegendPosition outerPosition_ = QwtPlot::BottomLegend;
