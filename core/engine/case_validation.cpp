@@ -4,6 +4,8 @@
 #include "engine/case_validation_error.h"
 #include "engine/parameter_registry.h"
 
+#include <algorithm>
+#include <iterator>
 #include <string>
 #include <string_view>
 #include <utility>
@@ -83,17 +85,37 @@ void checkRules(Checker& c, const Case& k, std::string_view section) {
     if (rule.section == section) rule.check(c, k);
 }
 
-}  // namespace
+/// The numbers of the registry, and after the last one of each section its section's rules:
+/// found once (validation runs for every point of a trade study).
+struct Step {
+  const Parameter* number;  ///< or nullptr: the rules of `section`
+  std::string_view section;
+};
 
-std::vector<CaseProblem> validateCase(const Case& inputs) {
-  Checker checker;
+std::vector<Step> makeSteps() {
+  std::vector<Step> steps;
   const std::vector<Parameter>& registry = parameterRegistry();
   for (std::size_t i = 0; i < registry.size(); ++i) {
     const Parameter& p = registry[i];
-    if (p.kind == ParameterKind::Number && p.applies(inputs))
-      checker.check(p, p.get(inputs), p.rangeFor(inputs));
-    if (i + 1 == registry.size() || registry[i + 1].section != p.section)
-      checkRules(checker, inputs, p.section);
+    if (p.kind == ParameterKind::Number) steps.push_back({&p, p.section});
+    const bool lastOfSection = i + 1 == registry.size() || registry[i + 1].section != p.section;
+    if (lastOfSection && std::any_of(std::begin(kRules), std::end(kRules),
+                                     [&p](const NamedRule& rule) { return rule.section == p.section; }))
+      steps.push_back({nullptr, p.section});
+  }
+  return steps;
+}
+
+}  // namespace
+
+std::vector<CaseProblem> validateCase(const Case& inputs) {
+  static const std::vector<Step> steps = makeSteps();
+  Checker checker;
+  for (const Step& step : steps) {
+    if (!step.number)
+      checkRules(checker, inputs, step.section);
+    else if (step.number->applies(inputs))
+      checker.check(*step.number, step.number->get(inputs), step.number->rangeFor(inputs));
   }
   return checker.take();
 }

@@ -933,7 +933,12 @@ std::string Parameter::dottedPath() const {
 ValidRange Parameter::rangeFor(const Case& c) const {
   if (!narrower) return range;
   const Parameter* selector = findParameter(section, narrower->unless.selector);
-  return selector && selector->valueText(c) == narrower->unless.value ? range : narrower->range;
+  if (!selector) return narrower->range;
+  // A flag compares without building its text (validation runs for every point of a study).
+  const bool holds = selector->kind == K::Flag
+                         ? (selector->get(c) > 0.5) == (narrower->unless.value == "true")
+                         : selector->valueText(c) == narrower->unless.value;
+  return holds ? range : narrower->range;
 }
 
 std::string Parameter::valueText(const Case& c) const {
@@ -967,8 +972,15 @@ const Parameter* findParameter(std::string_view section, std::string_view key) {
 }
 
 void removeEveryLoss(Case& c) {
-  for (const Parameter& p : parameterRegistry())
-    if (p.lossless && p.applies(c)) p.set(c, *p.lossless);
+  // The loss parameters, found once (the ideal twin is built for every point of a trade study).
+  static const std::vector<const Parameter*> losses = [] {
+    std::vector<const Parameter*> list;
+    for (const Parameter& p : parameterRegistry())
+      if (p.lossless) list.push_back(&p);
+    return list;
+  }();
+  for (const Parameter* p : losses)
+    if (p->applies(c)) p->set(c, *p->lossless);
 }
 
 }  // namespace cw::engine
