@@ -18,7 +18,7 @@ const std::string kPercent = "percent of pressure-loss fraction (0.01)";
 
 LossParameter efficiencyParameter(std::string field, double (*get)(const Case&), void (*set)(Case&, double),
                                   std::string unit = kPoint) {
-  // Efficiencies, recoveries and coefficients are valid in (0, 1] (engine/case_validation.cpp);
+  // Efficiencies, recoveries and coefficients are valid in (0, 1] (engine/parameter_registry.cpp);
   // 0.01 stands in for the open lower end, far below any design value.
   return {std::move(field), std::move(unit), 0.01, 0.01, 1.0, get, set};
 }
