@@ -4,464 +4,12 @@
 <context>
     <name>CaseFields</name>
     <message>
-        <source>Ambient state</source>
-        <translation>Umgebungszustand</translation>
-    </message>
-    <message>
-        <source>Take the free-stream static state from the U.S. Standard Atmosphere 1976, or give its temperature and pressure directly.</source>
-        <translation>Den statischen Zustand der Anströmung der U.S. Standard Atmosphere 1976 entnehmen oder Temperatur und Druck direkt angeben.</translation>
-    </message>
-    <message>
-        <source>Standard atmosphere</source>
-        <translation>Standardatmosphäre</translation>
-    </message>
-    <message>
-        <source>Given ambient</source>
-        <translation>Vorgegebene Umgebung</translation>
-    </message>
-    <message>
-        <source>Altitude</source>
-        <translation>Flughöhe</translation>
-    </message>
-    <message>
-        <source>Flight altitude; geopotential unless marked geometric.</source>
-        <translation>Flughöhe; geopotentiell, sofern nicht als geometrisch markiert.</translation>
-    </message>
-    <message>
-        <source>Geometric altitude</source>
-        <translation>Geometrische Höhe</translation>
-    </message>
-    <message>
-        <source>The altitude is geometric (checked) or geopotential (unchecked).</source>
-        <translation>Die Höhe ist geometrisch (markiert) oder geopotentiell (nicht markiert).</translation>
-    </message>
-    <message>
-        <source>Temperature offset from standard</source>
-        <translation>Temperaturabweichung vom Standardtag</translation>
-    </message>
-    <message>
-        <source>Added to the standard-day temperature; the pressure is unchanged.</source>
-        <translation>Wird zur Temperatur des Standardtags addiert; der Druck bleibt unverändert.</translation>
-    </message>
-    <message>
-        <source>Ambient static temperature</source>
-        <translation>Statische Umgebungstemperatur</translation>
-    </message>
-    <message>
-        <source>Free-stream static temperature, e.g. of a test cell.</source>
-        <translation>Statische Temperatur der Anströmung, z. B. eines Prüfstands.</translation>
-    </message>
-    <message>
-        <source>Ambient static pressure</source>
-        <translation>Statischer Umgebungsdruck</translation>
-    </message>
-    <message>
-        <source>Free-stream static pressure.</source>
-        <translation>Statischer Druck der Anströmung.</translation>
-    </message>
-    <message>
-        <source>Flight Mach number</source>
-        <translation>Flug-Machzahl</translation>
-    </message>
-    <message>
-        <source>Free-stream Mach number M0.</source>
-        <translation>Machzahl der Anströmung M0.</translation>
-    </message>
-    <message>
-        <source>Specific humidity</source>
-        <translation>Spezifische Feuchte</translation>
-    </message>
-    <message>
-        <source>Water vapour per unit mass of humid air.</source>
-        <translation>Wasserdampf je Masseneinheit feuchter Luft.</translation>
-    </message>
-    <message>
-        <source>Engine size set by</source>
-        <translation>Triebwerksgröße festgelegt durch</translation>
-    </message>
-    <message>
-        <source>Fix the engine-face air mass flow, or the net thrust (the mass flow follows).</source>
-        <translation>Den Luftmassenstrom am Verdichtereintritt oder den Nettoschub festlegen (der Massenstrom folgt daraus).</translation>
-    </message>
-    <message>
-        <source>Air mass flow</source>
-        <translation>Luftmassenstrom</translation>
-    </message>
-    <message>
-        <source>Net thrust</source>
-        <translation>Nettoschub</translation>
-    </message>
-    <message>
-        <source>Air mass flow W2</source>
-        <translation>Luftmassenstrom W2</translation>
-    </message>
-    <message>
-        <source>Engine-face air mass flow.</source>
-        <translation>Luftmassenstrom am Verdichtereintritt.</translation>
-    </message>
-    <message>
-        <source>Required net thrust</source>
-        <translation>Geforderter Nettoschub</translation>
-    </message>
-    <message>
-        <source>Net thrust at the design point; the air mass flow is sized to give it.</source>
-        <translation>Nettoschub im Auslegungspunkt; der Luftmassenstrom wird passend ausgelegt.</translation>
-    </message>
-    <message>
-        <source>Engine-face Mach number</source>
-        <translation>Machzahl am Verdichtereintritt</translation>
-    </message>
-    <message>
-        <source>Axial Mach number at the compressor face, for the face area.</source>
-        <translation>Axiale Machzahl am Verdichtereintritt, für die Eintrittsfläche.</translation>
-    </message>
-    <message>
-        <source>Hub-to-tip radius ratio</source>
-        <translation>Nabenverhältnis</translation>
-    </message>
-    <message>
-        <source>Hub radius over tip radius at the engine face.</source>
-        <translation>Nabenradius durch Spitzenradius am Verdichtereintritt.</translation>
-    </message>
-    <message>
-        <source>Lower heating value</source>
-        <translation>Unterer Heizwert</translation>
-    </message>
-    <message>
-        <source>Fuel&apos;s lower heating value at 298.15 K.</source>
-        <translation>Unterer Heizwert des Kraftstoffs bei 298,15 K.</translation>
-    </message>
-    <message>
-        <source>Hydrogen-carbon ratio</source>
-        <translation>Wasserstoff-Kohlenstoff-Verhältnis</translation>
-    </message>
-    <message>
-        <source>Molar H/C ratio y of the fuel CHy.</source>
-        <translation>Molares H/C-Verhältnis y des Kraftstoffs CHy.</translation>
-    </message>
-    <message>
-        <source>Fuel temperature</source>
-        <translation>Kraftstofftemperatur</translation>
-    </message>
-    <message>
-        <source>Delivery temperature of the fuel at the burner.</source>
-        <translation>Temperatur des Kraftstoffs am Brennkammereintritt.</translation>
-    </message>
-    <message>
         <source>Gas model</source>
         <translation>Gasmodell</translation>
     </message>
     <message>
-        <source>Thermally perfect: species data with variable composition. Constant cp: one cp and ratio of specific heats. Two-gamma: air values before the burner, product values after it.</source>
-        <translation>Thermisch ideal: Stoffdaten mit veränderlicher Zusammensetzung. Konstantes cp: ein cp und ein Isentropenexponent. Zwei-Gamma: Luftwerte vor der Brennkammer, Werte der Verbrennungsprodukte danach.</translation>
-    </message>
-    <message>
-        <source>Thermally perfect</source>
-        <translation>Thermisch ideal</translation>
-    </message>
-    <message>
-        <source>Constant cp</source>
-        <translation>Konstantes cp</translation>
-    </message>
-    <message>
-        <source>Two-gamma</source>
-        <translation>Zwei-Gamma</translation>
-    </message>
-    <message>
-        <source>Specific heat cp</source>
-        <translation>Spezifische Wärmekapazität cp</translation>
-    </message>
-    <message>
-        <source>Specific heat at constant pressure, everywhere.</source>
-        <translation>Spezifische Wärmekapazität bei konstantem Druck, überall.</translation>
-    </message>
-    <message>
-        <source>Ratio of specific heats γ</source>
-        <translation>Isentropenexponent γ</translation>
-    </message>
-    <message>
-        <source>cp/cv, everywhere.</source>
-        <translation>cp/cv, überall.</translation>
-    </message>
-    <message>
-        <source>Cold-section cp</source>
-        <translation>cp im kalten Teil</translation>
-    </message>
-    <message>
-        <source>Specific heat of air up to the burner.</source>
-        <translation>Spezifische Wärmekapazität der Luft bis zur Brennkammer.</translation>
-    </message>
-    <message>
-        <source>Cold-section γ</source>
-        <translation>γ im kalten Teil</translation>
-    </message>
-    <message>
-        <source>Ratio of specific heats of air up to the burner.</source>
-        <translation>Isentropenexponent der Luft bis zur Brennkammer.</translation>
-    </message>
-    <message>
-        <source>Hot-section cp</source>
-        <translation>cp im heißen Teil</translation>
-    </message>
-    <message>
-        <source>Specific heat of the combustion products after the burner.</source>
-        <translation>Spezifische Wärmekapazität der Verbrennungsprodukte nach der Brennkammer.</translation>
-    </message>
-    <message>
-        <source>Hot-section γ</source>
-        <translation>γ im heißen Teil</translation>
-    </message>
-    <message>
-        <source>Ratio of specific heats of the products after the burner.</source>
-        <translation>Isentropenexponent der Produkte nach der Brennkammer.</translation>
-    </message>
-    <message>
-        <source>Neglect fuel mass</source>
-        <translation>Kraftstoffmasse vernachlässigen</translation>
-    </message>
-    <message>
-        <source>Leave the fuel&apos;s mass out of the flow (constant-cp and two-gamma only).</source>
-        <translation>Die Masse des Kraftstoffs im Massenstrom nicht berücksichtigen (nur konstantes cp und Zwei-Gamma).</translation>
-    </message>
-    <message>
-        <source>Loss given as</source>
-        <translation>Verlust angegeben als</translation>
-    </message>
-    <message>
-        <source>Pressure recovery pt2/pt0, or ram efficiency: the fraction of the ram enthalpy rise kept as pressure.</source>
-        <translation>Druckrückgewinn pt2/pt0 oder Stauwirkungsgrad: der Anteil des Staudruck-Enthalpieanstiegs, der als Druck erhalten bleibt.</translation>
-    </message>
-    <message>
-        <source>Pressure recovery</source>
-        <translation>Druckrückgewinn</translation>
-    </message>
-    <message>
-        <source>Ram efficiency</source>
-        <translation>Stauwirkungsgrad</translation>
-    </message>
-    <message>
-        <source>Recovery or ram efficiency</source>
-        <translation>Druckrückgewinn oder Stauwirkungsgrad</translation>
-    </message>
-    <message>
-        <source>Pressure recovery pt2/pt0 or ram efficiency, per the basis above; 1 is loss-free.</source>
-        <translation>Druckrückgewinn pt2/pt0 oder Stauwirkungsgrad, je nach obiger Angabe; 1 ist verlustfrei.</translation>
-    </message>
-    <message>
-        <source>Supersonic shock loss</source>
-        <translation>Stoßverlust im Überschall</translation>
-    </message>
-    <message>
-        <source>A multiplier on the recovery above Mach 1: none, or the military specification rule 1 − 0.075 (M0 − 1)^1.35.</source>
-        <translation>Ein Faktor auf den Druckrückgewinn oberhalb Mach 1: keiner oder die Regel der Militärspezifikation 1 − 0,075 (M0 − 1)^1,35.</translation>
-    </message>
-    <message>
-        <source>None</source>
-        <translation>Keiner</translation>
-    </message>
-    <message>
-        <source>MIL-E-5008B</source>
-        <translation>MIL-E-5008B</translation>
-    </message>
-    <message>
-        <source>Isentropic</source>
-        <translation>Isentrop</translation>
-    </message>
-    <message>
-        <source>Polytropic</source>
-        <translation>Polytrop</translation>
-    </message>
-    <message>
-        <source>Pressure ratio pt3/pt2</source>
-        <translation>Druckverhältnis pt3/pt2</translation>
-    </message>
-    <message>
-        <source>Compressor total-pressure ratio.</source>
-        <translation>Totaldruckverhältnis des Verdichters.</translation>
-    </message>
-    <message>
-        <source>Efficiency basis</source>
-        <translation>Art des Wirkungsgrads</translation>
-    </message>
-    <message>
-        <source>Give the isentropic or the polytropic efficiency; the other is derived.</source>
-        <translation>Den isentropen oder den polytropen Wirkungsgrad angeben; der andere wird abgeleitet.</translation>
-    </message>
-    <message>
-        <source>Efficiency</source>
-        <translation>Wirkungsgrad</translation>
-    </message>
-    <message>
-        <source>Compressor efficiency on the basis above; 1 is isentropic.</source>
-        <translation>Verdichterwirkungsgrad nach obiger Art; 1 ist isentrop.</translation>
-    </message>
-    <message>
-        <source>Bleed fraction</source>
-        <translation>Zapfluftanteil</translation>
-    </message>
-    <message>
-        <source>Air bled off at compressor exit, per unit of inlet air.</source>
-        <translation>Am Verdichteraustritt entnommene Luft je Einheit Eintrittsluft.</translation>
-    </message>
-    <message>
-        <source>Burner set by</source>
-        <translation>Brennkammer festgelegt durch</translation>
-    </message>
-    <message>
-        <source>Fix the burner exit temperature Tt4, or the fuel-air ratio.</source>
-        <translation>Die Brennkammeraustrittstemperatur Tt4 oder das Kraftstoff-Luft-Verhältnis festlegen.</translation>
-    </message>
-    <message>
-        <source>Exit temperature</source>
-        <translation>Austrittstemperatur</translation>
-    </message>
-    <message>
-        <source>Fuel-air ratio</source>
-        <translation>Kraftstoff-Luft-Verhältnis</translation>
-    </message>
-    <message>
-        <source>Exit temperature Tt4</source>
-        <translation>Austrittstemperatur Tt4</translation>
-    </message>
-    <message>
-        <source>Burner exit (turbine entry) total temperature.</source>
-        <translation>Totaltemperatur am Brennkammeraustritt (Turbineneintritt).</translation>
-    </message>
-    <message>
-        <source>Fuel per unit of burner air.</source>
-        <translation>Kraftstoff je Einheit Brennkammerluft.</translation>
-    </message>
-    <message>
-        <source>Pressure-loss fraction</source>
-        <translation>Relativer Druckverlust</translation>
-    </message>
-    <message>
-        <source>1 − pt4/pt3.</source>
-        <translation>1 − pt4/pt3.</translation>
-    </message>
-    <message>
-        <source>Combustion efficiency</source>
-        <translation>Ausbrenngrad</translation>
-    </message>
-    <message>
-        <source>Fraction of the fuel&apos;s heating value released.</source>
-        <translation>Anteil des Heizwerts, der freigesetzt wird.</translation>
-    </message>
-    <message>
-        <source>Turbine efficiency on the basis above; 1 is isentropic.</source>
-        <translation>Turbinenwirkungsgrad nach obiger Art; 1 ist isentrop.</translation>
-    </message>
-    <message>
-        <source>Mechanical efficiency</source>
-        <translation>Mechanischer Wirkungsgrad</translation>
-    </message>
-    <message>
-        <source>Compressor power over turbine power (shaft losses).</source>
-        <translation>Verdichterleistung durch Turbinenleistung (Wellenverluste).</translation>
-    </message>
-    <message>
-        <source>Power offtake</source>
-        <translation>Wellenleistungsentnahme</translation>
-    </message>
-    <message>
-        <source>Shaft power taken for accessories.</source>
-        <translation>Für Hilfsgeräte entnommene Wellenleistung.</translation>
-    </message>
-    <message>
-        <source>1 − pt_out/pt_in of the duct from turbine exit to nozzle entry.</source>
-        <translation>1 − pt_aus/pt_ein des Kanals vom Turbinenaustritt zum Düseneintritt.</translation>
-    </message>
-    <message>
-        <source>Afterburner lit</source>
-        <translation>Nachbrenner gezündet</translation>
-    </message>
-    <message>
-        <source>Light the afterburner (reheat) between jet pipe and nozzle.</source>
-        <translation>Den Nachbrenner zwischen Strahlrohr und Düse zünden.</translation>
-    </message>
-    <message>
-        <source>Exit temperature Tt7</source>
-        <translation>Austrittstemperatur Tt7</translation>
-    </message>
-    <message>
-        <source>Afterburner exit total temperature when lit.</source>
-        <translation>Totaltemperatur am Nachbrenneraustritt, wenn gezündet.</translation>
-    </message>
-    <message>
-        <source>Pressure-loss fraction, lit</source>
-        <translation>Relativer Druckverlust, gezündet</translation>
-    </message>
-    <message>
-        <source>1 − pt_out/pt_in when lit.</source>
-        <translation>1 − pt_aus/pt_ein, wenn gezündet.</translation>
-    </message>
-    <message>
-        <source>Pressure-loss fraction, unlit</source>
-        <translation>Relativer Druckverlust, nicht gezündet</translation>
-    </message>
-    <message>
-        <source>1 − pt_out/pt_in when not lit; 0 for an engine without afterburner.</source>
-        <translation>1 − pt_aus/pt_ein, wenn nicht gezündet; 0 für ein Triebwerk ohne Nachbrenner.</translation>
-    </message>
-    <message>
-        <source>Fraction of the heating value released when lit.</source>
-        <translation>Anteil des Heizwerts, der bei gezündetem Nachbrenner freigesetzt wird.</translation>
-    </message>
-    <message>
         <source>Nozzle</source>
         <translation>Schubdüse</translation>
-    </message>
-    <message>
-        <source>Convergent (exit at the throat), convergent-divergent expanding fully to ambient pressure, or convergent-divergent of fixed area ratio.</source>
-        <translation>Konvergent (Austritt im engsten Querschnitt), konvergent-divergent mit vollständiger Expansion auf Umgebungsdruck oder konvergent-divergent mit festem Flächenverhältnis.</translation>
-    </message>
-    <message>
-        <source>Convergent</source>
-        <translation>Konvergent</translation>
-    </message>
-    <message>
-        <source>Convergent-divergent, full expansion</source>
-        <translation>Konvergent-divergent, vollständige Expansion</translation>
-    </message>
-    <message>
-        <source>Convergent-divergent, fixed area ratio</source>
-        <translation>Konvergent-divergent, festes Flächenverhältnis</translation>
-    </message>
-    <message>
-        <source>Exit-to-throat area ratio A9/A8</source>
-        <translation>Flächenverhältnis Austritt zu Hals A9/A8</translation>
-    </message>
-    <message>
-        <source>Geometric area ratio of the divergent part.</source>
-        <translation>Geometrisches Flächenverhältnis des divergenten Teils.</translation>
-    </message>
-    <message>
-        <source>Velocity coefficient V9/V9,ideal, or isentropic efficiency of the expansion.</source>
-        <translation>Geschwindigkeitsbeiwert V9/V9,ideal oder isentroper Wirkungsgrad der Expansion.</translation>
-    </message>
-    <message>
-        <source>Velocity coefficient</source>
-        <translation>Geschwindigkeitsbeiwert</translation>
-    </message>
-    <message>
-        <source>Nozzle efficiency</source>
-        <translation>Düsenwirkungsgrad</translation>
-    </message>
-    <message>
-        <source>Coefficient or efficiency</source>
-        <translation>Beiwert oder Wirkungsgrad</translation>
-    </message>
-    <message>
-        <source>Velocity coefficient or nozzle efficiency, per the basis above; 1 is loss-free.</source>
-        <translation>Geschwindigkeitsbeiwert oder Düsenwirkungsgrad, je nach obiger Angabe; 1 ist verlustfrei.</translation>
-    </message>
-    <message>
-        <source>Discharge coefficient</source>
-        <translation>Durchflussbeiwert</translation>
-    </message>
-    <message>
-        <source>Actual over ideal throat mass flow; sizes the geometric throat.</source>
-        <translation>Tatsächlicher durch idealen Massenstrom im Hals; bestimmt den geometrischen Halsquerschnitt.</translation>
     </message>
     <message>
         <source>Flight</source>
@@ -504,22 +52,6 @@
 Valid range: %2</source>
         <translation>%1
 Gültiger Bereich: %2</translation>
-    </message>
-    <message>
-        <source>Title</source>
-        <translation>Titel</translation>
-    </message>
-    <message>
-        <source>A short name for the case; saved in the case file.</source>
-        <translation>Ein kurzer Name für den Fall; wird in der Falldatei gespeichert.</translation>
-    </message>
-    <message>
-        <source>Notes</source>
-        <translation>Notizen</translation>
-    </message>
-    <message>
-        <source>Free text about the case: what it is for, where its inputs come from; saved in the case file.</source>
-        <translation>Freier Text zum Fall: wozu er dient, woher seine Eingaben stammen; wird in der Falldatei gespeichert.</translation>
     </message>
     <message>
         <source>Case</source>
@@ -687,6 +219,529 @@ kein Kreisprozess mit diesen Eingaben</translation>
     <message>
         <source>Nozzle</source>
         <translation>Schubdüse</translation>
+    </message>
+</context>
+<context>
+    <name>Parameters</name>
+    <message>
+        <source>Title</source>
+        <translation>Titel</translation>
+    </message>
+    <message>
+        <source>A short name for the case; saved in the case file.</source>
+        <translation>Ein kurzer Name für den Fall; wird in der Falldatei gespeichert.</translation>
+    </message>
+    <message>
+        <source>Notes</source>
+        <translation>Notizen</translation>
+    </message>
+    <message>
+        <source>Free text about the case: what it is for, where its inputs come from; saved in the case file.</source>
+        <translation>Freier Text zum Fall: wozu er dient, woher seine Eingaben stammen; wird in der Falldatei gespeichert.</translation>
+    </message>
+    <message>
+        <source>Architecture</source>
+        <translation>Bauart</translation>
+    </message>
+    <message>
+        <source>Single-spool turbojet, or two-spool turbojet (a low-pressure compressor and turbine on their own shaft).</source>
+        <translation>Einwellen-Strahltriebwerk oder Zweiwellen-Strahltriebwerk (Niederdruckverdichter und -turbine auf einer eigenen Welle).</translation>
+    </message>
+    <message>
+        <source>Turbojet</source>
+        <translation>Strahltriebwerk</translation>
+    </message>
+    <message>
+        <source>Two-spool turbojet</source>
+        <translation>Zweiwellen-Strahltriebwerk</translation>
+    </message>
+    <message>
+        <source>Ambient state</source>
+        <translation>Umgebungszustand</translation>
+    </message>
+    <message>
+        <source>Take the free-stream static state from the U.S. Standard Atmosphere 1976, or give its temperature and pressure directly.</source>
+        <translation>Den statischen Zustand der Anströmung der U.S. Standard Atmosphere 1976 entnehmen oder Temperatur und Druck direkt angeben.</translation>
+    </message>
+    <message>
+        <source>Standard atmosphere</source>
+        <translation>Standardatmosphäre</translation>
+    </message>
+    <message>
+        <source>Given ambient</source>
+        <translation>Vorgegebene Umgebung</translation>
+    </message>
+    <message>
+        <source>Altitude</source>
+        <translation>Flughöhe</translation>
+    </message>
+    <message>
+        <source>Flight altitude; geopotential unless marked geometric.</source>
+        <translation>Flughöhe; geopotentiell, sofern nicht als geometrisch markiert.</translation>
+    </message>
+    <message>
+        <source>Geometric altitude</source>
+        <translation>Geometrische Höhe</translation>
+    </message>
+    <message>
+        <source>The altitude is geometric (checked) or geopotential (unchecked).</source>
+        <translation>Die Höhe ist geometrisch (markiert) oder geopotentiell (nicht markiert).</translation>
+    </message>
+    <message>
+        <source>Temperature offset from standard</source>
+        <translation>Temperaturabweichung vom Standardtag</translation>
+    </message>
+    <message>
+        <source>Added to the standard-day temperature; the pressure is unchanged.</source>
+        <translation>Wird zur Temperatur des Standardtags addiert; der Druck bleibt unverändert.</translation>
+    </message>
+    <message>
+        <source>Ambient static temperature</source>
+        <translation>Statische Umgebungstemperatur</translation>
+    </message>
+    <message>
+        <source>Free-stream static temperature, e.g. of a test cell.</source>
+        <translation>Statische Temperatur der Anströmung, z. B. eines Prüfstands.</translation>
+    </message>
+    <message>
+        <source>Ambient static pressure</source>
+        <translation>Statischer Umgebungsdruck</translation>
+    </message>
+    <message>
+        <source>Free-stream static pressure.</source>
+        <translation>Statischer Druck der Anströmung.</translation>
+    </message>
+    <message>
+        <source>Flight Mach number</source>
+        <translation>Flug-Machzahl</translation>
+    </message>
+    <message>
+        <source>Free-stream Mach number M0.</source>
+        <translation>Machzahl der Anströmung M0.</translation>
+    </message>
+    <message>
+        <source>Specific humidity</source>
+        <translation>Spezifische Feuchte</translation>
+    </message>
+    <message>
+        <source>Water vapour per unit mass of humid air.</source>
+        <translation>Wasserdampf je Masseneinheit feuchter Luft.</translation>
+    </message>
+    <message>
+        <source>Engine size set by</source>
+        <translation>Triebwerksgröße festgelegt durch</translation>
+    </message>
+    <message>
+        <source>Fix the engine-face air mass flow, or the net thrust (the mass flow follows).</source>
+        <translation>Den Luftmassenstrom am Verdichtereintritt oder den Nettoschub festlegen (der Massenstrom folgt daraus).</translation>
+    </message>
+    <message>
+        <source>Air mass flow</source>
+        <translation>Luftmassenstrom</translation>
+    </message>
+    <message>
+        <source>Net thrust</source>
+        <translation>Nettoschub</translation>
+    </message>
+    <message>
+        <source>Air mass flow W2</source>
+        <translation>Luftmassenstrom W2</translation>
+    </message>
+    <message>
+        <source>Engine-face air mass flow.</source>
+        <translation>Luftmassenstrom am Verdichtereintritt.</translation>
+    </message>
+    <message>
+        <source>Required net thrust</source>
+        <translation>Geforderter Nettoschub</translation>
+    </message>
+    <message>
+        <source>Net thrust at the design point; the air mass flow is sized to give it.</source>
+        <translation>Nettoschub im Auslegungspunkt; der Luftmassenstrom wird passend ausgelegt.</translation>
+    </message>
+    <message>
+        <source>Lower heating value</source>
+        <translation>Unterer Heizwert</translation>
+    </message>
+    <message>
+        <source>Fuel&apos;s lower heating value at 298.15 K.</source>
+        <translation>Unterer Heizwert des Kraftstoffs bei 298,15 K.</translation>
+    </message>
+    <message>
+        <source>Hydrogen-carbon ratio</source>
+        <translation>Wasserstoff-Kohlenstoff-Verhältnis</translation>
+    </message>
+    <message>
+        <source>Molar H/C ratio y of the fuel CHy.</source>
+        <translation>Molares H/C-Verhältnis y des Kraftstoffs CHy.</translation>
+    </message>
+    <message>
+        <source>Fuel temperature</source>
+        <translation>Kraftstofftemperatur</translation>
+    </message>
+    <message>
+        <source>Delivery temperature of the fuel at the burner.</source>
+        <translation>Temperatur des Kraftstoffs am Brennkammereintritt.</translation>
+    </message>
+    <message>
+        <source>Gas model</source>
+        <translation>Gasmodell</translation>
+    </message>
+    <message>
+        <source>Thermally perfect: species data with variable composition. Constant cp: one cp and ratio of specific heats. Two-gamma: air values before the burner, product values after it.</source>
+        <translation>Thermisch ideal: Stoffdaten mit veränderlicher Zusammensetzung. Konstantes cp: ein cp und ein Isentropenexponent. Zwei-Gamma: Luftwerte vor der Brennkammer, Werte der Verbrennungsprodukte danach.</translation>
+    </message>
+    <message>
+        <source>Thermally perfect</source>
+        <translation>Thermisch ideal</translation>
+    </message>
+    <message>
+        <source>Constant cp</source>
+        <translation>Konstantes cp</translation>
+    </message>
+    <message>
+        <source>Two-gamma</source>
+        <translation>Zwei-Gamma</translation>
+    </message>
+    <message>
+        <source>Specific heat cp</source>
+        <translation>Spezifische Wärmekapazität cp</translation>
+    </message>
+    <message>
+        <source>Specific heat at constant pressure, everywhere.</source>
+        <translation>Spezifische Wärmekapazität bei konstantem Druck, überall.</translation>
+    </message>
+    <message>
+        <source>Ratio of specific heats γ</source>
+        <translation>Isentropenexponent γ</translation>
+    </message>
+    <message>
+        <source>cp/cv, everywhere.</source>
+        <translation>cp/cv, überall.</translation>
+    </message>
+    <message>
+        <source>Cold-section cp</source>
+        <translation>cp im kalten Teil</translation>
+    </message>
+    <message>
+        <source>Specific heat of air up to the burner.</source>
+        <translation>Spezifische Wärmekapazität der Luft bis zur Brennkammer.</translation>
+    </message>
+    <message>
+        <source>Cold-section γ</source>
+        <translation>γ im kalten Teil</translation>
+    </message>
+    <message>
+        <source>Ratio of specific heats of air up to the burner.</source>
+        <translation>Isentropenexponent der Luft bis zur Brennkammer.</translation>
+    </message>
+    <message>
+        <source>Hot-section cp</source>
+        <translation>cp im heißen Teil</translation>
+    </message>
+    <message>
+        <source>Specific heat of the combustion products after the burner.</source>
+        <translation>Spezifische Wärmekapazität der Verbrennungsprodukte nach der Brennkammer.</translation>
+    </message>
+    <message>
+        <source>Hot-section γ</source>
+        <translation>γ im heißen Teil</translation>
+    </message>
+    <message>
+        <source>Ratio of specific heats of the products after the burner.</source>
+        <translation>Isentropenexponent der Produkte nach der Brennkammer.</translation>
+    </message>
+    <message>
+        <source>Neglect fuel mass</source>
+        <translation>Kraftstoffmasse vernachlässigen</translation>
+    </message>
+    <message>
+        <source>Leave the fuel&apos;s mass out of the flow (constant-cp and two-gamma only).</source>
+        <translation>Die Masse des Kraftstoffs im Massenstrom nicht berücksichtigen (nur konstantes cp und Zwei-Gamma).</translation>
+    </message>
+    <message>
+        <source>Loss given as</source>
+        <translation>Verlust angegeben als</translation>
+    </message>
+    <message>
+        <source>Pressure recovery pt2/pt0, or ram efficiency: the fraction of the ram enthalpy rise kept as pressure.</source>
+        <translation>Druckrückgewinn pt2/pt0 oder Stauwirkungsgrad: der Anteil des Staudruck-Enthalpieanstiegs, der als Druck erhalten bleibt.</translation>
+    </message>
+    <message>
+        <source>Pressure recovery</source>
+        <translation>Druckrückgewinn</translation>
+    </message>
+    <message>
+        <source>Ram efficiency</source>
+        <translation>Stauwirkungsgrad</translation>
+    </message>
+    <message>
+        <source>Pressure recovery pt2/pt0</source>
+        <translation>Druckrückgewinn pt2/pt0</translation>
+    </message>
+    <message>
+        <source>pt2/pt0 of the inlet; 1 is loss-free.</source>
+        <translation>pt2/pt0 des Einlaufs; 1 ist verlustfrei.</translation>
+    </message>
+    <message>
+        <source>The fraction of the ram enthalpy rise kept as pressure; 1 is loss-free.</source>
+        <translation>Der Anteil des Stau-Enthalpieanstiegs, der als Druck erhalten bleibt; 1 ist verlustfrei.</translation>
+    </message>
+    <message>
+        <source>Supersonic shock loss</source>
+        <translation>Stoßverlust im Überschall</translation>
+    </message>
+    <message>
+        <source>A multiplier on the recovery above Mach 1: none, or the military specification rule 1 − 0.075 (M0 − 1)^1.35.</source>
+        <translation>Ein Faktor auf den Druckrückgewinn oberhalb Mach 1: keiner oder die Regel der Militärspezifikation 1 − 0,075 (M0 − 1)^1,35.</translation>
+    </message>
+    <message>
+        <source>None</source>
+        <translation>Keiner</translation>
+    </message>
+    <message>
+        <source>MIL-E-5008B</source>
+        <translation>MIL-E-5008B</translation>
+    </message>
+    <message>
+        <source>Efficiency basis</source>
+        <translation>Art des Wirkungsgrads</translation>
+    </message>
+    <message>
+        <source>Give the isentropic or the polytropic efficiency; the other is derived.</source>
+        <translation>Den isentropen oder den polytropen Wirkungsgrad angeben; der andere wird abgeleitet.</translation>
+    </message>
+    <message>
+        <source>Isentropic</source>
+        <translation>Isentrop</translation>
+    </message>
+    <message>
+        <source>Polytropic</source>
+        <translation>Polytrop</translation>
+    </message>
+    <message>
+        <source>Isentropic efficiency</source>
+        <translation>Isentroper Wirkungsgrad</translation>
+    </message>
+    <message>
+        <source>Isentropic efficiency; 1 is loss-free.</source>
+        <translation>Isentroper Wirkungsgrad; 1 ist verlustfrei.</translation>
+    </message>
+    <message>
+        <source>Polytropic efficiency</source>
+        <translation>Polytroper Wirkungsgrad</translation>
+    </message>
+    <message>
+        <source>Small-stage efficiency, the same through the machine; 1 is loss-free.</source>
+        <translation>Wirkungsgrad einer kleinen Stufe, in der ganzen Maschine gleich; 1 ist verlustfrei.</translation>
+    </message>
+    <message>
+        <source>Compressor total-pressure ratio.</source>
+        <translation>Totaldruckverhältnis des Verdichters.</translation>
+    </message>
+    <message>
+        <source>Bleed fraction</source>
+        <translation>Zapfluftanteil</translation>
+    </message>
+    <message>
+        <source>Air bled off at compressor exit, per unit of inlet air.</source>
+        <translation>Am Verdichteraustritt entnommene Luft je Einheit Eintrittsluft.</translation>
+    </message>
+    <message>
+        <source>Mechanical efficiency</source>
+        <translation>Mechanischer Wirkungsgrad</translation>
+    </message>
+    <message>
+        <source>Compressor power over turbine power (shaft losses).</source>
+        <translation>Verdichterleistung durch Turbinenleistung (Wellenverluste).</translation>
+    </message>
+    <message>
+        <source>Power offtake</source>
+        <translation>Wellenleistungsentnahme</translation>
+    </message>
+    <message>
+        <source>Shaft power taken for accessories.</source>
+        <translation>Für Hilfsgeräte entnommene Wellenleistung.</translation>
+    </message>
+    <message>
+        <source>Burner set by</source>
+        <translation>Brennkammer festgelegt durch</translation>
+    </message>
+    <message>
+        <source>Fix the burner exit temperature Tt4, or the fuel-air ratio.</source>
+        <translation>Die Brennkammeraustrittstemperatur Tt4 oder das Kraftstoff-Luft-Verhältnis festlegen.</translation>
+    </message>
+    <message>
+        <source>Exit temperature</source>
+        <translation>Austrittstemperatur</translation>
+    </message>
+    <message>
+        <source>Fuel-air ratio</source>
+        <translation>Kraftstoff-Luft-Verhältnis</translation>
+    </message>
+    <message>
+        <source>Exit temperature Tt4</source>
+        <translation>Austrittstemperatur Tt4</translation>
+    </message>
+    <message>
+        <source>Burner exit (turbine entry) total temperature.</source>
+        <translation>Totaltemperatur am Brennkammeraustritt (Turbineneintritt).</translation>
+    </message>
+    <message>
+        <source>Fuel per unit of burner air.</source>
+        <translation>Kraftstoff je Einheit Brennkammerluft.</translation>
+    </message>
+    <message>
+        <source>Pressure-loss fraction</source>
+        <translation>Relativer Druckverlust</translation>
+    </message>
+    <message>
+        <source>1 − pt4/pt3.</source>
+        <translation>1 − pt4/pt3.</translation>
+    </message>
+    <message>
+        <source>Combustion efficiency</source>
+        <translation>Ausbrenngrad</translation>
+    </message>
+    <message>
+        <source>Fraction of the fuel&apos;s heating value released.</source>
+        <translation>Anteil des Heizwerts, der freigesetzt wird.</translation>
+    </message>
+    <message>
+        <source>1 − pt_out/pt_in of the duct from turbine exit to nozzle entry.</source>
+        <translation>1 − pt_aus/pt_ein des Kanals vom Turbinenaustritt zum Düseneintritt.</translation>
+    </message>
+    <message>
+        <source>Afterburner lit</source>
+        <translation>Nachbrenner gezündet</translation>
+    </message>
+    <message>
+        <source>Light the afterburner (reheat) between jet pipe and nozzle.</source>
+        <translation>Den Nachbrenner zwischen Strahlrohr und Düse zünden.</translation>
+    </message>
+    <message>
+        <source>Exit temperature Tt7</source>
+        <translation>Austrittstemperatur Tt7</translation>
+    </message>
+    <message>
+        <source>Afterburner exit total temperature when lit.</source>
+        <translation>Totaltemperatur am Nachbrenneraustritt, wenn gezündet.</translation>
+    </message>
+    <message>
+        <source>Pressure-loss fraction, lit</source>
+        <translation>Relativer Druckverlust, gezündet</translation>
+    </message>
+    <message>
+        <source>1 − pt_out/pt_in when lit.</source>
+        <translation>1 − pt_aus/pt_ein, wenn gezündet.</translation>
+    </message>
+    <message>
+        <source>Pressure-loss fraction, unlit</source>
+        <translation>Relativer Druckverlust, nicht gezündet</translation>
+    </message>
+    <message>
+        <source>1 − pt_out/pt_in when not lit; 0 for an engine without afterburner.</source>
+        <translation>1 − pt_aus/pt_ein, wenn nicht gezündet; 0 für ein Triebwerk ohne Nachbrenner.</translation>
+    </message>
+    <message>
+        <source>Fraction of the heating value released when lit.</source>
+        <translation>Anteil des Heizwerts, der bei gezündetem Nachbrenner freigesetzt wird.</translation>
+    </message>
+    <message>
+        <source>Nozzle</source>
+        <translation>Schubdüse</translation>
+    </message>
+    <message>
+        <source>Convergent (exit at the throat), or convergent-divergent (expanding fully to ambient pressure or of fixed area ratio).</source>
+        <translation>Konvergent (Austritt im engsten Querschnitt) oder konvergent-divergent (vollständige Expansion auf Umgebungsdruck oder festes Flächenverhältnis).</translation>
+    </message>
+    <message>
+        <source>Convergent</source>
+        <translation>Konvergent</translation>
+    </message>
+    <message>
+        <source>Convergent-divergent</source>
+        <translation>Konvergent-divergent</translation>
+    </message>
+    <message>
+        <source>Expansion</source>
+        <translation>Expansion</translation>
+    </message>
+    <message>
+        <source>Full expansion to ambient pressure, or a fixed exit-to-throat area ratio.</source>
+        <translation>Vollständige Expansion auf Umgebungsdruck oder ein festes Verhältnis von Austritts- zu Halsfläche.</translation>
+    </message>
+    <message>
+        <source>Full expansion</source>
+        <translation>Vollständige Expansion</translation>
+    </message>
+    <message>
+        <source>Fixed area ratio</source>
+        <translation>Festes Flächenverhältnis</translation>
+    </message>
+    <message>
+        <source>Exit-to-throat area ratio A9/A8</source>
+        <translation>Flächenverhältnis Austritt zu Hals A9/A8</translation>
+    </message>
+    <message>
+        <source>Geometric area ratio of the divergent part.</source>
+        <translation>Geometrisches Flächenverhältnis des divergenten Teils.</translation>
+    </message>
+    <message>
+        <source>Velocity coefficient V9/V9,ideal, or isentropic efficiency of the expansion.</source>
+        <translation>Geschwindigkeitsbeiwert V9/V9,ideal oder isentroper Wirkungsgrad der Expansion.</translation>
+    </message>
+    <message>
+        <source>Velocity coefficient</source>
+        <translation>Geschwindigkeitsbeiwert</translation>
+    </message>
+    <message>
+        <source>Nozzle efficiency</source>
+        <translation>Düsenwirkungsgrad</translation>
+    </message>
+    <message>
+        <source>V9/V9,ideal; 1 is loss-free.</source>
+        <translation>V9/V9,ideal; 1 ist verlustfrei.</translation>
+    </message>
+    <message>
+        <source>Isentropic efficiency of the expansion; 1 is loss-free.</source>
+        <translation>Isentroper Wirkungsgrad der Expansion; 1 ist verlustfrei.</translation>
+    </message>
+    <message>
+        <source>Discharge coefficient</source>
+        <translation>Durchflussbeiwert</translation>
+    </message>
+    <message>
+        <source>Actual over ideal throat mass flow; sizes the geometric throat.</source>
+        <translation>Tatsächlicher durch idealen Massenstrom im Hals; bestimmt den geometrischen Halsquerschnitt.</translation>
+    </message>
+    <message>
+        <source>Engine-face Mach number</source>
+        <translation>Machzahl am Verdichtereintritt</translation>
+    </message>
+    <message>
+        <source>Axial Mach number at the compressor face, for the face area.</source>
+        <translation>Axiale Machzahl am Verdichtereintritt, für die Eintrittsfläche.</translation>
+    </message>
+    <message>
+        <source>Hub-to-tip radius ratio</source>
+        <translation>Nabenverhältnis</translation>
+    </message>
+    <message>
+        <source>Hub radius over tip radius at the engine face.</source>
+        <translation>Nabenradius durch Spitzenradius am Verdichtereintritt.</translation>
+    </message>
+    <message>
+        <source>Pressure ratio pt3/pt2</source>
+        <translation>Druckverhältnis pt3/pt2</translation>
+    </message>
+    <message>
+        <source>Pressure ratio pt25/pt2</source>
+        <translation>Druckverhältnis pt25/pt2</translation>
+    </message>
+    <message>
+        <source>Pressure ratio pt3/pt25</source>
+        <translation>Druckverhältnis pt3/pt25</translation>
     </message>
 </context>
 <context>
@@ -1085,7 +1140,7 @@ p = %7   v = %8</translation>
         <translation>Aus&amp;wahl:</translation>
     </message>
     <message>
-        <source>The chart's own title</source>
+        <source>The chart&apos;s own title</source>
         <translation>Der eigene Titel des Diagramms</translation>
     </message>
     <message>
@@ -1137,7 +1192,7 @@ p = %7   v = %8</translation>
         <translation>× </translation>
     </message>
     <message>
-        <source>The lines' widths as on screen times this factor</source>
+        <source>The lines&apos; widths as on screen times this factor</source>
         <translation>Die Linienbreiten wie am Bildschirm, mal diesem Faktor</translation>
     </message>
     <message>
@@ -1681,33 +1736,6 @@ p = %7   v = %8</translation>
     <message>
         <source>%1, step %2</source>
         <translation>%1, Schrittweite %2</translation>
-    </message>
-</context>
-<context>
-    <name>cw::gui::StudyInputs</name>
-    <message>
-        <source>Pressure recovery pt2/pt0</source>
-        <translation>Druckrückgewinn pt2/pt0</translation>
-    </message>
-    <message>
-        <source>Ram efficiency</source>
-        <translation>Stauwirkungsgrad</translation>
-    </message>
-    <message>
-        <source>Isentropic efficiency</source>
-        <translation>Isentroper Wirkungsgrad</translation>
-    </message>
-    <message>
-        <source>Polytropic efficiency</source>
-        <translation>Polytroper Wirkungsgrad</translation>
-    </message>
-    <message>
-        <source>Velocity coefficient</source>
-        <translation>Geschwindigkeitsbeiwert</translation>
-    </message>
-    <message>
-        <source>Nozzle efficiency</source>
-        <translation>Düsenwirkungsgrad</translation>
     </message>
 </context>
 <context>

@@ -1,6 +1,7 @@
 #include "analysis/loss_catalogue.h"
 
 #include "common/error.h"
+#include "engine/parameter_registry.h"
 
 namespace cw::analysis {
 
@@ -17,9 +18,26 @@ const std::string kPercent = "percent of pressure-loss fraction (0.01)";
 
 LossParameter efficiencyParameter(std::string field, double (*get)(const Case&), void (*set)(Case&, double),
                                   std::string unit = kPoint) {
-  // Efficiencies, recoveries and coefficients are valid in (0, 1] (engine/case_validation.cpp);
+  // Efficiencies, recoveries and coefficients are valid in (0, 1] (engine/parameter_registry.cpp);
   // 0.01 stands in for the open lower end, far below any design value.
   return {std::move(field), std::move(unit), 0.01, 0.01, 1.0, get, set};
+}
+
+/// A loss that is one number of the case, all from its registry entry: its path, getter and
+/// setter, its bounds (an open lower end of 0 becomes 0.01, far below any design value) and its
+/// lossless value.
+LossDefinition registryLoss(std::string key, std::string_view section, std::string_view name,
+                            std::string unit, double unitSize) {
+  const engine::Parameter& p = *engine::findParameter(section, name);
+  const std::string si(engine::siUnit(p.quantity));
+  const double lossless = *p.lossless;
+  return {std::move(key),
+          p.pointer(),
+          messageNumber(lossless) + (si.empty() ? "" : " " + si),
+          p.applies,
+          [set = p.set, lossless](Case& c) { set(c, lossless); },
+          LossParameter{p.pointer(), std::move(unit), unitSize, p.range.lowClosed ? p.range.low : 0.01,
+                        p.range.high, p.get, p.set}};
 }
 
 LossParameter lossFractionParameter(std::string field, double (*get)(const Case&),
@@ -49,18 +67,8 @@ std::vector<LossDefinition> makeCatalogue() {
        efficiencyParameter(
            "/compressor efficiency (as given)", [](const Case& c) { return c.compressor.efficiency.value; },
            [](Case& c, double v) { c.compressor.efficiency.value = v; })});
-  list.push_back(
-      {"burner_pressure_loss", "/burner/pressure_loss_fraction", "0", &always,
-       [](Case& c) { c.burner.pressureLossFraction = 0.0; },
-       lossFractionParameter(
-           "/burner/pressure_loss_fraction", [](const Case& c) { return c.burner.pressureLossFraction; },
-           [](Case& c, double v) { c.burner.pressureLossFraction = v; })});
-  list.push_back(
-      {"combustion_efficiency", "/burner/combustion_efficiency", "1", &always,
-       [](Case& c) { c.burner.combustionEfficiency = 1.0; },
-       efficiencyParameter(
-           "/burner/combustion_efficiency", [](const Case& c) { return c.burner.combustionEfficiency; },
-           [](Case& c, double v) { c.burner.combustionEfficiency = v; })});
+  list.push_back(registryLoss("burner_pressure_loss", "burner", "pressure_loss_fraction", kPercent, 0.01));
+  list.push_back(registryLoss("combustion_efficiency", "burner", "combustion_efficiency", kPoint, 0.01));
   list.push_back(
       {"turbine_efficiency", "/turbine/isentropic_efficiency or /turbine/polytropic_efficiency",
        "isentropic efficiency 1", &always,
@@ -70,18 +78,8 @@ std::vector<LossDefinition> makeCatalogue() {
        efficiencyParameter(
            "/turbine efficiency (as given)", [](const Case& c) { return c.turbine.efficiency.value; },
            [](Case& c, double v) { c.turbine.efficiency.value = v; })});
-  list.push_back(
-      {"mechanical_efficiency", "/turbine/mechanical_efficiency", "1", &always,
-       [](Case& c) { c.turbine.mechanicalEfficiency = 1.0; },
-       efficiencyParameter(
-           "/turbine/mechanical_efficiency", [](const Case& c) { return c.turbine.mechanicalEfficiency; },
-           [](Case& c, double v) { c.turbine.mechanicalEfficiency = v; })});
-  list.push_back(
-      {"jet_pipe_loss", "/jet_pipe/pressure_loss_fraction", "0", &always,
-       [](Case& c) { c.jetPipe.pressureLossFraction = 0.0; },
-       lossFractionParameter(
-           "/jet_pipe/pressure_loss_fraction", [](const Case& c) { return c.jetPipe.pressureLossFraction; },
-           [](Case& c, double v) { c.jetPipe.pressureLossFraction = v; })});
+  list.push_back(registryLoss("mechanical_efficiency", "turbine", "mechanical_efficiency", kPoint, 0.01));
+  list.push_back(registryLoss("jet_pipe_loss", "jet_pipe", "pressure_loss_fraction", kPercent, 0.01));
   // The afterburner's parameter is the pressure-loss fraction in effect (lit or unlit).
   list.push_back(
       {"afterburner_loss",
@@ -115,26 +113,14 @@ std::vector<LossDefinition> makeCatalogue() {
            "/nozzle/velocity_coefficient or /nozzle/isentropic_efficiency (as given)",
            [](const Case& c) { return c.nozzle.loss; }, [](Case& c, double v) { c.nozzle.loss = v; },
            "point of velocity coefficient or nozzle efficiency (0.01)")});
-  list.push_back(
-      {"nozzle_discharge_coefficient", "/nozzle/discharge_coefficient", "1", &always,
-       [](Case& c) { c.nozzle.dischargeCoefficient = 1.0; },
-       efficiencyParameter(
-           "/nozzle/discharge_coefficient", [](const Case& c) { return c.nozzle.dischargeCoefficient; },
-           [](Case& c, double v) { c.nozzle.dischargeCoefficient = v; },
-           "point of discharge coefficient (0.01)")});
+  list.push_back(registryLoss("nozzle_discharge_coefficient", "nozzle", "discharge_coefficient",
+                              "point of discharge coefficient (0.01)", 0.01));
   list.push_back({"nozzle_expansion", "/nozzle/kind, /nozzle/exit_to_throat_area_ratio",
                   "convergent-divergent, full expansion to ambient pressure", &always,
                   [](Case& c) { c.nozzle.geometry = FullyExpandingNozzle{}; }, std::nullopt});
-  list.push_back({"bleed", "/compressor/bleed_fraction", "0", &always,
-                  [](Case& c) { c.compressor.bleedFraction = 0.0; },
-                  LossParameter{"/compressor/bleed_fraction", "percent of bleed (0.01)", 0.01, 0.0, 0.3,
-                                [](const Case& c) { return c.compressor.bleedFraction; },
-                                [](Case& c, double v) { c.compressor.bleedFraction = v; }}});
-  list.push_back({"power_offtake", "/turbine/power_offtake_W", "0 W", &always,
-                  [](Case& c) { c.turbine.powerOfftake = 0.0; },
-                  LossParameter{"/turbine/power_offtake_W", "kW of offtake (1000 W)", 1000.0, 0.0, 5.0e7,
-                                [](const Case& c) { return c.turbine.powerOfftake; },
-                                [](Case& c, double v) { c.turbine.powerOfftake = v; }}});
+  list.push_back(registryLoss("bleed", "compressor", "bleed_fraction", "percent of bleed (0.01)", 0.01));
+  list.push_back(
+      registryLoss("power_offtake", "turbine", "power_offtake_W", "kW of offtake (1000 W)", 1000.0));
   return list;
 }
 

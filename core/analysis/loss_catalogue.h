@@ -7,10 +7,13 @@
 // burner_pressure_loss, combustion_efficiency, turbine_efficiency, mechanical_efficiency,
 // jet_pipe_loss, afterburner_loss, nozzle_velocity_coefficient, nozzle_discharge_coefficient,
 // nozzle_expansion, bleed, power_offtake. Removing all of them from a case gives its ideal twin
-// (at the same W2 and Tt4).
+// (at the same W2 and Tt4). A loss that is one number of the case is described by its entry in
+// the registry of parameters (engine/parameter_registry.h): its path, range, lossless value,
+// getter and setter.
 
 #include "engine/case_inputs.h"
 
+#include <functional>
 #include <optional>
 #include <string>
 #include <vector>
@@ -24,17 +27,17 @@ struct LossParameter {
   double unitSize;    ///< that unit in the parameter's SI value: 0.01, or 1000 W [-] or [W]
   double lowerBound;  ///< lowest valid value (inclusive)
   double upperBound;  ///< highest valid value (inclusive)
-  double (*get)(const engine::Case&);
-  void (*set)(engine::Case&, double);
+  std::function<double(const engine::Case&)> get;
+  std::function<void(engine::Case&, double)> set;
 };
 
 struct LossDefinition {
-  std::string key;                         ///< stable key, e.g. "compressor_efficiency"
-  std::string field;                       ///< the case path(s) the loss acts on
-  std::string removedTo;                   ///< its ideal value, in words, e.g. "isentropic efficiency 1"
-  bool (*applies)(const engine::Case&);    ///< false when the case has no such component
-  void (*remove)(engine::Case&);           ///< sets the loss to its ideal-twin value
-  std::optional<LossParameter> parameter;  ///< none for nozzle_expansion (a geometry)
+  std::string key;        ///< stable key, e.g. "compressor_efficiency"
+  std::string field;      ///< the case path(s) the loss acts on
+  std::string removedTo;  ///< its ideal value, in words, e.g. "isentropic efficiency 1"
+  std::function<bool(const engine::Case&)> applies;  ///< false when the case has no such component
+  std::function<void(engine::Case&)> remove;         ///< sets the loss to its ideal-twin value
+  std::optional<LossParameter> parameter;            ///< none for nozzle_expansion (a geometry)
 };
 
 /// Every loss, in flow order.

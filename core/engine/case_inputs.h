@@ -13,9 +13,10 @@
 //     ambient state, mass flow or thrust, exit temperature or fuel-air ratio, gas model,
 //     nozzle geometry): a std::variant of small structs.
 //
-// Valid ranges are checked by cw::engine::validateCase (case_validation.h) and listed in
-// docs/case-format.md; the case file (core/io/case_file.h) maps every field to a JSON key
-// that carries the SI unit in its name.
+// Every field is described once in the registry of parameters (parameter_registry.h): its
+// case-file key (with the SI unit in its name), valid range, default, label and how it is read
+// and set; validation (case_validation.h), the case file (core/io/case_file.h) and
+// docs/case-format.md follow from it.
 
 #include "atmosphere/ambient_inputs.h"
 #include "components/compressor_inputs.h"
@@ -105,8 +106,8 @@ enum class Architecture {
   TwoSpoolTurbojet,  ///< LP compressor and turbine on the LP shaft, HP ones on the HP shaft
 };
 
-/// The roles of the case's compressor and turbine inputs by architecture (one place; the
-/// registry of parameters and the topologies name roles through it):
+/// The roles of the case's compressor and turbine inputs by architecture (case_roles.h maps
+/// each role to its member in one place; the registry of parameters describes them through it):
 ///   Turbojet:          compressor -> "compressor", turbine -> "turbine";
 ///   TwoSpoolTurbojet:  lowPressureCompressor -> "low_pressure_compressor",
 ///                      compressor -> "high_pressure_compressor",

@@ -13,15 +13,17 @@
 
 #include "engine/case_inputs.h"
 
+#include <functional>
 #include <string>
 #include <string_view>
 #include <vector>
 
 namespace cw::io {
 
-using CaseFieldSetter = void (*)(engine::Case&, double);
+/// The registry entry's setter (engine/parameter_registry.h).
+using CaseFieldSetter = std::function<void(engine::Case&, double)>;
 
-/// The setter of the numeric input at `path`, or nullptr when the path names no numeric input.
+/// The setter of the numeric input at `path`, or an empty one when the path names no numeric input.
 CaseFieldSetter numericCaseFieldSetter(std::string_view path);
 
 /// Every numeric input's path, in the order of the case file.

@@ -1,5 +1,7 @@
 #include "io/case_keys.h"
 
+#include "engine/parameter_registry.h"
+
 #include <algorithm>
 #include <numeric>
 
@@ -7,106 +9,68 @@ namespace cw::io {
 
 namespace {
 
+using engine::Parameter;
+using engine::ParameterKind;
 using T = CaseKeyType;
 
-CaseKey number(std::string_view name, std::vector<CaseKeyCondition> conditions = {}) {
-  return {name, T::Number, {}, std::move(conditions)};
-}
-CaseKey boolean(std::string_view name) {
-  return {name, T::Boolean, {}, {}};
-}
-CaseKey choice(std::string_view name, std::vector<std::string_view> choices,
-               std::vector<CaseKeyCondition> conditions = {}) {
-  return {name, T::Choice, std::move(choices), std::move(conditions)};
-}
-CaseKeyGroup oneOf(std::string_view a, std::string_view b, bool required = false) {
-  return {{{{a}, {a}}, {{b}, {b}}}, required};
+CaseKey keyOf(const Parameter& p) {
+  CaseKey key{p.key, T::Number, {}, p.conditions};
+  switch (p.kind) {
+    case ParameterKind::Number:
+      key.type = T::Number;
+      break;
+    case ParameterKind::Flag:
+      key.type = T::Boolean;
+      break;
+    case ParameterKind::Text:
+      key.type = T::String;
+      break;
+    case ParameterKind::Choice:
+      key.type = T::Choice;
+      for (const engine::ParameterChoice& choice : p.choices) key.choices.push_back(choice.value);
+      break;
+  }
+  return key;
 }
 
-std::vector<CaseSection> makeSections() {
-  const std::vector<CaseKeyCondition> constantCp{{"kind", "constant-cp"}};
-  const std::vector<CaseKeyCondition> twoGamma{{"kind", "two-gamma"}};
-  const std::vector<CaseKeyCondition> convergentDivergent{{"kind", "convergent-divergent"}};
-  const std::vector<CaseKeyCondition> areaRatio{{"kind", "convergent-divergent"},
-                                                {"expansion", "area-ratio"}};
-  return {
-      {"",
-       true,
-       {{"format", T::String, {}, {}},
-        {"version", T::Integer, {}, {}},
-        {"title", T::String, {}, {}},
-        {"notes", T::String, {}, {}}},
-       {"format", "version"},
-       {}},
-      {"flight",
-       true,
-       {number("altitude_m"), boolean("geometric_altitude"), number("isa_offset_K"),
-        number("ambient_temperature_K"), number("ambient_pressure_Pa"), number("mach"),
-        number("specific_humidity_kg_per_kg")},
-       {"mach"},
-       {{{{{"altitude_m", "geometric_altitude", "isa_offset_K"}, {"altitude_m"}},
-          {{"ambient_temperature_K", "ambient_pressure_Pa"},
-           {"ambient_temperature_K", "ambient_pressure_Pa"}}},
-         true}}},
-      {"design",
-       true,
-       {number("air_mass_flow_kg_per_s"), number("required_net_thrust_N")},
-       {},
-       {oneOf("air_mass_flow_kg_per_s", "required_net_thrust_N", true)}},
-      {"fuel",
-       false,
-       {number("lower_heating_value_J_per_kg"), number("hydrogen_carbon_ratio"), number("temperature_K")},
-       {},
-       {}},
-      {"gas_model",
-       false,
-       {choice("kind", {"thermally-perfect", "constant-cp", "two-gamma"}),
-        number("cp_J_per_kg_K", constantCp), number("gamma", constantCp),
-        number("cold_cp_J_per_kg_K", twoGamma), number("cold_gamma", twoGamma),
-        number("hot_cp_J_per_kg_K", twoGamma), number("hot_gamma", twoGamma), boolean("neglect_fuel_mass")},
-       {},
-       {}},
-      {"inlet",
-       false,
-       {number("pressure_recovery"), number("ram_efficiency"),
-        choice("supersonic_recovery_rule", {"none", "mil-e-5008b"})},
-       {},
-       {oneOf("pressure_recovery", "ram_efficiency")}},
-      {"compressor",
-       false,
-       {number("pressure_ratio"), number("isentropic_efficiency"), number("polytropic_efficiency"),
-        number("bleed_fraction")},
-       {},
-       {oneOf("isentropic_efficiency", "polytropic_efficiency")}},
-      {"burner",
-       false,
-       {number("exit_temperature_K"), number("fuel_air_ratio"), number("pressure_loss_fraction"),
-        number("combustion_efficiency")},
-       {},
-       {oneOf("exit_temperature_K", "fuel_air_ratio")}},
-      {"turbine",
-       false,
-       {number("isentropic_efficiency"), number("polytropic_efficiency"), number("mechanical_efficiency"),
-        number("power_offtake_W")},
-       {},
-       {oneOf("isentropic_efficiency", "polytropic_efficiency")}},
-      {"jet_pipe", false, {number("pressure_loss_fraction")}, {}, {}},
-      {"afterburner",
-       false,
-       {boolean("enabled"), number("exit_temperature_K"), number("pressure_loss_fraction_lit"),
-        number("pressure_loss_fraction_unlit"), number("combustion_efficiency")},
-       {},
-       {}},
-      {"nozzle",
-       false,
-       {choice("kind", {"convergent", "convergent-divergent"}),
-        choice("expansion", {"full", "area-ratio"}, convergentDivergent),
-        number("exit_to_throat_area_ratio", areaRatio), number("velocity_coefficient"),
-        number("isentropic_efficiency"), number("discharge_coefficient")},
-       {},
-       {oneOf("velocity_coefficient", "isentropic_efficiency")}},
-      {"sizing", false, {number("engine_face_mach"), number("hub_to_tip_ratio")}, {}, {}},
-  };
+/// The "exactly one of" group a group choice (a choice the file gives by its keys) stands for.
+CaseKeyGroup groupOf(const Parameter& choice, const std::vector<const Parameter*>& section) {
+  CaseKeyGroup group{std::vector<CaseAlternative>(choice.choices.size()), choice.groupRequired};
+  for (const Parameter* p : section) {
+    if (p->group != choice.key || p->alternative < 0) continue;
+    CaseAlternative& alternative = group.alternatives[static_cast<std::size_t>(p->alternative)];
+    alternative.keys.push_back(p->key);
+    if (p->requiredInAlternative) alternative.required.push_back(p->key);
+  }
+  // An alternative without required keys is chosen by its first key.
+  for (CaseAlternative& alternative : group.alternatives)
+    if (alternative.required.empty() && !alternative.keys.empty())
+      alternative.required.push_back(alternative.keys.front());
+  return group;
+}
+
+/// The format's objects of `version`, from the registry of parameters.
+std::vector<CaseSection> makeSections(int version) {
+  std::vector<CaseSection> sections;
+  for (const engine::ParameterSection& s : engine::parameterSections()) {
+    if (s.sinceVersion > version) continue;
+    std::vector<const Parameter*> parameters;
+    for (const Parameter& p : engine::parameterRegistry())
+      if (p.section == s.name && p.sinceVersion <= version) parameters.push_back(&p);
+    CaseSection section{s.name, s.required, {}, {}, {}};
+    if (s.name.empty()) {
+      // The document's own keys, before the case's.
+      section.keys = {{"format", T::String, {}, {}}, {"version", T::Integer, {}, {}}};
+      section.requiredKeys = {"format", "version"};
+    }
+    for (const Parameter* p : parameters) {
+      if (p->inFile) section.keys.push_back(keyOf(*p));
+      if (p->inFile && p->required) section.requiredKeys.push_back(p->key);
+      if (!p->inFile && p->kind == ParameterKind::Choice) section.groups.push_back(groupOf(*p, parameters));
+    }
+    sections.push_back(std::move(section));
+  }
+  return sections;
 }
 
 }  // namespace
@@ -118,7 +82,7 @@ const CaseKey* CaseSection::find(std::string_view key) const {
 }
 
 const std::vector<CaseSection>& caseSections() {
-  static const std::vector<CaseSection> sections = makeSections();
+  static const std::vector<CaseSection> sections = makeSections(1);
   return sections;
 }
 

@@ -1,9 +1,12 @@
 #pragma once
-// The keys of the case-file format (docs/case-format.md, docs/case-schema.json) as data:
-// which keys each component object takes, their JSON types, the choices of choice keys,
-// the keys that apply only under a choice, and the "exactly one of" groups. The reader
-// (unknown keys, types, applicability), the writer (key order) and --set overrides
-// (known paths) all work from this one table.
+// The keys of the case-file format (docs/case-format.md, docs/case-schema.json) as the reader
+// sees them: which keys each object takes, their JSON types, the choices of choice keys, the
+// keys that apply only under a choice, and the "exactly one of" groups. Derived from the
+// registry of parameters (engine/parameter_registry.h), plus the document's own keys (format,
+// version). The reader (unknown keys, types, applicability), the writer (key order) and --set
+// overrides (known paths) all work from it.
+
+#include "engine/parameter_registry.h"
 
 #include <string>
 #include <string_view>
@@ -14,10 +17,7 @@ namespace cw::io {
 enum class CaseKeyType { Number, Integer, Boolean, String, Choice };
 
 /// A key applies only while another key of the same object has a given value.
-struct CaseKeyCondition {
-  std::string_view selector;  ///< a choice or boolean key of the same object
-  std::string_view value;     ///< the value (JSON text for booleans: "true", "false")
-};
+using CaseKeyCondition = engine::KeyCondition;
 
 struct CaseKey {
   std::string_view name;

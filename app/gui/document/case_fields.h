@@ -1,10 +1,14 @@
 #pragma once
 // Every input of a case as a field the forms can show: where it lives in the case, its
 // case-file path (to match the core's problems), its quantity, label, tooltip and valid range.
-// The forms are built from this table; nothing here computes physics.
+// One field per entry of the core's registry of parameters (engine/parameter_registry.h), built
+// from it: label, tooltip, quantity, range, visibility (the entry's "applies"), get and set. The
+// texts are translated in the context "Parameters". The forms are built from this table; nothing
+// here computes physics.
 
 #include "document/units.h"
 #include "engine/case_inputs.h"
+#include "engine/parameter_registry.h"
 
 #include <functional>
 #include <string>
@@ -46,19 +50,20 @@ struct FieldSpec {
   Section section = Section::Flight;
   FieldKind kind = FieldKind::Number;
   const char* key = "";      ///< object name of the widget, e.g. "compressor.efficiency"
-  const char* label = "";    ///< untranslated (context "CaseFields")
-  const char* toolTip = "";  ///< untranslated (context "CaseFields")
+  const char* label = "";    ///< untranslated (context "Parameters")
+  const char* toolTip = "";  ///< untranslated (context "Parameters")
   Quantity quantity = Quantity::Dimensionless;
   /// Valid range [SI] as the core checks it (docs/case-format.md), shown in the tooltip.
   double low = 0.0, high = 0.0;
   bool lowOpen = false, highOpen = false;
-  std::vector<const char*> choices;                      ///< untranslated choice names (Choice fields)
+  std::vector<const char*> choices;                      ///< untranslated choice names (context "Parameters")
   std::function<std::string(const engine::Case&)> path;  ///< the case-file path the core reports
   std::function<bool(const engine::Case&)> visible;      ///< shown for the case's current choices
   std::function<double(const engine::Case&)> get;        ///< SI value, choice index or 0/1
   std::function<void(engine::Case&, double)> set;
   std::function<std::string(const engine::Case&)> getText;  ///< Text and Notes fields (UTF-8)
   std::function<void(engine::Case&, const std::string&)> setText;
+  const engine::Parameter* parameter = nullptr;  ///< the registry entry it shows
 };
 
 /// The whole table, in form order.
@@ -68,8 +73,9 @@ const FieldSpec* caseField(int id);
 /// The field whose key is given, or nullptr.
 const FieldSpec* caseField(const QString& key);
 
-/// Translated label and tooltip of a field.
+/// Translated label and tooltip of a field, and of a choice field's alternative.
 QString fieldLabel(const FieldSpec& spec);
+QString fieldChoice(const FieldSpec& spec, std::size_t index);
 QString fieldToolTip(const FieldSpec& spec, const DisplayUnits& units);
 /// The valid range of a number field as the core states it (SI) and, in U.S. customary units,
 /// converted: "[200, 2500] K = [360, 4500] °R".

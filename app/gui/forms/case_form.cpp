@@ -164,8 +164,7 @@ void CaseForm::retranslateUi() {
     row.label->setToolTip(fieldToolTip(spec, units_));
     row.editor->setToolTip(fieldToolTip(spec, units_));
     if (auto* combo = qobject_cast<QComboBox*>(row.editor))
-      for (std::size_t i = 0; i < spec.choices.size(); ++i)
-        combo->setItemText(int(i), QCoreApplication::translate("CaseFields", spec.choices[i]));
+      for (std::size_t i = 0; i < spec.choices.size(); ++i) combo->setItemText(int(i), fieldChoice(spec, i));
   }
   // The unit may have changed: rewrite every number.
   for (const auto& row : rows_)

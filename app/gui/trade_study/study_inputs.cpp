@@ -19,23 +19,6 @@ std::string pointerOf(const std::string& path) {
   return pointer;
 }
 
-/// Inputs whose case field stands for two alternatives ("Efficiency" on the basis chosen): the
-/// study names the alternative itself.
-struct AlternativeName {
-  const char* path;
-  const char* name;
-};
-constexpr AlternativeName kAlternatives[] = {
-    {"inlet.pressure_recovery", QT_TRANSLATE_NOOP("cw::gui::StudyInputs", "Pressure recovery pt2/pt0")},
-    {"inlet.ram_efficiency", QT_TRANSLATE_NOOP("cw::gui::StudyInputs", "Ram efficiency")},
-    {"compressor.isentropic_efficiency", QT_TRANSLATE_NOOP("cw::gui::StudyInputs", "Isentropic efficiency")},
-    {"compressor.polytropic_efficiency", QT_TRANSLATE_NOOP("cw::gui::StudyInputs", "Polytropic efficiency")},
-    {"turbine.isentropic_efficiency", QT_TRANSLATE_NOOP("cw::gui::StudyInputs", "Isentropic efficiency")},
-    {"turbine.polytropic_efficiency", QT_TRANSLATE_NOOP("cw::gui::StudyInputs", "Polytropic efficiency")},
-    {"nozzle.velocity_coefficient", QT_TRANSLATE_NOOP("cw::gui::StudyInputs", "Velocity coefficient")},
-    {"nozzle.isentropic_efficiency", QT_TRANSLATE_NOOP("cw::gui::StudyInputs", "Nozzle efficiency")},
-};
-
 }  // namespace
 
 std::vector<StudyInput> studyInputs(const engine::Case& inputs) {
@@ -60,9 +43,6 @@ StudyInput studyInput(const engine::Case& inputs, const std::string& path) {
 
 QString studyInputShortName(const StudyInput& input) {
   if (!input.field) return QString::fromStdString(input.path);
-  for (const AlternativeName& alternative : kAlternatives)
-    if (input.path == alternative.path)
-      return QCoreApplication::translate("cw::gui::StudyInputs", alternative.name);
   return fieldLabel(*input.field);
 }
 
