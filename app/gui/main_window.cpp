@@ -23,6 +23,7 @@
 #include "trade_study/study_panel.h"
 
 #include <QAction>
+#include <QCheckBox>
 #include <QCloseEvent>
 #include <QComboBox>
 #include <QDockWidget>
@@ -102,6 +103,10 @@ void MainWindow::restoreFromSettings() {
   auditPanel_->setOrder(settings_.auditOrder());
   connect(auditPanel_, &AuditPanel::orderChanged, this,
           [this](const QStringList& keys) { settings_.setAuditOrder(keys); });
+  // Kept while there is no baseline too (the box is then disabled): it applies to the next one.
+  auditPanel_->baselineBox()->setChecked(settings_.auditBaselineBeside());
+  connect(auditPanel_->baselineBox(), &QCheckBox::toggled, this,
+          [this](bool on) { settings_.setAuditBaselineBeside(on); });
   placeTradeStudy();
   tradeStudyPanel_->applySetup(settings_.studySetup());
   connect(tradeStudyPanel_, &TradeStudyPanel::setupChanged, this,
