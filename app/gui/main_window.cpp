@@ -152,9 +152,9 @@ void MainWindow::createStrip(QVBoxLayout* layout) {
   for (int i = 0; i < kSectionCount; ++i) {
     auto* item = new QListWidgetItem(sectionName(static_cast<Section>(i)), strip_);
     item->setTextAlignment(Qt::AlignCenter);
-    item->setSizeHint(QSize(metrics.horizontalAdvance(item->text()) + 28, metrics.height() * 2 + 8));
   }
   strip_->setFixedHeight(metrics.height() * 2 + 22);
+  strip_->installEventFilter(this);  // refitted to its width (fitStrip)
   connect(strip_, &QListWidget::currentRowChanged, this, [this](int row) {
     if (row >= 0) router_->select(static_cast<Section>(row));
   });
@@ -379,6 +379,7 @@ bool MainWindow::eventFilter(QObject* watched, QEvent* event) {
   if (watched == chartHost_ && (event->type() == QEvent::Resize || event->type() == QEvent::Show))
     arrangeCharts();
   if (watched == vertical_ && event->type() == QEvent::Show) fitTableRows();
+  if (watched == strip_ && (event->type() == QEvent::Resize || event->type() == QEvent::Show)) fitStrip();
   return QMainWindow::eventFilter(watched, event);
 }
 
@@ -597,14 +598,16 @@ void MainWindow::changeEvent(QEvent* event) {
   }
 }
 
+QString MainWindow::stripName(Section section) const {
+  if (section == Section::Afterburner && !document_->currentCase().afterburner.enabled)
+    return tr("%1 (unlit)").arg(sectionName(Section::Afterburner));
+  return sectionName(section);
+}
+
 void MainWindow::updateStrip() {
   const bool lit = document_->currentCase().afterburner.enabled;
-  QListWidgetItem* item = strip_->item(static_cast<int>(Section::Afterburner));
-  item->setText(lit ? sectionName(Section::Afterburner)
-                    : tr("%1 (unlit)").arg(sectionName(Section::Afterburner)));
-  item->setSizeHint(
-      QSize(QFontMetrics(strip_->font()).horizontalAdvance(item->text()) + 28, item->sizeHint().height()));
-  item->setForeground(lit ? palette().brush(QPalette::Text)
+  strip_->item(static_cast<int>(Section::Afterburner))
+      ->setForeground(lit ? palette().brush(QPalette::Text)
                           : palette().brush(QPalette::Disabled, QPalette::Text));
   for (int i = 0; i < kSectionCount; ++i) {
     const auto section = static_cast<Section>(i);
@@ -612,9 +615,55 @@ void MainWindow::updateStrip() {
     QStringList ids(stations.begin(), stations.end());
     std::sort(ids.begin(), ids.end(),
               [](const QString& a, const QString& b) { return a.toInt() < b.toInt(); });
-    strip_->item(i)->setToolTip(ids.isEmpty()
-                                    ? sectionName(section)
-                                    : tr("%1: stations %2").arg(sectionName(section), ids.join(", ")));
+    strip_->item(i)->setToolTip(
+        ids.isEmpty() ? stripName(section) : tr("%1: stations %2").arg(stripName(section), ids.join(", ")));
+  }
+  fitStrip();
+}
+
+namespace {
+
+/// The width of a strip item for its text (the widest line) [px].
+int stripItemWidth(const QFontMetrics& metrics, const QString& text) {
+  int widest = 0;
+  for (const QString& line : text.split(QLatin1Char('\n')))
+    widest = std::max(widest, metrics.horizontalAdvance(line));
+  return widest + 28;
+}
+
+/// A name of several words on two lines, broken at the space that makes the longer line shortest
+/// ("Nachbrenner (nicht gezündet)": "Nachbrenner" over "(nicht gezündet)"); one word as it is.
+QString onTwoLines(const QFontMetrics& metrics, const QString& name) {
+  QString best = name;
+  int bestWidth = metrics.horizontalAdvance(name);
+  for (qsizetype at = name.indexOf(QLatin1Char(' ')); at >= 0; at = name.indexOf(QLatin1Char(' '), at + 1)) {
+    const int width =
+        std::max(metrics.horizontalAdvance(name.left(at)), metrics.horizontalAdvance(name.mid(at + 1)));
+    if (width < bestWidth) {
+      bestWidth = width;
+      best = name.left(at) + QLatin1Char('\n') + name.mid(at + 1);
+    }
+  }
+  return best;
+}
+
+}  // namespace
+
+void MainWindow::fitStrip() {
+  const QFontMetrics metrics(strip_->font());
+  const int height = metrics.height() * 2 + 8;
+  // Each item takes its width and the spacing on both sides.
+  int oneLine = 0;
+  for (int i = 0; i < kSectionCount; ++i)
+    oneLine += stripItemWidth(metrics, stripName(static_cast<Section>(i))) + 2 * strip_->spacing();
+  const bool twoLines = oneLine > strip_->viewport()->width();
+  for (int i = 0; i < kSectionCount; ++i) {
+    const QString name = stripName(static_cast<Section>(i));
+    const QString text = twoLines ? onTwoLines(metrics, name) : name;
+    QListWidgetItem* item = strip_->item(i);
+    if (item->text() != text) item->setText(text);
+    const QSize size(stripItemWidth(metrics, text), height);
+    if (item->sizeHint() != size) item->setSizeHint(size);
   }
 }
 
