@@ -58,7 +58,7 @@ MainWindow::MainWindow(QWidget* parent) : QMainWindow(parent) {
   units_->setSystem(settings_.unitSystem());
   document_ = new CaseDocument(this);
   router_ = new SelectionRouter(this);
-  files_ = new WindowFiles(*this, *document_, settings_);
+  files_ = new WindowFiles(*this, *document_, settings_, *units_);
   autosave_ = new WindowAutosave(*this, *document_, settings_.autosaveWithinSeconds());
   exports_ = new WindowExports(*this);
   actions_ = new WindowActions(*this);
@@ -574,7 +574,7 @@ void MainWindow::updateBanner() {
     lines << tr("%1: %2 is outside the valid range %3")
                  .arg(where, QString::fromStdString(problem.value), QString::fromStdString(problem.valid));
   }
-  if (!document_->failure().isEmpty()) lines << document_->failure();
+  if (document_->hasFailure()) lines << document_->failure(*units_);
   const QString tail = document_->evaluation()
                            ? tr("Charts and tables show the last valid result (stale).")
                            : tr("There is no result for this case: the charts and tables are empty.");
