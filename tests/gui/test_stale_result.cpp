@@ -354,6 +354,15 @@ class TestStaleResult : public QObject {
              qPrintable(invalid));
     QVERIFY2(invalid.contains(" = 0.95 ") && invalid.contains("(0, 0.8]"), qPrintable(invalid));
     QVERIFY2(!invalid.contains("/sizing"), qPrintable(invalid));  // the field's name, not its path
+    QVERIFY2(invalid.contains(de ? QStringLiteral("Machzahl am Verdichtereintritt")
+                                 : QStringLiteral("Engine-face Mach number")),
+             qPrintable(invalid));
+    // An input named by its key and a remark: the field's name too.
+    const QString byKey = text(cw::InvalidInput("flight.mach (MIL-E-5008B recovery)", 5.2, "", "[0, 5)"));
+    QVERIFY2(byKey.contains(de ? QStringLiteral("Flug-Machzahl = 5.2 ")
+                               : QStringLiteral("Flight Mach number = 5.2 ")),
+             qPrintable(byKey));
+    QVERIFY2(!byKey.contains("MIL-E"), qPrintable(byKey));
 
     // Not converged: the iterations and the residual.
     const QString stalled = text(cw::NotConverged("temperature from enthalpy", 60, 2.5e-7));

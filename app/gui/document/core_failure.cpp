@@ -93,9 +93,9 @@ const std::map<std::string, const char*>& subjectNames() {
   return names;
 }
 
-/// What a range error concerns, in the interface's words: a case input by its strip section
-/// and label, a value the core checks on the way by its translated name, a component by its
-/// name; else the core's own name of it.
+/// What a range error concerns, in the interface's words: a case input (named by its case-file
+/// path or its key) by its strip section and label, a value the core checks on the way by its
+/// translated name, a component by its name; else the core's own name of it.
 QString subjectName(const std::string& subject) {
   if (!subject.empty() && subject.front() == '/') {
     const std::string path = subject.substr(0, subject.find(' '));
@@ -108,6 +108,10 @@ QString subjectName(const std::string& subject) {
   const auto known = subjectNames().find(subject);
   if (known != subjectNames().end())
     return QCoreApplication::translate("cw::gui::CoreFailure", known->second);
+  // An input named by its key, with a remark ("flight.mach (MIL-E-5008B recovery)").
+  const QString key = QString::fromStdString(subject.substr(0, subject.find(' ')));
+  if (const FieldSpec* spec = caseField(key))
+    return sectionName(spec->section) + QStringLiteral(" › ") + fieldLabel(*spec);
   const QString component = componentName(subject);
   return component.isEmpty() ? QString::fromStdString(subject) : component;
 }
