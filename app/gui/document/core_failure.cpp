@@ -5,13 +5,10 @@
 #include <QCoreApplication>
 #include <QLocale>
 #include <QRegularExpression>
-#include <QStringList>
 
 #include <cmath>
-#include <cstring>
 #include <functional>
 #include <map>
-#include <vector>
 
 namespace cw::gui {
 
