@@ -1197,6 +1197,10 @@ p = %7   v = %8</translation>
         <source>Baseline: %1</source>
         <translation>Basis: %1</translation>
     </message>
+    <message>
+        <source>Station %1</source>
+        <translation>Station %1</translation>
+    </message>
 </context>
 <context>
     <name>cw::gui::GuardedApplication</name>
@@ -1840,6 +1844,14 @@ p = %7   v = %8</translation>
     <message>
         <source>comparison</source>
         <translation>Vergleich</translation>
+    </message>
+    <message>
+        <source>F_s</source>
+        <translation>F_s</translation>
+    </message>
+    <message>
+        <source>%1, step %2</source>
+        <translation>%1, Schrittweite %2</translation>
     </message>
 </context>
 <context>

@@ -1,7 +1,7 @@
 // cyclewright-cli evaluate CASE.json [--set path.to.key=VALUE ...] [--format json|csv|text]
 #include "common/error.h"
 #include "common/version.h"
-#include "engine/evaluate.h"
+#include "evaluation/evaluate.h"
 #include "io/case_file.h"
 #include "io/result_export.h"
 #include "output.h"

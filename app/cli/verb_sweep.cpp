@@ -7,9 +7,9 @@
 // already run are printed, the rest are marked not-run, and the exit status is 130.
 #include "common/error.h"
 #include "io/case_file.h"
-#include "io/study_export.h"
 #include "output.h"
 #include "study/study_columns.h"
+#include "study/study_export.h"
 #include "study/trade_study.h"
 #include "verbs.h"
 

@@ -2,10 +2,10 @@
 
 namespace cw::components {
 
-Compressor::Result Compressor::exit(const engine::TotalState& entry) const {
+Compressor::Result Compressor::exit(const stream::TotalState& entry) const {
   const thermo::Gas& gas = *entry.gas;
   Result result;
-  engine::TotalState& out = result.exit;
+  stream::TotalState& out = result.exit;
   out.gas = entry.gas;
   out.pressure = entry.pressure * inputs_.pressureRatio;
   const Change compression = change(gas, entry.temperature, entry.pressure, out.pressure,

@@ -8,28 +8,28 @@
 // Compressor power P_c = W2 w_c: the bled air is compressed fully before it leaves
 // (Walsh and Fletcher, Gas Turbine Performance, 2nd ed., 2004, sec. 5.2.3; common practice).
 
+#include "components/compressor_inputs.h"
 #include "components/efficiency.h"
-#include "engine/case_inputs.h"
-#include "engine/station.h"
+#include "stream/station.h"
 
 namespace cw::components {
 
 class Compressor {
  public:
   struct Result {
-    engine::TotalState exit;     ///< station 3, after the bleed
+    stream::TotalState exit;     ///< station 3, after the bleed
     double specificWork = 0.0;   ///< ht3 - ht2 [J/kg]
     double power = 0.0;          ///< W2 (ht3 - ht2) [W]
     double bleedMassFlow = 0.0;  ///< [kg/s]
     EfficiencyPair efficiency;   ///< both bases, one given and one derived [-]
   };
 
-  explicit Compressor(const engine::CompressorInputs& inputs) : inputs_(inputs) {}
+  explicit Compressor(const CompressorInputs& inputs) : inputs_(inputs) {}
 
-  Result exit(const engine::TotalState& entry) const;
+  Result exit(const stream::TotalState& entry) const;
 
  private:
-  engine::CompressorInputs inputs_;
+  CompressorInputs inputs_;
 };
 
 }  // namespace cw::components

@@ -3,7 +3,7 @@
 //   ht_out = ht_in,  pt_out = pt_in (1 - dp/p)
 // (Walsh and Fletcher, Gas Turbine Performance, 2nd ed., 2004, sec. 5.11; common practice.)
 
-#include "engine/station.h"
+#include "stream/station.h"
 
 namespace cw::components {
 
@@ -11,8 +11,8 @@ class Duct {
  public:
   explicit Duct(double pressureLossFraction) : pressureLossFraction_(pressureLossFraction) {}
 
-  engine::TotalState exit(const engine::TotalState& entry) const {
-    engine::TotalState out = entry;
+  stream::TotalState exit(const stream::TotalState& entry) const {
+    stream::TotalState out = entry;
     out.pressure = entry.pressure * (1.0 - pressureLossFraction_);
     return out;
   }

@@ -19,14 +19,12 @@
 // way a derived efficiency within the rounding of its states of 1 is 1 (the second law bounds
 // it by 1), so derived efficiencies stay in (0, 1].
 
-#include "engine/case_inputs.h"
+#include "components/efficiency_inputs.h"
 #include "thermo/gas.h"
 
 #include <optional>
 
 namespace cw::components {
-
-using engine::EfficiencyBasis;
 
 /// The efficiency of a change on both bases.
 struct EfficiencyPair {

@@ -20,14 +20,14 @@ double massPerAir(const thermo::GasModel& model, double f) {
 }
 }  // namespace
 
-double HeatAddition::residual(const engine::TotalState& entry, double df, double exitTemperature) const {
+double HeatAddition::residual(const stream::TotalState& entry, double df, double exitTemperature) const {
   const double f1 = entry.fuelAirRatio;
   const double fuelTerm = model_.fuelEnthalpy() - (1.0 - combustionEfficiency_) * model_.lowerHeatingValue();
   return massPerAir(model_, f1) * entry.enthalpy + df * fuelTerm -
          model_.productEnthalpyPerUnitAir(exitTemperature, f1 + df);
 }
 
-HeatAddition::Result HeatAddition::toExitTemperature(const engine::TotalState& entry,
+HeatAddition::Result HeatAddition::toExitTemperature(const stream::TotalState& entry,
                                                      double exitTemperature) const {
   const double f1 = entry.fuelAirRatio;
   requireHeating(entry, exitTemperature);
@@ -68,7 +68,7 @@ HeatAddition::Result HeatAddition::toExitTemperature(const engine::TotalState& e
   return finish(entry, df, exitTemperature);
 }
 
-HeatAddition::Result HeatAddition::withFuelAirRatio(const engine::TotalState& entry, double df) const {
+HeatAddition::Result HeatAddition::withFuelAirRatio(const stream::TotalState& entry, double df) const {
   const double f1 = entry.fuelAirRatio;
   if (f1 + df > model_.stoichiometricFuelAirRatio())
     throw NoSolution(name_,
@@ -86,7 +86,7 @@ HeatAddition::Result HeatAddition::withFuelAirRatio(const engine::TotalState& en
   return finish(entry, df, exitTemperature);
 }
 
-void HeatAddition::requireHeating(const engine::TotalState& entry, double exitTemperature) const {
+void HeatAddition::requireHeating(const stream::TotalState& entry, double exitTemperature) const {
   // Burning heats the stream. On the two-gamma model, whose product gas holds more heat per kelvin
   // than the air, a small fuel flow could otherwise "burn" to a lower temperature than the entry's.
   if (!(exitTemperature > entry.temperature))
@@ -97,14 +97,14 @@ void HeatAddition::requireHeating(const engine::TotalState& entry, double exitTe
                      {kReasonOnlyHeats, {}, {{exitTemperature, "K"}, {entry.temperature, "K"}}, {}});
 }
 
-HeatAddition::Result HeatAddition::finish(const engine::TotalState& entry, double df,
+HeatAddition::Result HeatAddition::finish(const stream::TotalState& entry, double df,
                                           double exitTemperature) const {
   const double f1 = entry.fuelAirRatio;
   const double airFlow = entry.massFlow / massPerAir(model_, f1);
   Result result;
   result.addedFuelAirRatio = df;
   result.fuelMassFlow = df * airFlow;
-  engine::TotalState& out = result.exit;
+  stream::TotalState& out = result.exit;
   out.gas = model_.productsEntering(f1 + df, *entry.gas, entry.temperature, entry.pressure);
   out.temperature = exitTemperature;
   out.enthalpy = out.gas->enthalpy(exitTemperature);

@@ -11,7 +11,7 @@
 // refined by secant steps. Given f, it is solved for T_out through T(h).
 // Pressure: pt_out = pt_in (1 - dp/p).
 
-#include "engine/station.h"
+#include "stream/station.h"
 #include "thermo/gas_model.h"
 
 namespace cw::components {
@@ -19,7 +19,7 @@ namespace cw::components {
 class HeatAddition {
  public:
   struct Result {
-    engine::TotalState exit;
+    stream::TotalState exit;
     double fuelMassFlow = 0.0;       ///< fuel added here [kg/s]
     double addedFuelAirRatio = 0.0;  ///< df, per unit of the stream's air [-]
   };
@@ -30,15 +30,15 @@ class HeatAddition {
 
   /// Heats the stream to the exit temperature; NoSolution when that needs a rich mixture
   /// or would take heat out. [K]
-  Result toExitTemperature(const engine::TotalState& entry, double exitTemperature) const;
+  Result toExitTemperature(const stream::TotalState& entry, double exitTemperature) const;
   /// Burns the given fuel-air ratio df (per unit of the stream's air).
-  Result withFuelAirRatio(const engine::TotalState& entry, double addedFuelAirRatio) const;
+  Result withFuelAirRatio(const stream::TotalState& entry, double addedFuelAirRatio) const;
 
  private:
-  double residual(const engine::TotalState& entry, double df, double exitTemperature) const;
+  double residual(const stream::TotalState& entry, double df, double exitTemperature) const;
   /// Throws cw::NoSolution unless the exit is hotter than the entry.
-  void requireHeating(const engine::TotalState& entry, double exitTemperature) const;
-  Result finish(const engine::TotalState& entry, double df, double exitTemperature) const;
+  void requireHeating(const stream::TotalState& entry, double exitTemperature) const;
+  Result finish(const stream::TotalState& entry, double df, double exitTemperature) const;
 
   std::string name_;
   const thermo::GasModel& model_;

@@ -6,7 +6,7 @@
 
 namespace cw::components {
 
-Inlet::Inlet(const engine::InletInputs& inputs) : inputs_(inputs) {}
+Inlet::Inlet(const InletInputs& inputs) : inputs_(inputs) {}
 
 double Inlet::supersonicRecovery(double mach) {
   if (mach <= 1.0) return 1.0;
@@ -14,10 +14,10 @@ double Inlet::supersonicRecovery(double mach) {
   return 1.0 - 0.075 * std::pow(mach - 1.0, 1.35);
 }
 
-engine::TotalState Inlet::exit(const engine::Station& freeStream) const {
+stream::TotalState Inlet::exit(const stream::Station& freeStream) const {
   const thermo::Gas& gas = *freeStream.gas;
   double recoveredPressure = 0.0;
-  if (inputs_.lossBasis == engine::InletLossBasis::PressureRecovery) {
+  if (inputs_.lossBasis == InletLossBasis::PressureRecovery) {
     recoveredPressure = inputs_.loss * freeStream.totalPressure;
   } else {
     const double h0 = gas.enthalpy(freeStream.staticTemperature);
@@ -28,10 +28,10 @@ engine::TotalState Inlet::exit(const engine::Station& freeStream) const {
         std::exp((gas.standardEntropy(isentropicT) - gas.standardEntropy(freeStream.staticTemperature)) /
                  gas.gasConstant());
   }
-  if (inputs_.supersonicRecoveryRule == engine::SupersonicRecoveryRule::MilE5008B)
+  if (inputs_.supersonicRecoveryRule == SupersonicRecoveryRule::MilE5008B)
     recoveredPressure *= supersonicRecovery(freeStream.mach);
 
-  engine::TotalState exit;
+  stream::TotalState exit;
   exit.gas = freeStream.gas;
   exit.temperature = freeStream.totalTemperature;
   exit.enthalpy = freeStream.totalEnthalpy;

@@ -12,23 +12,23 @@
 //   eta_spec = 1 - 0.075 (M0 - 1)^1.35,  1 < M0 < 5
 // (Mattingly, Elements of Propulsion, 2006, eq. 7.13, quoting MIL-E-5008B).
 
-#include "engine/case_inputs.h"
-#include "engine/station.h"
+#include "components/inlet_inputs.h"
+#include "stream/station.h"
 
 namespace cw::components {
 
 class Inlet {
  public:
-  explicit Inlet(const engine::InletInputs& inputs);
+  explicit Inlet(const InletInputs& inputs);
 
   /// Total state at the engine face (station 2) from the free stream (station 0).
-  engine::TotalState exit(const engine::Station& freeStream) const;
+  stream::TotalState exit(const stream::Station& freeStream) const;
 
   /// The MIL-E-5008B supersonic recovery at flight Mach number M0 (1 at or below Mach 1). [-]
   static double supersonicRecovery(double mach);
 
  private:
-  engine::InletInputs inputs_;
+  InletInputs inputs_;
 };
 
 }  // namespace cw::components

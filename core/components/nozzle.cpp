@@ -24,7 +24,7 @@ struct SectionState {
 
 class Expander {
  public:
-  Expander(const engine::TotalState& entry, double velocityCoefficient)
+  Expander(const stream::TotalState& entry, double velocityCoefficient)
       : entry_(entry), gas_(*entry.gas), cv_(velocityCoefficient) {}
 
   SectionState at(double pressure) const {
@@ -55,7 +55,7 @@ class Expander {
   }
 
  private:
-  const engine::TotalState& entry_;
+  const stream::TotalState& entry_;
   const thermo::Gas& gas_;
   double cv_;
 };
@@ -64,7 +64,7 @@ class Expander {
 /// expansion: rho9 V9 = rho* V* / (A9/A8), p9 in (p_lowest, p*). The actual mass flux falls
 /// monotonically below p* (its maximum lies at or above p*, at p* only without losses).
 double exitPressureOfAreaRatio(const Expander& expander, const Expander::Sonic& throat, double ratio,
-                               const engine::TotalState& entry) {
+                               const stream::TotalState& entry) {
   const thermo::Gas& gas = *entry.gas;
   const double target = throat.density * throat.velocity / ratio;
   auto flux = [&](double p) {
@@ -109,7 +109,7 @@ void requireSupersonicExit(const thermo::Gas& gas, const SectionState& exit, dou
 
 }  // namespace
 
-Nozzle::Result Nozzle::expand(const engine::TotalState& entry, double ambientPressure) const {
+Nozzle::Result Nozzle::expand(const stream::TotalState& entry, double ambientPressure) const {
   const thermo::Gas& gas = *entry.gas;
   if (!(entry.pressure > ambientPressure))
     throw NoSolution("nozzle",
@@ -118,15 +118,14 @@ Nozzle::Result Nozzle::expand(const engine::TotalState& entry, double ambientPre
                          " Pa, so there is no jet",
                      {kReasonNozzleNoJet, {}, {{entry.pressure, "Pa"}, {ambientPressure, "Pa"}}, {}});
   Result result;
-  result.velocityCoefficient = inputs_.lossBasis == engine::NozzleLossBasis::VelocityCoefficient
-                                   ? inputs_.loss
-                                   : std::sqrt(inputs_.loss);
+  result.velocityCoefficient =
+      inputs_.lossBasis == NozzleLossBasis::VelocityCoefficient ? inputs_.loss : std::sqrt(inputs_.loss);
   const Expander expander(entry, result.velocityCoefficient);
   const Expander::Sonic throat = expander.sonic();
   result.choked = ambientPressure < throat.pressure;
 
   auto makeStation = [&](const char* id, double pressure, double temperature, double velocity) {
-    engine::Station st;
+    stream::Station st;
     st.id = id;
     st.gas = entry.gas;
     st.totalTemperature = entry.temperature;
@@ -156,7 +155,7 @@ Nozzle::Result Nozzle::expand(const engine::TotalState& entry, double ambientPre
   SectionState exit{};
   const SectionState sonicExit{throat.isentropicTemperature, throat.temperature, throat.velocity,
                                throat.density};
-  const auto* fixed = std::get_if<engine::FixedAreaRatioNozzle>(&inputs_.geometry);
+  const auto* fixed = std::get_if<FixedAreaRatioNozzle>(&inputs_.geometry);
   if (fixed && fixed->exitToThroatAreaRatio > 1.0) {
     if (!(throat.pressure > 0.0))
       throw NoSolution("nozzle",
@@ -167,7 +166,7 @@ Nozzle::Result Nozzle::expand(const engine::TotalState& entry, double ambientPre
     exitPressure = exitPressureOfAreaRatio(expander, throat, fixed->exitToThroatAreaRatio, entry);
     exit = expander.at(exitPressure);
     requireSupersonicExit(gas, exit, exitPressure, ambientPressure, fixed->exitToThroatAreaRatio);
-  } else if (result.choked && !std::holds_alternative<engine::FullyExpandingNozzle>(inputs_.geometry)) {
+  } else if (result.choked && !std::holds_alternative<FullyExpandingNozzle>(inputs_.geometry)) {
     exitPressure = throat.pressure;  // convergent, or an area ratio of 1
     exit = sonicExit;
   } else {

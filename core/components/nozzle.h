@@ -38,29 +38,29 @@
 // fixed and the pressure thrust (p* - p0) W R T* / (p* V*) falls with p*.
 
 #include "components/efficiency.h"
-#include "engine/case_inputs.h"
-#include "engine/station.h"
+#include "components/nozzle_inputs.h"
+#include "stream/station.h"
 
 namespace cw::components {
 
 class Nozzle {
  public:
   struct Result {
-    engine::Station throat;    ///< station 8, area = geometric throat area
-    engine::Station exit;      ///< station 9, area = geometric exit area
+    stream::Station throat;    ///< station 8, area = geometric throat area
+    stream::Station exit;      ///< station 9, area = geometric exit area
     double grossThrust = 0.0;  ///< [N]
     bool choked = false;
     double velocityCoefficient = 1.0;  ///< C_V [-]
     EfficiencyPair efficiency;         ///< eta_n on both bases (polytropic over the expansion) [-]
   };
 
-  explicit Nozzle(const engine::NozzleInputs& inputs) : inputs_(inputs) {}
+  explicit Nozzle(const NozzleInputs& inputs) : inputs_(inputs) {}
 
   /// Expands the stream at station 7 against the ambient static pressure p0. [Pa]
-  Result expand(const engine::TotalState& entry, double ambientPressure) const;
+  Result expand(const stream::TotalState& entry, double ambientPressure) const;
 
  private:
-  engine::NozzleInputs inputs_;
+  NozzleInputs inputs_;
 };
 
 }  // namespace cw::components

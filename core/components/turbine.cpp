@@ -6,7 +6,7 @@
 
 namespace cw::components {
 
-Turbine::Result Turbine::exit(const engine::TotalState& entry, double compressorPower) const {
+Turbine::Result Turbine::exit(const stream::TotalState& entry, double compressorPower) const {
   const thermo::Gas& gas = *entry.gas;
   const double shaftPower = compressorPower + inputs_.powerOfftake;
   const double specificWork = shaftPower / (inputs_.mechanicalEfficiency * entry.massFlow);
@@ -18,7 +18,7 @@ Turbine::Result Turbine::exit(const engine::TotalState& entry, double compressor
                          " J/kg, more than the gas at " + messageNumber(entry.temperature) + " K holds",
                      {kReasonTurbineCannotDrive, {}, {{specificWork, "J/kg"}, {entry.temperature, "K"}}, {}});
   Result result;
-  engine::TotalState& out = result.exit;
+  stream::TotalState& out = result.exit;
   out.gas = entry.gas;
   out.enthalpy = exitEnthalpy;
   out.temperature = gas.temperatureFromEnthalpy(exitEnthalpy);

@@ -10,27 +10,27 @@
 // result is cw::NoSolution: "the turbine cannot drive the compressor".
 
 #include "components/efficiency.h"
-#include "engine/case_inputs.h"
-#include "engine/station.h"
+#include "components/turbine_inputs.h"
+#include "stream/station.h"
 
 namespace cw::components {
 
 class Turbine {
  public:
   struct Result {
-    engine::TotalState exit;    ///< station 5
+    stream::TotalState exit;    ///< station 5
     double specificWork = 0.0;  ///< ht4 - ht5 [J/kg]
     double power = 0.0;         ///< W4 (ht4 - ht5) [W]
     EfficiencyPair efficiency;  ///< both bases [-]
   };
 
-  explicit Turbine(const engine::TurbineInputs& inputs) : inputs_(inputs) {}
+  explicit Turbine(const TurbineInputs& inputs) : inputs_(inputs) {}
 
   /// Expands the stream so that it delivers the compressor power plus the offtake. [W]
-  Result exit(const engine::TotalState& entry, double compressorPower) const;
+  Result exit(const stream::TotalState& entry, double compressorPower) const;
 
  private:
-  engine::TurbineInputs inputs_;
+  TurbineInputs inputs_;
 };
 
 }  // namespace cw::components

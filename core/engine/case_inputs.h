@@ -1,5 +1,5 @@
 #pragma once
-// The inputs of one turbojet design-point case: plain structs, SI units, no behaviour.
+// The inputs of one turbojet design-point case (single or two spools): plain structs, SI units, no behaviour.
 //
 // The defaults describe a sensible lossy single-spool turbojet at sea-level static on a
 // standard day (invented round numbers, common practice, no source): pressure ratio 10,
@@ -17,28 +17,48 @@
 // docs/case-format.md; the case file (core/io/case_file.h) maps every field to a JSON key
 // that carries the SI unit in its name.
 
+#include "atmosphere/ambient_inputs.h"
+#include "components/compressor_inputs.h"
+#include "components/duct_inputs.h"
+#include "components/efficiency_inputs.h"
+#include "components/heat_addition_inputs.h"
+#include "components/inlet_inputs.h"
+#include "components/nozzle_inputs.h"
+#include "components/turbine_inputs.h"
+#include "engine/gas_model_inputs.h"
+#include "thermo/fuel_inputs.h"
+
 #include <string>
 #include <variant>
 
 namespace cw::engine {
 
+// The case's vocabulary in cw::engine: each part's inputs live beside what they describe (the
+// components' in components/<name>_inputs.h, the ambient state beside the atmosphere, the fuel in
+// thermo/fuel_inputs.h, the gas-model choice beside its factory) and are named here as well.
+using atmosphere::GivenAmbient;
+using atmosphere::StandardAtmosphereAmbient;
+using components::AfterburnerInputs;
+using components::BurnerInputs;
+using components::CompressorInputs;
+using components::ConvergentNozzle;
+using components::DuctInputs;
+using components::Efficiency;
+using components::EfficiencyBasis;
+using components::ExitTemperatureSetting;
+using components::FixedAreaRatioNozzle;
+using components::FuelAirRatioSetting;
+using components::FullyExpandingNozzle;
+using components::InletInputs;
+using components::InletLossBasis;
+using components::NozzleInputs;
+using components::NozzleLossBasis;
+using components::SupersonicRecoveryRule;
+using components::TurbineInputs;
+using thermo::FuelInputs;
+
 // ---------------------------------------------------------------------------------------------
 // Flight condition
-
-/// Ambient state from the U.S. Standard Atmosphere 1976 with a temperature offset.
-struct StandardAtmosphereAmbient {
-  double altitude = 0.0;           ///< [m], geopotential unless geometricAltitude
-  bool geometricAltitude = false;  ///< altitude is geometric (true) or geopotential (false)
-  double isaOffset = 0.0;          ///< added to the standard temperature, pressure unchanged [K]
-  bool operator==(const StandardAtmosphereAmbient&) const = default;
-};
-
-/// Ambient static state given directly (e.g. a test-cell or measured day).
-struct GivenAmbient {
-  double temperature = 288.15;  ///< static temperature [K]
-  double pressure = 101325.0;   ///< static pressure [Pa]
-  bool operator==(const GivenAmbient&) const = default;
-};
 
 struct FlightInputs {
   std::variant<StandardAtmosphereAmbient, GivenAmbient> ambient;
@@ -66,154 +86,6 @@ struct DesignInputs {
 };
 
 // ---------------------------------------------------------------------------------------------
-// Fuel: a hydrocarbon C H_y, burnt completely
-
-struct FuelInputs {
-  double lowerHeatingValue = 43.0e6;  ///< at 298.15 K [J/kg]
-  double hydrogenCarbonRatio = 1.9;   ///< molar H/C ratio y of C H_y [-]
-  double temperature = 298.15;        ///< delivery temperature at the burner [K]
-  bool operator==(const FuelInputs&) const = default;
-};
-
-// ---------------------------------------------------------------------------------------------
-// Gas model
-
-/// One cp and gamma everywhere.
-struct ConstantCpGasModel {
-  double cp = 1004.0;  ///< [J/(kg K)]
-  double gamma = 1.4;  ///< [-]
-  bool operator==(const ConstantCpGasModel&) const = default;
-};
-
-/// Air values up to the burner, product values after it (the textbook model).
-struct TwoGammaGasModel {
-  double coldCp = 1004.0;    ///< [J/(kg K)]
-  double coldGamma = 1.4;    ///< [-]
-  double hotCp = 1239.0;     ///< [J/(kg K)]
-  double hotGamma = 1.3333;  ///< [-]
-  bool operator==(const TwoGammaGasModel&) const = default;
-};
-
-/// NASA 7-coefficient species data, air plus complete-combustion products, frozen.
-struct ThermallyPerfectGasModel {
-  bool operator==(const ThermallyPerfectGasModel&) const = default;
-};
-
-struct GasModelInputs {
-  std::variant<ThermallyPerfectGasModel, ConstantCpGasModel, TwoGammaGasModel> model;
-  /// Leave the fuel's mass out of the flow; allowed only for the constant-cp and two-gamma models.
-  bool neglectFuelMass = false;
-  bool operator==(const GasModelInputs&) const = default;
-};
-
-// ---------------------------------------------------------------------------------------------
-// Components
-
-/// How the inlet's total-pressure loss is given.
-enum class InletLossBasis {
-  PressureRecovery,  ///< pt2 / pt0
-  RamEfficiency,     ///< (h(T at pt2, s0) - h0) / (ht0 - h0): the fraction of the ram rise kept
-};
-
-/// A multiplier on the inlet's recovery above flight Mach 1.
-enum class SupersonicRecoveryRule {
-  None,       ///< no shock loss beyond the given recovery
-  MilE5008B,  ///< 1 - 0.075 (M0 - 1)^1.35 for 1 < M0 < 5 (military specification MIL-E-5008B)
-};
-
-struct InletInputs {
-  InletLossBasis lossBasis = InletLossBasis::PressureRecovery;
-  double loss = 0.98;  ///< pressure recovery or ram efficiency, per lossBasis [-]
-  SupersonicRecoveryRule supersonicRecoveryRule = SupersonicRecoveryRule::None;
-  bool operator==(const InletInputs&) const = default;
-};
-
-/// How a turbomachine's efficiency is given; the other one is derived.
-enum class EfficiencyBasis { Isentropic, Polytropic };
-
-struct Efficiency {
-  EfficiencyBasis basis = EfficiencyBasis::Isentropic;
-  double value = 0.85;  ///< [-]
-  bool operator==(const Efficiency&) const = default;
-};
-
-struct CompressorInputs {
-  double pressureRatio = 10.0;  ///< pt3 / pt2 [-]
-  Efficiency efficiency{EfficiencyBasis::Isentropic, 0.85};
-  double bleedFraction = 0.0;  ///< bled off at compressor exit, per unit of inlet air [-]
-  bool operator==(const CompressorInputs&) const = default;
-};
-
-struct ExitTemperatureSetting {
-  double exitTemperature = 1400.0;  ///< Tt4 [K]
-  bool operator==(const ExitTemperatureSetting&) const = default;
-};
-
-struct FuelAirRatioSetting {
-  double fuelAirRatio = 0.02;  ///< fuel per unit of burner air [-]
-  bool operator==(const FuelAirRatioSetting&) const = default;
-};
-
-struct BurnerInputs {
-  std::variant<ExitTemperatureSetting, FuelAirRatioSetting> setting;
-  double pressureLossFraction = 0.05;  ///< 1 - pt4 / pt3 [-]
-  double combustionEfficiency = 0.99;  ///< fraction of the heating value released [-]
-  bool operator==(const BurnerInputs&) const = default;
-};
-
-struct TurbineInputs {
-  Efficiency efficiency{EfficiencyBasis::Isentropic, 0.88};
-  double mechanicalEfficiency = 0.99;  ///< compressor power / turbine power, shaft losses [-]
-  double powerOfftake = 0.0;           ///< shaft power taken for accessories [W]
-  bool operator==(const TurbineInputs&) const = default;
-};
-
-/// A duct between components (the jet pipe from turbine exit to nozzle entry).
-struct DuctInputs {
-  double pressureLossFraction = 0.02;  ///< 1 - pt_out / pt_in [-]
-  bool operator==(const DuctInputs&) const = default;
-};
-
-/// The afterburner: lit (enabled) or not. Unlit, its duct loses pressureLossFractionUnlit;
-/// the default 0 describes an engine without afterburner hardware.
-struct AfterburnerInputs {
-  bool enabled = false;                    ///< lit
-  double exitTemperature = 2000.0;         ///< Tt7 when lit [K]
-  double pressureLossFractionLit = 0.05;   ///< 1 - pt_out / pt_in when lit [-]
-  double pressureLossFractionUnlit = 0.0;  ///< 1 - pt_out / pt_in when not lit [-]
-  double combustionEfficiency = 0.95;      ///< when lit [-]
-  bool operator==(const AfterburnerInputs&) const = default;
-};
-
-/// A convergent nozzle: exit at the throat, choked or expanded to ambient pressure.
-struct ConvergentNozzle {
-  bool operator==(const ConvergentNozzle&) const = default;
-};
-
-/// A convergent-divergent nozzle whose exit area expands the jet fully to ambient pressure.
-struct FullyExpandingNozzle {
-  bool operator==(const FullyExpandingNozzle&) const = default;
-};
-
-/// A convergent-divergent nozzle of fixed exit-to-throat area ratio.
-struct FixedAreaRatioNozzle {
-  double exitToThroatAreaRatio = 1.5;  ///< A9 / A8 [-]
-  bool operator==(const FixedAreaRatioNozzle&) const = default;
-};
-
-/// How the nozzle's expansion loss is given.
-enum class NozzleLossBasis {
-  VelocityCoefficient,   ///< V9 / V9,ideal
-  IsentropicEfficiency,  ///< (ht7 - h9) / (ht7 - h9,ideal)
-};
-
-struct NozzleInputs {
-  std::variant<ConvergentNozzle, FullyExpandingNozzle, FixedAreaRatioNozzle> geometry;
-  NozzleLossBasis lossBasis = NozzleLossBasis::VelocityCoefficient;
-  double loss = 0.98;                  ///< velocity coefficient or isentropic efficiency [-]
-  double dischargeCoefficient = 0.98;  ///< actual / ideal throat mass flow [-]
-  bool operator==(const NozzleInputs&) const = default;
-};
 
 /// Inputs of the engine-face sizing (station 2 area and diameter).
 struct SizingInputs {
@@ -223,8 +95,41 @@ struct SizingInputs {
 };
 
 // ---------------------------------------------------------------------------------------------
+// Architecture: which network of components the case describes
 
-/// One design-point case of a single-spool turbojet.
+/// The engine's architecture. Each names a topology (the components, streams, shafts and
+/// nozzles); the case holds the inputs of every role a topology may use, and a role's inputs
+/// apply only to the architectures that have it.
+enum class Architecture {
+  Turbojet,          ///< single spool: compressor and turbine on one shaft
+  TwoSpoolTurbojet,  ///< LP compressor and turbine on the LP shaft, HP ones on the HP shaft
+};
+
+/// The roles of the case's compressor and turbine inputs by architecture (one place; the
+/// registry of parameters and the topologies name roles through it):
+///   Turbojet:          compressor -> "compressor", turbine -> "turbine";
+///   TwoSpoolTurbojet:  lowPressureCompressor -> "low_pressure_compressor",
+///                      compressor -> "high_pressure_compressor",
+///                      turbine -> "high_pressure_turbine",
+///                      lowPressureTurbine -> "low_pressure_turbine".
+/// Defaults of the low-pressure spool (invented round numbers, common practice, no source): a
+/// new two-spool case splits an overall pressure ratio of 10 as 2.5 (LP) times 4 (HP), setting
+/// the HP compressor's ratio where the case is created.
+inline CompressorInputs defaultLowPressureCompressor() {
+  CompressorInputs lp;
+  lp.pressureRatio = 2.5;
+  lp.efficiency = Efficiency{EfficiencyBasis::Isentropic, 0.87};
+  return lp;
+}
+inline TurbineInputs defaultLowPressureTurbine() {
+  TurbineInputs lp;
+  lp.efficiency = Efficiency{EfficiencyBasis::Isentropic, 0.89};
+  return lp;
+}
+
+// ---------------------------------------------------------------------------------------------
+
+/// One design-point case of a turbojet (single or two spools, per architecture).
 struct Case {
   std::string title;
   std::string notes;
@@ -240,6 +145,11 @@ struct Case {
   AfterburnerInputs afterburner;
   NozzleInputs nozzle;
   SizingInputs sizing;
+  Architecture architecture = Architecture::Turbojet;
+  /// Two-spool turbojet only: the LP compressor (pt25 / pt2) and the LP turbine; `compressor`
+  /// and `turbine` are then the high-pressure ones.
+  CompressorInputs lowPressureCompressor = defaultLowPressureCompressor();
+  TurbineInputs lowPressureTurbine = defaultLowPressureTurbine();
   bool operator==(const Case&) const = default;
 };
 

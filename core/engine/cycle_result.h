@@ -4,13 +4,17 @@
 
 #include "components/efficiency.h"
 #include "engine/process_path.h"
-#include "engine/station.h"
+#include "stream/station.h"
 
 #include <optional>
 #include <string>
 #include <vector>
 
 namespace cw::engine {
+
+// The gas path's stations and total states (stream/station.h), named in the engine's results.
+using stream::Station;
+using stream::TotalState;
 
 struct Performance {
   double netThrust = 0.0;                      ///< F_n = F_g - D_ram [N]

@@ -8,10 +8,10 @@
 #include "components/inlet.h"
 #include "components/nozzle.h"
 #include "components/turbine.h"
+#include "engine/gas_model_factory.h"
 #include "engine/process_paths.h"
 #include "flow/compressible_flow.h"
 #include "solve/newton_solver.h"
-#include "thermo/gas_model_factory.h"
 
 #include <cmath>
 #include <limits>
@@ -40,7 +40,7 @@ FreeStream freeStreamOf(const FlightInputs& flight) {
 Turbojet::Turbojet(const Case& inputs, bool withPaths)
     : inputs_(inputs),
       withPaths_(withPaths),
-      gasModel_(thermo::makeGasModel(inputs.gasModel, inputs.fuel, inputs.flight.specificHumidity)) {}
+      gasModel_(makeGasModel(inputs.gasModel, inputs.fuel, inputs.flight.specificHumidity)) {}
 
 namespace {
 

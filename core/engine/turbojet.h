@@ -39,7 +39,7 @@ class Turbojet {
 };
 
 /// The design point of a validated case, as Turbojet(inputs, withPaths).evaluate() gives it, on a gas
-/// model built for the case's gas model inputs, fuel and humidity (thermo::makeGasModel), without
+/// model built for the case's gas model inputs, fuel and humidity (makeGasModel), without
 /// a copy of the case: for callers that evaluate a case and its variants on one gas model.
 CycleResult evaluateTurbojet(const Case& inputs, const thermo::GasModel& gasModel, bool withPaths = true);
 

@@ -4,7 +4,7 @@
 #include "common/thread_pool.h"
 #include "engine/case_validation.h"
 #include "engine/case_validation_error.h"
-#include "engine/evaluate.h"
+#include "evaluation/evaluate.h"
 #include "io/case_field_setter.h"
 #include "io/case_file.h"
 #include "io/case_keys.h"

@@ -1,6 +1,6 @@
 #pragma once
 // Trade studies: a sweep varies one numeric case input over a range, a carpet varies two. Each
-// point is a full design-point evaluation with its ideal twin (engine/evaluate.h), optionally
+// point is a full design-point evaluation with its ideal twin (evaluation/evaluate.h), optionally
 // with the one-at-a-time loss audit (analysis/loss_audit.h). A point without a cycle is kept
 // with its status and reason, and the study goes on.
 //

@@ -1,5 +1,5 @@
 // cyclewright-cli evaluate: JSON, CSV and text output, --set overrides and exit statuses.
-#include "engine/evaluate.h"
+#include "evaluation/evaluate.h"
 #include "io/case_file.h"
 #include "io/result_export.h"
 

@@ -4,7 +4,7 @@
 #include "common/error.h"
 #include "common/version.h"
 #include "io/case_file.h"
-#include "io/study_export.h"
+#include "study/study_export.h"
 #include "study/trade_study.h"
 
 #include <QJsonArray>

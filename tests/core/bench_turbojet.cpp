@@ -2,7 +2,7 @@
 // model without paths on the development machine, so that a 100x100 carpet reaches 100 000 points
 // per second per core; the with-paths row must not get slower). Run with -callgrind for stable
 // counts (which is why it has a core application object: QTEST_GUILESS_MAIN).
-#include "engine/evaluate.h"
+#include "evaluation/evaluate.h"
 #include "io/case_file.h"
 
 #include <QTest>

@@ -41,8 +41,8 @@
 
 using namespace cw;
 using components::EfficiencyBasis;
-using engine::Station;
-using engine::TotalState;
+using stream::Station;
+using stream::TotalState;
 using thermo::ConstantCpGas;
 
 namespace {
@@ -102,27 +102,28 @@ double entropyRise(const TotalState& in, const TotalState& out) {
   return out.gas->entropy(out.temperature, out.pressure) - in.gas->entropy(in.temperature, in.pressure);
 }
 
-engine::InletInputs inletInputs(engine::InletLossBasis basis, double loss,
-                                engine::SupersonicRecoveryRule rule = engine::SupersonicRecoveryRule::None) {
-  engine::InletInputs inputs;
+components::InletInputs inletInputs(
+    components::InletLossBasis basis, double loss,
+    components::SupersonicRecoveryRule rule = components::SupersonicRecoveryRule::None) {
+  components::InletInputs inputs;
   inputs.lossBasis = basis;
   inputs.loss = loss;
   inputs.supersonicRecoveryRule = rule;
   return inputs;
 }
 
-engine::CompressorInputs compressorInputs(double pressureRatio, EfficiencyBasis basis, double efficiency,
-                                          double bleed = 0.0) {
-  engine::CompressorInputs inputs;
+components::CompressorInputs compressorInputs(double pressureRatio, EfficiencyBasis basis, double efficiency,
+                                              double bleed = 0.0) {
+  components::CompressorInputs inputs;
   inputs.pressureRatio = pressureRatio;
   inputs.efficiency = {basis, efficiency};
   inputs.bleedFraction = bleed;
   return inputs;
 }
 
-engine::TurbineInputs turbineInputs(EfficiencyBasis basis, double efficiency, double mechanical = 1.0,
-                                    double offtake = 0.0) {
-  engine::TurbineInputs inputs;
+components::TurbineInputs turbineInputs(EfficiencyBasis basis, double efficiency, double mechanical = 1.0,
+                                        double offtake = 0.0) {
+  components::TurbineInputs inputs;
   inputs.efficiency = {basis, efficiency};
   inputs.mechanicalEfficiency = mechanical;
   inputs.powerOfftake = offtake;
@@ -171,7 +172,7 @@ class TestComponents : public QObject {
     const auto air = constantCp(1004.0, 1.4);
     const Station s0 = freeStream(air, 216.7, 19330.0, mach);
     const TotalState t2 =
-        components::Inlet(inletInputs(engine::InletLossBasis::PressureRecovery, recovery)).exit(s0);
+        components::Inlet(inletInputs(components::InletLossBasis::PressureRecovery, recovery)).exit(s0);
     QVERIFY2(relNear(t2.pressure, recovery * s0.totalPressure, 1e-14),
              describe("pt2", t2.pressure, recovery * s0.totalPressure));
     QCOMPARE(t2.enthalpy, s0.totalEnthalpy);
@@ -208,7 +209,7 @@ class TestComponents : public QObject {
     const double T0 = 216.7, p0 = 19330.0;
     const Station s0 = freeStream(air, T0, p0, mach);
     const TotalState t2 =
-        components::Inlet(inletInputs(engine::InletLossBasis::RamEfficiency, efficiency)).exit(s0);
+        components::Inlet(inletInputs(components::InletLossBasis::RamEfficiency, efficiency)).exit(s0);
     const double expected =
         p0 * std::pow(1.0 + efficiency * 0.5 * (gamma - 1.0) * mach * mach, gamma / (gamma - 1.0));
     QVERIFY2(relNear(t2.pressure, expected, 1e-12), describe("pt2", t2.pressure, expected));
@@ -239,8 +240,8 @@ class TestComponents : public QObject {
     // Through the inlet: it multiplies the given recovery.
     const auto air = constantCp(1004.0, 1.4);
     const Station s0 = freeStream(air, 216.7, 19330.0, mach);
-    const TotalState t2 = components::Inlet(inletInputs(engine::InletLossBasis::PressureRecovery, 0.97,
-                                                        engine::SupersonicRecoveryRule::MilE5008B))
+    const TotalState t2 = components::Inlet(inletInputs(components::InletLossBasis::PressureRecovery, 0.97,
+                                                        components::SupersonicRecoveryRule::MilE5008B))
                               .exit(s0);
     QVERIFY(std::abs(t2.pressure / s0.totalPressure - 0.97 * expected) <= 1e-9);
   }
@@ -251,8 +252,8 @@ class TestComponents : public QObject {
     QVERIFY_THROWS_EXCEPTION(InvalidInput, components::Inlet::supersonicRecovery(5.0));
     const auto air = constantCp(1004.0, 1.4);
     const Station s0 = freeStream(air, 288.15, 101325.0, 0.9);
-    const TotalState t2 = components::Inlet(inletInputs(engine::InletLossBasis::PressureRecovery, 0.98,
-                                                        engine::SupersonicRecoveryRule::MilE5008B))
+    const TotalState t2 = components::Inlet(inletInputs(components::InletLossBasis::PressureRecovery, 0.98,
+                                                        components::SupersonicRecoveryRule::MilE5008B))
                               .exit(s0);
     QVERIFY(relNear(t2.pressure, 0.98 * s0.totalPressure, 1e-14));
   }

@@ -2,7 +2,7 @@
 // the same parts (ErrorDetail: reason key, numbers in SI with their units, valid range) for a
 // front end that writes its own message.
 #include "common/error.h"
-#include "engine/evaluate.h"
+#include "evaluation/evaluate.h"
 #include "io/case_file.h"
 
 #include <QTest>

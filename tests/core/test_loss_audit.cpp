@@ -4,8 +4,8 @@
 #include "analysis/loss_catalogue.h"
 #include "common/error.h"
 #include "engine/case_validation_error.h"
-#include "engine/evaluate.h"
 #include "engine/turbojet.h"
+#include "evaluation/evaluate.h"
 #include "io/case_file.h"
 
 #include <QTest>

@@ -30,9 +30,9 @@
 #include <variant>
 
 using namespace cw;
-using engine::NozzleInputs;
-using engine::NozzleLossBasis;
-using engine::TotalState;
+using components::NozzleInputs;
+using components::NozzleLossBasis;
+using stream::TotalState;
 
 namespace {
 
@@ -62,10 +62,10 @@ TotalState entry(std::shared_ptr<const thermo::Gas> gas, double pt, double Tt = 
   return t;
 }
 
-NozzleInputs nozzle(
-    std::variant<engine::ConvergentNozzle, engine::FullyExpandingNozzle, engine::FixedAreaRatioNozzle>
-        geometry,
-    double velocityCoefficient, double discharge = 1.0) {
+NozzleInputs nozzle(std::variant<components::ConvergentNozzle, components::FullyExpandingNozzle,
+                                 components::FixedAreaRatioNozzle>
+                        geometry,
+                    double velocityCoefficient, double discharge = 1.0) {
   return NozzleInputs{geometry, NozzleLossBasis::VelocityCoefficient, velocityCoefficient, discharge};
 }
 
@@ -96,7 +96,7 @@ class TestNozzle : public QObject {
     QFETCH(double, efficiency);
     const auto gas = gasOf(kCp, kGamma);
     const double R = kCp * (kGamma - 1) / kGamma, pt = 300e3, p0 = 50e3, discharge = 0.97;
-    const components::Nozzle n(nozzle(engine::ConvergentNozzle{}, std::sqrt(efficiency), discharge));
+    const components::Nozzle n(nozzle(components::ConvergentNozzle{}, std::sqrt(efficiency), discharge));
     const auto r = n.expand(entry(gas, pt), p0);
     QVERIFY(r.choked);
     QCOMPARE(r.throat.mach, 1.0);  // exactly: V8 = a(T8)
@@ -118,7 +118,7 @@ class TestNozzle : public QObject {
   void unchokedConvergentExpandsToAmbient() {
     const auto gas = gasOf(kCp, kGamma);
     const double R = kCp * (kGamma - 1) / kGamma, pt = 80e3, p0 = 50e3, cv = 0.97;
-    const auto r = components::Nozzle(nozzle(engine::ConvergentNozzle{}, cv)).expand(entry(gas, pt), p0);
+    const auto r = components::Nozzle(nozzle(components::ConvergentNozzle{}, cv)).expand(entry(gas, pt), p0);
     QVERIFY(!r.choked);
     const double V9 = exitVelocity(pt, p0, cv), T9 = kTt - V9 * V9 / (2 * kCp);
     QCOMPARE(r.exit.staticPressure, p0);
@@ -138,9 +138,9 @@ class TestNozzle : public QObject {
     QVERIFY(std::abs(pt / criticalPressure(pt, 1.0) - 1.8526) < 1e-4);
     QVERIFY(std::abs(pt / criticalPressure(pt, 0.95) - 1.9191) < 1e-4);
     const auto ideal =
-        components::Nozzle(nozzle(engine::ConvergentNozzle{}, 1.0)).expand(entry(gas, pt), 50e3);
-    const auto lossy =
-        components::Nozzle(nozzle(engine::ConvergentNozzle{}, std::sqrt(0.95))).expand(entry(gas, pt), 50e3);
+        components::Nozzle(nozzle(components::ConvergentNozzle{}, 1.0)).expand(entry(gas, pt), 50e3);
+    const auto lossy = components::Nozzle(nozzle(components::ConvergentNozzle{}, std::sqrt(0.95)))
+                           .expand(entry(gas, pt), 50e3);
     QVERIFY(ideal.choked);
     QVERIFY(!lossy.choked);
     QVERIFY(lossy.exit.mach < 1.0);
@@ -150,7 +150,7 @@ class TestNozzle : public QObject {
   void thrustIsContinuousAtChoking() {
     const auto gas = gasOf(kCp, kGamma);
     const double pt = 200e3, eta = 0.93, pStar = criticalPressure(pt, eta);
-    const components::Nozzle n(nozzle(engine::ConvergentNozzle{}, std::sqrt(eta)));
+    const components::Nozzle n(nozzle(components::ConvergentNozzle{}, std::sqrt(eta)));
     const auto below = n.expand(entry(gas, pt), pStar * (1 - 1e-9));
     const auto above = n.expand(entry(gas, pt), pStar * (1 + 1e-9));
     QVERIFY(below.choked && !above.choked);
@@ -173,7 +173,7 @@ class TestNozzle : public QObject {
     QFETCH(double, tableAreaRatio);
     const double g = 1.4, cp = 1004.0, p0 = 20e3;
     const double pt = p0 * std::pow(1 + 0.2 * mach * mach, 3.5);
-    const auto r = components::Nozzle(nozzle(engine::FullyExpandingNozzle{}, 1.0, 0.98))
+    const auto r = components::Nozzle(nozzle(components::FullyExpandingNozzle{}, 1.0, 0.98))
                        .expand(entry(gasOf(cp, g), pt, 900.0), p0);
     QVERIFY(r.choked);
     QCOMPARE(r.throat.mach, 1.0);
@@ -189,8 +189,8 @@ class TestNozzle : public QObject {
   void lossyFullExpansion() {
     const auto gas = gasOf(kCp, kGamma);
     const double pt = 400e3, p0 = 30e3, eta = 0.94;
-    const auto r =
-        components::Nozzle(nozzle(engine::FullyExpandingNozzle{}, std::sqrt(eta))).expand(entry(gas, pt), p0);
+    const auto r = components::Nozzle(nozzle(components::FullyExpandingNozzle{}, std::sqrt(eta)))
+                       .expand(entry(gas, pt), p0);
     QCOMPARE(r.throat.mach, 1.0);
     QVERIFY(relNear(r.throat.staticPressure, criticalPressure(pt, eta), 1e-12));
     QCOMPARE(r.exit.staticPressure, p0);
@@ -206,7 +206,7 @@ class TestNozzle : public QObject {
   void fixedAreaRatio() {
     const double g = 1.4, cp = 1004.0, pt = 500e3, p0 = 40e3;
     const auto gas = gasOf(cp, g);
-    const engine::FixedAreaRatioNozzle geometry{1.6875};
+    const components::FixedAreaRatioNozzle geometry{1.6875};
     const auto ideal = components::Nozzle(nozzle(geometry, 1.0, 0.96)).expand(entry(gas, pt, 900.0), p0);
     QVERIFY(relNear(ideal.exit.mach, 2.0, 1e-9));
     QVERIFY(relNear(ideal.exit.staticPressure, pt / std::pow(1.8, 3.5), 1e-9));
@@ -229,10 +229,10 @@ class TestNozzle : public QObject {
     const auto gas = gasOf(kCp, kGamma);
     for (double pt : {80e3, 300e3}) {
       const auto byVelocity =
-          components::Nozzle(nozzle(engine::ConvergentNozzle{}, 0.96)).expand(entry(gas, pt), 50e3);
+          components::Nozzle(nozzle(components::ConvergentNozzle{}, 0.96)).expand(entry(gas, pt), 50e3);
       const auto byEfficiency =
-          components::Nozzle(NozzleInputs{engine::ConvergentNozzle{}, NozzleLossBasis::IsentropicEfficiency,
-                                          0.96 * 0.96, 1.0})
+          components::Nozzle(NozzleInputs{components::ConvergentNozzle{},
+                                          NozzleLossBasis::IsentropicEfficiency, 0.96 * 0.96, 1.0})
               .expand(entry(gas, pt), 50e3);
       QVERIFY(relNear(byEfficiency.grossThrust, byVelocity.grossThrust, 1e-14));
       QVERIFY(relNear(byEfficiency.exit.staticPressure, byVelocity.exit.staticPressure, 1e-14));
@@ -244,8 +244,9 @@ class TestNozzle : public QObject {
   void dischargeCoefficientEnlargesTheGeometricAreas() {
     const auto gas = gasOf(kCp, kGamma);
     for (const auto& geometry :
-         {NozzleInputs{engine::ConvergentNozzle{}, NozzleLossBasis::VelocityCoefficient, 0.97, 1.0},
-          NozzleInputs{engine::FixedAreaRatioNozzle{1.4}, NozzleLossBasis::VelocityCoefficient, 0.97, 1.0}}) {
+         {NozzleInputs{components::ConvergentNozzle{}, NozzleLossBasis::VelocityCoefficient, 0.97, 1.0},
+          NozzleInputs{components::FixedAreaRatioNozzle{1.4}, NozzleLossBasis::VelocityCoefficient, 0.97,
+                       1.0}}) {
       NozzleInputs withLoss = geometry;
       withLoss.dischargeCoefficient = 0.95;
       const auto one = components::Nozzle(geometry).expand(entry(gas, 300e3), 50e3);
@@ -263,10 +264,10 @@ class TestNozzle : public QObject {
   void thrustRisesWithTheVelocityCoefficient() {
     const auto gas = gasOf(kCp, kGamma);
     for (double pt : {70e3, 95e3, 150e3, 600e3}) {
-      for (const auto& geometry :
-           {nozzle(engine::ConvergentNozzle{}, 1.0, 0.97), nozzle(engine::FullyExpandingNozzle{}, 1.0, 0.97),
-            nozzle(engine::FixedAreaRatioNozzle{1.3}, 1.0, 0.97)}) {
-        const bool fixedRatio = std::holds_alternative<engine::FixedAreaRatioNozzle>(geometry.geometry);
+      for (const auto& geometry : {nozzle(components::ConvergentNozzle{}, 1.0, 0.97),
+                                   nozzle(components::FullyExpandingNozzle{}, 1.0, 0.97),
+                                   nozzle(components::FixedAreaRatioNozzle{1.3}, 1.0, 0.97)}) {
+        const bool fixedRatio = std::holds_alternative<components::FixedAreaRatioNozzle>(geometry.geometry);
         double previous = 0.0;
         bool wasChoked = false, solved = false;
         for (int k = 1; k <= 200; ++k) {
@@ -300,7 +301,7 @@ class TestNozzle : public QObject {
   // (below 4.5 p9 = 0.5751 pt) the exit stays supersonic; at 0.6 pt a shock would stand inside.
   void shockInsideAFixedAreaRatioIsRefused() {
     const auto gas = gasOf(1004.0, 1.4);
-    const components::Nozzle n(nozzle(engine::FixedAreaRatioNozzle{1.6875}, 1.0));
+    const components::Nozzle n(nozzle(components::FixedAreaRatioNozzle{1.6875}, 1.0));
     const double pt = 100e3, p9 = pt / std::pow(1.8, 3.5);
     QVERIFY(std::abs(4.5 * p9 / pt - 0.5751) < 1e-4);
     const auto outside = n.expand(entry(gas, pt, 900.0), 0.55 * pt);  // overexpanded, shocks outside
@@ -322,7 +323,7 @@ class TestNozzle : public QObject {
     const thermo::ThermallyPerfectModel model(thermo::HydrocarbonFuel::keroseneLike());
     const auto gas = model.products(0.02);
     for (double eta : {1.0, 0.95, 0.85}) {
-      const auto r = components::Nozzle(nozzle(engine::ConvergentNozzle{}, std::sqrt(eta)))
+      const auto r = components::Nozzle(nozzle(components::ConvergentNozzle{}, std::sqrt(eta)))
                          .expand(entry(gas, 250e3), 40e3);
       QVERIFY(r.choked);
       QCOMPARE(r.throat.mach, 1.0);
@@ -337,13 +338,13 @@ class TestNozzle : public QObject {
     const auto gas = gasOf(kCp, kGamma);
     QVERIFY_THROWS_EXCEPTION(
         cw::NoSolution,
-        components::Nozzle(nozzle(engine::ConvergentNozzle{}, 0.98)).expand(entry(gas, 50e3), 50e3));
+        components::Nozzle(nozzle(components::ConvergentNozzle{}, 0.98)).expand(entry(gas, 50e3), 50e3));
     QVERIFY_THROWS_EXCEPTION(
         cw::NoSolution,
-        components::Nozzle(nozzle(engine::ConvergentNozzle{}, 5e-324)).expand(entry(gas, 300e3), 50e3));
+        components::Nozzle(nozzle(components::ConvergentNozzle{}, 5e-324)).expand(entry(gas, 300e3), 50e3));
     // A small but representable coefficient gives a small, finite thrust.
     const auto slow =
-        components::Nozzle(nozzle(engine::ConvergentNozzle{}, 1e-3)).expand(entry(gas, 300e3), 50e3);
+        components::Nozzle(nozzle(components::ConvergentNozzle{}, 1e-3)).expand(entry(gas, 300e3), 50e3);
     QVERIFY(std::isfinite(slow.grossThrust) && slow.grossThrust > 0.0 && !slow.choked);
     QVERIFY(relNear(slow.grossThrust, kW * exitVelocity(300e3, 50e3, 1e-3), 1e-9));
   }

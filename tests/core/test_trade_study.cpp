@@ -1,18 +1,18 @@
 // Trade studies: sweeps and carpets (core/study), the case-field setters they use
 // (core/io/case_field_setter.h), the thread pool (core/common/thread_pool.h) and the study files
-// (core/io/study_export.h).
+// (core/study/study_export.h).
 #include "analysis/ideal_twin.h"
 #include "analysis/loss_audit.h"
 #include "analysis/loss_catalogue.h"
 #include "common/error.h"
 #include "common/thread_pool.h"
 #include "engine/case_validation_error.h"
-#include "engine/evaluate.h"
+#include "evaluation/evaluate.h"
 #include "io/case_field_setter.h"
 #include "io/case_file.h"
 #include "io/case_keys.h"
-#include "io/study_export.h"
 #include "study/study_columns.h"
+#include "study/study_export.h"
 #include "study/trade_study.h"
 
 #include <QTest>

@@ -4,10 +4,10 @@
 #include "analysis/ideal_twin.h"
 #include "common/error.h"
 #include "components/inlet.h"
-#include "engine/evaluate.h"
 #include "engine/isobars.h"
 #include "engine/process_paths.h"
 #include "engine/turbojet.h"
+#include "evaluation/evaluate.h"
 #include "thermo/constant_cp_gas.h"
 
 #include <QTest>

@@ -4,7 +4,7 @@
 // Build and run: scripts/fuzz.sh (DEVELOPERS.md, "Fuzzing").
 #include "common/error.h"
 #include "common/text.h"
-#include "engine/evaluate.h"
+#include "evaluation/evaluate.h"
 #include "io/case_file.h"
 
 #include <cmath>

@@ -9,7 +9,7 @@
 #include "tables/performance_model.h"
 #include "tables/station_table_model.h"
 
-#include "engine/evaluate.h"
+#include "evaluation/evaluate.h"
 #include "io/case_file.h"
 
 #include <qwt_plot_curve.h>

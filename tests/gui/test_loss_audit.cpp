@@ -18,7 +18,7 @@
 
 #include "analysis/loss_audit.h"
 #include "common/version.h"
-#include "engine/evaluate.h"
+#include "evaluation/evaluate.h"
 
 #include <qwt_scale_widget.h>
 #include <qwt_text.h>

@@ -14,7 +14,7 @@
 #include "tables/station_table_model.h"
 
 #include "common/error.h"
-#include "engine/evaluate.h"
+#include "evaluation/evaluate.h"
 #include "io/case_file.h"
 
 #include <qwt_plot_curve.h>

@@ -25,12 +25,13 @@
 
 #include "common/version.h"
 #include "io/case_file.h"
-#include "io/study_export.h"
 #include "study/study_columns.h"
+#include "study/study_export.h"
 #include "study/trade_study.h"
 
 #include <qwt_plot_curve.h>
 #include <qwt_plot_marker.h>
+#include <qwt_scale_widget.h>
 #include <qwt_symbol.h>
 #include <qwt_text.h>
 
@@ -41,6 +42,7 @@
 #include <QComboBox>
 #include <QDockWidget>
 #include <QFile>
+#include <QFontMetricsF>
 #include <QHeaderView>
 #include <QImage>
 #include <QLabel>
@@ -287,6 +289,71 @@ class TestTradeStudy : public QObject {
       QVERIFY(near(pts[static_cast<std::size_t>(i)].y(), want.at(i, 2).actual.thermalEfficiency));
     }
     QCOMPARE(curve->label, QString("1500 K"));
+  }
+
+  void carpetLabelsStayClearAtSmallAndLargeSizes() {
+    // The user guide's carpet (pressure ratio 4 to 24 in 11, Tt4 1100 to 1700 K in 7) with the
+    // ideal twin, whose lines of constant pressure ratio converge at the top left: the panel
+    // alone at 600 x 400 and 1800 x 1050. No two labels meet; none leaves the canvas or covers
+    // the design point's star, its label or the legend; the first and last line of every
+    // family, the ideal twin's too, are labelled; the legend gives each family's step.
+    MainWindow window;
+    window.setUnitSystem(cw::gui::UnitSystem::SI);
+    QVERIFY(window.openCase(kDemo));
+    TradeStudyPanel* panel = window.tradeStudyPanel();
+    QVERIFY(panel->setAxes(
+        {{"compressor.pressure_ratio", 4.0, 24.0, 11}, {"burner.exit_temperature_K", 1100.0, 1700.0, 7}}));
+    panel->setComparison(cw::gui::StudyOverlay::IdealTwin);
+    QVERIFY(runAndWait(panel));
+    QDockWidget* dock = window.tradeStudyDock();
+    dock->setWidget(nullptr);
+    panel->setParent(nullptr);
+    StudyChart* chart = panel->chart();
+    for (const QSize size : {QSize(600, 400), QSize(1800, 1050)}) {
+      panel->resize(size);
+      panel->show();
+      QVERIFY(QTest::qWaitForWindowExposed(panel));
+      for (int i = 0; i < 4; ++i) QApplication::processEvents();
+      chart->grab();
+      const QString at = QString("%1 x %2: ").arg(size.width()).arg(size.height());
+      const cw::gui::LineEndLabels* labels = chart->lineLabels();
+      QCOMPARE(labels->labelCount(), 2 * (11 + 7));
+      const auto& rects = labels->placedRects();
+      const QRectF canvas = labels->canvasRect();
+      QVERIFY(!labels->obstacleRects().empty());  // the star and its label
+      for (std::size_t i = 0; i < rects.size(); ++i) {
+        QVERIFY2(canvas.contains(rects[i]), qPrintable(at + labels->placedTexts()[i]));
+        for (std::size_t k = i + 1; k < rects.size(); ++k)
+          QVERIFY2(!rects[i].intersects(rects[k]),
+                   qPrintable(at + labels->placedTexts()[i] + " meets " + labels->placedTexts()[k]));
+        for (const QRectF& o : labels->obstacleRects())
+          QVERIFY2(!rects[i].intersects(o), qPrintable(at + labels->placedTexts()[i] + " covers a marker"));
+      }
+      const auto& ids = labels->placedIds();
+      for (const Family family : {Family::ConstantFirst, Family::ConstantSecond})
+        for (const bool overlay : {false, true}) {
+          const auto lines = linesOf(chart, family, overlay);
+          QVERIFY(lines.size() >= 2);
+          for (const StudyChart::Line* line : {lines.front(), lines.back()}) {
+            const int id = static_cast<int>(line - chart->lines().data());
+            QVERIFY2(std::find(ids.begin(), ids.end(), id) != ids.end(),
+                     qPrintable(at + line->label + (overlay ? " (ideal)" : "") + " not labelled"));
+          }
+        }
+    }
+    QVERIFY(linesOf(chart, Family::ConstantFirst, false)
+                .front()
+                ->curves.front()
+                ->title()
+                .text()
+                .endsWith("step 2"));
+    QVERIFY(linesOf(chart, Family::ConstantSecond, false)
+                .front()
+                ->curves.front()
+                ->title()
+                .text()
+                .endsWith("step 100 K"));
+    dock->setWidget(panel);
   }
 
   void designPointSitsAtTheCasesFigures() {
@@ -671,6 +738,100 @@ class TestTradeStudy : public QObject {
     window.setUnitSystem(cw::gui::UnitSystem::SI);
     QCOMPARE(axis->startEdit()->text(), QString("2"));
     QCOMPARE(axis->stopEdit()->text(), QString("6"));
+  }
+
+  void tableShowsValuesAtTheirDisplayPrecision() {
+    // Inputs and outputs at their quantity's display precision (DisplayUnits::displayDigits: 4
+    // significant digits for ratios, 5 for the rest), the unit in the header; the copy keeps
+    // full precision. 1 K = 1.8 °R, lbf s/lbm = 4.4482216152605 N / 0.45359237 kg s (NIST SP 811,
+    // units.h).
+    MainWindow window;
+    QVERIFY(window.openCase(kDemo));
+    window.setUnitSystem(cw::gui::UnitSystem::SI);
+    TradeStudyPanel* panel = window.tradeStudyPanel();
+    const std::vector<SweepAxis> axes = {{"compressor.pressure_ratio", 4.0, 12.0, 4},
+                                         {"burner.exit_temperature_K", 1100.0, 1750.0, 4}};
+    QVERIFY(panel->setAxes(axes));
+    QVERIFY(runAndWait(panel));
+    const auto* model = panel->model();
+    const TradeStudy& s = *panel->study();
+    auto text = [&](int row, int column) { return model->index(row, column).data().toString(); };
+    // Row 5 is (6.6667, 1316.6667 K): the grid's second values, the second input fastest.
+    QVERIFY(near(s.points[5].inputs[0], 4.0 + 8.0 / 3.0) &&
+            near(s.points[5].inputs[1], 1100.0 + 650.0 / 3.0));
+    QCOMPARE(text(5, 0), QString("6.667"));   // not 6.666666667
+    QCOMPARE(text(5, 1), QString("1316.7"));  // not 1316.6666667
+    QCOMPARE(text(0, 0), QString("4.000"));
+    QCOMPARE(text(0, 1), QString("1100.0"));
+    QVERIFY(model->headerData(1, Qt::Horizontal).toString().endsWith("[K]"));
+    QVERIFY(model->headerData(3, Qt::Horizontal).toString().endsWith("[N·s/kg]"));
+    QVERIFY(model->headerData(4, Qt::Horizontal).toString().endsWith("[g/(kN·s)]"));
+    // Specific thrust in the hundreds: two decimals; TSFC in the tens: three.
+    const double fs = s.points[5].actual.specificThrust,
+                 tsfc = s.points[5].actual.thrustSpecificFuelConsumption;
+    QVERIFY(fs > 100.0 && fs < 1000.0 && tsfc * 1e6 > 10.0 && tsfc * 1e6 < 100.0);
+    QCOMPARE(text(5, 3).section('.', 1).size(), 2);
+    QVERIFY(std::fabs(text(5, 3).toDouble() - fs) <= 0.005 + 1e-9);
+    QCOMPARE(text(5, 4).section('.', 1).size(), 3);
+    QVERIFY(std::fabs(text(5, 4).toDouble() - tsfc * 1e6) <= 0.0005 + 1e-9);
+
+    window.setUnitSystem(cw::gui::UnitSystem::USCustomary);
+    QCOMPARE(text(5, 1), QString("2370.0"));  // 1316.6667 K x 1.8
+    QCOMPARE(text(0, 1), QString("1980.0"));
+    QCOMPARE(text(5, 0), QString("6.667"));  // a ratio is the same in both
+    QVERIFY(model->headerData(1, Qt::Horizontal).toString().endsWith("[°R]"));
+    QVERIFY(model->headerData(3, Qt::Horizontal).toString().endsWith("[lbf·s/lbm]"));
+    const double fsUs = fs / (4.4482216152605 / 0.45359237);  // tens of lbf s/lbm: three decimals
+    QVERIFY(fsUs > 10.0 && fsUs < 100.0);
+    QCOMPARE(text(5, 3).section('.', 1).size(), 3);
+    QVERIFY(std::fabs(text(5, 3).toDouble() - fsUs) <= 0.0005 + 1e-9);
+
+    // The copy: display units, full precision (reads back to the same double).
+    const QStringList lines = panel->model()->toTabSeparated().split('\n', Qt::SkipEmptyParts);
+    QVERIFY(lines[2].contains("[°R]"));
+    const QStringList cells = lines[3 + 5].split('\t');
+    QVERIFY(near(cells[0].toDouble(), s.points[5].inputs[0], 1e-15));
+    QVERIFY(near(cells[1].toDouble(), s.points[5].inputs[1] * 1.8, 1e-15));
+    QVERIFY(near(cells[3].toDouble(), fsUs, 1e-14));
+    window.setUnitSystem(cw::gui::UnitSystem::SI);
+  }
+
+  void axisTitlesFitASmallPanel() {
+    // The panel alone at 600 x 400 (as --screenshot-of trade-study takes it): the value axis is
+    // shorter than "Specific thrust F_s [N·s/kg]", which Qwt wrapped and cut; the chart takes the
+    // longest form whose text is no longer than the axis.
+    MainWindow window;
+    window.setUnitSystem(cw::gui::UnitSystem::SI);
+    QVERIFY(window.openCase(kDemo));
+    TradeStudyPanel* panel = window.tradeStudyPanel();
+    QVERIFY(panel->setAxes(kCarpet));
+    panel->setComparison(cw::gui::StudyOverlay::IdealTwin);
+    QVERIFY(runAndWait(panel));
+    QDockWidget* dock = window.tradeStudyDock();
+    dock->setWidget(nullptr);
+    panel->setParent(nullptr);
+    panel->resize(600, 400);
+    panel->show();
+    QVERIFY(QTest::qWaitForWindowExposed(panel));
+    for (int i = 0; i < 4; ++i) QApplication::processEvents();
+    StudyChart* chart = panel->chart();
+    for (const QwtAxisId axis : {QwtAxis::YLeft, QwtAxis::XBottom}) {
+      const QwtText title = chart->axisTitle(axis);
+      const QwtScaleWidget* scale = chart->axisWidget(axis);
+      const double along = axis == QwtAxis::YLeft ? scale->height() : scale->width();
+      const double width = QFontMetricsF(title.font()).horizontalAdvance(title.text());
+      QVERIFY2(width <= along,
+               qPrintable(QString("%1: %2 px on %3 px").arg(title.text()).arg(width).arg(along)));
+      QVERIFY(chart->axisTitleFits(axis));
+    }
+    QVERIFY(chart->axisTitle(QwtAxis::YLeft).text().contains("[N·s/kg]"));  // the unit at least
+    QVERIFY(chart->axisTitle(QwtAxis::YLeft).font().pointSizeF() >= 0.7 * 12.0 - 1e-9);
+    QCOMPARE(chart->axisTitle(QwtAxis::XBottom).text(), QString("TSFC [g/(kN·s)]"));
+    // Large: the whole titles.
+    panel->resize(1400, 900);
+    for (int i = 0; i < 4; ++i) QApplication::processEvents();
+    QCOMPARE(chart->axisTitle(QwtAxis::YLeft).text(), QString("Specific thrust F_s [N·s/kg]"));
+    dock->setWidget(panel);
   }
 
   void editingTheCaseMarksTheStudyStale() {

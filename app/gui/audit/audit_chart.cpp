@@ -318,62 +318,17 @@ QStringList AuditChart::valueAxisTitles() const {
 }
 
 void AuditChart::fitValueAxisTitle(bool whole) {
-  // The longest title that fits along the axis on one line: in the low bottom tab of a laptop
-  // screen the whole one is longer than the axis and was wrapped and cut. The short one is
-  // drawn smaller where it must (down to 70 %), then the unit alone (the chart's title names
-  // the figure).
+  // In the low bottom tab of a laptop screen the whole title is longer than the axis; the unit
+  // alone comes last (the chart's title names the figure).
   QStringList titles = valueAxisTitles();
   titles << units_
                 .withUnit(QString(), figure_ == AuditFigure::Tsfc ? Quantity::Tsfc : Quantity::SpecificThrust)
                 .trimmed();
-  const QwtScaleWidget* axis = axisWidget(QwtAxis::YLeft);
-  const double length =
-      axis->height() - std::max(0, axis->startBorderDist()) - std::max(0, axis->endBorderDist());
-  QFont font = axisTitleFont();
-  if (titleFontSize_ <= 0.0) titleFontSize_ = font.pointSizeF();
-  font.setPointSizeF(titleFontSize_);
-  auto fits = [&](const QString& text, const QFont& f) {
-    return QFontMetricsF(f).horizontalAdvance(text) + 4.0 <= length;
-  };
-  QString chosen = titles.front();
-  QFont chosenFont = font;
-  if (!whole) {
-    bool found = false;
-    for (int i = 0; i < titles.size() && !found; ++i)
-      for (const double scale : {1.0, 0.9, 0.8, 0.7}) {
-        if (scale < 1.0 && i == 0) break;  // the whole title only at full size
-        QFont f = font;
-        f.setPointSizeF(titleFontSize_ * scale);
-        if (fits(titles[i], f)) {
-          chosen = titles[i];
-          chosenFont = f;
-          found = true;
-          break;
-        }
-      }
-    if (!found) {
-      chosen = titles.back();
-      chosenFont.setPointSizeF(titleFontSize_ * 0.7);
-    }
-  }
-  const QwtText current = axisTitle(QwtAxis::YLeft);
-  if (current.text() == chosen && current.font() == chosenFont) return;
-  QwtText title(chosen);
-  title.setFont(chosenFont);
-  setAxisTitle(QwtAxis::YLeft, title);
-}
-
-QFont AuditChart::axisTitleFont() const {
-  const QwtText title = axisWidget(QwtAxis::YLeft)->title();
-  return title.testPaintAttribute(QwtText::PaintUsingTextFont) ? title.font()
-                                                               : axisWidget(QwtAxis::YLeft)->font();
+  fitAxisTitle(QwtAxis::YLeft, titles, whole);
 }
 
 bool AuditChart::valueAxisTitleFits() const {
-  const QwtScaleWidget* axis = axisWidget(QwtAxis::YLeft);
-  const double length =
-      axis->height() - std::max(0, axis->startBorderDist()) - std::max(0, axis->endBorderDist());
-  return QFontMetricsF(axisTitleFont()).horizontalAdvance(axisTitle(QwtAxis::YLeft).text()) + 4.0 <= length;
+  return axisTitleFits(QwtAxis::YLeft);
 }
 
 void AuditChart::setAudit(std::shared_ptr<const analysis::LossAudit> audit, bool stale) {

@@ -94,8 +94,6 @@ class AuditChart : public ChartBase {
   QStringList valueAxisTitles() const;
   /// The longest title that fits the axis's length (whole: the longest, for an export).
   void fitValueAxisTitle(bool whole = false);
-  QFont axisTitleFont() const;
-  double titleFontSize_ = 0.0;  ///< the value axis title's full size [pt] (Qwt's, set once)
 
   DisplayUnits& units_;
   std::shared_ptr<const analysis::LossAudit> audit_;

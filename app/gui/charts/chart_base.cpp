@@ -11,8 +11,10 @@
 #include <qwt_plot_layout.h>
 #include <qwt_plot_legenditem.h>
 #include <qwt_plot_textlabel.h>
+#include <qwt_scale_widget.h>
 
 #include <QEvent>
+#include <QFontMetricsF>
 
 #include <QPen>
 #include <algorithm>
@@ -43,6 +45,58 @@ QColor ChartBase::between(double t) const {
 
 bool ChartBase::darkCanvas() const {
   return palette().color(QPalette::Base).lightness() <= 128;
+}
+
+double ChartBase::axisTitleRoom(QwtAxisId axis) const {
+  const QwtScaleWidget* w = axisWidget(axis);
+  const int along = QwtAxis::isYAxis(axis) ? w->height() : w->width();
+  return along - std::max(0, w->startBorderDist()) - std::max(0, w->endBorderDist()) - 4.0;
+}
+
+QFont ChartBase::axisTitleFont(QwtAxisId axis) const {
+  const QwtText title = axisWidget(axis)->title();
+  return title.testPaintAttribute(QwtText::PaintUsingTextFont) ? title.font() : axisWidget(axis)->font();
+}
+
+void ChartBase::fitAxisTitle(QwtAxisId axis, const QStringList& titles, bool whole) {
+  // A title longer than its axis is wrapped by Qwt and cut at both ends (in a low panel).
+  if (titles.isEmpty()) return;
+  double& fullSize = titleFontSizes_[static_cast<std::size_t>(axis)];
+  QFont font = axisTitleFont(axis);
+  if (fullSize <= 0.0) fullSize = font.pointSizeF();
+  font.setPointSizeF(fullSize);
+  const double room = axisTitleRoom(axis);
+  auto fits = [&](const QString& text, const QFont& f) {
+    return QFontMetricsF(f).horizontalAdvance(text) <= room;
+  };
+  QString chosen = titles.front();
+  QFont chosenFont = font;
+  bool found = whole;
+  for (int i = 0; i < titles.size() && !found; ++i)
+    for (const double scale : {1.0, 0.9, 0.8, 0.7}) {
+      if (scale < 1.0 && i == 0) break;  // the whole title only at full size
+      QFont f = font;
+      f.setPointSizeF(fullSize * scale);
+      if (fits(titles[i], f)) {
+        chosen = titles[i];
+        chosenFont = f;
+        found = true;
+        break;
+      }
+    }
+  if (!found) {
+    chosen = titles.back();
+    chosenFont.setPointSizeF(fullSize * 0.7);
+  }
+  const QwtText current = axisTitle(axis);
+  if (current.text() == chosen && current.font() == chosenFont) return;
+  QwtText title(chosen);
+  title.setFont(chosenFont);
+  setAxisTitle(axis, title);
+}
+
+bool ChartBase::axisTitleFits(QwtAxisId axis) const {
+  return QFontMetricsF(axisTitleFont(axis)).horizontalAdvance(axisTitle(axis).text()) <= axisTitleRoom(axis);
 }
 
 void ChartBase::setStale(bool stale) {
@@ -163,7 +217,9 @@ ExportScope::ExportScope(QwtPlot* plot, const ExportOptions& options)
       palette_(plot->palette()),
       ownPalette_(plot->testAttribute(Qt::WA_SetPalette)),
       font_(plot->font()),
-      ownFont_(plot->testAttribute(Qt::WA_SetFont)) {
+      ownFont_(plot->testAttribute(Qt::WA_SetFont)),
+      plainChartTitle_(plot->title().text()) {
+  if (chart_) chart_->inExport_ = true;
   if (!options_.fontFamily.isEmpty() || options_.fontPointSize > 0.0) {
     QFont font = plot_->font();
     if (!options_.fontFamily.isEmpty()) font.setFamily(options_.fontFamily);
@@ -227,8 +283,14 @@ ExportScope::~ExportScope() {
     plot_->setPalette(QPalette());
     plot_->setAttribute(Qt::WA_SetPalette, false);
   }
+  if (chart_) chart_->inExport_ = false;
   if (chart_) chart_->refresh();
   plot_->replot();
+}
+
+QString ExportScope::plainTitle() const {
+  const QString title = options_.title.isEmpty() ? plainChartTitle_ : options_.title;
+  return options_.subtitle.isEmpty() ? title : title + QStringLiteral(" - ") + options_.subtitle;
 }
 
 void ExportScope::scaleLines(double factor) {

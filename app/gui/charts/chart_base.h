@@ -7,6 +7,8 @@
 //   legend    a legend inside the canvas (QwtPlotLegendItem) or beside it (QwtLegend), in one
 //             style: a smaller font, the palette's colours;
 //   stale     the banner over the canvas while the chart shows a result that is no longer current;
+//   titles    an axis title that fits its axis: the longest of its forms that fits on one line
+//             (fitAxisTitle), the whole one on an export;
 //   export    what an export changes for its duration (ExportScope): a light palette on white,
 //             the caution line as the footer; the chart's beginExport() / endExport() hide what
 //             belongs on screen only.
@@ -20,7 +22,11 @@
 #include <QFont>
 #include <QPalette>
 #include <QPen>
+#include <QStringList>
 
+#include <array>
+
+#include <functional>
 #include <vector>
 
 class QwtLegend;
@@ -51,8 +57,15 @@ class ChartBase : public QwtPlot {
   /// does nothing.
   virtual void beginExport(const ExportOptions& options) { Q_UNUSED(options); }
   virtual void endExport() {}
+  /// Within an export: the chart may place its legend for the export's surface; `drawOnce`
+  /// renders the figure once on that surface (nowhere to be seen), so that the chart learns
+  /// where its items land. The default does nothing.
+  virtual void fitExportLegend(const std::function<void()>& drawOnce) { Q_UNUSED(drawOnce); }
   /// Rebuilds every item from the chart's data in the current palette, font and language.
   virtual void refresh() { replot(); }
+
+  /// Whether an axis's title fits along the axis on one line (tests).
+  bool axisTitleFits(QwtAxisId axis) const;
 
   // For tests.
   const QwtPlotTextLabel* staleBanner() const { return staleLabel_; }
@@ -81,7 +94,15 @@ class ChartBase : public QwtPlot {
   /// Whether the banner is wanted while stale; the default: always.
   virtual bool wantsStaleBanner() const { return true; }
 
+  /// Sets the longest of an axis's `titles` (longest first) that fits along the axis on one
+  /// line: the first at its full size only, the others drawn down to 70 % of it, else the last
+  /// at 70 %. With `whole` (an export, which has the room): the first at full size.
+  void fitAxisTitle(QwtAxisId axis, const QStringList& titles, bool whole = false);
+
   QwtPlotGrid* gridItem() const { return grid_; }
+  /// True while an ExportScope holds the chart (from before it changes anything to after it
+  /// has put everything back but the last refresh).
+  bool inExport() const { return inExport_; }
   /// A legend inside the canvas in the charts' style; the caller attaches it.
   QwtPlotLegendItem* makeLegendItem(Qt::Alignment alignment, int columns, double fontScale);
   /// A legend beside the canvas in the charts' style, inserted at `position`.
@@ -91,15 +112,20 @@ class ChartBase : public QwtPlot {
 
  private:
   void applyBasePalette();
+  /// The length along an axis that its title may take [px].
+  double axisTitleRoom(QwtAxisId axis) const;
+  QFont axisTitleFont(QwtAxisId axis) const;
   void styleLegendItem(QwtPlotLegendItem* legend) const;
 
   bool stale_ = false;
   bool built_ = false;
   bool applyingPalette_ = false;
+  bool inExport_ = false;
   QString staleText_;
   QwtPlotGrid* grid_ = nullptr;
   QwtPlotTextLabel* staleLabel_ = nullptr;
   std::vector<QwtPlotLegendItem*> legendItems_;  ///< styled on every palette change (not owned)
+  std::array<double, QwtAxis::AxisPositions> titleFontSizes_{};  ///< each title's full size [pt] (Qwt's)
 
   friend class ExportScope;
 };
@@ -115,6 +141,9 @@ class ExportScope {
 
   /// The palette of exported figures: near-black on white.
   static QPalette exportPalette();
+  /// The figure's title as plain text, for a document's metadata (an SVG's <title>, a PDF's
+  /// title): the options' title and subtitle, or the chart's own title.
+  QString plainTitle() const;
 
  private:
   void placeLegend(LegendPlacement placement);
@@ -128,6 +157,7 @@ class ExportScope {
   bool ownPalette_;
   QFont font_;
   bool ownFont_;
+  QString plainChartTitle_;  ///< the chart's own title, before the export's rich one
   // The legend as shown, to put back.
   bool hadOuterLegend_ = false;
   QwtPlot::LegendPosition outerPosition_ = QwtPlot::BottomLegend;

@@ -10,7 +10,10 @@
 #include <QDir>
 #include <QFile>
 #include <QFileInfo>
+#include <QPageSize>
 #include <QPainter>
+#include <QPdfWriter>
+#include <QSvgGenerator>
 
 #include <atomic>
 #include <cstdio>
@@ -41,6 +44,55 @@ bool writeThroughTemporary(const QString& fileName, const std::function<bool(con
   return true;
 }
 
+/// The resolution of an SVG's or PDF's raster parts and of its coordinates [dots per inch].
+constexpr int kDocumentDotsPerInch = 85;
+
+/// Lets the chart place its legend for the surface: one draw on a one-pixel image of the
+/// surface's resolution (the layout is that of the whole figure; nothing is kept).
+void fitLegendTo(QwtPlot* plot, const QwtPlotRenderer& renderer, const QRectF& area, int dotsPerInch) {
+  auto* chart = qobject_cast<ChartBase*>(plot);
+  if (!chart) return;
+  chart->fitExportLegend([&] {
+    QImage probe(1, 1, QImage::Format_ARGB32);
+    const int dotsPerMetre = qRound(dotsPerInch / 0.0254);
+    probe.setDotsPerMeterX(dotsPerMetre);
+    probe.setDotsPerMeterY(dotsPerMetre);
+    QPainter painter(&probe);
+    renderer.render(plot, &painter, area);
+  });
+}
+
+/// An SVG or a PDF of the plot at `millimetres`, titled in plain text (QwtPlotRenderer's own
+/// renderDocument would put the rich-text title's markup into the metadata).
+bool renderDocument(QwtPlot* plot, const QwtPlotRenderer& renderer, const QString& path,
+                    const QString& format, QSizeF millimetres, const QString& title) {
+  const QSizeF size = millimetres / 25.4 * kDocumentDotsPerInch;
+  const QRectF area(QPointF(0, 0), size);
+  fitLegendTo(plot, renderer, area, kDocumentDotsPerInch);
+  if (format == QLatin1String("svg")) {
+    QSvgGenerator generator;
+    generator.setTitle(title);
+    generator.setFileName(path);
+    generator.setResolution(kDocumentDotsPerInch);
+    generator.setViewBox(area);
+    QPainter painter(&generator);
+    renderer.render(plot, &painter, area);
+    return painter.end();
+  }
+  if (format == QLatin1String("pdf")) {
+    QPdfWriter writer(path);
+    writer.setPageSize(QPageSize(millimetres, QPageSize::Millimeter));
+    writer.setTitle(title);
+    writer.setPageMargins(QMarginsF());
+    writer.setResolution(kDocumentDotsPerInch);
+    QPainter painter(&writer);
+    if (!painter.isActive()) return false;
+    renderer.render(plot, &painter, area);
+    return painter.end();
+  }
+  return false;
+}
+
 }  // namespace
 
 QImage renderChartImage(QwtPlot* plot, const ExportOptions& options) {
@@ -55,7 +107,9 @@ QImage renderChartImage(QwtPlot* plot, const ExportOptions& options) {
   QwtPlotRenderer renderer;
   renderer.setDiscardFlag(QwtPlotRenderer::DiscardBackground, options.transparent);
   renderer.setDiscardFlag(QwtPlotRenderer::DiscardCanvasBackground, options.transparent);
-  renderer.render(plot, &painter, QRectF(QPointF(0, 0), QSizeF(options.pixels)));
+  const QRectF area(QPointF(0, 0), QSizeF(options.pixels));
+  fitLegendTo(plot, renderer, area, options.dotsPerInch);
+  renderer.render(plot, &painter, area);
   painter.end();
   return image;
 }
@@ -84,8 +138,7 @@ bool exportChartDocument(QwtPlot* plot, const QString& fileName, const QString& 
   renderer.setDiscardFlag(QwtPlotRenderer::DiscardBackground, options.transparent);
   renderer.setDiscardFlag(QwtPlotRenderer::DiscardCanvasBackground, options.transparent);
   return writeThroughTemporary(fileName, [&](const QString& path) {
-    renderer.renderDocument(plot, path, format, options.millimetres(), 85);
-    return true;  // writeThroughTemporary checks that something was written
+    return renderDocument(plot, renderer, path, format, options.millimetres(), scope.plainTitle());
   });
 }
 

@@ -1,8 +1,8 @@
 #pragma once
-// Export of a chart: PNG at a chosen size and resolution, SVG and PDF through QwtPlotRenderer,
-// and an image for the clipboard. Every export goes through an ExportScope (chart_base.h): on
-// white in a light palette, the caution as the chart's footer.
-// No dialogs here, so tests call these directly.
+// Export of a chart: PNG at a chosen size and resolution, SVG and PDF (with a plain-text
+// document title) through QwtPlotRenderer, and an image for the clipboard. Every export goes through an
+// ExportScope (chart_base.h): on white in a light palette, the caution as the chart's footer. No dialogs
+// here, so tests call these directly.
 
 #include "document/export_options.h"
 

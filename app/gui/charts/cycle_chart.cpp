@@ -12,6 +12,7 @@
 #include <qwt_plot_canvas.h>
 #include <qwt_plot_curve.h>
 #include <qwt_plot_grid.h>
+#include <qwt_plot_layout.h>
 #include <qwt_plot_legenditem.h>
 #include <qwt_plot_marker.h>
 #include <qwt_plot_panner.h>
@@ -26,6 +27,7 @@
 
 #include <QCoreApplication>
 #include <QEvent>
+#include <QScopedValueRollback>
 
 #include <algorithm>
 #include <cmath>
@@ -40,6 +42,9 @@ namespace {
 const QColor& kBlue = kOkabeItoBlue;
 const QColor& kOrange = kOkabeItoOrange;
 constexpr qsizetype kBaselineTitleChars = 32;  ///< of the baseline's title in the legend
+constexpr double kBelowLegendRatio = 0.5;      ///< of the chart's height, at most, for a legend below
+constexpr double kStationPickPx = 6.0;         ///< a station is read within this of its marker [px]
+constexpr int kBaselineMarkerPx = 5;           ///< the baseline's station markers [px]
 const QColor& kVermillion = kOkabeItoVermillion;
 
 QColor between(const QPalette& palette, double t) {
@@ -80,7 +85,8 @@ CycleChart::CycleChart(ChartKind kind, DisplayUnits& units, QWidget* parent)
   setMinimumSize(240, 180);
 
   // The legend: inside the canvas of the temperature-entropy and enthalpy-entropy charts, in
-  // the corner the cycle leaves free; below the pressure-volume chart, whose corners it fills.
+  // the corner the cycle leaves free (IsobarLabels::fitLegend at each draw), or below the plot
+  // when none is (fitLegend); below the pressure-volume chart, whose corners it fills.
   if (kind != ChartKind::PressureVolume) {
     // The top left on both: on the sensible enthalpy scale the h-s cycle has the T-s cycle's shape.
     legendItem_ = makeLegendItem(Qt::AlignTop | Qt::AlignLeft, 1, 0.85);
@@ -132,7 +138,7 @@ CycleChart::CycleChart(ChartKind kind, DisplayUnits& units, QWidget* parent)
   baselineCurve_->setItemAttribute(QwtPlotItem::Legend, false);
 
   isobarLabels_ = new IsobarLabels;
-  isobarLabels_->setLegend(legendItem_);
+  isobarLabels_->setLegendAvoids({actual_, ideal_});
   isobarLabels_->setCurves({actual_, ideal_, actualClosure_, idealClosure_});
   isobarLabels_->attach(this);
 
@@ -168,6 +174,9 @@ void CycleChart::refresh() {
 }
 
 void CycleChart::beginExport(const ExportOptions& options) {
+  exportLegend_ = options.legend;
+  // Asked for inside: the chart's own legend, also where the screen has it below the plot.
+  if (legendItem_ && options.legend == LegendPlacement::Inside) legendItem_->setVisible(true);
   // The selection belongs on screen; a figure shows it only when asked to.
   if (!options.selectionHighlight) {
     highlight_->setVisible(false);
@@ -178,6 +187,59 @@ void CycleChart::beginExport(const ExportOptions& options) {
 
 void CycleChart::endExport() {
   updateHighlight();
+}
+
+void CycleChart::fitExportLegend(const std::function<void()>& drawOnce) {
+  // The chart's own legend as shown: inside, in the corner the draw finds freest, or below the
+  // plot when even that corner covers the cycle.
+  if (!legendItem_ || exportLegend_ != LegendPlacement::AsShown) return;
+  setLegendBelow(false);
+  drawOnce();
+  if (isobarLabels_->legendBlocked() && roomBelow(isobarLabels_->canvasRect())) setLegendBelow(true);
+}
+
+void CycleChart::replot() {
+  fitLegend();
+  ChartBase::replot();
+}
+
+void CycleChart::fitLegend() {
+  if (!legendItem_ || fittingLegend_ || inExport()) return;
+  // Judged on the canvas the legend would have inside: as now, or taller by the legend below
+  // (the same canvas either way, so that it does not go back and forth).
+  QRectF area = canvas()->contentsRect();
+  QwtScaleMap xMap = canvasMap(QwtAxis::XBottom), yMap = canvasMap(QwtAxis::YLeft);
+  if (legend()) {
+    const double extra = legend()->height() + plotLayout()->spacing();
+    area.setHeight(area.height() + extra);
+    yMap.setPaintInterval(yMap.p1() + extra, yMap.p2());
+  }
+  if (area.width() < 1.0 || area.height() < 1.0) return;
+  const bool blocked = isobarLabels_->fitLegend(legendItem_, xMap, yMap, area) > 0;
+  setLegendBelow(blocked && roomBelow(area));
+}
+
+bool CycleChart::roomBelow(const QRectF& insideCanvas) const {
+  // The legend below, in two columns as a small chart has them, takes at most this share of
+  // the canvas it would have inside; on a smaller chart it stays inside (in its freest corner):
+  // a plot squeezed to a strip shows nothing.
+  constexpr double kMostBelow = 0.6;
+  const uint columns = legendItem_->maxColumns();
+  legendItem_->setMaxColumns(2);
+  const double height = legendItem_->geometry(insideCanvas).height();
+  legendItem_->setMaxColumns(columns);
+  return height <= kMostBelow * insideCanvas.height();
+}
+
+void CycleChart::setLegendBelow(bool below) {
+  legendItem_->setVisible(!below);
+  if (below == (legend() != nullptr)) return;
+  const QScopedValueRollback guard(fittingLegend_, true);
+  // Three columns of short entries, as the pressure-volume chart's.
+  if (below)
+    insertOuterLegend(QwtPlot::BottomLegend, 3, 0.8);
+  else
+    insertLegend(nullptr);
 }
 
 void CycleChart::staleChanged() {
@@ -254,30 +316,20 @@ void CycleChart::retranslateUi() {
 }
 
 void CycleChart::updateLayout() {
+  // A legend below may take up to half the height (Qwt's default, a third, hides its last
+  // rows behind a scroll bar); roomBelow() keeps it from taking more than the plot can give.
+  if (legendItem_) plotLayout()->setLegendRatio(kBelowLegendRatio);
   ChartBase::updateLayout();  // the axes' lengths first
   fitAxisTitles();            // a changed title asks for another layout, which keeps it
+  fitLegend();                // inside while a corner is free, else below
 }
 
 void CycleChart::fitAxisTitles() {
   // Three charts beside each other on a laptop leave the axes too short for the full titles on
-  // one line (a wrapped title takes a second line from the plot): the brief form then.
-  for (const auto& [axis, titles] :
-       {std::pair{QwtAxis::XBottom, &xTitles_}, std::pair{QwtAxis::YLeft, &yTitles_}}) {
-    if (titles->isEmpty()) continue;
-    const QwtScaleWidget* scale = axisWidget(axis);
-    const QRect area = scale->contentsRect();
-    const double room = axis == QwtAxis::XBottom ? area.width() : area.height();
-    QString wanted = titles->last();
-    QwtText shown = axisTitle(axis);  // the chart's title font and flags
-    for (const QString& title : *titles) {
-      shown.setText(title);
-      if (room <= 0 || shown.textSize(scale->font()).width() <= room) {
-        wanted = title;
-        break;
-      }
-    }
-    if (axisTitle(axis).text() != wanted) setAxisTitle(axis, wanted);
-  }
+  // one line (a wrapped title takes a second line from the plot): ChartBase's one rule picks the
+  // brief form then, drawn smaller where it must be.
+  if (!xTitles_.isEmpty()) fitAxisTitle(QwtAxis::XBottom, xTitles_);
+  if (!yTitles_.isEmpty()) fitAxisTitle(QwtAxis::YLeft, yTitles_);
 }
 
 void CycleChart::clearDynamicItems() {
@@ -291,6 +343,11 @@ void CycleChart::clearDynamicItems() {
     delete m;
   }
   markers_.clear();
+  for (auto* m : baselineMarkers_) {
+    m->detach();
+    delete m;
+  }
+  baselineMarkers_.clear();
   isobarLabels_->setLabels({});
   isobarLabels_->setStations({});
 }
@@ -319,136 +376,196 @@ void CycleChart::setBaseline(std::shared_ptr<const engine::Evaluation> baseline,
 }
 
 void CycleChart::rebuild() {
-  if (baseline_)
-    baselineCurve_->setData(new PathSeries(baseline_, false, cyclePaths(baseline_->actual, false), xValue(),
-                                           yValue(), xScale(), yScale()));
-  else
-    baselineCurve_->setSamples(QVector<QPointF>());
   clearDynamicItems();
-  const double xs = xScale(), ys = yScale();
-  const StateValue xv = xValue(), yv = yValue();
-  if (!evaluation_) {
-    for (auto* c : {actual_, ideal_, actualClosure_, idealClosure_, highlight_, idealHighlight_})
-      c->setSamples(QVector<QPointF>());
+  std::vector<IsobarLabels::Station> stations = showBaseline();
+  if (!showCycles()) {
+    isobarLabels_->setStations(std::move(stations));
     updateStalePens();
     replot();
     return;
   }
+  showIsobars();
+  std::vector<IsobarLabels::Station> own = showStationMarkers();
+  stations.insert(stations.begin(), own.begin(), own.end());
+  isobarLabels_->setStations(std::move(stations));
+  updateHighlight();
+  updateStalePens();
+  if (!zoomer_ || zoomer_->zoomRectIndex() == 0) rescale();
+  replot();
+}
+
+bool CycleChart::showCycles() {
+  if (!evaluation_) {
+    for (auto* c : {actual_, ideal_, actualClosure_, idealClosure_, highlight_, idealHighlight_})
+      c->setSamples(QVector<QPointF>());
+    return false;
+  }
+  const double xs = xScale(), ys = yScale();
+  const StateValue xv = xValue(), yv = yValue();
   const auto& actual = evaluation_->actual;
   const auto& ideal = evaluation_->ideal;
   actual_->setData(new PathSeries(evaluation_, false, cyclePaths(actual, false), xv, yv, xs, ys));
   ideal_->setData(new PathSeries(evaluation_, true, cyclePaths(ideal, false), xv, yv, xs, ys));
   actualClosure_->setData(new PathSeries(evaluation_, false, cyclePaths(actual, true), xv, yv, xs, ys));
   idealClosure_->setData(new PathSeries(evaluation_, true, cyclePaths(ideal, true), xv, yv, xs, ys));
+  return true;
+}
 
+void CycleChart::showIsobars() {
   // Isobars: curves on the T-s and h-s charts, horizontal lines on the p-v chart.
   double tLow = std::numeric_limits<double>::max(), tHigh = 0.0;
-  for (const auto* cycle : {&actual, &ideal})
+  for (const auto* cycle : {&evaluation_->actual, &evaluation_->ideal})
     for (const auto& path : cycle->paths)
       for (const auto& s : path.states) {
         tLow = std::min(tLow, s.temperature);
         tHigh = std::max(tHigh, s.temperature);
       }
-  const std::vector<engine::Isobar> isobars = engine::stationIsobars(actual, 0.85 * tLow, 1.08 * tHigh);
-  const QPen isobarPen(isobarColour(palette()), 1.0, Qt::SolidLine);
+  const std::vector<engine::Isobar> isobars =
+      engine::stationIsobars(evaluation_->actual, 0.85 * tLow, 1.08 * tHigh);
+  std::vector<IsobarLabels::Label> labels;
+  for (const auto& isobar : isobars) {
+    // Every isobar gets a label; IsobarLabels places them on screen clear of each other.
+    IsobarLabels::Label label = isobarLabel(isobar);
+    if (kind_ == ChartKind::PressureVolume)
+      addPressureLine(isobar, label);
+    else if (!addIsobarCurve(isobar, tHigh, label))
+      continue;
+    labels.push_back(std::move(label));
+  }
+  isobarLabels_->setLabels(std::move(labels));
+}
+
+IsobarLabels::Label CycleChart::isobarLabel(const engine::Isobar& isobar) const {
   QFont small = font();
   small.setPointSizeF(small.pointSizeF() * 0.8);
   QColor halo = palette().color(QPalette::Base);
   halo.setAlpha(170);
-  std::vector<IsobarLabels::Label> labels;
-  for (const auto& isobar : isobars) {
-    // Every isobar gets a label; IsobarLabels places them on screen clear of each other.
-    IsobarLabels::Label label;
-    label.text = QwtText(QStringLiteral("p%1 = %2")
-                             .arg(QString::fromStdString(isobar.station),
-                                  units_.format(isobar.pressure, Quantity::Pressure, 4)));
-    label.text.setFont(small);
-    label.text.setColor(isobarLabelColour(palette()));
-    label.text.setBackgroundBrush(halo);
-    if (kind_ == ChartKind::PressureVolume) {
-      // An isobar is a horizontal line; its label sits above it, from the left edge.
-      auto* line = new QwtPlotMarker;
-      line->setLineStyle(QwtPlotMarker::HLine);
-      line->setLinePen(isobarPen);
-      line->setYValue(isobar.pressure / ys);
-      line->setItemAttribute(QwtPlotItem::AutoScale, false);
-      line->setZ(5);
-      line->attach(this);
-      markers_.push_back(line);
-      label.horizontal = true;
-      label.along = {QPointF(0.0, isobar.pressure / ys)};
-      labels.push_back(std::move(label));
-      continue;
-    }
-    auto* curve = new QwtPlotCurve;
-    curve->setPen(isobarPen);
-    curve->setZ(5);
-    curve->setItemAttribute(QwtPlotItem::Legend, false);
-    curve->setItemAttribute(QwtPlotItem::AutoScale, false);
-    QVector<QPointF> points;
-    for (const auto& st : isobar.states) points.append({stateValue(st, xv) / xs, stateValue(st, yv) / ys});
-    curve->setSamples(points);
-    curve->attach(this);
-    isobars_.push_back(curve);
-    if (points.isEmpty()) continue;
-    // The label prefers where the isobar reaches the cycle's highest temperature.
-    label.along.assign(points.begin(), points.end());
-    label.preferred = label.along.size() - 1;
-    for (std::size_t k = 0; k < isobar.states.size(); ++k)
-      if (isobar.states[k].temperature >= tHigh) {
-        label.preferred = k;
-        break;
-      }
-    labels.push_back(std::move(label));
-  }
-  isobarLabels_->setLabels(std::move(labels));
+  IsobarLabels::Label label;
+  label.text = QwtText(QStringLiteral("p%1 = %2")
+                           .arg(QString::fromStdString(isobar.station),
+                                units_.format(isobar.pressure, Quantity::Pressure, 4)));
+  label.text.setFont(small);
+  label.text.setColor(isobarLabelColour(palette()));
+  label.text.setBackgroundBrush(halo);
+  return label;
+}
 
+void CycleChart::addPressureLine(const engine::Isobar& isobar, IsobarLabels::Label& label) {
+  // An isobar is a horizontal line; its label sits above it, from the left edge.
+  const double ys = yScale();
+  auto* line = new QwtPlotMarker;
+  line->setLineStyle(QwtPlotMarker::HLine);
+  line->setLinePen(QPen(isobarColour(palette()), 1.0, Qt::SolidLine));
+  line->setYValue(isobar.pressure / ys);
+  line->setItemAttribute(QwtPlotItem::AutoScale, false);
+  line->setZ(5);
+  line->attach(this);
+  markers_.push_back(line);
+  label.horizontal = true;
+  label.along = {QPointF(0.0, isobar.pressure / ys)};
+}
+
+bool CycleChart::addIsobarCurve(const engine::Isobar& isobar, double tHigh, IsobarLabels::Label& label) {
+  auto* curve = new QwtPlotCurve;
+  curve->setPen(QPen(isobarColour(palette()), 1.0, Qt::SolidLine));
+  curve->setZ(5);
+  curve->setItemAttribute(QwtPlotItem::Legend, false);
+  curve->setItemAttribute(QwtPlotItem::AutoScale, false);
+  QVector<QPointF> points;
+  for (const auto& st : isobar.states) points.append(chartPoint(st));
+  curve->setSamples(points);
+  curve->attach(this);
+  isobars_.push_back(curve);
+  if (points.isEmpty()) return false;
+  // The label prefers where the isobar reaches the cycle's highest temperature.
+  label.along.assign(points.begin(), points.end());
+  label.preferred = label.along.size() - 1;
+  for (std::size_t k = 0; k < isobar.states.size(); ++k)
+    if (isobar.states[k].temperature >= tHigh) {
+      label.preferred = k;
+      break;
+    }
+  return true;
+}
+
+QPointF CycleChart::chartPoint(const engine::PathState& state) const {
+  return {stateValue(state, xValue()) / xScale(), stateValue(state, yValue()) / yScale()};
+}
+
+std::vector<IsobarLabels::Station> CycleChart::showStationMarkers() {
   // Station markers: labelled with their SAE numbers (cycle with losses), plain for the ideal cycle.
-  const QColor ink = inkColour(palette());
   std::vector<IsobarLabels::Station> stations;
-  for (const auto* cycle : {&actual, &ideal}) {
-    const bool isIdeal = cycle == &ideal;
+  for (const auto* cycle : {&evaluation_->actual, &evaluation_->ideal}) {
+    const bool isIdeal = cycle == &evaluation_->ideal;
     for (const auto& station : cycle->stations) {
       engine::PathState state;
       if (!stationState(*cycle, station, state)) continue;
       auto* marker = new StationMarker(isobarLabels_);
-      marker->setValue(stateValue(state, xv) / xs, stateValue(state, yv) / ys);
-      if (isIdeal) {
-        const QColor edge = darkCanvas() ? kOrange : kOrange.darker(130);
-        marker->setSymbol(new QwtSymbol(QwtSymbol::Diamond, Qt::NoBrush, QPen(edge, 1.0), QSize(6, 6)));
-        marker->setZ(21);
-        stations.push_back({marker->value(), QSizeF(6, 6), QSizeF(), Qt::AlignCenter, 0.0, marker});
-      } else {
-        marker->setSymbol(new QwtSymbol(QwtSymbol::Ellipse, QBrush(ink), QPen(ink, 1.0), QSize(7, 7)));
-        QwtText label(QString::fromStdString(station.id));
-        QFont bold = font();
-        bold.setBold(true);
-        label.setFont(bold);
-        label.setColor(ink);
-        QColor halo = palette().color(QPalette::Base);
-        halo.setAlpha(200);
-        label.setBackgroundBrush(halo);
-        marker->setLabel(label);
-        // Alternate sides so that close stations (7, 8, 9) stay readable.
-        const bool left = station.id == "0" || station.id == "3" || station.id == "8" || station.id == "6";
-        const bool below = station.id == "5";
-        marker->setLabelAlignment((left ? Qt::AlignLeft : Qt::AlignRight) |
-                                  (below ? Qt::AlignBottom : Qt::AlignTop));
-        marker->setSpacing(4);
-        marker->setZ(22);
-        stations.push_back({marker->value(), QSizeF(7, 7), label.textSize(bold), marker->labelAlignment(),
-                            double(marker->spacing()), marker});
-      }
+      marker->setValue(chartPoint(state));
+      stations.push_back(isIdeal ? styleIdealMarker(marker) : styleStationMarker(marker, station.id));
       marker->setItemAttribute(QwtPlotItem::AutoScale, false);
       marker->attach(this);
       markers_.push_back(marker);
     }
   }
-  isobarLabels_->setStations(std::move(stations));
-  updateHighlight();
-  updateStalePens();
-  if (!zoomer_ || zoomer_->zoomRectIndex() == 0) rescale();
-  replot();
+  return stations;
+}
+
+IsobarLabels::Station CycleChart::styleIdealMarker(QwtPlotMarker* marker) const {
+  const QColor edge = darkCanvas() ? kOrange : kOrange.darker(130);
+  marker->setSymbol(new QwtSymbol(QwtSymbol::Diamond, Qt::NoBrush, QPen(edge, 1.0), QSize(6, 6)));
+  marker->setZ(21);
+  return {marker->value(), QSizeF(6, 6), QSizeF(), Qt::AlignCenter, 0.0, marker};
+}
+
+IsobarLabels::Station CycleChart::styleStationMarker(QwtPlotMarker* marker, const std::string& id) const {
+  const QColor ink = inkColour(palette());
+  marker->setSymbol(new QwtSymbol(QwtSymbol::Ellipse, QBrush(ink), QPen(ink, 1.0), QSize(7, 7)));
+  QwtText label(QString::fromStdString(id));
+  QFont bold = font();
+  bold.setBold(true);
+  label.setFont(bold);
+  label.setColor(ink);
+  QColor halo = palette().color(QPalette::Base);
+  halo.setAlpha(200);
+  label.setBackgroundBrush(halo);
+  marker->setLabel(label);
+  // Alternate sides so that close stations (7, 8, 9) stay readable.
+  const bool left = id == "0" || id == "3" || id == "8" || id == "6";
+  const bool below = id == "5";
+  marker->setLabelAlignment((left ? Qt::AlignLeft : Qt::AlignRight) |
+                            (below ? Qt::AlignBottom : Qt::AlignTop));
+  marker->setSpacing(4);
+  marker->setZ(22);
+  return {marker->value(),           QSizeF(7, 7), label.textSize(bold), marker->labelAlignment(),
+          double(marker->spacing()), marker};
+}
+
+std::vector<IsobarLabels::Station> CycleChart::showBaseline() {
+  std::vector<IsobarLabels::Station> stations;
+  if (!baseline_) {
+    baselineCurve_->setSamples(QVector<QPointF>());
+    return stations;
+  }
+  baselineCurve_->setData(new PathSeries(baseline_, false, cyclePaths(baseline_->actual, false), xValue(),
+                                         yValue(), xScale(), yScale()));
+  // Its stations: small grey squares, unlabelled (the current cycle's numbers name the places),
+  // under the current cycle's markers; the labels keep clear of them.
+  for (const auto& station : baseline_->actual.stations) {
+    engine::PathState state;
+    if (!stationState(baseline_->actual, station, state)) continue;
+    auto* marker = new QwtPlotMarker;
+    marker->setValue(chartPoint(state));
+    marker->setSymbol(new QwtSymbol(QwtSymbol::Rect, QBrush(kOkabeItoGrey), QPen(kOkabeItoGrey, 1.0),
+                                    QSize(kBaselineMarkerPx, kBaselineMarkerPx)));
+    marker->setItemAttribute(QwtPlotItem::AutoScale, false);
+    marker->setZ(17.5);
+    marker->attach(this);
+    baselineMarkers_.push_back(marker);
+    stations.push_back({marker->value(), QSizeF(kBaselineMarkerPx, kBaselineMarkerPx), QSizeF(),
+                        Qt::AlignCenter, 0.0, marker});
+  }
+  return stations;
 }
 
 void CycleChart::rescale() {
@@ -542,6 +659,20 @@ void CycleChart::resetZoom() {
   replot();
 }
 
+QString CycleChart::stationAt(const QPoint& position) const {
+  // The numbered markers (the cycle with losses): its number names it also where the placer
+  // had to leave the number out.
+  const QwtScaleMap xMap = canvasMap(QwtAxis::XBottom), yMap = canvasMap(QwtAxis::YLeft);
+  for (const QwtPlotMarker* m : markers_) {
+    if (m->label().isEmpty()) continue;
+    const double dx = xMap.transform(m->xValue()) - position.x(),
+                 dy = yMap.transform(m->yValue()) - position.y();
+    if (dx * dx + dy * dy <= kStationPickPx * kStationPickPx)
+      return tr("Station %1").arg(m->label().text()) + QLatin1Char('\n');
+  }
+  return {};
+}
+
 QString CycleChart::readoutAt(const QPoint& position) const {
   const QwtScaleMap xMap = canvasMap(QwtAxis::XBottom);
   const QwtScaleMap yMap = canvasMap(QwtAxis::YLeft);
@@ -574,16 +705,18 @@ QString CycleChart::readoutAt(const QPoint& position) const {
              units_.format(y * yScale(), yQuantity(), 4));
   }
   const engine::PathState& s = best->state(bestIndex);
+  const QString station = stationAt(position);
   const auto& cycle = bestIdeal ? evaluation_->ideal : evaluation_->actual;
   const auto& path = cycle.paths[static_cast<size_t>(best->pathOf(bestIndex))];
   const QString which = bestIdeal ? tr("Ideal") : tr("With losses");
   QString text =
-      tr("%1, %2 (%3 → %4)\nT = %5   s = %6\np = %7   v = %8")
-          .arg(which, componentName(path.component), QString::fromStdString(path.fromStation),
-               QString::fromStdString(path.toStation), units_.format(s.temperature, Quantity::Temperature, 5),
-               units_.format(s.entropy, Quantity::Entropy, 4),
-               units_.format(s.pressure, Quantity::Pressure, 5),
-               units_.format(s.specificVolume, Quantity::SpecificVolume, 4));
+      station + tr("%1, %2 (%3 → %4)\nT = %5   s = %6\np = %7   v = %8")
+                    .arg(which, componentName(path.component), QString::fromStdString(path.fromStation),
+                         QString::fromStdString(path.toStation),
+                         units_.format(s.temperature, Quantity::Temperature, 5),
+                         units_.format(s.entropy, Quantity::Entropy, 4),
+                         units_.format(s.pressure, Quantity::Pressure, 5),
+                         units_.format(s.specificVolume, Quantity::SpecificVolume, 4));
   if (kind_ == ChartKind::EnthalpyEntropy)
     text += QStringLiteral("\nh − h(298.15 K) = %1")
                 .arg(units_.format(s.sensibleEnthalpy, Quantity::SpecificEnergy, 5));

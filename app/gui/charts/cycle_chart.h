@@ -10,17 +10,21 @@
 // clear of each other (IsobarLabels), station markers with their SAE numbers, and the
 // selected component's path in vermillion #D55E00 (a wide band under the curves). With a
 // baseline (setBaseline), its cycle with losses in neutral grey #999999, dash-dot-dot, 2 px,
-// labelled with the baseline's title: a third line style beside the solid and the dashed.
+// labelled with the baseline's title: a third line style beside the solid and the dashed; its
+// stations as small grey squares without numbers (no legend entry of their own).
 //
 // Canvas, grid, legend, markers and labels take their colours from the widget's palette
 // (light or dark, and again when it changes); only the Okabe-Ito line colours are fixed.
 
 #include "charts/chart_base.h"
+#include "charts/isobar_labels.h"
 #include "charts/path_series.h"
 #include "document/units.h"
+#include "engine/isobars.h"
 
 #include <QStringList>
 
+#include <functional>
 #include <memory>
 #include <string>
 #include <vector>
@@ -34,7 +38,6 @@ class QwtPlotPicker;
 
 namespace cw::gui {
 
-class IsobarLabels;
 class ReadoutPicker;
 
 /// The plane: T-s, p-v, or h-s (the turbomachinery engineer's view: the sensible enthalpy
@@ -66,9 +69,16 @@ class CycleChart : public ChartBase {
   /// Back to the whole cycle.
   void resetZoom();
 
+  /// Places the legend (inside or below) before it replots.
+  void replot() override;
+
   /// The readout for a point of the canvas (pixels): the nearest path state's T, s, p, v
-  /// with units, or the cursor's coordinates when no state is near.
+  /// with units (first the station's number on a station's marker), or the cursor's
+  /// coordinates when no state is near.
   QString readoutAt(const QPoint& canvasPosition) const;
+
+  /// "Station 4" and a line break when the point is on a numbered station marker, else empty.
+  QString stationAt(const QPoint& canvasPosition) const;
 
   /// Axis titles, legend and labels in the current language and units.
   void retranslateUi();
@@ -85,6 +95,10 @@ class CycleChart : public ChartBase {
   const QwtPlotCurve* entropyNoteEntry() const { return entropyNote_; }
   int isobarCount() const { return static_cast<int>(isobars_.size()); }
   int markerCount() const { return static_cast<int>(markers_.size()); }
+  /// The baseline's station markers, in the order of its stations (none without a baseline).
+  const std::vector<QwtPlotMarker*>& baselineMarkers() const { return baselineMarkers_; }
+  /// The legend inside the canvas (T-s, h-s; hidden while it stands below the plot), or null.
+  const QwtPlotLegendItem* legendItem() const { return legendItem_; }
   const std::vector<QwtPlotMarker*>& markers() const { return markers_; }
   const IsobarLabels* isobarLabels() const { return isobarLabels_; }
   QwtPlotZoomer* zoomer() const { return zoomer_; }
@@ -96,6 +110,7 @@ class CycleChart : public ChartBase {
   void endExport() override;
   bool hasResult() const override { return evaluation_ != nullptr; }
   void updateLayout() override;
+  void fitExportLegend(const std::function<void()>& drawOnce) override;
 
  private:
   /// Colours of the canvas, grid, legend and rubber band from the palette.
@@ -106,7 +121,30 @@ class CycleChart : public ChartBase {
   Quantity yQuantity() const;
   double xScale() const;
   double yScale() const;
+  /// Every item from the evaluation and the baseline, one replot.
   void rebuild();
+  /// The cycles' curves and closures; false (and emptied) without an evaluation.
+  bool showCycles();
+  /// The isobars through the station pressures, and their labels.
+  void showIsobars();
+  IsobarLabels::Label isobarLabel(const engine::Isobar& isobar) const;
+  /// The p-v chart's isobar: a horizontal line.
+  void addPressureLine(const engine::Isobar& isobar, IsobarLabels::Label& label);
+  /// The T-s or h-s chart's isobar: a curve; false when it has no point.
+  bool addIsobarCurve(const engine::Isobar& isobar, double tHigh, IsobarLabels::Label& label);
+  /// The station markers of both cycles (numbered: the cycle with losses).
+  std::vector<IsobarLabels::Station> showStationMarkers();
+  IsobarLabels::Station styleIdealMarker(QwtPlotMarker* marker) const;
+  IsobarLabels::Station styleStationMarker(QwtPlotMarker* marker, const std::string& id) const;
+  /// The baseline's cycle and its station markers (nothing without a baseline).
+  std::vector<IsobarLabels::Station> showBaseline();
+  /// A path state in the chart's coordinates (display units).
+  QPointF chartPoint(const engine::PathState& state) const;
+  /// The screen's legend: inside in the freest corner while one is free, else below the plot.
+  void fitLegend();
+  void setLegendBelow(bool below);
+  /// Whether the plot keeps most of its height with the legend below it.
+  bool roomBelow(const QRectF& insideCanvas) const;
   void updateHighlight();
   void updateStalePens();
   void rescale();
@@ -135,6 +173,9 @@ class CycleChart : public ChartBase {
   QwtPlotCurve* entropyNote_ = nullptr;    ///< an empty curve: where s is zero (T-s, h-s)
   std::vector<QwtPlotCurve*> isobars_;
   std::vector<QwtPlotMarker*> markers_;
+  std::vector<QwtPlotMarker*> baselineMarkers_;
+  bool fittingLegend_ = false;  ///< while the legend moves (its layout calls back)
+  LegendPlacement exportLegend_ = LegendPlacement::AsShown;
   IsobarLabels* isobarLabels_ = nullptr;
   QwtPlotLegendItem* legendItem_ = nullptr;  ///< the T-s chart's legend inside the canvas
   QwtPlotZoomer* zoomer_ = nullptr;

@@ -2,10 +2,17 @@
 // The labels of a cycle chart: the station numbers and the isobars' labels ("p3 = 1434 kPa"),
 // placed on screen (and on every export's surface) at each draw through the LabelPlacer, so that
 // none overlaps another label, a station's marker or the legend, and none crosses the cycle's
-// curves. Station numbers come first and are always shown (beside their marker, crossing a curve
-// only where no other side is free); an isobar's label slides along its own isobar, to either
-// side of it, and one that fits nowhere on the canvas is left out (the isobar itself is always
-// drawn, by its own item). Zooming in makes room again.
+// curves. Station numbers come first: beside their marker, else further out with a thin leader
+// line to it, crossing a curve only where no place of those is free, left out only where every
+// place is taken by another label (the chart's readout names the station under the cursor); an
+// isobar's label slides along its own isobar, to either side of it, and one that fits nowhere on
+// the canvas is left out (the isobar itself is always drawn, by its own item). Zooming in makes
+// room again.
+//
+// Every legend drawn inside the canvas (the chart's own, or an export's "inside" one) is placed
+// here too, before the labels: in the corner whose rectangle the cycle's curves and markers
+// cross least (fitLegend), and then kept clear like a marker. When even that corner is crossed,
+// legendBlocked() says so and the chart puts its legend below the plot.
 //
 // A station's marker (StationMarker) draws its number where this item placed it; this item has
 // the lower z, so it is drawn, and places, first.
@@ -16,6 +23,7 @@
 #include <qwt_plot_marker.h>
 #include <qwt_text.h>
 
+#include <QLineF>
 #include <QPointF>
 #include <QRectF>
 #include <QSizeF>
@@ -24,8 +32,11 @@
 
 class QwtPlotCurve;
 class QwtPlotLegendItem;
+class QwtScaleMap;
 
 namespace cw::gui {
+
+class LabelPlacer;
 
 class IsobarLabels : public QwtPlotItem {
  public:
@@ -53,16 +64,31 @@ class IsobarLabels : public QwtPlotItem {
 
   void setLabels(std::vector<Label> labels);
   void setStations(std::vector<Station> stations);
-  /// The legend drawn inside the canvas, or nullptr.
-  void setLegend(const QwtPlotLegendItem* legend) { legend_ = legend; }
   /// The curves labels must not cross (the cycle's lines and closures).
   void setCurves(std::vector<const QwtPlotCurve*> curves) { curves_ = std::move(curves); }
+  /// The curves a legend inside the canvas must not cover (the cycles with losses and ideal).
+  void setLegendAvoids(std::vector<const QwtPlotCurve*> curves) { legendAvoids_ = std::move(curves); }
+
+  /// Puts a legend inside the canvas into the corner it covers least of the curves and the
+  /// station markers (top left, top right, bottom right, bottom left, the first of equals), in
+  /// one column, else two or three where that covers less.
+  /// Returns how many segments of the legend-avoided curves and markers that corner still
+  /// covers (0: it is free).
+  int fitLegend(QwtPlotLegendItem* legend, const QwtScaleMap& xMap, const QwtScaleMap& yMap,
+                const QRectF& canvasRect) const;
+  /// Whether a legend of the last draw covered a curve or marker in its best corner.
+  bool legendBlocked() const { return legendBlocked_; }
+  /// The rectangles of the legends inside the canvas at the last draw [px].
+  const std::vector<QRectF>& legendRects() const { return legendRects_; }
 
   void draw(QPainter* painter, const QwtScaleMap& xMap, const QwtScaleMap& yMap,
             const QRectF& canvasRect) const override;
 
-  /// Where the last draw placed a marker's label; false when it has none.
+  /// Where the last draw placed a marker's label (empty: left out); false when it has none.
   bool stationLabelRect(const QwtPlotMarker* marker, QRectF& rect) const;
+  /// The leader line from a marker to its label when the label stands away from it (null
+  /// line when it stands beside it).
+  QLineF stationLeader(const QwtPlotMarker* marker) const;
 
   // From the last draw (canvas pixels), for tests.
   int labelCount() const { return static_cast<int>(labels_.size()); }
@@ -75,6 +101,8 @@ class IsobarLabels : public QwtPlotItem {
   int movedCount() const { return moved_; }
   /// Labels left out because they fit nowhere.
   int skippedCount() const { return skipped_; }
+  /// Station numbers left out because every place was taken by another label.
+  int stationsLeftOut() const { return stationsLeftOut_; }
   /// Everything the isobar labels kept clear of: the station markers and numbers, the legend.
   const std::vector<QRectF>& obstacleRects() const { return obstacles_; }
   /// The curves of the last draw in pixels.
@@ -83,19 +111,35 @@ class IsobarLabels : public QwtPlotItem {
   QColor textColour() const;
 
  private:
+  void forgetLastDraw(const QRectF& canvasRect) const;
+  void placeLegends(LabelPlacer& placer, const QwtScaleMap& xMap, const QwtScaleMap& yMap,
+                    const QRectF& canvasRect) const;
+  void placeStationNumbers(LabelPlacer& placer, const QPainter* painter, const QwtScaleMap& xMap,
+                           const QwtScaleMap& yMap) const;
+  void placeIsobarLabels(LabelPlacer& placer, QPainter* painter, const QwtScaleMap& xMap,
+                         const QwtScaleMap& yMap) const;
+
   std::vector<Label> labels_;
   std::vector<Station> stations_;
   std::vector<const QwtPlotCurve*> curves_;
-  const QwtPlotLegendItem* legend_ = nullptr;
+  std::vector<const QwtPlotCurve*> legendAvoids_;
+  mutable std::vector<QRectF> legendRects_;
+  mutable bool legendBlocked_ = false;
   mutable std::vector<QRectF> placed_;
   mutable std::vector<QString> placedTexts_;
   mutable std::vector<QRectF> obstacles_;
   mutable std::vector<QRectF> stationRects_;
-  mutable std::vector<std::pair<const QwtPlotMarker*, QRectF>> stationPlaces_;
+  struct StationPlace {
+    const QwtPlotMarker* marker;
+    QRectF rect;
+    QLineF leader;
+  };
+  mutable std::vector<StationPlace> stationPlaces_;
   mutable std::vector<std::vector<QPointF>> curvePixels_;
   mutable QRectF canvas_;
   mutable int moved_ = 0;
   mutable int skipped_ = 0;
+  mutable int stationsLeftOut_ = 0;
 };
 
 /// A station's marker whose number is drawn where IsobarLabels placed it.

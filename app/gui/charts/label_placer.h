@@ -40,6 +40,8 @@ class LabelPlacer {
   /// Whether a rectangle lies inside the bounds, clear of what is taken and of the curves.
   bool isFree(const QRectF& rect) const;
   bool crossesCurve(const QRectF& rect) const;
+  /// Whether a rectangle keeps the gap to everything taken (curves aside).
+  bool clearOfTaken(const QRectF& rect) const;
   const std::vector<QRectF>& taken() const { return taken_; }
   const QRectF& bounds() const { return bounds_; }
 
@@ -50,8 +52,6 @@ class LabelPlacer {
   static std::vector<QRectF> around(const QRectF& box, const QSizeF& size, double gap);
 
  private:
-  bool clearOfTaken(const QRectF& rect) const;
-
   QRectF bounds_;
   std::vector<QRectF> taken_;
   struct Segment {

@@ -6,7 +6,7 @@
 
 #include "common/error.h"
 #include "engine/case_validation_error.h"
-#include "engine/evaluate.h"
+#include "evaluation/evaluate.h"
 
 #include <QCoreApplication>
 #include <QFileInfo>

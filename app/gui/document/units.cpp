@@ -111,6 +111,16 @@ QString DisplayUnits::format(double si, Quantity q, int significantDigits) const
   return q == Quantity::Dimensionless ? number : QStringLiteral("%1 %2").arg(number, unit);
 }
 
+int DisplayUnits::displayDigits(Quantity q) {
+  return q == Quantity::Dimensionless || q == Quantity::MassRatio ? 4 : 5;
+}
+
+QString DisplayUnits::displayText(double si, Quantity q) const {
+  double shown = toDisplay(si, q);
+  if (std::fabs(shown) < 1e-12) shown = 0.0;  // a computed zero, not "-0"
+  return formatNumber(shown, displayDigits(q));
+}
+
 namespace {
 
 /// Significant digits of a number's text ("6000" 1, "0.845" 3, "1350.5" 5).

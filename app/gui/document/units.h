@@ -89,6 +89,13 @@ class DisplayUnits : public QObject {
   QString withUnit(const QString& label, Quantity q) const;
   /// A value formatted for display with its unit, in the current locale.
   QString format(double si, Quantity q, int significantDigits = 5) const;
+  /// A value in tables at its quantity's display precision (displayDigits), without unit, in
+  /// the current locale, fixed notation: 1316.6666667 K shows "1316.7", 2370 °R "2370.0".
+  QString displayText(double si, Quantity q) const;
+  /// The significant digits a value of a quantity is shown with in tables: 4 for ratios,
+  /// fractions and efficiencies (dimensionless, kg/kg), 5 for the rest (as the performance and
+  /// station tables show them).
+  static int displayDigits(Quantity q);
   /// The text of an input value in its field, without unit, in the current locale: in SI the
   /// value as typed (shortest form up to 12 significant digits); in U.S. customary units the
   /// conversion at display precision, as many significant digits as the SI text has but at

@@ -6,7 +6,7 @@
 
 #include "analysis/loss_audit.h"
 #include "common/error.h"
-#include "engine/evaluate.h"
+#include "evaluation/evaluate.h"
 #include "io/case_file.h"
 
 #include <QDir>

@@ -185,10 +185,11 @@ Quantity StudyChart::yQuantity() const {
 }
 
 QString StudyChart::legendName(int axis) const {
-  // Compact: the short names, unless they would not tell the two inputs apart.
+  // The short names (the legend also gives the step), unless they would not tell the two
+  // inputs apart.
   const auto& a = axes_[static_cast<std::size_t>(axis)];
   const bool distinct = axes_[0].shortName != axes_[1].shortName;
-  return compact_ && distinct && !a.shortName.isEmpty() ? a.shortName : a.name;
+  return distinct && !a.shortName.isEmpty() ? a.shortName : a.name;
 }
 
 QString StudyChart::overlayTitle() const {
@@ -202,12 +203,7 @@ void StudyChart::retranslateUi() {
                             ? tr("Carpet: specific thrust against TSFC")
                             : tr("%1 against %2").arg(c ? studyColumnLabel(*c) : QString(), axes_[0].name);
   setTitle(compact_ ? QString() : title);  // compact: the panel's plot choice names it
-  setAxisTitle(QwtAxis::XBottom, plot_ == StudyPlot::Carpet
-                                     ? units_.withUnit(tr("TSFC"), Quantity::Tsfc)
-                                     : units_.withUnit(axes_[0].name, axes_[0].quantity));
-  setAxisTitle(QwtAxis::YLeft, plot_ == StudyPlot::Carpet
-                                   ? units_.withUnit(tr("Specific thrust F_s"), Quantity::SpecificThrust)
-                                   : units_.withUnit(c ? studyColumnLabel(*c) : QString(), yQuantity()));
+  fitAxisTitles();
   setStaleText(tr("Stale: the case has changed since this study ran; press Run to redo it"));
   showStaleBanner();
   QwtText designLabel(tr("Design point"));
@@ -220,6 +216,42 @@ void StudyChart::retranslateUi() {
   designLabel.setBackgroundBrush(background);
   design_->setLabel(designLabel);
   design_->setTitle(tr("Design point (the case as it is)"));
+}
+
+QStringList StudyChart::axisTitles(QwtAxisId axis) const {
+  // Longest first; the unit alone last (for a quantity that has one).
+  const bool x = axis == QwtAxis::XBottom;
+  QStringList names;
+  Quantity q = x ? xQuantity() : yQuantity();
+  if (plot_ == StudyPlot::Carpet) {
+    names = x ? QStringList{tr("TSFC")} : QStringList{tr("Specific thrust F_s"), tr("F_s")};
+  } else if (x) {
+    names << axes_[0].name;
+    if (!axes_[0].shortName.isEmpty() && axes_[0].shortName != axes_[0].name) names << axes_[0].shortName;
+  } else {
+    const auto* c = columnNamed(column_);
+    names << (c ? studyColumnLabel(*c) : QString());
+  }
+  QStringList titles;
+  for (const QString& name : names) titles << units_.withUnit(name, q);
+  if (q != Quantity::Dimensionless) titles << units_.withUnit(QString(), q).trimmed();
+  return titles;
+}
+
+void StudyChart::fitAxisTitles(bool whole) {
+  // The value axis first: its title's width sets the room left for the other.
+  fitAxisTitle(QwtAxis::YLeft, axisTitles(QwtAxis::YLeft), whole);
+  updateLayout();
+  fitAxisTitle(QwtAxis::XBottom, axisTitles(QwtAxis::XBottom), whole);
+}
+
+void StudyChart::beginExport(const ExportOptions& options) {
+  Q_UNUSED(options);
+  fitAxisTitles(true);  // a figure has the room for the whole titles
+}
+
+void StudyChart::endExport() {
+  fitAxisTitles();
 }
 
 void StudyChart::setStudy(std::shared_ptr<const study::TradeStudy> s, std::array<StudyAxisName, 2> axes,
@@ -323,106 +355,135 @@ void StudyChart::rebuild() {
   overlayNote_.clear();
   designShown_ = false;
   design_->detach();
+  collectLines();
+  DrawnPoints drawn;
+  const int legendGroups = attachCurves(drawn);
+  std::vector<LineEndLabels::Obstacle> obstacles;
+  showDesignPoint(drawn, obstacles);
+  updateLineLabels(std::move(obstacles));
+  fitBounds(drawn, legendGroups);
+  rescale();
+  showHint();
+  showStaleBanner();
+  replot();
+}
+
+std::string StudyChart::xColumn() const {
+  return plot_ == StudyPlot::Carpet ? kTsfc : std::string();
+}
+
+std::string StudyChart::yColumn() const {
+  return plot_ == StudyPlot::Carpet ? kSpecificThrust : column_;
+}
+
+void StudyChart::collectLines() {
+  if (!study_) return;
   const bool carpet = plot_ == StudyPlot::Carpet;
-  const std::string xColumn = carpet ? kTsfc : std::string();
-  const std::string yColumn = carpet ? kSpecificThrust : column_;
-
-  if (study_) {
-    addLines(*study_, false, xColumn, yColumn);
-    if (overlay_ == StudyOverlay::IdealTwin) {
-      const bool hasIdeal = carpet || (column_.rfind("ideal.", 0) != 0 && column_.rfind("audit.", 0) != 0 &&
-                                       columnNamed("ideal." + column_));
-      if (hasIdeal)
-        addLines(*study_, true, carpet ? "ideal." + xColumn : std::string(), "ideal." + yColumn);
-      else
-        overlayNote_ = tr("The ideal twin has no figure of its own for this output.");
-    } else if (overlay_ == StudyOverlay::OneInputChanged) {
-      if (changed_ && changed_->axes == study_->axes)
-        addLines(*changed_, true, xColumn, yColumn);
-      else
-        overlayNote_ = tr("Press Run to compute the comparison.");
-    }
+  addLines(*study_, false, xColumn(), yColumn());
+  if (overlay_ == StudyOverlay::IdealTwin) {
+    const bool hasIdeal = carpet || (column_.rfind("ideal.", 0) != 0 && column_.rfind("audit.", 0) != 0 &&
+                                     columnNamed("ideal." + column_));
+    if (hasIdeal)
+      addLines(*study_, true, carpet ? "ideal." + xColumn() : std::string(), "ideal." + yColumn());
+    else
+      overlayNote_ = tr("The ideal twin has no figure of its own for this output.");
+  } else if (overlay_ == StudyOverlay::OneInputChanged) {
+    if (changed_ && changed_->axes == study_->axes)
+      addLines(*changed_, true, xColumn(), yColumn());
+    else
+      overlayNote_ = tr("Press Run to compute the comparison.");
   }
+}
 
-  // Curves: one per segment; the legend shows each group (family, overlay) once.
+QString StudyChart::legendTitle(const Line& line) const {
+  if (line.overlay) return overlayTitle();
+  if (line.family == Family::Sweep) return tr("Cycle with losses");
+  const int axis = line.family == Family::ConstantFirst ? 0 : 1;
+  const QString name = tr("Constant %1").arg(legendName(axis));
+  // The step between the lines, which tells the unlabelled ones of a dense family.
+  if (!study_ || static_cast<int>(study_->axes.size()) <= axis) return name;
+  const study::SweepAxis& a = study_->axes[static_cast<std::size_t>(axis)];
+  if (a.count < 3) return name;
+  const Quantity q = axes_[static_cast<std::size_t>(axis)].quantity;
+  const QString step = compactNumber(units_.toDisplay(std::fabs(a.stop - a.start) / (a.count - 1), q));
+  return tr("%1, step %2")
+      .arg(name, q == Quantity::Dimensionless ? step : step + QLatin1Char(' ') + units_.symbol(q));
+}
+
+QwtPlotCurve* StudyChart::makeCurve(const Line& line, const QVector<QPointF>& shown, bool inLegend) const {
+  const QPen pen = linePen(line.family, line.overlay, overlay_, plot_);
+  auto* curve = new QwtPlotCurve;
+  curve->setPen(pen);
+  curve->setRenderHint(QwtPlotItem::RenderAntialiased, true);
+  curve->setLegendAttribute(QwtPlotCurve::LegendShowLine, true);
+  curve->setLegendIconSize(QSize(28, 10));
+  curve->setZ(line.overlay ? 18 : 20);
+  // A sweep's points, and any point standing alone between gaps, get a dot of their own.
+  if (line.family == Family::Sweep || shown.size() == 1)
+    curve->setSymbol(new QwtSymbol(QwtSymbol::Ellipse, QBrush(pen.color()), QPen(pen.color()), QSize(5, 5)));
+  curve->setSamples(shown);
+  curve->setItemAttribute(QwtPlotItem::Legend, inLegend);
+  if (inLegend) curve->setTitle(legendTitle(line));
+  return curve;
+}
+
+int StudyChart::attachCurves(DrawnPoints& drawn) {
+  // One curve per segment; the legend shows each group (family, overlay) once.
   const double xf = units_.factor(xQuantity()), yf = units_.factor(yQuantity());
-  const QPalette& p = palette();
   std::vector<std::pair<Family, bool>> inLegend;
-  std::vector<double> xs, ys;  // every point drawn, for the autoscale
   for (Line& l : lines_) {
-    const QPen pen = linePen(l.family, l.overlay, overlay_, plot_);
     for (const auto& segment : l.segments) {
       QVector<QPointF> shown;
       shown.reserve(static_cast<qsizetype>(segment.size()));
       for (const QPointF& q : segment) {
         shown.push_back(QPointF(q.x() / xf, q.y() / yf));
-        xs.push_back(shown.back().x());
-        ys.push_back(shown.back().y());
+        drawn.xs.push_back(shown.back().x());
+        drawn.ys.push_back(shown.back().y());
       }
-      auto* curve = new QwtPlotCurve;
-      curve->setPen(pen);
-      curve->setRenderHint(QwtPlotItem::RenderAntialiased, true);
-      curve->setLegendAttribute(QwtPlotCurve::LegendShowLine, true);
-      curve->setLegendIconSize(QSize(28, 10));
-      curve->setZ(l.overlay ? 18 : 20);
-      // A sweep's points, and any point standing alone between gaps, get a dot of their own.
-      if (l.family == Family::Sweep || segment.size() == 1)
-        curve->setSymbol(
-            new QwtSymbol(QwtSymbol::Ellipse, QBrush(pen.color()), QPen(pen.color()), QSize(5, 5)));
-      curve->setSamples(shown);
       const std::pair<Family, bool> group{l.overlay ? Family::Sweep : l.family, l.overlay};
       const bool first = std::find(inLegend.begin(), inLegend.end(), group) == inLegend.end();
-      curve->setItemAttribute(QwtPlotItem::Legend, first);
-      if (first) {
-        inLegend.push_back(group);
-        if (l.overlay)
-          curve->setTitle(overlayTitle());
-        else if (l.family == Family::Sweep)
-          curve->setTitle(tr("Cycle with losses"));
-        else
-          curve->setTitle(tr("Constant %1").arg(legendName(l.family == Family::ConstantFirst ? 0 : 1)));
-      }
+      if (first) inLegend.push_back(group);
+      QwtPlotCurve* curve = makeCurve(l, shown, first);
       curve->attach(this);
       l.curves.push_back(curve);
     }
   }
+  return static_cast<int>(inLegend.size());
+}
 
-  // The design point: the case as it is, where the study knows its inputs.
-  std::vector<LineEndLabels::Obstacle> obstacles;
-  if (study_) {
-    const StudyPoint& d = study_->designPoint;
-    bool known = d.solved();
-    for (std::size_t k = 0; k < study_->axes.size() && k < 2; ++k)
-      known = known && study_->designPointOnAxis[k];
-    const auto* xc = carpet ? columnNamed(xColumn) : nullptr;
-    const auto* yc = columnNamed(yColumn);
-    if (known && yc) {
-      std::optional<double> x(d.inputs[0]);
-      if (carpet) x = xc ? xc->value(d) : std::nullopt;
-      const std::optional<double> y = yc->value(d);
-      if (x && y && std::isfinite(*x) && std::isfinite(*y)) {
-        design_->setValue(*x / xf, *y / yf);
-        design_->setItemAttribute(QwtPlotItem::Legend, !compact_);  // compact: its label says it
-        design_->attach(this);
-        designShown_ = true;
-        xs.push_back(*x / xf);
-        ys.push_back(*y / yf);
-        // Its symbol and label (right of and above it), to be kept clear.
-        const QSizeF label = design_->label().textSize(font());
-        obstacles.push_back({design_->value(), QSizeF(17, 17), {}});
-        obstacles.push_back({design_->value(), label + QSizeF(4, 4),
-                             QPointF(8.5 + 3 + label.width() / 2, -(8.5 + 3 + label.height() / 2))});
-      }
-    }
-  }
+void StudyChart::showDesignPoint(DrawnPoints& drawn, std::vector<LineEndLabels::Obstacle>& obstacles) {
+  // The case as it is, where the study knows its inputs.
+  if (!study_) return;
+  const StudyPoint& d = study_->designPoint;
+  bool known = d.solved();
+  for (std::size_t k = 0; k < study_->axes.size() && k < 2; ++k)
+    known = known && study_->designPointOnAxis[k];
+  const bool carpet = plot_ == StudyPlot::Carpet;
+  const auto* xc = carpet ? columnNamed(xColumn()) : nullptr;
+  const auto* yc = columnNamed(yColumn());
+  if (!known || !yc) return;
+  std::optional<double> x(d.inputs[0]);
+  if (carpet) x = xc ? xc->value(d) : std::nullopt;
+  const std::optional<double> y = yc->value(d);
+  if (!x || !y || !std::isfinite(*x) || !std::isfinite(*y)) return;
+  const double xf = units_.factor(xQuantity()), yf = units_.factor(yQuantity());
+  design_->setValue(*x / xf, *y / yf);
+  design_->setItemAttribute(QwtPlotItem::Legend, !compact_);  // compact: its label says it
+  design_->attach(this);
+  designShown_ = true;
+  drawn.xs.push_back(*x / xf);
+  drawn.ys.push_back(*y / yf);
+  // Its symbol and label (right of and above it), to be kept clear.
+  const QSizeF label = design_->label().textSize(font());
+  obstacles.push_back({design_->value(), QSizeF(17, 17), {}});
+  obstacles.push_back({design_->value(), label + QSizeF(4, 4),
+                       QPointF(8.5 + 3 + label.width() / 2, -(8.5 + 3 + label.height() / 2))});
+}
 
-  // End labels: a carpet's lines both ways, an output's curves per second input; spread first.
-  std::vector<LineEndLabels::Label> labels;
-  QFont labelFont = font();
-  labelFont.setPointSizeF(labelFont.pointSizeF() * 0.85);
+std::vector<StudyChart::Line*> StudyChart::labelOrder() {
   // Both families take turns, so that neither takes every place at a corner they share; the
   // overlay's lines (the ideal twin, the comparison) after the lines with losses, so that on a
-  // crowded chart theirs are the labels left out.
+  // crowded chart theirs are the labels left out. Within a family, spread (spreadOrder).
   std::vector<Line*> turns;
   for (const bool overlay : {false, true}) {
     std::array<std::vector<Line*>, 2> groups;
@@ -434,49 +495,77 @@ void StudyChart::rebuild() {
       for (std::size_t g = 0; g < 2; ++g)
         if (k < orders[g].size()) turns.push_back(groups[g][static_cast<std::size_t>(orders[g][k])]);
   }
-  for (Line* line : turns) {
-    Line& l = *line;
-    const Family family = l.family;
-    const int axis = family == Family::ConstantFirst ? 0 : 1;
-    QColor colour = linePen(family, l.overlay, overlay_, plot_).color();
-    if (darkCanvas()) colour = colour.lighter(150);
-    if (family == Family::Sweep) {
-      // One curve each: named at its end, as the legend names it.
-      l.label = !l.overlay                            ? tr("with losses")
-                : overlay_ == StudyOverlay::IdealTwin ? tr("ideal twin")
-                                                      : tr("comparison");
-    } else {
-      const QString unit =
-          axes_[axis].quantity == Quantity::Dimensionless ? QString() : units_.symbol(axes_[axis].quantity);
-      const QString number = compactNumber(units_.toDisplay(l.value, axes_[axis].quantity));
-      l.label = unit.isEmpty() ? number : number + QLatin1Char(' ') + unit;
+  return turns;
+}
+
+QString StudyChart::lineLabelText(const Line& line) const {
+  if (line.family == Family::Sweep) {
+    // One curve each: named at its end, as the legend names it.
+    return !line.overlay                         ? tr("with losses")
+           : overlay_ == StudyOverlay::IdealTwin ? tr("ideal twin")
+                                                 : tr("comparison");
+  }
+  const int axis = line.family == Family::ConstantFirst ? 0 : 1;
+  const Quantity q = axes_[static_cast<std::size_t>(axis)].quantity;
+  const QString unit = q == Quantity::Dimensionless ? QString() : units_.symbol(q);
+  const QString number = compactNumber(units_.toDisplay(line.value, q));
+  return unit.isEmpty() ? number : number + QLatin1Char(' ') + unit;
+}
+
+LineEndLabels::Label StudyChart::endLabel(const Line& line) const {
+  QFont labelFont = font();
+  labelFont.setPointSizeF(labelFont.pointSizeF() * 0.85);
+  QColor colour = linePen(line.family, line.overlay, overlay_, plot_).color();
+  if (darkCanvas()) colour = colour.lighter(150);
+  LineEndLabels::Label label;
+  label.text = QwtText(line.label);
+  label.text.setFont(labelFont);
+  label.text.setColor(colour);
+  QColor background = palette().color(QPalette::Base);
+  background.setAlpha(190);
+  label.text.setBackgroundBrush(background);
+  const double xf = units_.factor(xQuantity()), yf = units_.factor(yQuantity());
+  const auto& last = line.segments.back();
+  for (auto it = last.rbegin(); it != last.rend(); ++it)
+    label.anchors.push_back(QPointF(it->x() / xf, it->y() / yf));
+  for (const QPointF& q : line.segments.front())
+    label.startAnchors.push_back(QPointF(q.x() / xf, q.y() / yf));
+  // Its family (per overlay) and its place in it; lines_ holds each family in grid order.
+  const int family = static_cast<int>(line.family);
+  label.group = family + (line.overlay ? 3 : 0);
+  label.id = static_cast<int>(&line - lines_.data());
+  label.groupSize = 0;
+  for (const Line& l : lines_)
+    if (l.family == line.family && l.overlay == line.overlay) {
+      if (&l == &line) label.rank = label.groupSize;
+      ++label.groupSize;
     }
-    if (l.segments.empty()) continue;
-    LineEndLabels::Label label;
-    label.text = QwtText(l.label);
-    label.text.setFont(labelFont);
-    label.text.setColor(colour);
-    QColor background = p.color(QPalette::Base);
-    background.setAlpha(190);
-    label.text.setBackgroundBrush(background);
-    const auto& last = l.segments.back();
-    for (auto it = last.rbegin(); it != last.rend(); ++it)
-      label.anchors.push_back(QPointF(it->x() / xf, it->y() / yf));
-    labels.push_back(std::move(label));
+  return label;
+}
+
+void StudyChart::updateLineLabels(std::vector<LineEndLabels::Obstacle> obstacles) {
+  // A carpet's lines both ways, an output's curves per second input; spread first.
+  std::vector<LineEndLabels::Label> labels;
+  for (Line* line : labelOrder()) {
+    line->label = lineLabelText(*line);
+    if (!line->segments.empty()) labels.push_back(endLabel(*line));
   }
   labels_->setLabels(std::move(labels));
   labels_->setObstacles(std::move(obstacles));
   std::vector<const QwtPlotCurve*> curves;
   for (const Line& l : lines_) curves.insert(curves.end(), l.curves.begin(), l.curves.end());
   labels_->setCurves(std::move(curves));
+}
 
-  const auto [x0, x1] = bulkRange(xs);
-  const auto [y0, y1] = bulkRange(ys);
-  hasBounds_ = !xs.empty() && x0 <= x1;
+void StudyChart::fitBounds(const DrawnPoints& drawn, int legendGroups) {
+  const auto [x0, x1] = bulkRange(drawn.xs);
+  const auto [y0, y1] = bulkRange(drawn.ys);
+  hasBounds_ = !drawn.xs.empty() && x0 <= x1;
   if (hasBounds_) bounds_ = QRectF(QPointF(x0, y0), QPointF(x1, y1));
-  legendEntries_ = static_cast<int>(inLegend.size()) + (designShown_ && !compact_ ? 1 : 0);
-  rescale();
+  legendEntries_ = legendGroups + (designShown_ && !compact_ ? 1 : 0);
+}
 
+void StudyChart::showHint() {
   // A hint on an empty chart.
   QString hint;
   if (!study_)
@@ -489,8 +578,6 @@ void StudyChart::rebuild() {
   hintText.setRenderFlags(Qt::AlignCenter | Qt::TextWordWrap);
   hintLabel_->setText(hintText);
   hintLabel_->setVisible(!hint.isEmpty());
-  showStaleBanner();
-  replot();
 }
 
 void StudyChart::rescale() {
@@ -519,6 +606,7 @@ void StudyChart::rescale() {
 
 void StudyChart::resizeEvent(QResizeEvent* event) {
   QwtPlot::resizeEvent(event);
+  fitAxisTitles();
   if (compact_) {
     rescale();
     replot();

@@ -6,7 +6,9 @@
 //
 // Lines of constant first input: Okabe-Ito blue #0072B2, solid; of constant second input:
 // bluish green #009E73, dotted; each labelled with its input's value and unit at its end
-// (LineEndLabels keeps the labels clear of each other, the design point and the canvas edge).
+// (LineEndLabels keeps the labels clear of each other, the design point and the canvas edge, and
+// labels the first and last line of each family; the legend gives each family's step). Both axis
+// titles take the longest form that fits their axis (ChartBase::fitAxisTitle).
 // The overlay of a second loss level is dashed: the ideal twin orange #E69F00 (as the ideal
 // cycle on the cycle charts), a study with one input set differently reddish purple #CC79A7.
 // The case's design point is a yellow star (#F0E442, outlined in the text colour), labelled.
@@ -15,6 +17,7 @@
 // the palette's colours; a banner marks a study of a case that has changed since.
 
 #include "charts/chart_base.h"
+#include "charts/line_end_labels.h"
 #include "document/units.h"
 
 #include "study/study_columns.h"
@@ -23,6 +26,7 @@
 #include <QPointF>
 #include <QRectF>
 #include <QString>
+#include <QVector>
 
 #include <array>
 #include <memory>
@@ -36,7 +40,6 @@ class QwtPlotTextLabel;
 
 namespace cw::gui {
 
-class LineEndLabels;
 class ReadoutPicker;
 
 enum class StudyPlot { Carpet, Output };
@@ -46,7 +49,7 @@ enum class StudyOverlay { None, IdealTwin, OneInputChanged };
 struct StudyAxisName {
   QString name;
   Quantity quantity = Quantity::Dimensionless;
-  QString shortName;  ///< without the component, for a compact legend; empty for `name`
+  QString shortName;  ///< without the component, for the legend and a short axis title; empty for `name`
 };
 
 class StudyChart : public ChartBase {
@@ -108,10 +111,35 @@ class StudyChart : public ChartBase {
   void refresh() override;
   bool wantsStaleBanner() const override { return study_ != nullptr; }
   void resizeEvent(QResizeEvent* event) override;
+  void beginExport(const ExportOptions& options) override;
+  void endExport() override;
 
  private:
-  struct Axes;
+  /// Every point drawn (display units), for the autoscale.
+  struct DrawnPoints {
+    std::vector<double> xs, ys;
+  };
   void rebuild();
+  /// The study's lines and the overlay's (or the note why there is none).
+  void collectLines();
+  /// A curve per segment of every line, attached; returns the number of legend groups.
+  int attachCurves(DrawnPoints& drawn);
+  QwtPlotCurve* makeCurve(const Line& line, const QVector<QPointF>& shown, bool inLegend) const;
+  QString legendTitle(const Line& line) const;
+  /// The design point's star, where the study knows its inputs; its symbol and label as obstacles.
+  void showDesignPoint(DrawnPoints& drawn, std::vector<LineEndLabels::Obstacle>& obstacles);
+  /// The lines in the order their labels are placed.
+  std::vector<Line*> labelOrder();
+  QString lineLabelText(const Line& line) const;
+  LineEndLabels::Label endLabel(const Line& line) const;
+  void updateLineLabels(std::vector<LineEndLabels::Obstacle> obstacles);
+  void fitBounds(const DrawnPoints& drawn, int legendGroups);
+  void showHint();
+  std::string xColumn() const;
+  /// An axis's titles, longest first, with the unit (fitAxisTitle takes the longest that fits).
+  QStringList axisTitles(QwtAxisId axis) const;
+  void fitAxisTitles(bool whole = false);
+  std::string yColumn() const;
   void clearLines();
   void applyPalette();
   void insertStudyLegend();

@@ -108,13 +108,6 @@ bool parseTypedNumber(const QString& text, double& value) {
   return ok && std::isfinite(value);
 }
 
-QString typedNumberText(double shown) {
-  QLocale locale;
-  locale.setNumberOptions(QLocale::OmitGroupSeparator);
-  if (std::fabs(shown) < 1e-12) shown = 0.0;
-  return locale.toString(shown, 'g', 10);
-}
-
 std::optional<StudyRange> practitionerRange(const std::string& path) {
   // Where a conceptual study of a small turbojet usually starts; common practice, no source
   // (docs/user-guide.md, "Default ranges", lists the same). Inputs not listed take +/-50 %.

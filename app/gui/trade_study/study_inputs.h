@@ -45,9 +45,6 @@ QString valueText(double si, Quantity quantity, const DisplayUnits& units, int s
 /// A number typed in a study field, in the current locale or the C locale; false when the text is
 /// no finite number.
 bool parseTypedNumber(const QString& text, double& value);
-/// A value for a study field's text (display units, up to 10 significant digits; the study
-/// table's input columns).
-QString typedNumberText(double shown);
 /// The text of a study field (a range's start or stop, the overlay's value) for an SI value: the
 /// case forms' display precision (DisplayUnits::inputText: in SI as typed, in U.S. customary
 /// units the SI text's significant digits, at least five), e.g. "1100" K, "36089" ft.

@@ -10,8 +10,8 @@
 
 #include "io/atomic_file.h"
 #include "io/case_file.h"
-#include "io/study_export.h"
 #include "study/study_columns.h"
+#include "study/study_export.h"
 
 #include <QCheckBox>
 #include <QComboBox>

@@ -4,7 +4,8 @@
 #include "trade_study/study_inputs.h"
 #include "trade_study/study_names.h"
 
-#include "io/study_export.h"
+#include "common/error.h"
+#include "study/study_export.h"
 
 #include <QApplication>
 #include <QPalette>
@@ -118,9 +119,7 @@ QVariant StudyTableModel::data(const QModelIndex& index, int role) const {
       if (c.kind == Kind::Status) return pointStatusName(p.status);
       if (c.kind == Kind::Reason) return QString::fromStdString(p.reason);
       const QVariant v = siValue(index.row(), c);
-      if (!v.isValid()) return QString();
-      const double shown = units_.toDisplay(v.toDouble(), q);
-      return c.kind == Kind::Input ? typedNumberText(shown) : formatNumber(shown, 6);
+      return v.isValid() ? units_.displayText(v.toDouble(), q) : QString();
     }
     case Qt::ToolTipRole:
       if (!p.reason.empty()) return QString::fromStdString(p.reason);
@@ -151,7 +150,7 @@ QString StudyTableModel::toTabSeparated() const {
       if (v.isValid()) {
         const Quantity q = column.kind == Kind::Input ? axes_[static_cast<std::size_t>(column.axis)].quantity
                                                       : displayQuantity(column.figure->quantity);
-        cells << QString::number(units_.toDisplay(v.toDouble(), q), 'g', 10);
+        cells << QString::fromStdString(cw::formatNumber(units_.toDisplay(v.toDouble(), q)));
       } else {
         cells << data(index(r, c)).toString().replace(QLatin1Char('\t'), QLatin1Char(' '));
       }

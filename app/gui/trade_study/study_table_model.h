@@ -1,7 +1,9 @@
 #pragma once
 // A trade study as a table, one row per point in grid order: the varied inputs, the point's
 // status, its specific thrust and TSFC, the output chosen for the chart (when another), and for
-// a point without a cycle the core's reason. Display units from DisplayUnits; greyed when stale.
+// a point without a cycle the core's reason. Display units from DisplayUnits, each value at its
+// quantity's display precision (DisplayUnits::displayText), the unit in the header; greyed when
+// stale. Copies keep full precision (toTabSeparated).
 // A figure a point does not have is an empty cell, never a zero.
 
 #include "document/units.h"
@@ -41,7 +43,9 @@ class StudyTableModel : public QAbstractTableModel {
   QVariant headerData(int section, Qt::Orientation orientation, int role = Qt::DisplayRole) const override;
 
   /// The table as tab-separated text for a spreadsheet: the caution and the grid first as '#'
-  /// lines, then the header (units in it) and one line per point, numbers in display units.
+  /// lines, then the header (units in it) and one line per point, numbers in display units at
+  /// full precision (the shortest text that reads back to the same double, C locale:
+  /// cw::formatNumber, as the core's exporters write).
   QString toTabSeparated() const;
 
  private:

@@ -1,16 +1,16 @@
-#include "engine/evaluate.h"
+#include "evaluation/evaluate.h"
 
 #include "analysis/ideal_twin.h"
 #include "engine/case_validation.h"
+#include "engine/gas_model_factory.h"
 #include "engine/turbojet.h"
-#include "thermo/gas_model_factory.h"
 
 namespace cw::engine {
 
 Evaluation evaluateCase(const Case& inputs, bool withPaths) {
   requireValidCase(inputs);
   // The twin changes only losses, so it shares the case's gas model; neither case is copied again.
-  const auto gasModel = thermo::makeGasModel(inputs.gasModel, inputs.fuel, inputs.flight.specificHumidity);
+  const auto gasModel = makeGasModel(inputs.gasModel, inputs.fuel, inputs.flight.specificHumidity);
   Evaluation evaluation;
   evaluation.actual = evaluateTurbojet(inputs, *gasModel, withPaths);
   const double burnerExitTemperature = evaluation.actual.station("4").totalTemperature;

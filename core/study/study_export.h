@@ -13,18 +13,26 @@
 #include <string>
 #include <vector>
 
-namespace cw::io {
+namespace cw::study {
 
 inline constexpr const char* kStudyFormat = "cyclewright-study";
 inline constexpr int kStudyVersion = 1;
 
 /// CSV text, caution and a description of the grid first as '#' comment lines.
-std::string studyToCsv(const study::TradeStudy& study, const std::vector<study::StudyColumn>& columns);
+std::string studyToCsv(const TradeStudy& study, const std::vector<StudyColumn>& columns);
 
 /// The JSON document of a study.
-nlohmann::json studyToJson(const study::TradeStudy& study, const std::vector<study::StudyColumn>& columns);
+nlohmann::json studyToJson(const TradeStudy& study, const std::vector<StudyColumn>& columns);
 
 /// One line describing the grid, e.g. "carpet: compressor.pressure_ratio 4 to 40 (10 values) x ...".
-std::string describeStudy(const study::TradeStudy& study);
+std::string describeStudy(const TradeStudy& study);
 
+}  // namespace cw::study
+
+namespace cw::io {
+// Transitional: the study export lived in io/ and app/ still names it io::. New code names
+// study::; these go once app/ does.
+using study::describeStudy;
+using study::studyToCsv;
+using study::studyToJson;
 }  // namespace cw::io

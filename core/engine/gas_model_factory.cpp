@@ -1,4 +1,4 @@
-#include "thermo/gas_model_factory.h"
+#include "engine/gas_model_factory.h"
 
 #include "common/error.h"
 #include "thermo/calorically_perfect_model.h"
@@ -8,10 +8,16 @@
 
 #include <variant>
 
-namespace cw::thermo {
+namespace cw::engine {
 
-std::shared_ptr<const GasModel> makeGasModel(const engine::GasModelInputs& inputs,
-                                             const engine::FuelInputs& fuel, double specificHumidity) {
+using thermo::CaloricallyPerfectModel;
+using thermo::ConstantCpGas;
+using thermo::GasModel;
+using thermo::HydrocarbonFuel;
+using thermo::ThermallyPerfectModel;
+
+std::shared_ptr<const GasModel> makeGasModel(const GasModelInputs& inputs, const thermo::FuelInputs& fuel,
+                                             double specificHumidity) {
   auto hydrocarbon = [&] { return HydrocarbonFuel(fuel.hydrogenCarbonRatio, fuel.lowerHeatingValue); };
   auto stoichiometricRatio = [&] {
     // The element balance costs more than a two-gamma design point: keep the last one per thread
@@ -20,7 +26,7 @@ std::shared_ptr<const GasModel> makeGasModel(const engine::GasModelInputs& input
     thread_local double lastRatio = 0.0;
     if (fuel.hydrogenCarbonRatio != lastHydrogenCarbonRatio || fuel.lowerHeatingValue != lastHeatingValue ||
         specificHumidity != lastHumidity) {
-      lastRatio = stoichiometricFuelAirRatio(humidAir(specificHumidity), hydrocarbon());
+      lastRatio = thermo::stoichiometricFuelAirRatio(thermo::humidAir(specificHumidity), hydrocarbon());
       lastHydrogenCarbonRatio = fuel.hydrogenCarbonRatio;
       lastHeatingValue = fuel.lowerHeatingValue;
       lastHumidity = specificHumidity;
@@ -30,12 +36,12 @@ std::shared_ptr<const GasModel> makeGasModel(const engine::GasModelInputs& input
   // The calorically perfect models measure enthalpy from 0 K (h = cp T), the convention of
   // parametric cycle analysis, so that the burner balance is Mattingly's eq. 7.9.
   constexpr double zeroKelvin = 0.0;
-  if (const auto* c = std::get_if<engine::ConstantCpGasModel>(&inputs.model)) {
+  if (const auto* c = std::get_if<ConstantCpGasModel>(&inputs.model)) {
     auto gas = std::make_shared<const ConstantCpGas>(c->cp, c->gamma, "constant-cp gas", zeroKelvin);
     return std::make_shared<const CaloricallyPerfectModel>("constant-cp", gas, gas, fuel.lowerHeatingValue,
                                                            stoichiometricRatio(), inputs.neglectFuelMass);
   }
-  if (const auto* t = std::get_if<engine::TwoGammaGasModel>(&inputs.model)) {
+  if (const auto* t = std::get_if<TwoGammaGasModel>(&inputs.model)) {
     auto cold = std::make_shared<const ConstantCpGas>(t->coldCp, t->coldGamma, "two-gamma air", zeroKelvin);
     auto hot = std::make_shared<const ConstantCpGas>(t->hotCp, t->hotGamma, "two-gamma products", zeroKelvin);
     return std::make_shared<const CaloricallyPerfectModel>("two-gamma", cold, hot, fuel.lowerHeatingValue,
@@ -57,4 +63,4 @@ std::shared_ptr<const GasModel> makeGasModel(const engine::GasModelInputs& input
   return lastModel;
 }
 
-}  // namespace cw::thermo
+}  // namespace cw::engine

@@ -1,6 +1,7 @@
 #pragma once
 // One call from a case to its evaluation: validate, evaluate the cycle with losses, then
-// its ideal twin at the same burner exit temperature and air mass flow.
+// its ideal twin at the same burner exit temperature and air mass flow. It sits above analysis/
+// (the ideal twin) and keeps the namespace cw::engine: it evaluates an engine case.
 
 #include "engine/case_inputs.h"
 #include "engine/cycle_result.h"

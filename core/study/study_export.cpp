@@ -1,18 +1,15 @@
-#include "io/study_export.h"
+#include "study/study_export.h"
 
 #include "common/error.h"
 #include "common/version.h"
 
 #include <sstream>
 
-namespace cw::io {
+namespace cw::study {
 
 namespace {
 
 using nlohmann::json;
-using study::StudyColumn;
-using study::StudyPoint;
-using study::TradeStudy;
 
 /// A CSV field: quoted (with doubled quotes) when it holds a comma, quote or line break.
 std::string csvField(const std::string& text) {
@@ -41,7 +38,7 @@ json pointJson(const TradeStudy& s, const StudyPoint& point, const std::vector<S
   for (std::size_t k = 0; k < s.axes.size(); ++k)
     inputs[s.axes[k].path] = known[k] ? json(point.inputs[k]) : json(nullptr);
   j["inputs"] = inputs;
-  j["status"] = std::string(study::toString(point.status));
+  j["status"] = std::string(toString(point.status));
   if (!point.reason.empty()) j["reason"] = point.reason;
   j["values"] = pointValues(point, columns);
   return j;
@@ -58,7 +55,7 @@ std::string describeStudy(const TradeStudy& s) {
     text << a.path << ' ' << formatNumber(a.start) << " to " << formatNumber(a.stop) << " (" << a.count
          << (a.count == 1 ? " value)" : " values)");
   }
-  text << ", " << s.points.size() << " points, " << s.count(study::PointStatus::Solved) << " solved";
+  text << ", " << s.points.size() << " points, " << s.count(PointStatus::Solved) << " solved";
   if (s.stopped) text << ", stopped before the end";
   return text.str();
 }
@@ -72,7 +69,7 @@ std::string studyToCsv(const TradeStudy& s, const std::vector<StudyColumn>& colu
   out << ",reason\n";
   for (const StudyPoint& point : s.points) {
     for (std::size_t k = 0; k < s.axes.size(); ++k) out << formatNumber(point.inputs[k]) << ',';
-    out << study::toString(point.status);
+    out << toString(point.status);
     for (const StudyColumn& column : columns) {
       out << ',';
       if (const auto value = column.value(point)) out << formatNumber(*value * column.fileScale);
@@ -99,10 +96,9 @@ json studyToJson(const TradeStudy& s, const std::vector<StudyColumn>& columns) {
   j["columns"] = json::array();
   for (const StudyColumn& c : columns) j["columns"].push_back(c.name);
   json counts = json::object();
-  for (const auto status :
-       {study::PointStatus::Solved, study::PointStatus::InvalidInput, study::PointStatus::NoCycle,
-        study::PointStatus::NotConverged, study::PointStatus::OutOfRange, study::PointStatus::NotRun})
-    counts[std::string(study::toString(status))] = s.count(status);
+  for (const auto status : {PointStatus::Solved, PointStatus::InvalidInput, PointStatus::NoCycle,
+                            PointStatus::NotConverged, PointStatus::OutOfRange, PointStatus::NotRun})
+    counts[std::string(toString(status))] = s.count(status);
   j["counts"] = counts;
   j["design_point"] = pointJson(s, s.designPoint, columns, s.designPointOnAxis);
   j["design_point"]["note"] = "the case as given, before any input is varied";
@@ -116,4 +112,4 @@ json studyToJson(const TradeStudy& s, const std::vector<StudyColumn>& columns) {
   return j;
 }
 
-}  // namespace cw::io
+}  // namespace cw::study

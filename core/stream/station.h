@@ -1,5 +1,7 @@
 #pragma once
-// A station of the gas path (SAE AS755 numbering): its total and static state, flow and gas.
+// A station of the gas path (SAE AS755 numbering): its total and static state, flow and gas; and
+// a stream's total state, what a component takes in and gives out. Below components/ and engine/,
+// which both speak of them; engine/cycle_result.h names them in cw::engine as well.
 
 #include "thermo/gas.h"
 
@@ -7,7 +9,7 @@
 #include <optional>
 #include <string>
 
-namespace cw::engine {
+namespace cw::stream {
 
 struct Station {
   std::string id;  ///< SAE AS755 station number, e.g. "0", "2", "3", "4", "5", "7", "8", "9"
@@ -43,4 +45,4 @@ struct TotalState {
   double fuelAirRatio = 0.0;  ///< f [-]
 };
 
-}  // namespace cw::engine
+}  // namespace cw::stream
