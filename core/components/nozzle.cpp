@@ -161,7 +161,7 @@ Nozzle::Result Nozzle::expand(const stream::TotalState& entry, double ambientPre
       throw NoSolution("nozzle",
                        "the nozzle's losses keep its throat from choking, so its divergent part "
                        "cannot run supersonic; the model does not cover that regime",
-                       {kReasonNozzleNotChoked});
+                       {kReasonNozzleNotChoked, {}, {}, {}});
     result.choked = true;
     exitPressure = exitPressureOfAreaRatio(expander, throat, fixed->exitToThroatAreaRatio, entry);
     exit = expander.at(exitPressure);

@@ -16,7 +16,7 @@ void check(double value, const std::string& which, const char* what, const char*
   throw NoSolution("cycle",
                    "the " + which + " has no finite " + what + where + name +
                        "; the inputs are beyond what the model can evaluate",
-                   {kReasonResultNotFinite});
+                   {kReasonResultNotFinite, {}, {}, {}});
 }
 
 }  // namespace

@@ -40,7 +40,7 @@ NormalShock normalShock(const thermo::Gas& gas, double T1, double p1, double M1)
     for (int i = 0; F(lo) >= 0.0; ++i) {
       if (i >= 60)
         throw NoSolution("normal shock", "no downstream state below the sonic velocity",
-                         {kReasonNormalShock});
+                         {kReasonNormalShock, {}, {}, {}});
       lo *= 0.5;
     }
     V2 = findRoot(F, lo, aStar, "normal shock: downstream velocity");
