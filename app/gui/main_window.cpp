@@ -44,6 +44,10 @@
 #include <QTableView>
 #include <QVBoxLayout>
 
+#include <algorithm>
+#include <limits>
+#include <vector>
+
 // The resources live in a static library; register them once before first use.
 static void initialiseResources() {
   Q_INIT_RESOURCE(resources);
@@ -148,6 +152,7 @@ void MainWindow::createStrip(QVBoxLayout* layout) {
   strip_->setHorizontalScrollBarPolicy(Qt::ScrollBarAsNeeded);
   strip_->setVerticalScrollBarPolicy(Qt::ScrollBarAlwaysOff);
   strip_->setSpacing(3);
+  strip_->setTextElideMode(Qt::ElideRight);  // a name that gives way (fitStrip); whole in its tooltip
   const QFontMetrics metrics(strip_->font());
   for (int i = 0; i < kSectionCount; ++i) {
     auto* item = new QListWidgetItem(sectionName(static_cast<Section>(i)), strip_);
@@ -647,6 +652,26 @@ QString onTwoLines(const QFontMetrics& metrics, const QString& name) {
   return best;
 }
 
+/// The largest width w at least `smallest` such that the widths, none above w, sum to at most
+/// `room`; no cap (INT_MAX) when they fit as they are [px].
+int widthCap(const std::vector<int>& widths, int room, int smallest) {
+  auto total = [&](int cap) {
+    int sum = 0;
+    for (int w : widths) sum += std::min(w, cap);
+    return sum;
+  };
+  if (total(std::numeric_limits<int>::max()) <= room) return std::numeric_limits<int>::max();
+  int low = smallest, high = *std::max_element(widths.begin(), widths.end());
+  while (low < high) {  // the largest cap in [smallest, widest] whose total fits
+    const int mid = (low + high + 1) / 2;
+    if (total(mid) <= room)
+      low = mid;
+    else
+      high = mid - 1;
+  }
+  return low;
+}
+
 }  // namespace
 
 void MainWindow::fitStrip() {
@@ -656,13 +681,24 @@ void MainWindow::fitStrip() {
   int oneLine = 0;
   for (int i = 0; i < kSectionCount; ++i)
     oneLine += stripItemWidth(metrics, stripName(static_cast<Section>(i))) + 2 * strip_->spacing();
-  const bool twoLines = oneLine > strip_->viewport()->width();
+  // The view's inner width from its own (an event filter sees a resize before the viewport's).
+  const int room = strip_->width() - 2 * strip_->frameWidth();
+  const bool twoLines = oneLine > room;
+  std::vector<int> widths;
+  QStringList texts;
   for (int i = 0; i < kSectionCount; ++i) {
     const QString name = stripName(static_cast<Section>(i));
-    const QString text = twoLines ? onTwoLines(metrics, name) : name;
+    texts << (twoLines ? onTwoLines(metrics, name) : name);
+    widths.push_back(stripItemWidth(metrics, texts.back()));
+  }
+  // Still too wide (a dock beside at 1280 px): the widest items give way, elided, to the
+  // same width, no narrower than four characters.
+  const int cap =
+      widthCap(widths, room - kSectionCount * 2 * strip_->spacing() - 2, metrics.averageCharWidth() * 4 + 28);
+  for (int i = 0; i < kSectionCount; ++i) {
     QListWidgetItem* item = strip_->item(i);
-    if (item->text() != text) item->setText(text);
-    const QSize size(stripItemWidth(metrics, text), height);
+    if (item->text() != texts[i]) item->setText(texts[i]);
+    const QSize size(std::min(widths[static_cast<size_t>(i)], cap), height);
     if (item->sizeHint() != size) item->setSizeHint(size);
   }
 }

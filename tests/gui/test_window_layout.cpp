@@ -236,6 +236,13 @@ class TestWindowLayout : public QObject {
     // once grew to 1294 px at 1280 x 800 (the study's table beside its controls set the dock's
     // minimum width).
     QCOMPARE(window.size(), size);
+    // The component strip never scrolls sideways, with a dock beside it too (its widest names
+    // then give way, elided, whole in their tooltips).
+    auto* strip = window.findChild<QListWidget*>("componentStrip");
+    QCOMPARE(strip->horizontalScrollBar()->maximum(), 0);
+    for (int i = 0; i < strip->count(); ++i)
+      QVERIFY2(strip->viewport()->rect().contains(strip->visualItemRect(strip->item(i))),
+               qPrintable(strip->item(i)->text()));
     if (dock == "study") {
       // The study's results the dock's width, at least three rows high (once a sliver).
       auto* table = window.findChild<QTableView*>("studyTable");
