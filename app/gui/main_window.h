@@ -182,6 +182,12 @@ class MainWindow : public QMainWindow {
   /// The stale banner's colours from the window's palette (light or dark).
   void applyBannerPalette();
   void updateStrip();
+  /// The strip's items in one row without a scroll bar: each name on one line while they all
+  /// fit, else a name of several words on two (the strip is two lines high), the longer line
+  /// as short as it can be. The tooltips give each name whole.
+  void fitStrip();
+  /// A section's name in the strip, on one line ("Afterburner (unlit)" while unlit).
+  QString stripName(Section section) const;
   void routeSelection(Section section);
   QSet<QString> stationsOf(Section section) const;
 

@@ -56,8 +56,9 @@ bool isResource(const QString& path) {
 
 }  // namespace
 
-WindowFiles::WindowFiles(QMainWindow& window, CaseDocument& document, AppSettings& settings)
-    : QObject(&window), window_(window), document_(document), settings_(settings) {
+WindowFiles::WindowFiles(QMainWindow& window, CaseDocument& document, AppSettings& settings,
+                         const DisplayUnits& units)
+    : QObject(&window), window_(window), document_(document), settings_(settings), units_(units) {
   connect(&document_, &CaseDocument::modifiedChanged, this, &WindowFiles::updateTitle);
 }
 
@@ -83,7 +84,7 @@ bool WindowFiles::openBaseline(const QString& path, QString* error) {
     const engine::Case inputs = readCaseAt(path);
     const QString title =
         inputs.title.empty() ? QFileInfo(path).fileName() : QString::fromStdString(inputs.title);
-    if (document_.setBaseline(inputs, title, &why)) {
+    if (document_.setBaseline(inputs, title, &why, &units_)) {
       window_.statusBar()->showMessage(tr("Baseline: %1").arg(title));
       return true;
     }

@@ -13,8 +13,10 @@ namespace {
 void check(double value, const std::string& which, const char* what, const char* where = "",
            const std::string& name = {}) {
   if (std::isfinite(value)) return;
-  throw NoSolution("cycle", "the " + which + " has no finite " + what + where + name +
-                                "; the inputs are beyond what the model can evaluate");
+  throw NoSolution("cycle",
+                   "the " + which + " has no finite " + what + where + name +
+                       "; the inputs are beyond what the model can evaluate",
+                   {kReasonResultNotFinite, {}, {}, {}});
 }
 
 }  // namespace

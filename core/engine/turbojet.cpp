@@ -85,7 +85,12 @@ auto within(const char* component, Run&& run) -> decltype(run()) {
   try {
     return run();
   } catch (const OutOfRange& e) {
-    throw OutOfRange(component, std::string("a state beyond the gas data (") + e.what() + ")");
+    // The state's own parts when it has them (subject, value, range), for a front end's message.
+    ErrorDetail detail;
+    if (e.detail().reason == kReasonOutsideRange)
+      detail = {kReasonBeyondGasData, e.where(), e.detail().quantities, e.detail().validRange};
+    throw OutOfRange(component, std::string("a state beyond the gas data (") + e.what() + ")",
+                     std::move(detail));
   }
 }
 
@@ -156,7 +161,11 @@ CycleResult Assembly::at(double airMassFlow) const {
   try {
     face = flow::fromTotal(*air, t2.temperature, t2.pressure, inputs_.sizing.engineFaceMach);
   } catch (const Error& e) {
-    throw InvalidInput("/sizing/engine_face_mach", std::string("at the engine face: ") + e.what());
+    ErrorDetail detail;
+    if (e.detail().reason == kReasonOutsideRange)
+      detail = {kReasonEngineFaceState, e.where(), e.detail().quantities, e.detail().validRange};
+    throw InvalidInput("/sizing/engine_face_mach", std::string("at the engine face: ") + e.what(),
+                       std::move(detail));
   }
   s2.staticTemperature = face.local.temperature;
   s2.staticPressure = face.local.pressure;
@@ -220,8 +229,10 @@ CycleResult Assembly::at(double airMassFlow) const {
   perf.ramDrag = airMassFlow * free.velocity;
   perf.netThrust = perf.grossThrust - perf.ramDrag;
   if (!(perf.netThrust > 0.0))
-    throw NoSolution("cycle", "the net thrust " + messageNumber(perf.netThrust) +
-                                  " N is not positive: the jet is slower than the flight speed");
+    throw NoSolution("cycle",
+                     "the net thrust " + messageNumber(perf.netThrust) +
+                         " N is not positive: the jet is slower than the flight speed",
+                     {kReasonThrustNotPositive, {}, {{perf.netThrust, "N"}}, {}});
   perf.specificThrust = perf.netThrust / airMassFlow;
   perf.fuelFlow = combustion.fuelMassFlow + afterburnerFuel;
   perf.fuelAirRatio = perf.fuelFlow / s3.massFlow;
