@@ -6,7 +6,8 @@
 #include "components/inlet.h"
 #include "engine/isobars.h"
 #include "engine/process_paths.h"
-#include "engine/turbojet.h"
+#include "engine/free_stream.h"
+#include "network/engine.h"
 #include "evaluation/evaluate.h"
 #include "thermo/constant_cp_gas.h"
 
@@ -249,7 +250,7 @@ class TestTurbojet : public QObject {
     const double specificThrust = a0 * (v9a0 - mach);
     const double f = cp * T0 * (tauL - tauR * tauC) / hPR;
 
-    const CycleResult r = Turbojet(idealConstantCpCase(pressureRatio, exitTemperature, mach)).evaluate();
+    const CycleResult r = cw::network::Engine(idealConstantCpCase(pressureRatio, exitTemperature, mach)).evaluate();
     const double tol = 1e-9;
     QVERIFY2(relative(r.performance.specificThrust, specificThrust) < tol,
              qPrintable(QString::number(r.performance.specificThrust, 'g', 15) + " vs " +
@@ -314,7 +315,7 @@ class TestTurbojet : public QObject {
     c.turbine = TurbineInputs{Efficiency{EfficiencyBasis::Polytropic, et}, etaM, 0.0};
     c.jetPipe.pressureLossFraction = 1 - piN;
     c.nozzle = NozzleInputs{FullyExpandingNozzle{}, NozzleLossBasis::VelocityCoefficient, 1.0, 1.0};
-    const CycleResult r = Turbojet(c).evaluate();
+    const CycleResult r = cw::network::Engine(c).evaluate();
     QVERIFY2(relative(r.performance.specificThrust, specificThrust) < 1e-9,
              qPrintable(QString::number(r.performance.specificThrust, 'g', 15) + " vs " +
                         QString::number(specificThrust, 'g', 15)));
@@ -384,7 +385,7 @@ class TestTurbojet : public QObject {
     c.jetPipe.pressureLossFraction = 1 - piN;
     c.nozzle =
         NozzleInputs{ConvergentNozzle{}, NozzleLossBasis::VelocityCoefficient, velocityCoefficient, 0.97};
-    const CycleResult r = Turbojet(c).evaluate();
+    const CycleResult r = cw::network::Engine(c).evaluate();
     const Station& s8 = r.station("8");
     QVERIFY(r.performance.nozzleChoked);
     QCOMPARE(s8.mach, 1.0);  // exactly
@@ -411,7 +412,7 @@ class TestTurbojet : public QObject {
     if (model == 1) c.gasModel.model = TwoGammaGasModel{};
     c.turbine.powerOfftake = 150e3;
     c.compressor.bleedFraction = 0.03;
-    const Turbojet engine(c);
+    const cw::network::Engine engine(c);
     const CycleResult r = engine.evaluate();
     const Station &s2 = r.station("2"), &s3 = r.station("3"), &s4 = r.station("4"), &s5 = r.station("5");
     const double compressorPower = s2.massFlow * (s3.totalEnthalpy - s2.totalEnthalpy);
@@ -636,7 +637,7 @@ class TestTurbojet : public QObject {
     c.compressor.pressureRatio = 40.0;
     c.burner.setting = ExitTemperatureSetting{950.0};  // just above the compressor exit (922 K)
     try {
-      Turbojet(c).evaluate();
+      cw::network::Engine(c).evaluate();
       QFAIL("expected NoSolution");
     } catch (const cw::NoSolution& e) {
       QVERIFY2(std::string(e.what()).find("cannot drive the compressor") != std::string::npos ||
@@ -649,7 +650,7 @@ class TestTurbojet : public QObject {
   // constant pressure; common practice), and the one through station 3 passes through its state.
   void isobarsThroughStations() {
     Case c;
-    const CycleResult r = Turbojet(c).evaluate();
+    const CycleResult r = cw::network::Engine(c).evaluate();
     const auto isobars = stationIsobars(r, 250.0, 1600.0, 40);
     QVERIFY(isobars.size() >= 5);
     const Station& s3 = r.station("3");
@@ -683,9 +684,9 @@ class TestTurbojet : public QObject {
     c.gasModel.model = TwoGammaGasModel{};
     c.turbine.powerOfftake = 100e3;
     c.design.target = NetThrustTarget{25000.0};
-    const CycleResult r = Turbojet(c).evaluate();
+    const CycleResult r = cw::network::Engine(c).evaluate();
     QVERIFY(relative(r.performance.netThrust, 25000.0) < 1e-9);
-    const CycleResult check = Turbojet(c).evaluateAt(r.sizing.airMassFlow);
+    const CycleResult check = cw::network::Engine(c).evaluateAt(r.sizing.airMassFlow);
     QVERIFY(relative(check.performance.netThrust, 25000.0) < 1e-9);
     // Face area: A2 = W2 / (rho2 V2); diameter from the annulus (common practice, no source).
     const double hub = c.sizing.hubToTipRatio;
@@ -696,7 +697,7 @@ class TestTurbojet : public QObject {
   // Random valid cases across the input ranges, every gas model (two-gamma with hot gammas up to
   // 5/3), Mach 0 to 4.5, pressure ratios to 60, cold and hot days: each is finite and physical, or
   // a clear error. Physical: thrust and fuel flow positive; 0 < eta_th < 1; 0 <= eta_p <= 1 (above
-  // 0 in flight) and eta_o = eta_th eta_p (engine/turbojet.cpp, the efficiencies); every lossy
+  // 0 in flight) and eta_o = eta_th eta_p (network/design_point.cpp, the efficiencies); every lossy
   // component generates entropy (cycle summary and exergy view, second law); the exergy balance
   // closes to 1e-9 of the fuel exergy; removing every loss never lowers specific thrust.
   void randomCasesAreFiniteOrAClearError() {

@@ -1,0 +1,86 @@
+#pragma once
+// The running state of one design point through a network: the stations reached so far (each with
+// the stream's total state there), the shafts' work, the components' summaries and what the
+// nozzles and heat additions gave. Components read their entry stations from it and put their exit
+// stations, work and summary into it (network_component.h); the design sequence
+// (design_point.h) adds up performance and sizing from it.
+
+#include "common/error.h"
+#include "engine/cycle_result.h"
+#include "engine/free_stream.h"
+#include "flow/flow_state.h"
+#include "thermo/gas_model.h"
+
+#include <string>
+#include <vector>
+
+namespace cw::network {
+
+/// What does not depend on the air mass flow: found once per network and flight condition.
+struct DesignContext {
+  const thermo::GasModel& model;
+  std::shared_ptr<const thermo::Gas> air;
+  engine::FreeStream freeStream;
+  flow::FlowState free;           ///< the free stream, static state (T0, p0) at M0
+  double entropyReference = 0.0;  ///< s(T0, p0) of the air [J/(kg K)]
+  bool withPaths = true;          ///< process paths for the charts
+};
+
+/// A station reached: as reported, and the stream's total state there (what the next component
+/// takes in). An internal station lies inside a component and is not reported.
+struct StationState {
+  stream::Station station;
+  stream::TotalState total;
+  bool reported = true;
+};
+
+/// What one nozzle gave.
+struct NozzleRecord {
+  std::string nozzle;  ///< its component name
+  std::string throat;  ///< station ids
+  std::string exit;
+  double grossThrust = 0.0;  ///< [N]
+  bool choked = false;
+};
+
+class DesignState {
+ public:
+  DesignState(const DesignContext& context, double airMassFlow)
+      : context(context), airMassFlow(airMassFlow) {}
+
+  const DesignContext& context;
+  double airMassFlow;  ///< W0 = W2 [kg/s]
+
+  /// The station with the given id; throws std::out_of_range when it has not been reached.
+  const StationState& at(const std::string& id) const;
+  /// Adds a station, its entropy on the result's datum (zero at the free stream's static state).
+  void put(stream::Station station, const stream::TotalState& total, bool reported = true);
+  /// Adds a station at rest from a total state (no area known there).
+  void putAtRest(const std::string& id, const stream::TotalState& total, bool reported = true);
+  /// The station with the stream at rest, its entropy on the result's datum.
+  stream::Station atRest(const std::string& id, const stream::TotalState& total) const;
+
+  /// The named shaft's balance; throws std::out_of_range for a shaft the network lacks.
+  engine::ShaftBalance& shaft(const std::string& name);
+
+  std::vector<StationState> stations;  ///< in the order reached: flow order
+  std::vector<engine::ShaftBalance> shafts;
+  std::vector<engine::ComponentSummary> summaries;  ///< in flow order
+  std::vector<NozzleRecord> nozzles;                ///< in flow order
+  double fuelFlow = 0.0;                            ///< every heat addition's [kg/s]
+};
+
+/// S_gen = W_out (s_out - s_in) of an adiabatic passage between two stations. [W/K]
+double entropyRate(const stream::Station& in, const stream::Station& out);
+
+/// Runs one component: a state beyond the gas data found inside it is reported against the component.
+template <typename Run>
+auto within(const std::string& component, Run&& run) -> decltype(run()) {
+  try {
+    return run();
+  } catch (const OutOfRange& e) {
+    throw OutOfRange(component, std::string("a state beyond the gas data (") + e.what() + ")");
+  }
+}
+
+}  // namespace cw::network

@@ -1,0 +1,34 @@
+#include "network/inlet_element.h"
+
+#include "engine/process_paths.h"
+#include "flow/compressible_flow.h"
+
+namespace cw::network {
+
+void InletElement::design(DesignState& state) const {
+  const stream::Station& free = state.at(entry()).station;
+  const stream::TotalState t2 = within(name(), [&] { return inlet_.exit(free); });
+  stream::Station s2 = state.atRest(exit(), t2);
+  flow::FlowState face;
+  try {
+    face = flow::fromTotal(*t2.gas, t2.temperature, t2.pressure, faceMach_);
+  } catch (const Error& e) {
+    throw InvalidInput("/sizing/engine_face_mach", std::string("at the engine face: ") + e.what());
+  }
+  s2.staticTemperature = face.local.temperature;
+  s2.staticPressure = face.local.pressure;
+  s2.mach = face.mach;
+  s2.velocity = face.velocity;
+  s2.area = t2.massFlow / face.massFlux();
+  state.summaries.push_back({name(), 0.0, std::nullopt, entropyRate(free, s2)});
+  state.put(std::move(s2), t2);
+}
+
+void InletElement::addPath(const DesignState& state, std::vector<engine::ProcessPath>& paths) const {
+  const stream::Station &s0 = state.at(entry()).station, &s2 = state.at(exit()).station;
+  paths.push_back(engine::pressurePath(name(), entry(), exit(), *s0.gas, s0.staticTemperature,
+                                       s0.staticPressure, s2.totalTemperature, s2.totalPressure,
+                                       state.context.entropyReference));
+}
+
+}  // namespace cw::network

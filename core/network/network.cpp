@@ -1,0 +1,34 @@
+#include "network/network.h"
+
+#include "network/nozzle_element.h"
+
+namespace cw::network {
+
+Network::Network(StationRoles roles) : roles_(std::move(roles)) {}
+
+Network& Network::addShaft(const ShaftSpec& shaft) {
+  shafts_.push_back(shaft);
+  return *this;
+}
+
+const std::shared_ptr<const engine::NetworkDescription>& Network::description() const {
+  if (description_) return description_;
+  auto d = std::make_shared<engine::NetworkDescription>();
+  d->freeStream = roles_.freeStream;
+  d->engineFace = roles_.engineFace;
+  d->burnerEntry = roles_.burnerEntry;
+  d->burnerExit = roles_.burnerExit;
+  d->staticStations.push_back(roles_.freeStream);
+  for (const auto& component : components_) {
+    component->describe(d->volumes);
+    if (const auto* nozzle = dynamic_cast<const NozzleElement*>(component.get())) {
+      d->throats.push_back(nozzle->throat());
+      d->nozzleExits.push_back(nozzle->exit());
+      d->staticStations.push_back(nozzle->exit());
+    }
+  }
+  description_ = std::move(d);
+  return description_;
+}
+
+}  // namespace cw::network
