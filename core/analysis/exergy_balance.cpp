@@ -13,6 +13,12 @@ namespace {
 
 using engine::ControlVolume;
 
+const engine::ComponentSummary& summaryOf(const engine::CycleResult& r, const std::string& name) {
+  for (const auto& c : r.components)
+    if (c.component == name) return c;
+  throw std::out_of_range("no component " + name);
+}
+
 const engine::ShaftBalance& shaftOf(const engine::CycleResult& r, const std::string& name) {
   for (const auto& s : r.shafts)
     if (s.name == name) return s;
@@ -76,7 +82,7 @@ ExergyBalance exergyBalanceOf(const AuditPoint& point) {
       add(v.name, out.massFlow * sOut - in.massFlow * sIn - fuel * fuelEntropy);
       fuelFlow += fuel;
       fuelEntropyFlow += fuel * fuelEntropy;
-      b.unburntFuel += (1.0 - v.combustionEfficiency) * fuel * lhv;
+      b.unburntFuel += (1.0 - summaryOf(r, v.name).combustionEfficiency) * fuel * lhv;
     } else {
       add(v.name, out.massFlow * (sOut - sIn));
     }

@@ -58,7 +58,8 @@ struct ComponentSummary {
   std::string component;  ///< "inlet", "compressor", ...
   double power = 0.0;     ///< shaft power absorbed (+) or delivered (-) [W]; 0 if none
   std::optional<components::EfficiencyPair> efficiency;  ///< turbomachines and nozzle [-]
-  double entropyGeneration = 0.0;  ///< S_gen [W/K], rate of entropy generated in the component
+  double entropyGeneration = 0.0;     ///< S_gen [W/K], rate of entropy generated in the component
+  double combustionEfficiency = 1.0;  ///< heat additions: the heating value's fraction released [-]
 };
 
 /// A control volume of the second-law balance (analysis/exergy_balance.h), as the network
@@ -90,6 +91,7 @@ struct ShaftBalance {
 
 /// What the network says about its stations and volumes, so that no code outside a topology
 /// names a station id: the charts' isobars, the second-law balance, the burner exit of an audit.
+/// It depends on the topology's shape alone, never on the inputs (networks of one shape share it).
 struct NetworkDescription {
   std::string freeStream;                   ///< the free stream's station ("0")
   std::string engineFace;                   ///< the engine face ("2")

@@ -8,10 +8,9 @@ namespace cw::network {
 
 class CompressorElement : public NetworkComponent {
  public:
-  CompressorElement(std::string name, std::string entry, std::string exit, std::string shaft,
-                    const components::CompressorInputs& inputs)
-      : NetworkComponent(std::move(name), std::move(entry), std::move(exit), std::move(shaft)),
-        compressor_(inputs) {}
+  CompressorElement(std::string_view name, std::string_view entry, std::string_view exit,
+                    std::string_view shaft, const components::CompressorInputs& inputs)
+      : NetworkComponent(name, entry, exit, shaft), compressor_(inputs) {}
 
   void design(DesignState& state) const override;
   void addPath(const DesignState& state, std::vector<engine::ProcessPath>& paths) const override;

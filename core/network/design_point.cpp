@@ -63,34 +63,51 @@ void setEfficiencies(engine::Performance& perf, double wake, double flightVeloci
   perf.overallEfficiency = useful / input;
 }
 
-}  // namespace
-
-DesignPoint::DesignPoint(const engine::Case& inputs, Network network, const thermo::GasModel& model,
-                         bool withPaths)
-    : inputs_(inputs), network_(std::move(network)), context_(contextOf(inputs, model, withPaths)) {
-  network_.description();  // built once, shared by every result
+/// Throws cw::NoSolution unless the net thrust is positive. [N]
+void requireNetThrust(double netThrust) {
+  if (!(netThrust > 0.0))
+    throw NoSolution("cycle", "the net thrust " + messageNumber(netThrust) +
+                                  " N is not positive: the jet is slower than the flight speed");
 }
 
-DesignState DesignPoint::run(double airMassFlow) const {
-  DesignState state(context_, airMassFlow);
-  state.stations.reserve(2 * network_.components().size() + 2);
+}  // namespace
+
+DesignPoint::DesignPoint(const engine::Case& inputs, Topology topology, const thermo::GasModel& model,
+                         bool withPaths)
+    : inputs_(inputs), context_(contextOf(inputs, model, withPaths)) {
+  topology(network_, inputs, model);
+  network_.description();  // built once (unless the topology shares it), shared by every result
+}
+
+void DesignPoint::run(DesignState& state) const {
+  const double airMassFlow = state.airMassFlow;
   state.summaries.reserve(network_.components().size());
   for (const ShaftSpec& shaft : network_.shafts())
     state.shafts.push_back({shaft.name, shaft.mechanicalEfficiency, shaft.powerOfftake, 0.0, 0.0});
-  state.put(freeStreamStation(network_.roles().freeStream, context_, airMassFlow), {});
+  state.put(freeStreamStation(network_.roles().freeStream, context_, airMassFlow));
   for (const auto& component : network_.components()) component->design(state);
-  return state;
 }
 
 engine::CycleResult DesignPoint::at(double airMassFlow) const {
-  DesignState state = run(airMassFlow);
+  DesignState state(context_, airMassFlow);
+  run(state);
   return resultOf(state);
+}
+
+double DesignPoint::netThrustAt(double airMassFlow) const {
+  DesignState state(context_, airMassFlow);
+  run(state);
+  double grossThrust = 0.0;
+  for (const NozzleRecord& n : state.nozzles) grossThrust += n.grossThrust;
+  const double netThrust = grossThrust - airMassFlow * context_.free.velocity;
+  requireNetThrust(netThrust);
+  return netThrust;
 }
 
 engine::CycleResult DesignPoint::resultOf(DesignState& state) const {
   engine::CycleResult result;
   const StationRoles& roles = network_.roles();
-  const stream::Station& s0 = state.at(roles.freeStream).station;
+  const stream::Station& s0 = state.stations.front();  // the free stream, put first by run()
   const double airMassFlow = state.airMassFlow, flightVelocity = context_.free.velocity;
 
   // Performance (Mattingly, Elements of Propulsion, 2006, eqs. 7.1-7.3 and 1.11-1.13), summed
@@ -98,23 +115,20 @@ engine::CycleResult DesignPoint::resultOf(DesignState& state) const {
   engine::Performance& perf = result.performance;
   double jetMassFlow = 0.0, wake = 0.0;
   for (const NozzleRecord& n : state.nozzles) {
-    const stream::Station& exit = state.at(n.exit).station;
     perf.grossThrust += n.grossThrust;
-    jetMassFlow += exit.massFlow;
-    const double slip = n.grossThrust / exit.massFlow - flightVelocity;
-    wake += 0.5 * exit.massFlow * slip * slip;
+    jetMassFlow += n.exitMassFlow;
+    const double slip = n.grossThrust / n.exitMassFlow - flightVelocity;
+    wake += 0.5 * n.exitMassFlow * slip * slip;
   }
   perf.ramDrag = airMassFlow * flightVelocity;
   perf.netThrust = perf.grossThrust - perf.ramDrag;
-  if (!(perf.netThrust > 0.0))
-    throw NoSolution("cycle", "the net thrust " + messageNumber(perf.netThrust) +
-                                  " N is not positive: the jet is slower than the flight speed");
+  requireNetThrust(perf.netThrust);
   perf.specificThrust = perf.netThrust / airMassFlow;
   perf.fuelFlow = state.fuelFlow;
-  perf.fuelAirRatio = perf.fuelFlow / state.at(roles.burnerEntry).station.massFlow;
+  perf.fuelAirRatio = perf.fuelFlow / state.at(roles.burnerEntry).massFlow;
   perf.thrustSpecificFuelConsumption = perf.fuelFlow / perf.netThrust;
   const NozzleRecord& core = state.nozzles.front();
-  perf.jetVelocity = state.at(core.exit).station.velocity;
+  perf.jetVelocity = core.exitVelocity;
   perf.effectiveJetVelocity = perf.grossThrust / jetMassFlow;
   perf.nozzleChoked = core.choked;
   for (const engine::ShaftBalance& shaft : state.shafts) perf.shaftPowerOfftake += shaft.powerOfftake;
@@ -124,11 +138,11 @@ engine::CycleResult DesignPoint::resultOf(DesignState& state) const {
   engine::Sizing& size = result.sizing;
   size.airMassFlow = airMassFlow;
   size.captureArea = s0.area;
-  size.engineFaceArea = *state.at(roles.engineFace).station.area;
+  size.engineFaceArea = *state.at(roles.engineFace).area;
   const double hub = inputs_.sizing.hubToTipRatio;
   size.engineFaceDiameter = std::sqrt(4.0 * size.engineFaceArea / (std::numbers::pi * (1.0 - hub * hub)));
   for (const NozzleRecord& n : state.nozzles)
-    size.nozzles.push_back({n.nozzle, *state.at(n.throat).station.area, *state.at(n.exit).station.area});
+    size.nozzles.push_back({std::string(n.nozzle), n.throatArea, n.exitArea});
   size.throatArea = size.nozzles.front().throatArea;
   size.exitArea = size.nozzles.front().exitArea;
   size.fuelFlow = perf.fuelFlow;
@@ -139,17 +153,17 @@ engine::CycleResult DesignPoint::resultOf(DesignState& state) const {
     paths.reserve(network_.components().size() + state.nozzles.size());
     for (const auto& component : network_.components()) component->addPath(state, paths);
     for (const NozzleRecord& n : state.nozzles) {
-      const stream::Station& exit = state.at(n.exit).station;
-      paths.push_back(engine::closurePath(
-          *exit.gas, exit.staticTemperature, exit.staticPressure, context_.freeStream.temperature,
-          context_.freeStream.pressure, context_.entropyReference, *context_.air, n.exit, roles.freeStream));
+      const stream::Station& exit = state.at(n.exit);
+      paths.push_back(engine::closurePath(*exit.gas, exit.staticTemperature, exit.staticPressure,
+                                          context_.freeStream.temperature, context_.freeStream.pressure,
+                                          context_.entropyReference, *context_.air, std::string(n.exit),
+                                          roles.freeStream));
     }
   }
 
   // The stations, in flow order, moved into the result (each holds a shared gas).
-  result.stations.reserve(state.stations.size());
-  for (StationState& s : state.stations)
-    (s.reported ? result.stations : result.internalStations).push_back(std::move(s.station));
+  result.stations = std::move(state.stations);
+  result.internalStations = std::move(state.internalStations);
   result.components = std::move(state.summaries);
   result.shafts = std::move(state.shafts);
   result.network = network_.description();
@@ -164,11 +178,12 @@ engine::CycleResult DesignPoint::design() const {
   // Net thrust rises with air mass flow (linearly but for the fixed power offtake): the core's
   // Newton solver on W2, started from the linear estimate through the cycle at 10 kg/s, to
   // 1e-12 relative in thrust.
-  const double linearEstimate = 10.0 * required / at(10.0).performance.netThrust;
+  // Each iteration needs the net thrust alone (netThrustAt: the same sum as at()'s).
+  const double linearEstimate = 10.0 * required / netThrustAt(10.0);
   const double w0 = std::isfinite(linearEstimate) && linearEstimate > 0.0 ? linearEstimate : 10.0;
   solve::NonlinearSystem thrustMatch{[this, required](const Eigen::VectorXd& w) {
                                        Eigen::VectorXd f(1);
-                                       f(0) = w(0) > 0.0 ? at(w(0)).performance.netThrust - required
+                                       f(0) = w(0) > 0.0 ? netThrustAt(w(0)) - required
                                                          : std::numeric_limits<double>::quiet_NaN();
                                        return f;
                                      },

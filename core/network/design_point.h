@@ -16,7 +16,8 @@ namespace cw::network {
 /// condition's states do not depend on the air mass flow: they are found once, for every at().
 class DesignPoint {
  public:
-  DesignPoint(const engine::Case& inputs, Network network, const thermo::GasModel& model, bool withPaths);
+  /// Builds the topology's network for the case in place.
+  DesignPoint(const engine::Case& inputs, Topology topology, const thermo::GasModel& model, bool withPaths);
 
   /// The network run at a given engine-face air mass flow W2. [kg/s]
   engine::CycleResult at(double airMassFlow) const;
@@ -24,7 +25,10 @@ class DesignPoint {
   engine::CycleResult design() const;
 
  private:
-  DesignState run(double airMassFlow) const;
+  void run(DesignState& state) const;
+  /// The net thrust at a given air mass flow, the design state run without a result; throws
+  /// cw::NoSolution unless it is positive, as at() does. [N]
+  double netThrustAt(double airMassFlow) const;
   engine::CycleResult resultOf(DesignState& state) const;
 
   const engine::Case& inputs_;

@@ -12,6 +12,7 @@
 #include "thermo/gas_model.h"
 
 #include <string>
+#include <string_view>
 #include <vector>
 
 namespace cw::network {
@@ -26,44 +27,51 @@ struct DesignContext {
   bool withPaths = true;          ///< process paths for the charts
 };
 
-/// A station reached: as reported, and the stream's total state there (what the next component
-/// takes in). An internal station lies inside a component and is not reported.
-struct StationState {
-  stream::Station station;
-  stream::TotalState total;
-  bool reported = true;
-};
-
-/// What one nozzle gave.
+/// What one nozzle gave (views of the topology's static text).
 struct NozzleRecord {
-  std::string nozzle;  ///< its component name
-  std::string throat;  ///< station ids
-  std::string exit;
+  std::string_view nozzle;  ///< its component name
+  std::string_view throat;  ///< station ids
+  std::string_view exit;
   double grossThrust = 0.0;  ///< [N]
   bool choked = false;
+  double exitMassFlow = 0.0;  ///< W9 [kg/s]
+  double exitVelocity = 0.0;  ///< V9 [m/s]
+  double throatArea = 0.0;    ///< geometric A8 [m^2]
+  double exitArea = 0.0;      ///< geometric A9 [m^2]
 };
 
 class DesignState {
  public:
-  DesignState(const DesignContext& context, double airMassFlow)
-      : context(context), airMassFlow(airMassFlow) {}
+  DesignState(const DesignContext& context, double airMassFlow) : context(context), airMassFlow(airMassFlow) {
+    stations.reserve(kStations);
+  }
+  DesignState(const DesignState&) = delete;
+  DesignState& operator=(const DesignState&) = delete;
+
+  /// Stations reserved at once: more than a turbofan's (more are allocated as needed).
+  static constexpr std::size_t kStations = 20;
 
   const DesignContext& context;
   double airMassFlow;  ///< W0 = W2 [kg/s]
 
-  /// The station with the given id; throws std::out_of_range when it has not been reached.
-  const StationState& at(const std::string& id) const;
-  /// Adds a station, its entropy on the result's datum (zero at the free stream's static state).
-  void put(stream::Station station, const stream::TotalState& total, bool reported = true);
+  /// The station with the given id, reported or internal; throws std::out_of_range when it has
+  /// not been reached.
+  const stream::Station& at(std::string_view id) const;
+  /// The stream's total state at a station: what the next component takes in.
+  stream::TotalState totalAt(std::string_view id) const;
+  /// Adds a station (its entropy on the result's datum, zero at the free stream's static state);
+  /// an internal one lies inside a component and is not reported.
+  void put(stream::Station station, bool reported = true);
   /// Adds a station at rest from a total state (no area known there).
-  void putAtRest(const std::string& id, const stream::TotalState& total, bool reported = true);
+  void putAtRest(std::string_view id, const stream::TotalState& total, bool reported = true);
   /// The station with the stream at rest, its entropy on the result's datum.
-  stream::Station atRest(const std::string& id, const stream::TotalState& total) const;
+  stream::Station atRest(std::string_view id, const stream::TotalState& total) const;
 
   /// The named shaft's balance; throws std::out_of_range for a shaft the network lacks.
-  engine::ShaftBalance& shaft(const std::string& name);
+  engine::ShaftBalance& shaft(std::string_view name);
 
-  std::vector<StationState> stations;  ///< in the order reached: flow order
+  std::vector<stream::Station> stations;          ///< reported, in the order reached: flow order
+  std::vector<stream::Station> internalStations;  ///< inside components
   std::vector<engine::ShaftBalance> shafts;
   std::vector<engine::ComponentSummary> summaries;  ///< in flow order
   std::vector<NozzleRecord> nozzles;                ///< in flow order
@@ -75,11 +83,11 @@ double entropyRate(const stream::Station& in, const stream::Station& out);
 
 /// Runs one component: a state beyond the gas data found inside it is reported against the component.
 template <typename Run>
-auto within(const std::string& component, Run&& run) -> decltype(run()) {
+auto within(std::string_view component, Run&& run) -> decltype(run()) {
   try {
     return run();
   } catch (const OutOfRange& e) {
-    throw OutOfRange(component, std::string("a state beyond the gas data (") + e.what() + ")");
+    throw OutOfRange(std::string(component), std::string("a state beyond the gas data (") + e.what() + ")");
   }
 }
 

@@ -16,12 +16,12 @@ engine::CycleResult Engine::evaluate() const {
 }
 
 engine::CycleResult Engine::evaluateAt(double airMassFlow) const {
-  return DesignPoint(inputs_, networkOf(inputs_, *gasModel_), *gasModel_, withPaths_).at(airMassFlow);
+  return DesignPoint(inputs_, topologyOf(inputs_), *gasModel_, withPaths_).at(airMassFlow);
 }
 
 engine::CycleResult evaluateEngine(const engine::Case& inputs, const thermo::GasModel& gasModel,
                                    bool withPaths) {
-  return DesignPoint(inputs, networkOf(inputs, gasModel), gasModel, withPaths).design();
+  return DesignPoint(inputs, topologyOf(inputs), gasModel, withPaths).design();
 }
 
 }  // namespace cw::network

@@ -14,10 +14,11 @@ class HeatAdditionElement : public NetworkComponent {
  public:
   using Setting = std::variant<components::ExitTemperatureSetting, components::FuelAirRatioSetting>;
 
-  HeatAdditionElement(std::string name, std::string entry, std::string exit, const thermo::GasModel& model,
-                      Setting setting, double pressureLossFraction, double combustionEfficiency)
-      : NetworkComponent(name, std::move(entry), std::move(exit)),
-        heating_(std::move(name), model, pressureLossFraction, combustionEfficiency),
+  HeatAdditionElement(std::string_view name, std::string_view entry, std::string_view exit,
+                      const thermo::GasModel& model, Setting setting, double pressureLossFraction,
+                      double combustionEfficiency)
+      : NetworkComponent(name, entry, exit),
+        heating_(std::string(name), model, pressureLossFraction, combustionEfficiency),
         setting_(setting),
         combustionEfficiency_(combustionEfficiency) {}
 

@@ -6,7 +6,7 @@
 namespace cw::network {
 
 void InletElement::design(DesignState& state) const {
-  const stream::Station& free = state.at(entry()).station;
+  const stream::Station& free = state.at(entry());
   const stream::TotalState t2 = within(name(), [&] { return inlet_.exit(free); });
   stream::Station s2 = state.atRest(exit(), t2);
   flow::FlowState face;
@@ -20,15 +20,15 @@ void InletElement::design(DesignState& state) const {
   s2.mach = face.mach;
   s2.velocity = face.velocity;
   s2.area = t2.massFlow / face.massFlux();
-  state.summaries.push_back({name(), 0.0, std::nullopt, entropyRate(free, s2)});
-  state.put(std::move(s2), t2);
+  state.summaries.push_back({std::string(name()), 0.0, std::nullopt, entropyRate(free, s2)});
+  state.put(std::move(s2));
 }
 
 void InletElement::addPath(const DesignState& state, std::vector<engine::ProcessPath>& paths) const {
-  const stream::Station &s0 = state.at(entry()).station, &s2 = state.at(exit()).station;
-  paths.push_back(engine::pressurePath(name(), entry(), exit(), *s0.gas, s0.staticTemperature,
-                                       s0.staticPressure, s2.totalTemperature, s2.totalPressure,
-                                       state.context.entropyReference));
+  const stream::Station &s0 = state.at(entry()), &s2 = state.at(exit());
+  paths.push_back(engine::pressurePath(std::string(name()), std::string(entry()), std::string(exit()),
+                                       *s0.gas, s0.staticTemperature, s0.staticPressure, s2.totalTemperature,
+                                       s2.totalPressure, state.context.entropyReference));
 }
 
 }  // namespace cw::network

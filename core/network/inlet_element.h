@@ -9,11 +9,9 @@ namespace cw::network {
 
 class InletElement : public NetworkComponent {
  public:
-  InletElement(std::string name, std::string entry, std::string exit, const components::InletInputs& inputs,
-               double faceMach)
-      : NetworkComponent(std::move(name), std::move(entry), std::move(exit)),
-        inlet_(inputs),
-        faceMach_(faceMach) {}
+  InletElement(std::string_view name, std::string_view entry, std::string_view exit,
+               const components::InletInputs& inputs, double faceMach)
+      : NetworkComponent(name, entry, exit), inlet_(inputs), faceMach_(faceMach) {}
 
   void design(DesignState& state) const override;
   void addPath(const DesignState& state, std::vector<engine::ProcessPath>& paths) const override;

@@ -4,7 +4,13 @@
 
 namespace cw::network {
 
-Network::Network(StationRoles roles) : roles_(std::move(roles)) {}
+Network::Network() {
+  components_.reserve(12);
+}
+
+Network::~Network() {
+  for (NetworkComponent* component : components_) component->~NetworkComponent();
+}
 
 Network& Network::addShaft(const ShaftSpec& shaft) {
   shafts_.push_back(shaft);
@@ -19,12 +25,13 @@ const std::shared_ptr<const engine::NetworkDescription>& Network::description() 
   d->burnerEntry = roles_.burnerEntry;
   d->burnerExit = roles_.burnerExit;
   d->staticStations.push_back(roles_.freeStream);
+  d->volumes.reserve(2 * components_.size());
   for (const auto& component : components_) {
     component->describe(d->volumes);
-    if (const auto* nozzle = dynamic_cast<const NozzleElement*>(component.get())) {
-      d->throats.push_back(nozzle->throat());
-      d->nozzleExits.push_back(nozzle->exit());
-      d->staticStations.push_back(nozzle->exit());
+    if (const auto* nozzle = dynamic_cast<const NozzleElement*>(component)) {
+      d->throats.emplace_back(nozzle->throat());
+      d->nozzleExits.emplace_back(nozzle->exit());
+      d->staticStations.emplace_back(nozzle->exit());
     }
   }
   description_ = std::move(d);

@@ -3,7 +3,11 @@
 namespace cw::network {
 
 void NetworkComponent::describe(std::vector<engine::ControlVolume>& volumes) const {
-  volumes.push_back({name_, engine::ControlVolume::Kind::Adiabatic, entry_, exit_, {}, 1.0});
+  volumes.push_back({std::string(name_),
+                     engine::ControlVolume::Kind::Adiabatic,
+                     std::string(entry_),
+                     std::string(exit_),
+                     {}});
 }
 
 }  // namespace cw::network

@@ -18,6 +18,7 @@
 #include "network/design_state.h"
 
 #include <string>
+#include <string_view>
 #include <vector>
 
 namespace cw::network {
@@ -25,17 +26,19 @@ namespace cw::network {
 class NetworkComponent {
  public:
   /// name: the component's role ("compressor", "high_pressure_turbine", ...); entry and exit:
-  /// station ids; shaft: the shaft it works on, empty for none.
-  NetworkComponent(std::string name, std::string entry, std::string exit, std::string shaft = {})
-      : name_(std::move(name)), entry_(std::move(entry)), exit_(std::move(exit)), shaft_(std::move(shaft)) {}
+  /// station ids; shaft: the shaft it works on, empty for none. All four are a topology's static
+  /// text (string literals): the component keeps views of them.
+  NetworkComponent(std::string_view name, std::string_view entry, std::string_view exit,
+                   std::string_view shaft = {})
+      : name_(name), entry_(entry), exit_(exit), shaft_(shaft) {}
   virtual ~NetworkComponent() = default;
   NetworkComponent(const NetworkComponent&) = delete;
   NetworkComponent& operator=(const NetworkComponent&) = delete;
 
-  const std::string& name() const { return name_; }
-  const std::string& entry() const { return entry_; }
-  const std::string& exit() const { return exit_; }
-  const std::string& shaft() const { return shaft_; }
+  std::string_view name() const { return name_; }
+  std::string_view entry() const { return entry_; }
+  std::string_view exit() const { return exit_; }
+  std::string_view shaft() const { return shaft_; }
 
   /// The design point: reads the entry station from the state, puts the exit station(s), the
   /// shaft work and the component's summary.
@@ -46,7 +49,7 @@ class NetworkComponent {
   virtual void describe(std::vector<engine::ControlVolume>& volumes) const;
 
  private:
-  std::string name_, entry_, exit_, shaft_;
+  std::string_view name_, entry_, exit_, shaft_;
 };
 
 }  // namespace cw::network

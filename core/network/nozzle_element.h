@@ -9,19 +9,17 @@ namespace cw::network {
 
 class NozzleElement : public NetworkComponent {
  public:
-  NozzleElement(std::string name, std::string entry, std::string throat, std::string exit,
+  NozzleElement(std::string_view name, std::string_view entry, std::string_view throat, std::string_view exit,
                 const components::NozzleInputs& inputs)
-      : NetworkComponent(std::move(name), std::move(entry), std::move(exit)),
-        throat_(std::move(throat)),
-        nozzle_(inputs) {}
+      : NetworkComponent(name, entry, exit), throat_(throat), nozzle_(inputs) {}
 
-  const std::string& throat() const { return throat_; }
+  std::string_view throat() const { return throat_; }
 
   void design(DesignState& state) const override;
   void addPath(const DesignState& state, std::vector<engine::ProcessPath>& paths) const override;
 
  private:
-  std::string throat_;
+  std::string_view throat_;
   components::Nozzle nozzle_;
 };
 

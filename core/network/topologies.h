@@ -16,10 +16,10 @@
 
 namespace cw::network {
 
-Network turbojetNetwork(const engine::Case& inputs, const thermo::GasModel& model);
-Network twoSpoolTurbojetNetwork(const engine::Case& inputs, const thermo::GasModel& model);
+void turbojet(Network& network, const engine::Case& inputs, const thermo::GasModel& model);
+void twoSpoolTurbojet(Network& network, const engine::Case& inputs, const thermo::GasModel& model);
 
 /// The topology of the case's architecture.
-Network networkOf(const engine::Case& inputs, const thermo::GasModel& model);
+Topology topologyOf(const engine::Case& inputs);
 
 }  // namespace cw::network

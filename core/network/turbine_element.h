@@ -11,10 +11,9 @@ namespace cw::network {
 
 class TurbineElement : public NetworkComponent {
  public:
-  TurbineElement(std::string name, std::string entry, std::string exit, std::string shaft,
+  TurbineElement(std::string_view name, std::string_view entry, std::string_view exit, std::string_view shaft,
                  const components::Efficiency& efficiency)
-      : NetworkComponent(std::move(name), std::move(entry), std::move(exit), std::move(shaft)),
-        efficiency_(efficiency) {}
+      : NetworkComponent(name, entry, exit, shaft), efficiency_(efficiency) {}
 
   void design(DesignState& state) const override;
   void addPath(const DesignState& state, std::vector<engine::ProcessPath>& paths) const override;
