@@ -14,6 +14,11 @@ engine::Case idealTwinOf(const engine::Case& actual, double burnerExitTemperatur
   twin.burner.pressureLossFraction = 0.0;
   twin.burner.combustionEfficiency = 1.0;
   twin.turbine = TurbineInputs{Efficiency{EfficiencyBasis::Isentropic, 1.0}, 1.0, 0.0};
+  if (actual.architecture == Architecture::TwoSpoolTurbojet) {  // its LP spool likewise
+    twin.lowPressureCompressor.efficiency = Efficiency{EfficiencyBasis::Isentropic, 1.0};
+    twin.lowPressureCompressor.bleedFraction = 0.0;
+    twin.lowPressureTurbine = TurbineInputs{Efficiency{EfficiencyBasis::Isentropic, 1.0}, 1.0, 0.0};
+  }
   twin.jetPipe.pressureLossFraction = 0.0;
   twin.afterburner.pressureLossFractionLit = 0.0;
   twin.afterburner.pressureLossFractionUnlit = 0.0;

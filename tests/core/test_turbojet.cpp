@@ -4,11 +4,12 @@
 #include "analysis/ideal_twin.h"
 #include "common/error.h"
 #include "components/inlet.h"
+#include "engine/free_stream.h"
 #include "engine/isobars.h"
 #include "engine/process_paths.h"
-#include "engine/free_stream.h"
-#include "network/engine.h"
 #include "evaluation/evaluate.h"
+#include "ideal_turbojet.h"
+#include "network/engine.h"
 #include "thermo/constant_cp_gas.h"
 
 #include <QTest>
@@ -20,24 +21,8 @@ using namespace cw::engine;
 
 namespace {
 
-/// A case on the constant-cp model with every component ideal and the fuel mass neglected,
-/// at the flight condition of Mattingly's ideal turbojet examples (M0 = 2, T0 = 216.7 K).
-Case idealConstantCpCase(double pressureRatio, double burnerExitTemperature, double mach) {
-  Case c;
-  c.flight.ambient = GivenAmbient{216.7, 19330.0};
-  c.flight.mach = mach;
-  c.design.target = AirMassFlowTarget{50.0};
-  c.fuel.lowerHeatingValue = 42.8e6;
-  c.gasModel.model = ConstantCpGasModel{1004.0, 1.4};
-  c.gasModel.neglectFuelMass = true;
-  c = cw::analysis::idealTwinOf(c, burnerExitTemperature, 50.0);
-  c.compressor.pressureRatio = pressureRatio;
-  return c;
-}
-
-double relative(double a, double b) {
-  return std::abs(a - b) / std::max(std::abs(b), 1e-300);
-}
+using cw::test::idealConstantCpCase;
+using cw::test::relative;
 
 /// A random valid case: gas model by i % 3, two-gamma with a random hot gas, the rest uniform
 /// over ranges a little inside the valid ones.
@@ -240,32 +225,25 @@ class TestTurbojet : public QObject {
     QFETCH(double, mach);
     QFETCH(double, pressureRatio);
     QFETCH(double, exitTemperature);
-    const double gamma = 1.4, cp = 1004.0, R = cp * (gamma - 1) / gamma, T0 = 216.7, hPR = 42.8e6;
-    const double a0 = std::sqrt(gamma * R * T0);
-    const double tauR = 1 + 0.5 * (gamma - 1) * mach * mach;
-    const double tauC = std::pow(pressureRatio, (gamma - 1) / gamma);
-    const double tauL = exitTemperature / T0;
-    const double tauT = 1 - tauR / tauL * (tauC - 1);
-    const double v9a0 = std::sqrt(2 / (gamma - 1) * tauL / (tauR * tauC) * (tauR * tauC * tauT - 1));
-    const double specificThrust = a0 * (v9a0 - mach);
-    const double f = cp * T0 * (tauL - tauR * tauC) / hPR;
+    const cw::test::IdealTurbojet j = cw::test::idealTurbojet(mach, pressureRatio, exitTemperature);
 
-    const CycleResult r = cw::network::Engine(idealConstantCpCase(pressureRatio, exitTemperature, mach)).evaluate();
+    const CycleResult r =
+        cw::network::Engine(idealConstantCpCase(pressureRatio, exitTemperature, mach)).evaluate();
     const double tol = 1e-9;
-    QVERIFY2(relative(r.performance.specificThrust, specificThrust) < tol,
+    QVERIFY2(relative(r.performance.specificThrust, j.specificThrust) < tol,
              qPrintable(QString::number(r.performance.specificThrust, 'g', 15) + " vs " +
-                        QString::number(specificThrust, 'g', 15)));
-    QVERIFY(relative(r.performance.fuelAirRatio, f) < tol);
-    QVERIFY(relative(r.performance.thrustSpecificFuelConsumption, f / specificThrust) < tol);
-    QVERIFY(relative(r.performance.jetVelocity, v9a0 * a0) < tol);
+                        QString::number(j.specificThrust, 'g', 15)));
+    QVERIFY(relative(r.performance.fuelAirRatio, j.fuelAirRatio) < tol);
+    QVERIFY(relative(r.performance.thrustSpecificFuelConsumption, j.tsfc()) < tol);
+    QVERIFY(relative(r.performance.jetVelocity, j.jetVelocity) < tol);
     // Ideal Brayton cycle thermal efficiency 1 - 1/(tau_r tau_c) (Mattingly, 2006, eq. 5.24).
-    QVERIFY(relative(r.performance.thermalEfficiency, 1 - 1 / (tauR * tauC)) < tol);
+    QVERIFY(relative(r.performance.thermalEfficiency, j.thermalEfficiency) < tol);
     if (mach > 0) {
-      QVERIFY(relative(r.performance.propulsiveEfficiency, 2 * mach / (v9a0 + mach)) < tol);
+      QVERIFY(relative(r.performance.propulsiveEfficiency, j.propulsiveEfficiency) < tol);
       QVERIFY(relative(r.performance.overallEfficiency,
                        r.performance.thermalEfficiency * r.performance.propulsiveEfficiency) < tol);
     }
-    QVERIFY(relative(r.station("5").totalTemperature, tauT * exitTemperature) < tol);
+    QVERIFY(relative(r.station("5").totalTemperature, j.tauT * exitTemperature) < tol);
   }
 
   // Closed form of the turbojet with losses in the two-gamma model: Mattingly, Elements of
