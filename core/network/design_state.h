@@ -1,8 +1,8 @@
 #pragma once
-// The running state of one design point through a network: the stations reached so far (each with
-// the stream's total state there), the shafts' work, the components' summaries and what the
-// nozzles and heat additions gave. Components read their entry stations from it and put their exit
-// stations, work and summary into it (network_component.h); the design sequence
+// The running state of one design point through a network: the stations reached so far (the
+// stream's total state at each is the next component's entry), the shafts' work, the components'
+// summaries and what the nozzles and heat additions gave. Components read their entry stations from it and
+// put their exit stations, work and summary into it (network_component.h); the design sequence
 // (design_point.h) adds up performance and sizing from it.
 
 #include "common/error.h"
