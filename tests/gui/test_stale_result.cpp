@@ -18,6 +18,7 @@
 #include "io/case_file.h"
 
 #include <qwt_plot_curve.h>
+#include <qwt_plot_legenditem.h>
 
 #include <QApplication>
 #include <QFile>
@@ -204,6 +205,12 @@ class TestStaleResult : public QObject {
     QVERIFY(!window.document().evaluation());
     QCOMPARE(window.temperatureEntropyChart()->actualCurve()->dataSize(), size_t(0));
     QCOMPARE(window.pressureVolumeChart()->actualCurve()->dataSize(), size_t(0));
+    // An empty chart explains no line: no legend inside it (over its "No result" hint) or below
+    // (the T-s chart's legend stands inside while a corner is free; the p-v chart's always below).
+    const cw::gui::CycleChart* temperatureEntropy = window.temperatureEntropyChart();
+    QVERIFY(temperatureEntropy->legendItem());
+    QVERIFY(!temperatureEntropy->legendItem()->isVisible());
+    QVERIFY(!temperatureEntropy->legend());
     QCOMPARE(window.stationModel()->rowCount(), 0);
     QVERIFY(!window.performanceModel()->index(P::NetThrust, P::Actual).data(P::ValueRole).isValid());
     QVERIFY(window.performanceModel()->index(P::NetThrust, P::Actual).data().toString().isEmpty());
@@ -222,6 +229,10 @@ class TestStaleResult : public QObject {
       QVERIFY2(digits.size() <= 6, qPrintable(banner));
     }
     QVERIFY2(!banner.contains("last valid result"), qPrintable(banner));
+    // A case with a cycle brings the legend back (inside, or below where no corner is free).
+    QVERIFY(window.openCase(kDemo));
+    const cw::gui::CycleChart* chart = window.temperatureEntropyChart();
+    QVERIFY(chart->legendItem()->isVisible() || chart->legend());
   }
 
   void theBannerStatesValuesAtDisplayPrecision() {

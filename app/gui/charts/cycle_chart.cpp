@@ -205,6 +205,11 @@ void CycleChart::replot() {
 
 void CycleChart::fitLegend() {
   if (!legendItem_ || fittingLegend_ || inExport()) return;
+  if (!evaluation_ && !baseline_) {  // an empty chart: no line to explain, the hint stays clear
+    setLegendBelow(false);
+    legendItem_->setVisible(false);
+    return;
+  }
   // Judged on the canvas the legend would have inside: as now, or taller by the legend below
   // (the same canvas either way, so that it does not go back and forth).
   QRectF area = canvas()->contentsRect();
