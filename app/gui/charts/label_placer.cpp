@@ -19,6 +19,10 @@ QSizeF textSizeOn(const QPainter* painter, const QFont& font, const QString& tex
 }
 
 bool segmentMeetsRect(const QPointF& a, const QPointF& b, const QRectF& r) {
+  // Both ends beyond one side: no meeting (most segments of a chart, decided in four comparisons).
+  if ((a.x() < r.left() && b.x() < r.left()) || (a.x() > r.right() && b.x() > r.right()) ||
+      (a.y() < r.top() && b.y() < r.top()) || (a.y() > r.bottom() && b.y() > r.bottom()))
+    return false;
   if (r.contains(a) || r.contains(b)) return true;
   // Liang-Barsky clipping of the segment against the rectangle.
   double t0 = 0.0, t1 = 1.0;
