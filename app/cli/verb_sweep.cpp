@@ -113,9 +113,9 @@ int runSweep(const Arguments& args, Format format, std::ostream& out) {
     const InterruptToStop interrupt;
     result = study::runTradeStudy(spec, interrupt.token(), progress);
     if (format == Format::Json)
-      out << io::studyToJson(result, columns).dump(2) << '\n';
+      out << study::studyToJson(result, columns).dump(2) << '\n';
     else
-      out << io::studyToCsv(result, columns);
+      out << study::studyToCsv(result, columns);
     out.flush();
     interrupted = interrupt.wasInterrupted();
   }

@@ -28,11 +28,3 @@ nlohmann::json studyToJson(const TradeStudy& study, const std::vector<StudyColum
 std::string describeStudy(const TradeStudy& study);
 
 }  // namespace cw::study
-
-namespace cw::io {
-// Transitional: the study export lived in io/ and app/ still names it io::. New code names
-// study::; these go once app/ does.
-using study::describeStudy;
-using study::studyToCsv;
-using study::studyToJson;
-}  // namespace cw::io

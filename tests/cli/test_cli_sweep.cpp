@@ -48,7 +48,7 @@ class TestCliSweep : public QObject {
     cw::io::applySetOverride(spec.document, "flight.mach=0.7");
     spec.axes = {{"compressor.pressure_ratio", 4, 12, 5}, {"burner.exit_temperature_K", 1300, 1400, 2}};
     const auto study = cw::study::runTradeStudy(spec);
-    const std::string expected = cw::io::studyToCsv(
+    const std::string expected = cw::study::studyToCsv(
         study, cw::study::selectStudyColumns("tsfc_g_per_kN_s,specific_thrust_N_s_per_kg", false));
     QCOMPARE(run.out, expected);
     QCOMPARE(rows[3].substr(0, 14), std::string("4,1300,solved,"));

@@ -172,12 +172,12 @@ class TestTradeStudy : public QObject {
         QVERIFY(samePerformance(p.ideal, one.ideal.performance));
         QCOMPARE(&p, &s.at(p.index[0], p.index[1]));
       }
-      const std::string csv = io::studyToCsv(s, study::studyColumns(false));
+      const std::string csv = study::studyToCsv(s, study::studyColumns(false));
       if (threads == 1) csvOfOne = csv;
       QCOMPARE(csv, csvOfOne);
-      QCOMPARE(io::studyToJson(s, study::studyColumns(false)).dump(), [&] {
+      QCOMPARE(study::studyToJson(s, study::studyColumns(false)).dump(), [&] {
         spec.threads = 1;
-        return io::studyToJson(study::runTradeStudy(spec), study::studyColumns(false)).dump();
+        return study::studyToJson(study::runTradeStudy(spec), study::studyColumns(false)).dump();
       }());
     }
   }
@@ -262,10 +262,10 @@ class TestTradeStudy : public QObject {
     QCOMPARE(s.count(study::PointStatus::InvalidInput), std::size_t(3));
     QCOMPARE(s.count(study::PointStatus::NoCycle), std::size_t(4));
     // Files: no figures for failed points, never a NaN.
-    const std::string csv = io::studyToCsv(s, study::defaultStudyColumns(false));
+    const std::string csv = study::studyToCsv(s, study::defaultStudyColumns(false));
     QVERIFY(csv.find("nan") == std::string::npos && csv.find("inf") == std::string::npos);
     QVERIFY(csv.find("\n0.5,500,invalid-input,,") != std::string::npos);
-    const json j = io::studyToJson(s, study::defaultStudyColumns(false));
+    const json j = study::studyToJson(s, study::defaultStudyColumns(false));
     QCOMPARE(j["counts"]["no-cycle"].get<int>(), 4);
     QVERIFY(j["points"][0]["values"]["net_thrust_N"].is_null());
     QCOMPARE(j["points"][0]["status"].get<std::string>(), std::string("invalid-input"));
@@ -435,7 +435,7 @@ class TestTradeStudy : public QObject {
         QVERIFY(samePerformance(p.actual, one.actual.performance));
       }
     }
-    QVERIFY(io::describeStudy(s).find("stopped before the end") != std::string::npos);
+    QVERIFY(study::describeStudy(s).find("stopped before the end") != std::string::npos);
     // Stopped before it starts: nothing runs.
     std::stop_source early;
     early.request_stop();

@@ -584,17 +584,17 @@ class TestTradeStudy : public QObject {
     QFile file(csv);
     QVERIFY(file.open(QIODevice::ReadOnly));
     const QByteArray written = file.readAll();
-    QCOMPARE(written.toStdString(), cw::io::studyToCsv(*panel->study(), cw::study::studyColumns(false)));
+    QCOMPARE(written.toStdString(), cw::study::studyToCsv(*panel->study(), cw::study::studyColumns(false)));
     // The same as an independent run of the core on the same spec (one thread).
     QCOMPARE(written.toStdString(),
-             cw::io::studyToCsv(reference(window, kCarpet), cw::study::studyColumns(false)));
+             cw::study::studyToCsv(reference(window, kCarpet), cw::study::studyColumns(false)));
     QVERIFY(written.startsWith("# caution: "));
     QVERIFY(written.contains(cw::kCaution));
     QVERIFY(window.exportStudyJson(json));
     QFile jsonFile(json);
     QVERIFY(jsonFile.open(QIODevice::ReadOnly));
     QVERIFY(nlohmann::json::parse(jsonFile.readAll().toStdString()) ==
-            cw::io::studyToJson(*panel->study(), cw::study::studyColumns(false)));
+            cw::study::studyToJson(*panel->study(), cw::study::studyColumns(false)));
     // A folder that does not exist: refused, nothing written.
     QVERIFY(!window.exportStudyCsv(dir.filePath("no/such/folder/study.csv")));
 

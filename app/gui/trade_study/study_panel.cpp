@@ -587,7 +587,7 @@ bool TradeStudyPanel::exportCsv(const QString& path, QString* error) const {
   if (!study_) return false;
   try {
     io::writeFileAtomically(path.toStdString(),
-                            io::studyToCsv(*study_, study::studyColumns(study_->withAudit)));
+                            study::studyToCsv(*study_, study::studyColumns(study_->withAudit)));
   } catch (const std::exception& e) {
     if (error) *error = QString::fromStdString(e.what());
     return false;
@@ -599,7 +599,7 @@ bool TradeStudyPanel::exportJson(const QString& path, QString* error) const {
   if (!study_) return false;
   try {
     io::writeFileAtomically(path.toStdString(),
-                            io::studyToJson(*study_, study::studyColumns(study_->withAudit)).dump(2) + "\n");
+                            study::studyToJson(*study_, study::studyColumns(study_->withAudit)).dump(2) + "\n");
   } catch (const std::exception& e) {
     if (error) *error = QString::fromStdString(e.what());
     return false;

@@ -10,7 +10,7 @@
 // Cancel stops it: the points run so far are shown, with "stopped after N of M points". A new
 // Run cancels a running study. The study shown is kept when the case changes, marked stale
 // until Run redoes it. Exports: the chart (charts/chart_export.h), the data as CSV or JSON
-// (io/study_export.h, written atomically) and the table as tab-separated text.
+// (study/study_export.h, written atomically) and the table as tab-separated text.
 
 #include "document/settings.h"
 #include "trade_study/study_chart.h"

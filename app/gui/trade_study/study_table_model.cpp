@@ -138,7 +138,7 @@ QVariant StudyTableModel::data(const QModelIndex& index, int role) const {
 QString StudyTableModel::toTabSeparated() const {
   QString text = QStringLiteral("# ") + cautionText() + QLatin1Char('\n');
   if (study_)
-    text += QStringLiteral("# ") + QString::fromStdString(io::describeStudy(*study_)) + QLatin1Char('\n');
+    text += QStringLiteral("# ") + QString::fromStdString(study::describeStudy(*study_)) + QLatin1Char('\n');
   QStringList header;
   for (int c = 0; c < columnCount(); ++c) header << headerData(c, Qt::Horizontal).toString();
   text += header.join(QLatin1Char('\t')) + QLatin1Char('\n');
