@@ -22,6 +22,7 @@
 
 #include <string_view>
 
+#include "document/case_auditor.h"
 #include "engine/case_inputs.h"
 #include "io/case_file.h"
 
@@ -52,6 +53,9 @@ inline void isolateGuiTest(const QString& applicationName) {
   QStandardPaths::setTestModeEnabled(true);
   QCoreApplication::setOrganizationName("CyclewrightTest");
   QCoreApplication::setApplicationName(applicationName);
+  // Audits applied before an edit returns, whatever the machine's speed (test_gui_evaluation_pipeline
+  // tests the adaptive and worker threading on auditors of its own).
+  cw::gui::CaseAuditor::setDefaultThreading(cw::gui::CaseAuditor::Threading::GuiThread);
 }
 
 /// The demo case, read from the application's resources.

@@ -50,8 +50,16 @@ class CaseAuditor : public QObject {
 
   void setThreading(Threading threading) { threading_ = threading; }
   Threading threading() const { return threading_; }
+  /// The threading a new auditor starts with: Adaptive in the application. The GUI test suites
+  /// choose GuiThread, so that an edit's audit is applied before the edit returns whatever the
+  /// machine's speed (a sanitizer build on a busy machine takes longer than a frame); the suites
+  /// that test the threading set it on their auditor.
+  static void setDefaultThreading(Threading threading) { defaultThreading_ = threading; }
+  static Threading defaultThreading() { return defaultThreading_; }
   /// True when the next audit runs on a worker thread.
   bool runsOnWorker() const;
+  /// How long the last finished audit took [ms] (0 before the first).
+  double lastMilliseconds() const { return lastMilliseconds_; }
 
  signals:
   /// A result was applied (audit(), failed() or auditedEvaluation() changed).
@@ -73,7 +81,8 @@ class CaseAuditor : public QObject {
   void apply(const Request& request, const Outcome& outcome);
   void workerFinished();
 
-  Threading threading_ = Threading::Adaptive;
+  static inline Threading defaultThreading_ = Threading::Adaptive;
+  Threading threading_ = defaultThreading_;
   double lastMilliseconds_ = 0.0;
   quint64 generation_ = 0;
   quint64 appliedGeneration_ = 0;
