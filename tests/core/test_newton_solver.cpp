@@ -142,7 +142,7 @@ class TestNewtonSolver : public QObject {
   }
 
   void noRealRootIsAPlainFailure() {
-    // [DS] x*x = -1 has no real root: from x = 1 the first Newton step lands on x = 0, where dF/dx = 0.
+    // [DS] x*x = -1 has no real root: from x = 1 the first Newton step reaches x = 0, where dF/dx = 0.
     NonlinearSystem system{[](const VectorXd& x) { return vec({x(0) * x(0) + 1.0}); }, {}};
     const auto r = cw::solve::solveNewton(system, vec({1.0}));
     QVERIFY(!r.converged());
