@@ -7,6 +7,7 @@
 // every launch of CYCLEWRIGHT_GUI_PATH or a test helper goes through IsolatedHome::start, so a
 // child never writes the user's real settings, data, cache or state.
 
+#include <QApplication>
 #include <QCoreApplication>
 #include <QDir>
 #include <QFile>
@@ -19,12 +20,14 @@
 #include <QStringList>
 #include <QTemporaryDir>
 #include <QTest>
+#include <QTranslator>
 
 #include <string_view>
 
 #include "document/case_auditor.h"
 #include "engine/case_inputs.h"
 #include "io/case_file.h"
+#include "startup/application.h"
 
 // The application's resources live in its static library: registered before a suite reads one
 // without a main window (Q_INIT_RESOURCE declares its function in the global namespace).
@@ -57,6 +60,28 @@ inline void isolateGuiTest(const QString& applicationName) {
   // tests the adaptive and worker threading on auditors of its own).
   cw::gui::CaseAuditor::setDefaultThreading(cw::gui::CaseAuditor::Threading::GuiThread);
 }
+
+/// Installs a translation for the scope's lifetime ("en": none); removes every translator after.
+class ScopedLanguage {
+ public:
+  explicit ScopedLanguage(const QString& language) {
+    if (language != QLatin1String("en"))
+      installed_ =
+          cw::gui::installTranslation(*qobject_cast<QApplication*>(QCoreApplication::instance()), language);
+  }
+  ~ScopedLanguage() {
+    for (auto* translator : QCoreApplication::instance()->findChildren<QTranslator*>()) {
+      QCoreApplication::removeTranslator(translator);
+      delete translator;
+    }
+  }
+  ScopedLanguage(const ScopedLanguage&) = delete;
+  ScopedLanguage& operator=(const ScopedLanguage&) = delete;
+  QString installed() const { return installed_; }
+
+ private:
+  QString installed_;
+};
 
 /// The demo case, read from the application's resources.
 inline cw::engine::Case demoCase() {

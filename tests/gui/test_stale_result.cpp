@@ -89,26 +89,6 @@ bool atDisplayPrecision(double shown, double expected) {
   return std::fabs(shown - expected) <= 5e-5 * std::fabs(expected);
 }
 
-/// Installs the German translation for the scope's lifetime (none for English).
-class ScopedLanguage {
- public:
-  explicit ScopedLanguage(const QString& language) {
-    if (language == QLatin1String("de"))
-      installed_ =
-          cw::gui::installTranslation(*qobject_cast<QApplication*>(QCoreApplication::instance()), "de");
-  }
-  ~ScopedLanguage() {
-    for (auto* translator : QCoreApplication::instance()->findChildren<QTranslator*>()) {
-      QCoreApplication::removeTranslator(translator);
-      delete translator;
-    }
-  }
-  QString installed() const { return installed_; }
-
- private:
-  QString installed_;
-};
-
 double shownNetThrust(const MainWindow& window) {
   return window.performanceModel()->index(P::NetThrust, P::Actual).data(P::ValueRole).toDouble();
 }
@@ -266,7 +246,7 @@ class TestStaleResult : public QObject {
   void aCoreFailureInTheChosenUnitsAndLanguage() {
     QFETCH(bool, us);
     QFETCH(QString, language);
-    const ScopedLanguage scoped(language);
+    const cw::test::ScopedLanguage scoped(language);
     if (language == "de") QCOMPARE(scoped.installed(), QString("de_DE"));
     cw::engine::Case weak = cw::test::demoCase();
     weak.turbine.efficiency.value = 0.3;
@@ -331,7 +311,7 @@ class TestStaleResult : public QObject {
   void everyKindOfFailureInDisplayUnits() {
     QFETCH(bool, us);
     QFETCH(QString, language);
-    const ScopedLanguage scoped(language);
+    const cw::test::ScopedLanguage scoped(language);
     const bool de = language == "de";
     cw::gui::DisplayUnits units;
     units.setSystem(us ? cw::gui::UnitSystem::USCustomary : cw::gui::UnitSystem::SI);

@@ -143,26 +143,6 @@ void settle() {
   for (int i = 0; i < 4; ++i) QApplication::processEvents();
 }
 
-/// Installs a translation for the scope's lifetime ("en": none).
-class ScopedLanguage {
- public:
-  explicit ScopedLanguage(const QString& language) {
-    if (language != QLatin1String("en"))
-      installed_ =
-          cw::gui::installTranslation(*qobject_cast<QApplication*>(QCoreApplication::instance()), language);
-  }
-  ~ScopedLanguage() {
-    for (auto* translator : QCoreApplication::instance()->findChildren<QTranslator*>()) {
-      QCoreApplication::removeTranslator(translator);
-      delete translator;
-    }
-  }
-  QString installed() const { return installed_; }
-
- private:
-  QString installed_;
-};
-
 }  // namespace
 
 class TestWindowLayout : public QObject {
@@ -313,7 +293,7 @@ class TestWindowLayout : public QObject {
   void stripFitsWithoutScrolling() {
     QFETCH(QString, language);
     QFETCH(QSize, size);
-    const ScopedLanguage scoped(language);
+    const cw::test::ScopedLanguage scoped(language);
     if (language == "de") QCOMPARE(scoped.installed(), QString("de_DE"));
     cw::gui::MainWindow window;
     QVERIFY(window.openCase(":/demo/demo-turbojet.json"));
