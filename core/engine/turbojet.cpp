@@ -40,7 +40,13 @@ FreeStream freeStreamOf(const FlightInputs& flight) {
 Turbojet::Turbojet(const Case& inputs, bool withPaths)
     : inputs_(inputs),
       withPaths_(withPaths),
-      gasModel_(makeGasModel(inputs.gasModel, inputs.fuel, inputs.flight.specificHumidity)) {}
+      gasModel_(makeGasModel(inputs.gasModel, inputs.fuel, inputs.flight.specificHumidity)) {
+  // The single-spool assembly: a two-spool case is read and written, but not evaluated here
+  // (it would be evaluated as a single spool with the HP compressor alone).
+  if (inputs.architecture != Architecture::Turbojet)
+    throw InvalidInput("engine.architecture",
+                       "this build reads and writes two-spool turbojet cases but cannot evaluate them yet");
+}
 
 namespace {
 

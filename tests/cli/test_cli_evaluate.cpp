@@ -116,6 +116,26 @@ class TestCliEvaluate : public QObject {
     QCOMPARE(missing.status, 2);
     QVERIFY(missing.err.contains("/no/such/case.json"));
   }
+  void versionOneAndTwoGiveTheSameOutput() {
+    // A version 1 file is a version 2 single-spool turbojet: the same document raised to version
+    // 2 (by setting its architecture) prints byte for byte the same.
+    const Run v1 = runCli({"evaluate", kExample, "--format", "json"});
+    const Run v2 =
+        runCli({"evaluate", kExample, "--format", "json", "--set", "engine.architecture=turbojet"});
+    QCOMPARE(v1.status, 0);
+    QCOMPARE(v2.status, 0);
+    QCOMPARE(v2.out, v1.out);
+  }
+  void twoSpoolKeysAreRefusedOnATurbojet() {
+    const Run run = runCli({"evaluate", kExample, "--set", "low_pressure_compressor.pressure_ratio=3"});
+    QCOMPARE(run.status, 2);
+    QVERIFY(run.out.isEmpty());
+    QCOMPARE(run.err.count('\n'), 1);
+    QVERIFY2(
+        run.err.contains("low_pressure_compressor.pressure_ratio: applies only when engine.architecture is "
+                         "\"two-spool-turbojet\" (this case's is \"turbojet\""),
+        run.err.constData());
+  }
   void noCycleExitsThree() {
     // Burner exit barely above compressor exit at Mach 2: the jet is slower than flight (no useful cycle).
     const Run run = runCli({"evaluate", kExample, "--set", "burner.exit_temperature_K=700", "--set",
