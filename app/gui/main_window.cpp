@@ -144,16 +144,38 @@ void MainWindow::createStrip(QVBoxLayout* layout) {
   strip_->setVerticalScrollBarPolicy(Qt::ScrollBarAlwaysOff);
   strip_->setSpacing(3);
   const QFontMetrics metrics(strip_->font());
-  for (int i = 0; i < kSectionCount; ++i) {
-    auto* item = new QListWidgetItem(sectionName(static_cast<Section>(i)), strip_);
-    item->setTextAlignment(Qt::AlignCenter);
-    item->setSizeHint(QSize(metrics.horizontalAdvance(item->text()) + 28, metrics.height() * 2 + 8));
-  }
   strip_->setFixedHeight(metrics.height() * 2 + 22);
+  fillStrip(document_->currentCase().architecture);
   connect(strip_, &QListWidget::currentRowChanged, this, [this](int row) {
-    if (row >= 0) router_->select(static_cast<Section>(row));
+    if (row >= 0 && row < int(stripSections_.size())) router_->select(stripSections_[size_t(row)]);
   });
   layout->addWidget(strip_);
+}
+
+void MainWindow::fillStrip(engine::Architecture architecture) {
+  // The items of the architecture from the registry, in flow order (a two-spool case: inlet, LP
+  // compressor, HP compressor, burner, HP turbine, LP turbine, jet pipe, afterburner, nozzle).
+  if (stripArchitecture_ == architecture) return;
+  stripArchitecture_ = architecture;
+  stripSections_ = stripSections(architecture);
+  const QSignalBlocker blocker(strip_);
+  strip_->clear();
+  const QFontMetrics metrics(strip_->font());
+  for (const Section section : stripSections_) {
+    auto* item = new QListWidgetItem(sectionName(section), strip_);
+    item->setTextAlignment(Qt::AlignCenter);
+    item->setData(Qt::UserRole, sectionKey(section));
+    item->setSizeHint(QSize(metrics.horizontalAdvance(item->text()) + 28, metrics.height() * 2 + 8));
+  }
+  // A section of another architecture is no longer shown: select the first role of this one.
+  if (!forms_) return;  // the window is being built; its constructor selects
+  const Section current = router_->current();
+  if (std::find(stripSections_.begin(), stripSections_.end(), current) != stripSections_.end()) {
+    routeSelection(current);
+    return;
+  }
+  for (const Section section : stripSections_)
+    if (sectionArchitecture(section) == architecture) return router_->select(section);
 }
 
 void MainWindow::createBanner(QVBoxLayout* layout) {
@@ -173,9 +195,9 @@ QSplitter* MainWindow::createFormsAndCharts() {
   horizontal->setObjectName("horizontalSplitter");
   forms_ = new QStackedWidget;
   forms_->setObjectName("formStack");
-  for (int i = 0; i < kSectionCount; ++i) {
-    auto* form = new CaseForm(static_cast<Section>(i), *document_, *units_);
-    formOf_[static_cast<size_t>(i)] = form;
+  for (const Section section : allSections()) {
+    auto* form = new CaseForm(section, *document_, *units_);
+    formOf_.push_back(form);
     forms_->addWidget(form);
   }
   auto* scroll = new QScrollArea(horizontal);
@@ -444,12 +466,14 @@ QSet<QString> MainWindow::stationsOf(Section section) const {
 }
 
 void MainWindow::routeSelection(Section section) {
-  const int row = static_cast<int>(section);
+  const auto shown = std::find(stripSections_.begin(), stripSections_.end(), section);
   {
     const QSignalBlocker blocker(strip_);
-    strip_->setCurrentRow(row);
+    strip_->setCurrentRow(shown == stripSections_.end() ? -1 : int(shown - stripSections_.begin()));
   }
-  forms_->setCurrentIndex(row);
+  const auto& all = allSections();
+  const auto form = std::find(all.begin(), all.end(), section);
+  if (form != all.end()) forms_->setCurrentIndex(int(form - all.begin()));
   tsChart_->setHighlightedComponent(sectionComponent(section));
   pvChart_->setHighlightedComponent(sectionComponent(section));
   hsChart_->setHighlightedComponent(sectionComponent(section));
@@ -593,16 +617,18 @@ void MainWindow::changeEvent(QEvent* event) {
 }
 
 void MainWindow::updateStrip() {
+  fillStrip(document_->currentCase().architecture);
   const bool lit = document_->currentCase().afterburner.enabled;
-  QListWidgetItem* item = strip_->item(static_cast<int>(Section::Afterburner));
+  const auto afterburner = std::find(stripSections_.begin(), stripSections_.end(), Section::Afterburner);
+  QListWidgetItem* item = strip_->item(int(afterburner - stripSections_.begin()));
   item->setText(lit ? sectionName(Section::Afterburner)
                     : tr("%1 (unlit)").arg(sectionName(Section::Afterburner)));
   item->setSizeHint(
       QSize(QFontMetrics(strip_->font()).horizontalAdvance(item->text()) + 28, item->sizeHint().height()));
   item->setForeground(lit ? palette().brush(QPalette::Text)
                           : palette().brush(QPalette::Disabled, QPalette::Text));
-  for (int i = 0; i < kSectionCount; ++i) {
-    const auto section = static_cast<Section>(i);
+  for (int i = 0; i < int(stripSections_.size()); ++i) {
+    const Section section = stripSections_[size_t(i)];
     const QSet<QString> stations = stationsOf(section);
     QStringList ids(stations.begin(), stations.end());
     std::sort(ids.begin(), ids.end(),
