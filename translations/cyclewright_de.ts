@@ -28,16 +28,8 @@
         <translation>Einlauf</translation>
     </message>
     <message>
-        <source>Compressor</source>
-        <translation>Verdichter</translation>
-    </message>
-    <message>
         <source>Burner</source>
         <translation>Brennkammer</translation>
-    </message>
-    <message>
-        <source>Turbine</source>
-        <translation>Turbine</translation>
     </message>
     <message>
         <source>Jet pipe</source>
@@ -1001,6 +993,177 @@ kein Kreisprozess mit diesen Eingaben</translation>
     <message>
         <source>Change %1</source>
         <translation>%1 ändern</translation>
+    </message>
+</context>
+<context>
+    <name>cw::gui::CoreFailure</name>
+    <message>
+        <source>the temperature</source>
+        <translation>die Temperatur</translation>
+    </message>
+    <message>
+        <source>the enthalpy</source>
+        <translation>die Enthalpie</translation>
+    </message>
+    <message>
+        <source>the entropy</source>
+        <translation>die Entropie</translation>
+    </message>
+    <message>
+        <source>the pressure</source>
+        <translation>der Druck</translation>
+    </message>
+    <message>
+        <source>the Mach number</source>
+        <translation>die Machzahl</translation>
+    </message>
+    <message>
+        <source>the total-to-static pressure ratio</source>
+        <translation>das Verhältnis von Total- zu statischem Druck</translation>
+    </message>
+    <message>
+        <source>the fuel-air ratio</source>
+        <translation>das Kraftstoff-Luft-Verhältnis</translation>
+    </message>
+    <message>
+        <source>the efficiency</source>
+        <translation>der Wirkungsgrad</translation>
+    </message>
+    <message>
+        <source>the polytropic efficiency</source>
+        <translation>der polytrope Wirkungsgrad</translation>
+    </message>
+    <message>
+        <source>the area ratio A/A*</source>
+        <translation>das Flächenverhältnis A/A*</translation>
+    </message>
+    <message>
+        <source>the ambient temperature</source>
+        <translation>die Umgebungstemperatur</translation>
+    </message>
+    <message>
+        <source>the temperature at an enthalpy</source>
+        <translation>die Temperatur zu einer Enthalpie</translation>
+    </message>
+    <message>
+        <source>the temperature at an entropy</source>
+        <translation>die Temperatur zu einer Entropie</translation>
+    </message>
+    <message>
+        <source>the static temperature at a total temperature and Mach number</source>
+        <translation>die statische Temperatur zu Totaltemperatur und Machzahl</translation>
+    </message>
+    <message>
+        <source>the subsonic Mach number of an area ratio</source>
+        <translation>die Unterschall-Machzahl eines Flächenverhältnisses</translation>
+    </message>
+    <message>
+        <source>the supersonic Mach number of an area ratio</source>
+        <translation>die Überschall-Machzahl eines Flächenverhältnisses</translation>
+    </message>
+    <message>
+        <source>the velocity behind a normal shock</source>
+        <translation>die Geschwindigkeit hinter einem senkrechten Verdichtungsstoß</translation>
+    </message>
+    <message>
+        <source>the nozzle exit pressure of its area ratio</source>
+        <translation>der Austrittsdruck der Schubdüse zu ihrem Flächenverhältnis</translation>
+    </message>
+    <message>
+        <source>the air mass flow of the required net thrust</source>
+        <translation>der Luftmassenstrom zum geforderten Nettoschub</translation>
+    </message>
+    <message>
+        <source>%1 = %2 is outside the valid range %3</source>
+        <translation>%1 = %2 liegt außerhalb des gültigen Bereichs %3</translation>
+    </message>
+    <message>
+        <source>%1 meets a state beyond the gas data: %2</source>
+        <translation>%1 erreicht einen Zustand außerhalb der Stoffdaten: %2</translation>
+    </message>
+    <message>
+        <source>%1 cannot be reached at the engine face: %2</source>
+        <translation>%1 ist am Verdichtereintritt nicht erreichbar: %2</translation>
+    </message>
+    <message>
+        <source>%1 was not found after %2 iterations (residual %3)</source>
+        <translation>%1 wurde nach %2 Iterationen nicht gefunden (Residuum %3)</translation>
+    </message>
+    <message>
+        <source>the turbine cannot drive the compressor: it would need a specific work of %1, more than the gas at %2 holds</source>
+        <translation>Die Turbine kann den Verdichter nicht antreiben: Sie bräuchte eine spezifische Arbeit von %1, mehr als das Gas bei %2 hergibt</translation>
+    </message>
+    <message>
+        <source>the turbine cannot drive the compressor: the expansion for a specific work of %1 leaves the range of the gas data</source>
+        <translation>Die Turbine kann den Verdichter nicht antreiben: Die Expansion für eine spezifische Arbeit von %1 verlässt den Bereich der Stoffdaten</translation>
+    </message>
+    <message>
+        <source>the turbine cannot drive the compressor: no exit pressure gives a specific work of %1</source>
+        <translation>Die Turbine kann den Verdichter nicht antreiben: Kein Austrittsdruck ergibt eine spezifische Arbeit von %1</translation>
+    </message>
+    <message>
+        <source>%1: the entering gas holds no oxygen left to burn (fuel-air ratio %2)</source>
+        <translation>%1: Das eintretende Gas enthält keinen Sauerstoff mehr zum Verbrennen (Kraftstoff-Luft-Verhältnis %2)</translation>
+    </message>
+    <message>
+        <source>%1: the exit temperature %2 is below what the entering gas already has; no fuel can be burnt</source>
+        <translation>%1: Die Austrittstemperatur %2 liegt unter der des eintretenden Gases; es kann kein Kraftstoff verbrannt werden</translation>
+    </message>
+    <message>
+        <source>%1: the exit temperature %2 needs more fuel than the stoichiometric fuel-air ratio %3 allows</source>
+        <translation>%1: Die Austrittstemperatur %2 braucht mehr Kraftstoff, als das stöchiometrische Kraftstoff-Luft-Verhältnis %3 zulässt</translation>
+    </message>
+    <message>
+        <source>%1: the fuel-air ratio %2 is above the stoichiometric %3</source>
+        <translation>%1: Das Kraftstoff-Luft-Verhältnis %2 liegt über dem stöchiometrischen %3</translation>
+    </message>
+    <message>
+        <source>%1: the exit temperature %2 is not above the entry temperature %3; it only heats the stream</source>
+        <translation>%1: Die Austrittstemperatur %2 liegt nicht über der Eintrittstemperatur %3; hier wird der Strom nur erwärmt</translation>
+    </message>
+    <message>
+        <source>the nozzle&apos;s exit-to-throat area ratio %1 expands the jet below %2, the lowest temperature of the gas data</source>
+        <translation>Das Flächenverhältnis Austritt zu Hals der Schubdüse %1 entspannt den Strahl unter %2, die tiefste Temperatur der Stoffdaten</translation>
+    </message>
+    <message>
+        <source>the ambient pressure %1 is above %2, the pressure behind a normal shock at the exit of the nozzle&apos;s exit-to-throat area ratio %3: a shock would stand inside the nozzle, which the model does not cover (choose a smaller area ratio, full expansion or a convergent nozzle)</source>
+        <translation>Der Umgebungsdruck %1 liegt über %2, dem Druck hinter einem senkrechten Verdichtungsstoß am Austritt der Schubdüse mit dem Flächenverhältnis Austritt zu Hals %3: Ein Stoß stünde in der Düse, was das Modell nicht abdeckt (ein kleineres Flächenverhältnis, volle Expansion oder eine konvergente Düse wählen)</translation>
+    </message>
+    <message>
+        <source>the nozzle entry total pressure %1 is not above the ambient pressure %2, so there is no jet</source>
+        <translation>Der Totaldruck am Schubdüseneintritt %1 liegt nicht über dem Umgebungsdruck %2, es entsteht also kein Strahl</translation>
+    </message>
+    <message>
+        <source>the nozzle&apos;s velocity coefficient %1 leaves the jet too slow for a finite nozzle area</source>
+        <translation>Der Geschwindigkeitsbeiwert %1 der Schubdüse lässt den Strahl zu langsam für eine endliche Düsenfläche</translation>
+    </message>
+    <message>
+        <source>the nozzle&apos;s losses keep its throat from choking, so its divergent part cannot run supersonic; the model does not cover that regime</source>
+        <translation>Die Verluste der Schubdüse halten ihren Hals vom Sperren ab, ihr divergenter Teil kann also nicht mit Überschall durchströmt werden; diesen Bereich deckt das Modell nicht ab</translation>
+    </message>
+    <message>
+        <source>the net thrust %1 is not positive: the jet is slower than the flight speed</source>
+        <translation>Der Nettoschub %1 ist nicht positiv: Der Strahl ist langsamer als die Fluggeschwindigkeit</translation>
+    </message>
+    <message>
+        <source>a result is not a finite number: the inputs are beyond what the model can evaluate</source>
+        <translation>Ein Ergebnis ist keine endliche Zahl: Die Eingaben liegen jenseits dessen, was das Modell auswerten kann</translation>
+    </message>
+    <message>
+        <source>the search for %1 found no solution in its interval</source>
+        <translation>Die Suche nach %1 fand in ihrem Intervall keine Lösung</translation>
+    </message>
+    <message>
+        <source>the equations for %1 are not finite on the way to a solution</source>
+        <translation>Die Gleichungen für %1 werden auf dem Weg zur Lösung nicht endlich</translation>
+    </message>
+    <message>
+        <source>the search for %1 stopped after %2 iterations (scaled residual %3): there is no solution near its start</source>
+        <translation>Die Suche nach %1 brach nach %2 Iterationen ab (skaliertes Residuum %3): Nahe ihrem Startwert gibt es keine Lösung</translation>
+    </message>
+    <message>
+        <source>a normal shock has no downstream state below the sonic velocity</source>
+        <translation>Ein senkrechter Verdichtungsstoß hat keinen Zustand dahinter unter der Schallgeschwindigkeit</translation>
     </message>
 </context>
 <context>

@@ -23,6 +23,7 @@
 #include "trade_study/study_panel.h"
 
 #include <QAction>
+#include <QCheckBox>
 #include <QCloseEvent>
 #include <QComboBox>
 #include <QDockWidget>
@@ -43,6 +44,10 @@
 #include <QTableView>
 #include <QVBoxLayout>
 
+#include <algorithm>
+#include <limits>
+#include <vector>
+
 // The resources live in a static library; register them once before first use.
 static void initialiseResources() {
   Q_INIT_RESOURCE(resources);
@@ -57,7 +62,7 @@ MainWindow::MainWindow(QWidget* parent) : QMainWindow(parent) {
   units_->setSystem(settings_.unitSystem());
   document_ = new CaseDocument(this);
   router_ = new SelectionRouter(this);
-  files_ = new WindowFiles(*this, *document_, settings_);
+  files_ = new WindowFiles(*this, *document_, settings_, *units_);
   autosave_ = new WindowAutosave(*this, *document_, settings_.autosaveWithinSeconds());
   exports_ = new WindowExports(*this);
   actions_ = new WindowActions(*this);
@@ -102,6 +107,10 @@ void MainWindow::restoreFromSettings() {
   auditPanel_->setOrder(settings_.auditOrder());
   connect(auditPanel_, &AuditPanel::orderChanged, this,
           [this](const QStringList& keys) { settings_.setAuditOrder(keys); });
+  // Kept while there is no baseline too (the box is then disabled): it applies to the next one.
+  auditPanel_->baselineBox()->setChecked(settings_.auditBaselineBeside());
+  connect(auditPanel_->baselineBox(), &QCheckBox::toggled, this,
+          [this](bool on) { settings_.setAuditBaselineBeside(on); });
   placeTradeStudy();
   tradeStudyPanel_->applySetup(settings_.studySetup());
   connect(tradeStudyPanel_, &TradeStudyPanel::setupChanged, this,
@@ -143,8 +152,10 @@ void MainWindow::createStrip(QVBoxLayout* layout) {
   strip_->setHorizontalScrollBarPolicy(Qt::ScrollBarAsNeeded);
   strip_->setVerticalScrollBarPolicy(Qt::ScrollBarAlwaysOff);
   strip_->setSpacing(3);
+  strip_->setTextElideMode(Qt::ElideRight);  // a name that gives way (fitStrip); whole in its tooltip
   const QFontMetrics metrics(strip_->font());
   strip_->setFixedHeight(metrics.height() * 2 + 22);
+  strip_->installEventFilter(this);  // refitted to its width (fitStrip)
   fillStrip(document_->currentCase().architecture);
   connect(strip_, &QListWidget::currentRowChanged, this, [this](int row) {
     if (row >= 0 && row < int(stripSections_.size())) router_->select(stripSections_[size_t(row)]);
@@ -160,12 +171,10 @@ void MainWindow::fillStrip(engine::Architecture architecture) {
   stripSections_ = stripSections(architecture);
   const QSignalBlocker blocker(strip_);
   strip_->clear();
-  const QFontMetrics metrics(strip_->font());
-  for (const Section section : stripSections_) {
+  for (const Section section : stripSections_) {  // texts and sizes: updateStrip and fitStrip
     auto* item = new QListWidgetItem(sectionName(section), strip_);
     item->setTextAlignment(Qt::AlignCenter);
     item->setData(Qt::UserRole, sectionKey(section));
-    item->setSizeHint(QSize(metrics.horizontalAdvance(item->text()) + 28, metrics.height() * 2 + 8));
   }
   // A section of another architecture is no longer shown: select the first role of this one.
   if (!forms_) return;  // the window is being built; its constructor selects
@@ -396,6 +405,7 @@ bool MainWindow::eventFilter(QObject* watched, QEvent* event) {
   if (watched == chartHost_ && (event->type() == QEvent::Resize || event->type() == QEvent::Show))
     arrangeCharts();
   if (watched == vertical_ && event->type() == QEvent::Show) fitTableRows();
+  if (watched == strip_ && (event->type() == QEvent::Resize || event->type() == QEvent::Show)) fitStrip();
   return QMainWindow::eventFilter(watched, event);
 }
 
@@ -592,7 +602,7 @@ void MainWindow::updateBanner() {
     lines << tr("%1: %2 is outside the valid range %3")
                  .arg(where, QString::fromStdString(problem.value), QString::fromStdString(problem.valid));
   }
-  if (!document_->failure().isEmpty()) lines << document_->failure();
+  if (document_->hasFailure()) lines << document_->failure(*units_);
   const QString tail = document_->evaluation()
                            ? tr("Charts and tables show the last valid result (stale).")
                            : tr("There is no result for this case: the charts and tables are empty.");
@@ -616,16 +626,18 @@ void MainWindow::changeEvent(QEvent* event) {
   }
 }
 
+QString MainWindow::stripName(Section section) const {
+  if (section == Section::Afterburner && !document_->currentCase().afterburner.enabled)
+    return tr("%1 (unlit)").arg(sectionName(Section::Afterburner));
+  return sectionName(section);
+}
+
 void MainWindow::updateStrip() {
   fillStrip(document_->currentCase().architecture);
   const bool lit = document_->currentCase().afterburner.enabled;
   const auto afterburner = std::find(stripSections_.begin(), stripSections_.end(), Section::Afterburner);
-  QListWidgetItem* item = strip_->item(int(afterburner - stripSections_.begin()));
-  item->setText(lit ? sectionName(Section::Afterburner)
-                    : tr("%1 (unlit)").arg(sectionName(Section::Afterburner)));
-  item->setSizeHint(
-      QSize(QFontMetrics(strip_->font()).horizontalAdvance(item->text()) + 28, item->sizeHint().height()));
-  item->setForeground(lit ? palette().brush(QPalette::Text)
+  strip_->item(int(afterburner - stripSections_.begin()))
+      ->setForeground(lit ? palette().brush(QPalette::Text)
                           : palette().brush(QPalette::Disabled, QPalette::Text));
   for (int i = 0; i < int(stripSections_.size()); ++i) {
     const Section section = stripSections_[size_t(i)];
@@ -633,9 +645,87 @@ void MainWindow::updateStrip() {
     QStringList ids(stations.begin(), stations.end());
     std::sort(ids.begin(), ids.end(),
               [](const QString& a, const QString& b) { return a.toInt() < b.toInt(); });
-    strip_->item(i)->setToolTip(ids.isEmpty()
-                                    ? sectionName(section)
-                                    : tr("%1: stations %2").arg(sectionName(section), ids.join(", ")));
+    strip_->item(i)->setToolTip(
+        ids.isEmpty() ? stripName(section) : tr("%1: stations %2").arg(stripName(section), ids.join(", ")));
+  }
+  fitStrip();
+}
+
+namespace {
+
+/// The width of a strip item for its text (the widest line) [px].
+int stripItemWidth(const QFontMetrics& metrics, const QString& text) {
+  int widest = 0;
+  for (const QString& line : text.split(QLatin1Char('\n')))
+    widest = std::max(widest, metrics.horizontalAdvance(line));
+  return widest + 28;
+}
+
+/// A name of several words on two lines, broken at the space that makes the longer line shortest
+/// ("Nachbrenner (nicht gezündet)": "Nachbrenner" over "(nicht gezündet)"); one word as it is.
+QString onTwoLines(const QFontMetrics& metrics, const QString& name) {
+  QString best = name;
+  int bestWidth = metrics.horizontalAdvance(name);
+  for (qsizetype at = name.indexOf(QLatin1Char(' ')); at >= 0; at = name.indexOf(QLatin1Char(' '), at + 1)) {
+    const int width =
+        std::max(metrics.horizontalAdvance(name.left(at)), metrics.horizontalAdvance(name.mid(at + 1)));
+    if (width < bestWidth) {
+      bestWidth = width;
+      best = name.left(at) + QLatin1Char('\n') + name.mid(at + 1);
+    }
+  }
+  return best;
+}
+
+/// The largest width w at least `smallest` such that the widths, none above w, sum to at most
+/// `room`; no cap (INT_MAX) when they fit as they are [px].
+int widthCap(const std::vector<int>& widths, int room, int smallest) {
+  auto total = [&](int cap) {
+    int sum = 0;
+    for (int w : widths) sum += std::min(w, cap);
+    return sum;
+  };
+  if (total(std::numeric_limits<int>::max()) <= room) return std::numeric_limits<int>::max();
+  int low = smallest, high = *std::max_element(widths.begin(), widths.end());
+  while (low < high) {  // the largest cap in [smallest, widest] whose total fits
+    const int mid = (low + high + 1) / 2;
+    if (total(mid) <= room)
+      low = mid;
+    else
+      high = mid - 1;
+  }
+  return low;
+}
+
+}  // namespace
+
+void MainWindow::fitStrip() {
+  const QFontMetrics metrics(strip_->font());
+  const int height = metrics.height() * 2 + 8;
+  // Each item takes its width and the spacing on both sides.
+  int oneLine = 0;
+  const int count = int(stripSections_.size());
+  for (const Section section : stripSections_)
+    oneLine += stripItemWidth(metrics, stripName(section)) + 2 * strip_->spacing();
+  // The view's inner width from its own (an event filter sees a resize before the viewport's).
+  const int room = strip_->width() - 2 * strip_->frameWidth();
+  const bool twoLines = oneLine > room;
+  std::vector<int> widths;
+  QStringList texts;
+  for (const Section section : stripSections_) {
+    const QString name = stripName(section);
+    texts << (twoLines ? onTwoLines(metrics, name) : name);
+    widths.push_back(stripItemWidth(metrics, texts.back()));
+  }
+  // Still too wide (a dock beside at 1280 px): the widest items give way, elided, to the
+  // same width, no narrower than four characters.
+  const int cap =
+      widthCap(widths, room - count * 2 * strip_->spacing() - 2, metrics.averageCharWidth() * 4 + 28);
+  for (int i = 0; i < count; ++i) {
+    QListWidgetItem* item = strip_->item(i);
+    if (item->text() != texts[i]) item->setText(texts[i]);
+    const QSize size(std::min(widths[static_cast<size_t>(i)], cap), height);
+    if (item->sizeHint() != size) item->setSizeHint(size);
   }
 }
 

@@ -186,6 +186,12 @@ class MainWindow : public QMainWindow {
   void updateStrip();
   /// Fills the strip with the items of the case's architecture (stripSections), when it changed.
   void fillStrip(engine::Architecture architecture);
+  /// The strip's items in one row without a scroll bar: each name on one line while they all
+  /// fit, else a name of several words on two (the strip is two lines high), the longer line
+  /// as short as it can be. The tooltips give each name whole.
+  void fitStrip();
+  /// A section's name in the strip, on one line ("Afterburner (unlit)" while unlit).
+  QString stripName(Section section) const;
   void routeSelection(Section section);
   QSet<QString> stationsOf(Section section) const;
 

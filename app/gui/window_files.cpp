@@ -75,11 +75,13 @@ int caseVersionAt(const QString& path) {
 
 }  // namespace
 
-WindowFiles::WindowFiles(QMainWindow& window, CaseDocument& document, AppSettings& settings)
+WindowFiles::WindowFiles(QMainWindow& window, CaseDocument& document, AppSettings& settings,
+                         const DisplayUnits& units)
     : QObject(&window),
       window_(window),
       document_(document),
       settings_(settings),
+      units_(units),
       fileVersion_(io::kCaseVersion) {
   connect(&document_, &CaseDocument::modifiedChanged, this, &WindowFiles::updateTitle);
 }
@@ -116,7 +118,7 @@ bool WindowFiles::openBaseline(const QString& path, QString* error) {
     const engine::Case inputs = readCaseAt(path);
     const QString title =
         inputs.title.empty() ? QFileInfo(path).fileName() : QString::fromStdString(inputs.title);
-    if (document_.setBaseline(inputs, title, &why)) {
+    if (document_.setBaseline(inputs, title, &why, &units_)) {
       window_.statusBar()->showMessage(tr("Baseline: %1").arg(title));
       return true;
     }

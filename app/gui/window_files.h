@@ -15,12 +15,14 @@ namespace cw::gui {
 
 class AppSettings;
 class CaseDocument;
+class DisplayUnits;
 
 class WindowFiles : public QObject {
   Q_OBJECT
 
  public:
-  WindowFiles(QMainWindow& window, CaseDocument& document, AppSettings& settings);
+  /// `units`: those of the window, for the numbers of a baseline's failure.
+  WindowFiles(QMainWindow& window, CaseDocument& document, AppSettings& settings, const DisplayUnits& units);
 
   /// Opens a case file (a path or a Qt resource) and removes the temporaries interrupted saves
   /// left beside it; see MainWindow::openCase.
@@ -65,6 +67,7 @@ class WindowFiles : public QObject {
   QMainWindow& window_;
   CaseDocument& document_;
   AppSettings& settings_;
+  const DisplayUnits& units_;
   int fileVersion_;        ///< of the open file
   QString fileOfVersion_;  ///< the file fileVersion_ was read from
 };

@@ -1,7 +1,8 @@
 #pragma once
-// The ideal twin of a case: the same flight condition, compressor pressure ratio, burner (and
+// The ideal twin of a case: the same flight condition, compressor pressure ratios, burner (and
 // afterburner) exit temperature, gas model and air mass flow, with every loss removed:
-// unit efficiencies (isentropic basis), no pressure losses, no bleed, no power offtake,
+// unit efficiencies (isentropic basis; both spools of a two-spool case), no pressure losses, no
+// bleed, no power offtake, unit mechanical efficiencies,
 // complete combustion, unit nozzle coefficients and full expansion to ambient pressure.
 // It is the reference against which the loss audit measures each loss.
 

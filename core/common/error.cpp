@@ -7,8 +7,11 @@
 
 namespace cw {
 
-Error::Error(ErrorCode code, std::string where, std::string message)
-    : std::runtime_error(std::move(message)), code_(code), where_(std::move(where)) {}
+Error::Error(ErrorCode code, std::string where, std::string message, ErrorDetail detail)
+    : std::runtime_error(std::move(message)),
+      code_(code),
+      where_(std::move(where)),
+      detail_(std::move(detail)) {}
 
 // A where() longer than this (a user's huge unknown key) is cut in the message; where() keeps it all.
 static constexpr std::size_t kWhereCharacters = 200;
@@ -20,25 +23,35 @@ static std::string rangeMessage(const std::string& where, double value, const st
   return text + " is outside the valid range " + validRange;
 }
 
+static ErrorDetail rangeDetail(double value, const std::string& unit, const std::string& validRange) {
+  return {kReasonOutsideRange, {}, {{value, unit}}, validRange};
+}
+
 InvalidInput::InvalidInput(std::string where, double value, std::string unit, std::string validRange)
-    : Error(ErrorCode::InvalidInput, where, rangeMessage(where, value, unit, validRange)) {}
+    : Error(ErrorCode::InvalidInput, where, rangeMessage(where, value, unit, validRange),
+            rangeDetail(value, unit, validRange)) {}
 
-InvalidInput::InvalidInput(std::string where, std::string message)
-    : Error(ErrorCode::InvalidInput, where, excerpt(where, kWhereCharacters) + ": " + message) {}
+InvalidInput::InvalidInput(std::string where, std::string message, ErrorDetail detail)
+    : Error(ErrorCode::InvalidInput, where, excerpt(where, kWhereCharacters) + ": " + message,
+            std::move(detail)) {}
 
-OutOfRange::OutOfRange(std::string where, std::string message)
-    : Error(ErrorCode::OutOfRange, where, excerpt(where, kWhereCharacters) + ": " + message) {}
+OutOfRange::OutOfRange(std::string where, std::string message, ErrorDetail detail)
+    : Error(ErrorCode::OutOfRange, where, excerpt(where, kWhereCharacters) + ": " + message,
+            std::move(detail)) {}
 
 OutOfRange::OutOfRange(std::string where, double value, std::string unit, std::string validRange)
-    : Error(ErrorCode::OutOfRange, where, rangeMessage(where, value, unit, validRange)) {}
+    : Error(ErrorCode::OutOfRange, where, rangeMessage(where, value, unit, validRange),
+            rangeDetail(value, unit, validRange)) {}
 
 NotConverged::NotConverged(std::string where, int iterations, double residual)
     : Error(ErrorCode::NotConverged, where,
             excerpt(where, kWhereCharacters) + ": solver did not converge after " +
-                std::to_string(iterations) + " iterations (residual " + formatSignificant(residual) + ")") {}
+                std::to_string(iterations) + " iterations (residual " + formatSignificant(residual) + ")",
+            {kReasonNotConverged, {}, {{double(iterations), ""}, {residual, ""}}, {}}) {}
 
-NoSolution::NoSolution(std::string where, std::string reason)
-    : Error(ErrorCode::NoSolution, where, excerpt(where, kWhereCharacters) + ": no solution: " + reason) {}
+NoSolution::NoSolution(std::string where, std::string reason, ErrorDetail detail)
+    : Error(ErrorCode::NoSolution, where, excerpt(where, kWhereCharacters) + ": no solution: " + reason,
+            std::move(detail)) {}
 
 std::string formatNumber(double value) {
   if (std::isnan(value)) return "NaN";

@@ -34,20 +34,28 @@ HeatAddition::Result HeatAddition::toExitTemperature(const stream::TotalState& e
   const double available = model_.stoichiometricFuelAirRatio() - f1;
   if (available <= 0.0)
     throw NoSolution(
-        name_, "the entering gas holds no oxygen left to burn (fuel-air ratio " + messageNumber(f1) + ")");
+        name_, "the entering gas holds no oxygen left to burn (fuel-air ratio " + messageNumber(f1) + ")",
+        {kReasonNoOxygenLeft, {}, {{f1, ""}}, {}});
   // Linear in df: two evaluations give the root; secant steps polish it.
   double a = 0.0, b = available;
   double ra = residual(entry, a, exitTemperature), rb = residual(entry, b, exitTemperature);
   double df = a - ra * (b - a) / (rb - ra);
   for (int i = 0; i < 8; ++i) {
     if (!(df >= 0.0)) {
-      throw NoSolution(name_, "the exit temperature " + messageNumber(exitTemperature) +
-                                  " K is below what the entering gas already has; no fuel can be burnt");
+      throw NoSolution(name_,
+                       "the exit temperature " + messageNumber(exitTemperature) +
+                           " K is below what the entering gas already has; no fuel can be burnt",
+                       {kReasonExitBelowEntry, {}, {{exitTemperature, "K"}}, {}});
     }
     if (df > available) {
-      throw NoSolution(name_, "the exit temperature " + messageNumber(exitTemperature) +
-                                  " K needs more fuel than the stoichiometric fuel-air ratio " +
-                                  messageNumber(model_.stoichiometricFuelAirRatio()) + " allows");
+      throw NoSolution(name_,
+                       "the exit temperature " + messageNumber(exitTemperature) +
+                           " K needs more fuel than the stoichiometric fuel-air ratio " +
+                           messageNumber(model_.stoichiometricFuelAirRatio()) + " allows",
+                       {kReasonRichBeyondStoichiometric,
+                        {},
+                        {{exitTemperature, "K"}, {model_.stoichiometricFuelAirRatio(), ""}},
+                        {}});
     }
     const double r = residual(entry, df, exitTemperature);
     if (std::abs(r) <= 1e-12 * (std::abs(entry.enthalpy) + model_.lowerHeatingValue() * df + 1.0)) break;
@@ -63,8 +71,13 @@ HeatAddition::Result HeatAddition::toExitTemperature(const stream::TotalState& e
 HeatAddition::Result HeatAddition::withFuelAirRatio(const stream::TotalState& entry, double df) const {
   const double f1 = entry.fuelAirRatio;
   if (f1 + df > model_.stoichiometricFuelAirRatio())
-    throw NoSolution(name_, "fuel-air ratio " + messageNumber(f1 + df) + " is above the stoichiometric " +
-                                messageNumber(model_.stoichiometricFuelAirRatio()));
+    throw NoSolution(name_,
+                     "fuel-air ratio " + messageNumber(f1 + df) + " is above the stoichiometric " +
+                         messageNumber(model_.stoichiometricFuelAirRatio()),
+                     {kReasonFuelAirAboveStoichiometric,
+                      {},
+                      {{f1 + df, ""}, {model_.stoichiometricFuelAirRatio(), ""}},
+                      {}});
   const double fuelTerm = model_.fuelEnthalpy() - (1.0 - combustionEfficiency_) * model_.lowerHeatingValue();
   const double exitEnthalpy =
       (massPerAir(model_, f1) * entry.enthalpy + df * fuelTerm) / massPerAir(model_, f1 + df);
@@ -77,9 +90,11 @@ void HeatAddition::requireHeating(const stream::TotalState& entry, double exitTe
   // Burning heats the stream. On the two-gamma model, whose product gas holds more heat per kelvin
   // than the air, a small fuel flow could otherwise "burn" to a lower temperature than the entry's.
   if (!(exitTemperature > entry.temperature))
-    throw NoSolution(name_, "the exit temperature " + messageNumber(exitTemperature) +
-                                " K is not above the entry temperature " + messageNumber(entry.temperature) +
-                                " K; a " + name_ + " only heats the stream");
+    throw NoSolution(name_,
+                     "the exit temperature " + messageNumber(exitTemperature) +
+                         " K is not above the entry temperature " + messageNumber(entry.temperature) +
+                         " K; a " + name_ + " only heats the stream",
+                     {kReasonOnlyHeats, {}, {{exitTemperature, "K"}, {entry.temperature, "K"}}, {}});
 }
 
 HeatAddition::Result HeatAddition::finish(const stream::TotalState& entry, double df,

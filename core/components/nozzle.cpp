@@ -78,9 +78,11 @@ double exitPressureOfAreaRatio(const Expander& expander, const Expander::Sonic& 
       entry.pressure * std::exp((gas.standardEntropy(coldest) - gas.standardEntropy(entry.temperature)) /
                                 gas.gasConstant()));
   if (flux(lowest) > 0.0)
-    throw NoSolution("nozzle", "the exit-to-throat area ratio " + messageNumber(ratio) +
-                                   " expands the jet below " + messageNumber(gas.minimumTemperature()) +
-                                   " K, the lowest temperature of the gas data");
+    throw NoSolution("nozzle",
+                     "the exit-to-throat area ratio " + messageNumber(ratio) + " expands the jet below " +
+                         messageNumber(gas.minimumTemperature()) +
+                         " K, the lowest temperature of the gas data",
+                     {kReasonNozzleBelowGasData, {}, {{ratio, ""}, {gas.minimumTemperature(), "K"}}, {}});
   return flow::findRoot(flux, lowest, throat.pressure, "nozzle: exit pressure for the area ratio");
 }
 
@@ -93,13 +95,16 @@ void requireSupersonicExit(const thermo::Gas& gas, const SectionState& exit, dou
   const double behindShock =
       flow::normalShock(gas, exit.temperature, exitPressure, std::max(1.0, mach)).downstream.local.pressure;
   if (ambientPressure <= behindShock) return;  // overexpanded, any shocks outside the nozzle
-  throw NoSolution("nozzle", "the ambient pressure " + messageNumber(ambientPressure) + " Pa is above " +
-                                 messageNumber(behindShock) +
-                                 " Pa, the pressure behind a normal shock at the exit of the exit-to-throat "
-                                 "area ratio " +
-                                 messageNumber(areaRatio) +
-                                 ": a shock would stand inside the nozzle, which the model does not cover "
-                                 "(choose a smaller area ratio, full expansion or a convergent nozzle)");
+  throw NoSolution(
+      "nozzle",
+      "the ambient pressure " + messageNumber(ambientPressure) + " Pa is above " +
+          messageNumber(behindShock) +
+          " Pa, the pressure behind a normal shock at the exit of the exit-to-throat "
+          "area ratio " +
+          messageNumber(areaRatio) +
+          ": a shock would stand inside the nozzle, which the model does not cover "
+          "(choose a smaller area ratio, full expansion or a convergent nozzle)",
+      {kReasonNozzleShockAtExit, {}, {{ambientPressure, "Pa"}, {behindShock, "Pa"}, {areaRatio, ""}}, {}});
 }
 
 }  // namespace
@@ -107,9 +112,11 @@ void requireSupersonicExit(const thermo::Gas& gas, const SectionState& exit, dou
 Nozzle::Result Nozzle::expand(const stream::TotalState& entry, double ambientPressure) const {
   const thermo::Gas& gas = *entry.gas;
   if (!(entry.pressure > ambientPressure))
-    throw NoSolution("nozzle", "the nozzle entry total pressure " + messageNumber(entry.pressure) +
-                                   " Pa is not above the ambient pressure " + messageNumber(ambientPressure) +
-                                   " Pa, so there is no jet");
+    throw NoSolution("nozzle",
+                     "the nozzle entry total pressure " + messageNumber(entry.pressure) +
+                         " Pa is not above the ambient pressure " + messageNumber(ambientPressure) +
+                         " Pa, so there is no jet",
+                     {kReasonNozzleNoJet, {}, {{entry.pressure, "Pa"}, {ambientPressure, "Pa"}}, {}});
   Result result;
   result.velocityCoefficient =
       inputs_.lossBasis == NozzleLossBasis::VelocityCoefficient ? inputs_.loss : std::sqrt(inputs_.loss);
@@ -136,8 +143,10 @@ Nozzle::Result Nozzle::expand(const stream::TotalState& entry, double ambientPre
     st.area = entry.massFlow / (pressure / (gas.gasConstant() * temperature) * velocity) /
               inputs_.dischargeCoefficient;  // geometric = effective / C_D
     if (!(velocity > 0.0) || !std::isfinite(*st.area))
-      throw NoSolution("nozzle", "the velocity coefficient " + messageNumber(result.velocityCoefficient) +
-                                     " leaves the jet too slow for a finite nozzle area");
+      throw NoSolution("nozzle",
+                       "the velocity coefficient " + messageNumber(result.velocityCoefficient) +
+                           " leaves the jet too slow for a finite nozzle area",
+                       {kReasonNozzleJetTooSlow, {}, {{result.velocityCoefficient, ""}}, {}});
     return st;
   };
 
@@ -151,7 +160,8 @@ Nozzle::Result Nozzle::expand(const stream::TotalState& entry, double ambientPre
     if (!(throat.pressure > 0.0))
       throw NoSolution("nozzle",
                        "the nozzle's losses keep its throat from choking, so its divergent part "
-                       "cannot run supersonic; the model does not cover that regime");
+                       "cannot run supersonic; the model does not cover that regime",
+                       {kReasonNozzleNotChoked, {}, {}, {}});
     result.choked = true;
     exitPressure = exitPressureOfAreaRatio(expander, throat, fixed->exitToThroatAreaRatio, entry);
     exit = expander.at(exitPressure);

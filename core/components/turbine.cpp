@@ -13,9 +13,10 @@ Turbine::Result Turbine::exit(const stream::TotalState& entry, double compressor
   const double exitEnthalpy = entry.enthalpy - specificWork;
   const char* why = "the turbine cannot drive the compressor";
   if (!(exitEnthalpy > gas.enthalpy(gas.minimumTemperature())))
-    throw NoSolution("turbine", std::string(why) + ": it would need " + messageNumber(specificWork) +
-                                    " J/kg, more than the gas at " + messageNumber(entry.temperature) +
-                                    " K holds");
+    throw NoSolution("turbine",
+                     std::string(why) + ": it would need " + messageNumber(specificWork) +
+                         " J/kg, more than the gas at " + messageNumber(entry.temperature) + " K holds",
+                     {kReasonTurbineCannotDrive, {}, {{specificWork, "J/kg"}, {entry.temperature, "K"}}, {}});
   Result result;
   stream::TotalState& out = result.exit;
   out.gas = entry.gas;
@@ -28,12 +29,15 @@ Turbine::Result Turbine::exit(const stream::TotalState& entry, double compressor
     out.pressure = e.exitPressure;
     isentropicTemperature = e.isentropicTemperature;
   } catch (const OutOfRange&) {
-    throw NoSolution("turbine", std::string(why) + ": the isentropic expansion for " +
-                                    messageNumber(specificWork) + " J/kg leaves the range of the gas data");
+    throw NoSolution("turbine",
+                     std::string(why) + ": the isentropic expansion for " + messageNumber(specificWork) +
+                         " J/kg leaves the range of the gas data",
+                     {kReasonTurbineExpansion, {}, {{specificWork, "J/kg"}}, {}});
   }
   if (!(out.pressure > 0.0) || !std::isfinite(out.pressure))
     throw NoSolution("turbine",
-                     std::string(why) + ": no exit pressure gives " + messageNumber(specificWork) + " J/kg");
+                     std::string(why) + ": no exit pressure gives " + messageNumber(specificWork) + " J/kg",
+                     {kReasonTurbineNoExitPressure, {}, {{specificWork, "J/kg"}}, {}});
   out.massFlow = entry.massFlow;
   out.fuelAirRatio = entry.fuelAirRatio;
   result.specificWork = specificWork;

@@ -13,8 +13,10 @@ namespace {
 void check(double value, const std::string& which, const char* what, const char* where = "",
            const std::string& name = {}) {
   if (std::isfinite(value)) return;
-  throw NoSolution("cycle", "the " + which + " has no finite " + what + where + name +
-                                "; the inputs are beyond what the model can evaluate");
+  throw NoSolution("cycle",
+                   "the " + which + " has no finite " + what + where + name +
+                       "; the inputs are beyond what the model can evaluate",
+                   {kReasonResultNotFinite, {}, {}, {}});
 }
 
 }  // namespace
@@ -70,12 +72,28 @@ void requireFinite(const CycleResult& result, const std::string& which) {
       for (double value : {state.temperature, state.entropy, state.pressure, state.specificVolume,
                            state.enthalpy, state.sensibleEnthalpy})
         check(value, which, "state", " on the path of the ", path.component);
+  // What the network adds besides (finite whenever the above are).
+  for (const NozzleSizing& n : z.nozzles) {
+    check(n.throatArea, which, "throat area", " of the ", n.nozzle);
+    check(n.exitArea, which, "exit area", " of the ", n.nozzle);
+  }
+  check(p.shaftPowerOfftake, which, "shaft power offtake");
+  for (const ShaftBalance& s : result.shafts) {
+    check(s.compressorPower, which, "compressor power", " of the ", s.name);
+    check(s.turbinePower, which, "turbine power", " of the ", s.name);
+  }
 }
 
 const Station& CycleResult::station(const std::string& id) const {
   for (const auto& s : stations)
     if (s.id == id) return s;
   throw std::out_of_range("no station " + id + " in this result");
+}
+
+const Station& CycleResult::anyStation(const std::string& id) const {
+  for (const auto& s : internalStations)
+    if (s.id == id) return s;
+  return station(id);
 }
 
 }  // namespace cw::engine

@@ -5,11 +5,21 @@
 
 namespace cw::engine {
 
+namespace {
+
+bool among(const std::vector<std::string>& ids, const std::string& id) {
+  return std::find(ids.begin(), ids.end(), id) != ids.end();
+}
+
+}  // namespace
+
 std::vector<Isobar> stationIsobars(const CycleResult& cycle, double tLow, double tHigh, int samples) {
   std::vector<Isobar> out;
+  if (!cycle.network) return out;
+  const NetworkDescription& network = *cycle.network;
   for (const auto& station : cycle.stations) {
-    if (!station.gas || station.id == "8") continue;
-    const bool statics = station.id == "0" || station.id == "9";
+    if (!station.gas || among(network.throats, station.id)) continue;
+    const bool statics = among(network.staticStations, station.id);
     const double p = statics ? station.staticPressure : station.totalPressure;
     const double t = statics ? station.staticTemperature : station.totalTemperature;
     if (!(p > 0.0)) continue;

@@ -17,7 +17,8 @@ struct Isobar {
   std::vector<PathState> states;  ///< from tLow to tHigh
 };
 
-/// One isobar per distinct station pressure (static at 0 and 9, total elsewhere), each sampled
+/// One isobar per distinct station pressure (static at the stations the network names static, the
+/// free stream and nozzle exits, total elsewhere; none through a throat), each sampled
 /// between temperatures tLow and tHigh [K] within its gas's data range. Pressures within 1 %
 /// of one already drawn are skipped.
 std::vector<Isobar> stationIsobars(const CycleResult& cycle, double tLow, double tHigh, int samples = 32);

@@ -54,8 +54,8 @@ ProcessPath heatingPath(std::string component, std::string from, std::string to,
 }
 
 ProcessPath closurePath(const thermo::Gas& exhaustGas, double t9, double p9, double t0, double p0,
-                        double entropyReference, const thermo::Gas& air) {
-  ProcessPath path{"closure", "9", "0", true, {}};
+                        double entropyReference, const thermo::Gas& air, std::string from, std::string to) {
+  ProcessPath path{"closure", std::move(from), std::move(to), true, {}};
   path.states.reserve(kClosureExpansionStates + kPathStates);
   // An exhaust not at ambient pressure (a choked convergent nozzle) first expands to it at its
   // own entropy; the isobar then starts at the end of that expansion.

@@ -30,7 +30,9 @@ ProcessPath heatingPath(std::string component, std::string from, std::string to,
                         const thermo::Gas& exitGas, double t1, double p1, double t2, double p2,
                         double entropyReference);
 
+/// The closure from a nozzle's exit (station `from`) to the free stream (station `to`).
 ProcessPath closurePath(const thermo::Gas& exhaustGas, double t9, double p9, double t0, double p0,
-                        double entropyReference, const thermo::Gas& air);
+                        double entropyReference, const thermo::Gas& air, std::string from = {},
+                        std::string to = {});
 
 }  // namespace cw::engine

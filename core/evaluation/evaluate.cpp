@@ -3,7 +3,7 @@
 #include "analysis/ideal_twin.h"
 #include "engine/case_validation.h"
 #include "engine/gas_model_factory.h"
-#include "engine/turbojet.h"
+#include "network/engine.h"
 
 namespace cw::engine {
 
@@ -12,11 +12,11 @@ Evaluation evaluateCase(const Case& inputs, bool withPaths) {
   // The twin changes only losses, so it shares the case's gas model; neither case is copied again.
   const auto gasModel = makeGasModel(inputs.gasModel, inputs.fuel, inputs.flight.specificHumidity);
   Evaluation evaluation;
-  evaluation.actual = evaluateTurbojet(inputs, *gasModel, withPaths);
-  const double burnerExitTemperature = evaluation.actual.station("4").totalTemperature;
+  evaluation.actual = network::evaluateEngine(inputs, *gasModel, withPaths);
+  const double burnerExitTemperature = evaluation.actual.burnerExitTemperature();
   const Case twin =
       analysis::idealTwinOf(inputs, burnerExitTemperature, evaluation.actual.sizing.airMassFlow);
-  evaluation.ideal = evaluateTurbojet(twin, *gasModel, withPaths);
+  evaluation.ideal = network::evaluateEngine(twin, *gasModel, withPaths);
   requireFinite(evaluation.actual, "cycle with losses");
   requireFinite(evaluation.ideal, "ideal twin");
   return evaluation;

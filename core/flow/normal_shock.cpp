@@ -38,7 +38,9 @@ NormalShock normalShock(const thermo::Gas& gas, double T1, double p1, double M1)
   } else {
     double lo = 0.5 * aStar;
     for (int i = 0; F(lo) >= 0.0; ++i) {
-      if (i >= 60) throw NoSolution("normal shock", "no downstream state below the sonic velocity");
+      if (i >= 60)
+        throw NoSolution("normal shock", "no downstream state below the sonic velocity",
+                         {kReasonNormalShock, {}, {}, {}});
       lo *= 0.5;
     }
     V2 = findRoot(F, lo, aStar, "normal shock: downstream velocity");

@@ -7,12 +7,15 @@
 namespace cw::flow::detail {
 
 void throwNotBracketed(std::string_view where, double lo, double hi) {
-  throw NoSolution(std::string(where), "the search interval [" + messageNumber(lo) + ", " +
-                                           messageNumber(hi) + "] does not bracket a root");
+  throw NoSolution(
+      std::string(where),
+      "the search interval [" + messageNumber(lo) + ", " + messageNumber(hi) + "] does not bracket a root",
+      {kReasonNoBracket, {}, {{lo, ""}, {hi, ""}}, {}});
 }
 
 void throwNotFinite(std::string_view where, double x) {
-  throw NoSolution(std::string(where), "the function is not finite at " + messageNumber(x));
+  throw NoSolution(std::string(where), "the function is not finite at " + messageNumber(x),
+                   {kReasonFunctionNotFinite, {}, {{x, ""}}, {}});
 }
 
 void throwNotConverged(std::string_view where, int iterations, double residual) {

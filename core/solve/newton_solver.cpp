@@ -11,7 +11,7 @@ namespace cw::solve {
 
 namespace {
 
-constexpr double kArmijo = 1e-4;       // sufficient decrease (Dennis and Schnabel, A6.3.1)
+constexpr double kArmijo = 1e-4;        // sufficient decrease (Dennis and Schnabel, A6.3.1)
 constexpr double kMinimumStep = 1e-10;  // smallest fraction of the Newton step tried
 
 Eigen::VectorXd orOnes(const Eigen::VectorXd& v, Eigen::Index n) {
@@ -61,8 +61,9 @@ NewtonResult solveNewton(const NonlinearSystem& system, const Eigen::VectorXd& x
       result.status = NewtonStatus::Converged;
       return result;
     }
-    const Eigen::MatrixXd jacobian = system.jacobian ? system.jacobian(result.x)
-                                                     : differenceJacobian(system, result.x, result.residuals, typicalX);
+    const Eigen::MatrixXd jacobian = system.jacobian
+                                         ? system.jacobian(result.x)
+                                         : differenceJacobian(system, result.x, result.residuals, typicalX);
     const Eigen::FullPivLU<Eigen::MatrixXd> lu(jacobian);
     if (!jacobian.allFinite() || !lu.isInvertible()) {
       result.status = NewtonStatus::SingularJacobian;
@@ -98,11 +99,16 @@ NewtonResult solveNewton(const NonlinearSystem& system, const Eigen::VectorXd& x
 
 std::string describe(NewtonStatus status) {
   switch (status) {
-    case NewtonStatus::Converged: return "converged";
-    case NewtonStatus::SingularJacobian: return "the Jacobian is singular (no unique Newton step)";
-    case NewtonStatus::NoDescent: return "no step reduces the residuals (no root near the start)";
-    case NewtonStatus::NotFinite: return "the residuals are not finite along the step";
-    case NewtonStatus::IterationLimit: return "the iteration limit was reached";
+    case NewtonStatus::Converged:
+      return "converged";
+    case NewtonStatus::SingularJacobian:
+      return "the Jacobian is singular (no unique Newton step)";
+    case NewtonStatus::NoDescent:
+      return "no step reduces the residuals (no root near the start)";
+    case NewtonStatus::NotFinite:
+      return "the residuals are not finite along the step";
+    case NewtonStatus::IterationLimit:
+      return "the iteration limit was reached";
   }
   return "unknown status";
 }
@@ -113,9 +119,11 @@ Eigen::VectorXd solveNewtonOrThrow(const NonlinearSystem& system, const Eigen::V
   if (result.converged()) return std::move(result.x);
   if (result.status == NewtonStatus::IterationLimit)
     throw NotConverged(where, result.iterations, result.scaledResidual);
-  throw NoSolution(where, "Newton's method stopped: " + describe(result.status) + " after " +
-                              std::to_string(result.iterations) + " iterations (scaled residual " +
-                              messageNumber(result.scaledResidual) + ")");
+  throw NoSolution(
+      where,
+      "Newton's method stopped: " + describe(result.status) + " after " + std::to_string(result.iterations) +
+          " iterations (scaled residual " + messageNumber(result.scaledResidual) + ")",
+      {kReasonNewtonStopped, {}, {{double(result.iterations), ""}, {result.scaledResidual, ""}}, {}});
 }
 
 }  // namespace cw::solve

@@ -94,7 +94,7 @@ StudyPoint evaluatePoint(const engine::Case& inputs, bool withAudit) {
     point.actual = evaluation.actual.performance;
     point.ideal = evaluation.ideal.performance;
     point.sizing = evaluation.actual.sizing;
-    point.burnerExitTemperature = evaluation.actual.station("4").totalTemperature;
+    point.burnerExitTemperature = evaluation.actual.burnerExitTemperature();
     if (withAudit) point.audit = analysis::oneAtATime(analysis::AuditPoint(inputs));
     point.status = PointStatus::Solved;
   } catch (const NoSolution& e) {

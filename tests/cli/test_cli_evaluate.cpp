@@ -11,6 +11,7 @@
 #include <QTest>
 
 #include <cmath>
+#include <map>
 
 namespace {
 
@@ -125,6 +126,26 @@ class TestCliEvaluate : public QObject {
     QCOMPARE(v1.status, 0);
     QCOMPARE(v2.status, 0);
     QCOMPARE(v2.out, v1.out);
+  }
+  void twoSpoolCaseIsReadEvaluatedAndSet() {
+    // The invented two-spool example (version 2): stations after SAE AS755, 25 and 45 where the
+    // spools split; each compressor's ratio as given, and as --set gives it.
+    const QString twoSpool =
+        QStringLiteral(CYCLEWRIGHT_SOURCE_DIR "/resources/examples/two-spool-cruise.json");
+    const Run run = runCli(
+        {"evaluate", twoSpool, "--format", "json", "--set", "low_pressure_compressor.pressure_ratio=4"});
+    QCOMPARE(run.status, 0);
+    QVERIFY2(run.err.isEmpty(), run.err.constData());
+    const QJsonArray stations = QJsonDocument::fromJson(run.out).object()["stations"].toArray();
+    QStringList ids;
+    std::map<QString, double> pt;
+    for (const auto& s : stations) {
+      ids << s.toObject()["id"].toString();
+      pt[ids.back()] = s.toObject()["pt_Pa"].toDouble();
+    }
+    QCOMPARE(ids, QStringList({"0", "2", "25", "3", "4", "45", "5", "7", "8", "9"}));
+    QVERIFY(std::abs(pt["25"] / pt["2"] - 4.0) < 1e-12);
+    QVERIFY(std::abs(pt["3"] / pt["25"] - 5.0) < 1e-12);
   }
   void twoSpoolKeysAreRefusedOnATurbojet() {
     const Run run = runCli({"evaluate", kExample, "--set", "low_pressure_compressor.pressure_ratio=3"});

@@ -4,7 +4,8 @@
 #include "analysis/loss_catalogue.h"
 #include "common/error.h"
 #include "engine/case_validation_error.h"
-#include "engine/turbojet.h"
+#include "engine/free_stream.h"
+#include "network/engine.h"
 #include "evaluation/evaluate.h"
 #include "io/case_file.h"
 
@@ -93,7 +94,7 @@ class TestLossAudit : public QObject {
   void auditKeepsTheResolvedAirFlowAndBurnerExitTemperature() {
     // A case set by thrust and fuel-air ratio: its audited actual figures are its own.
     const Case c = cruiseByThrustAndFuelAirRatio();
-    const CycleResult r = Turbojet(c, false).evaluate();
+    const CycleResult r = cw::network::Engine(c, false).evaluate();
     const LossAudit a = auditCase(c);
     QVERIFY(relative(a.actual.specificThrust, r.performance.specificThrust) < 1e-9);
     QVERIFY(relative(a.actual.thrustSpecificFuelConsumption, r.performance.thrustSpecificFuelConsumption) <
@@ -365,7 +366,7 @@ class TestLossAudit : public QObject {
     c.gasModel.model = TwoGammaGasModel{1004.0, 1.4, 1239.0, 1.3};
     c.burner.setting = ExitTemperatureSetting{1900.0};
     const ExergyBalance b = exergyBalanceOf(AuditPoint(c));
-    const CycleResult r = Turbojet(c, false).evaluate();
+    const CycleResult r = cw::network::Engine(c, false).evaluate();
     const Station &s3 = r.station("3"), &s4 = r.station("4");
     const double Rt = 1239.0 * 0.3 / 1.3;
     const double expected = s4.massFlow * (1239.0 * std::log(s4.totalTemperature / s3.totalTemperature) -
@@ -385,7 +386,7 @@ class TestLossAudit : public QObject {
     c.gasModel.neglectFuelMass = true;
     c = idealTwinOf(c, 1400.0, 20.0);
     const ExergyBalance b = exergyBalanceOf(AuditPoint(c));
-    const CycleResult r = Turbojet(c, false).evaluate();
+    const CycleResult r = cw::network::Engine(c, false).evaluate();
     const double T0 = 288.15, cp = 1004.0, W = 20.0;
     QVERIFY(relative(b.fuelExergy, b.fuelHeatingPower) < 1e-12);
     const double T3 = r.station("3").totalTemperature, T9 = r.station("9").staticTemperature;

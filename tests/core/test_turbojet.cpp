@@ -4,10 +4,12 @@
 #include "analysis/ideal_twin.h"
 #include "common/error.h"
 #include "components/inlet.h"
+#include "engine/free_stream.h"
 #include "engine/isobars.h"
 #include "engine/process_paths.h"
-#include "engine/turbojet.h"
 #include "evaluation/evaluate.h"
+#include "ideal_turbojet.h"
+#include "network/engine.h"
 #include "thermo/constant_cp_gas.h"
 
 #include <QTest>
@@ -19,24 +21,8 @@ using namespace cw::engine;
 
 namespace {
 
-/// A case on the constant-cp model with every component ideal and the fuel mass neglected,
-/// at the flight condition of Mattingly's ideal turbojet examples (M0 = 2, T0 = 216.7 K).
-Case idealConstantCpCase(double pressureRatio, double burnerExitTemperature, double mach) {
-  Case c;
-  c.flight.ambient = GivenAmbient{216.7, 19330.0};
-  c.flight.mach = mach;
-  c.design.target = AirMassFlowTarget{50.0};
-  c.fuel.lowerHeatingValue = 42.8e6;
-  c.gasModel.model = ConstantCpGasModel{1004.0, 1.4};
-  c.gasModel.neglectFuelMass = true;
-  c = cw::analysis::idealTwinOf(c, burnerExitTemperature, 50.0);
-  c.compressor.pressureRatio = pressureRatio;
-  return c;
-}
-
-double relative(double a, double b) {
-  return std::abs(a - b) / std::max(std::abs(b), 1e-300);
-}
+using cw::test::idealConstantCpCase;
+using cw::test::relative;
 
 /// A random valid case: gas model by i % 3, two-gamma with a random hot gas, the rest uniform
 /// over ranges a little inside the valid ones.
@@ -239,32 +225,25 @@ class TestTurbojet : public QObject {
     QFETCH(double, mach);
     QFETCH(double, pressureRatio);
     QFETCH(double, exitTemperature);
-    const double gamma = 1.4, cp = 1004.0, R = cp * (gamma - 1) / gamma, T0 = 216.7, hPR = 42.8e6;
-    const double a0 = std::sqrt(gamma * R * T0);
-    const double tauR = 1 + 0.5 * (gamma - 1) * mach * mach;
-    const double tauC = std::pow(pressureRatio, (gamma - 1) / gamma);
-    const double tauL = exitTemperature / T0;
-    const double tauT = 1 - tauR / tauL * (tauC - 1);
-    const double v9a0 = std::sqrt(2 / (gamma - 1) * tauL / (tauR * tauC) * (tauR * tauC * tauT - 1));
-    const double specificThrust = a0 * (v9a0 - mach);
-    const double f = cp * T0 * (tauL - tauR * tauC) / hPR;
+    const cw::test::IdealTurbojet j = cw::test::idealTurbojet(mach, pressureRatio, exitTemperature);
 
-    const CycleResult r = Turbojet(idealConstantCpCase(pressureRatio, exitTemperature, mach)).evaluate();
+    const CycleResult r =
+        cw::network::Engine(idealConstantCpCase(pressureRatio, exitTemperature, mach)).evaluate();
     const double tol = 1e-9;
-    QVERIFY2(relative(r.performance.specificThrust, specificThrust) < tol,
+    QVERIFY2(relative(r.performance.specificThrust, j.specificThrust) < tol,
              qPrintable(QString::number(r.performance.specificThrust, 'g', 15) + " vs " +
-                        QString::number(specificThrust, 'g', 15)));
-    QVERIFY(relative(r.performance.fuelAirRatio, f) < tol);
-    QVERIFY(relative(r.performance.thrustSpecificFuelConsumption, f / specificThrust) < tol);
-    QVERIFY(relative(r.performance.jetVelocity, v9a0 * a0) < tol);
+                        QString::number(j.specificThrust, 'g', 15)));
+    QVERIFY(relative(r.performance.fuelAirRatio, j.fuelAirRatio) < tol);
+    QVERIFY(relative(r.performance.thrustSpecificFuelConsumption, j.tsfc()) < tol);
+    QVERIFY(relative(r.performance.jetVelocity, j.jetVelocity) < tol);
     // Ideal Brayton cycle thermal efficiency 1 - 1/(tau_r tau_c) (Mattingly, 2006, eq. 5.24).
-    QVERIFY(relative(r.performance.thermalEfficiency, 1 - 1 / (tauR * tauC)) < tol);
+    QVERIFY(relative(r.performance.thermalEfficiency, j.thermalEfficiency) < tol);
     if (mach > 0) {
-      QVERIFY(relative(r.performance.propulsiveEfficiency, 2 * mach / (v9a0 + mach)) < tol);
+      QVERIFY(relative(r.performance.propulsiveEfficiency, j.propulsiveEfficiency) < tol);
       QVERIFY(relative(r.performance.overallEfficiency,
                        r.performance.thermalEfficiency * r.performance.propulsiveEfficiency) < tol);
     }
-    QVERIFY(relative(r.station("5").totalTemperature, tauT * exitTemperature) < tol);
+    QVERIFY(relative(r.station("5").totalTemperature, j.tauT * exitTemperature) < tol);
   }
 
   // Closed form of the turbojet with losses in the two-gamma model: Mattingly, Elements of
@@ -314,7 +293,7 @@ class TestTurbojet : public QObject {
     c.turbine = TurbineInputs{Efficiency{EfficiencyBasis::Polytropic, et}, etaM, 0.0};
     c.jetPipe.pressureLossFraction = 1 - piN;
     c.nozzle = NozzleInputs{FullyExpandingNozzle{}, NozzleLossBasis::VelocityCoefficient, 1.0, 1.0};
-    const CycleResult r = Turbojet(c).evaluate();
+    const CycleResult r = cw::network::Engine(c).evaluate();
     QVERIFY2(relative(r.performance.specificThrust, specificThrust) < 1e-9,
              qPrintable(QString::number(r.performance.specificThrust, 'g', 15) + " vs " +
                         QString::number(specificThrust, 'g', 15)));
@@ -384,7 +363,7 @@ class TestTurbojet : public QObject {
     c.jetPipe.pressureLossFraction = 1 - piN;
     c.nozzle =
         NozzleInputs{ConvergentNozzle{}, NozzleLossBasis::VelocityCoefficient, velocityCoefficient, 0.97};
-    const CycleResult r = Turbojet(c).evaluate();
+    const CycleResult r = cw::network::Engine(c).evaluate();
     const Station& s8 = r.station("8");
     QVERIFY(r.performance.nozzleChoked);
     QCOMPARE(s8.mach, 1.0);  // exactly
@@ -411,7 +390,7 @@ class TestTurbojet : public QObject {
     if (model == 1) c.gasModel.model = TwoGammaGasModel{};
     c.turbine.powerOfftake = 150e3;
     c.compressor.bleedFraction = 0.03;
-    const Turbojet engine(c);
+    const cw::network::Engine engine(c);
     const CycleResult r = engine.evaluate();
     const Station &s2 = r.station("2"), &s3 = r.station("3"), &s4 = r.station("4"), &s5 = r.station("5");
     const double compressorPower = s2.massFlow * (s3.totalEnthalpy - s2.totalEnthalpy);
@@ -636,7 +615,7 @@ class TestTurbojet : public QObject {
     c.compressor.pressureRatio = 40.0;
     c.burner.setting = ExitTemperatureSetting{950.0};  // just above the compressor exit (922 K)
     try {
-      Turbojet(c).evaluate();
+      cw::network::Engine(c).evaluate();
       QFAIL("expected NoSolution");
     } catch (const cw::NoSolution& e) {
       QVERIFY2(std::string(e.what()).find("cannot drive the compressor") != std::string::npos ||
@@ -649,7 +628,7 @@ class TestTurbojet : public QObject {
   // constant pressure; common practice), and the one through station 3 passes through its state.
   void isobarsThroughStations() {
     Case c;
-    const CycleResult r = Turbojet(c).evaluate();
+    const CycleResult r = cw::network::Engine(c).evaluate();
     const auto isobars = stationIsobars(r, 250.0, 1600.0, 40);
     QVERIFY(isobars.size() >= 5);
     const Station& s3 = r.station("3");
@@ -683,9 +662,9 @@ class TestTurbojet : public QObject {
     c.gasModel.model = TwoGammaGasModel{};
     c.turbine.powerOfftake = 100e3;
     c.design.target = NetThrustTarget{25000.0};
-    const CycleResult r = Turbojet(c).evaluate();
+    const CycleResult r = cw::network::Engine(c).evaluate();
     QVERIFY(relative(r.performance.netThrust, 25000.0) < 1e-9);
-    const CycleResult check = Turbojet(c).evaluateAt(r.sizing.airMassFlow);
+    const CycleResult check = cw::network::Engine(c).evaluateAt(r.sizing.airMassFlow);
     QVERIFY(relative(check.performance.netThrust, 25000.0) < 1e-9);
     // Face area: A2 = W2 / (rho2 V2); diameter from the annulus (common practice, no source).
     const double hub = c.sizing.hubToTipRatio;
@@ -696,7 +675,7 @@ class TestTurbojet : public QObject {
   // Random valid cases across the input ranges, every gas model (two-gamma with hot gammas up to
   // 5/3), Mach 0 to 4.5, pressure ratios to 60, cold and hot days: each is finite and physical, or
   // a clear error. Physical: thrust and fuel flow positive; 0 < eta_th < 1; 0 <= eta_p <= 1 (above
-  // 0 in flight) and eta_o = eta_th eta_p (engine/turbojet.cpp, the efficiencies); every lossy
+  // 0 in flight) and eta_o = eta_th eta_p (network/design_point.cpp, the efficiencies); every lossy
   // component generates entropy (cycle summary and exergy view, second law); the exergy balance
   // closes to 1e-9 of the fuel exergy; removing every loss never lowers specific thrust.
   void randomCasesAreFiniteOrAClearError() {

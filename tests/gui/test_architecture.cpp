@@ -5,6 +5,7 @@
 #include "document/selection_router.h"
 #include "gui_test_support.h"
 #include "main_window.h"
+#include "tables/station_table_model.h"
 #include "window_files.h"
 
 #include "io/case_file.h"
@@ -84,8 +85,8 @@ class TestArchitecture : public QObject {
                           "highPressureCompressor", "burner", "highPressureTurbine", "lowPressureTurbine",
                           "jetPipe", "afterburner", "nozzle"}));
     auto* strip = window.findChild<QListWidget*>("componentStrip");
-    QCOMPARE(strip->item(6)->text(), QString("LP compressor"));
-    QCOMPARE(strip->item(10)->text(), QString("LP turbine"));
+    QCOMPARE(strip->item(6)->text().replace(QLatin1Char('\n'), QLatin1Char(' ')), QString("LP compressor"));
+    QCOMPARE(strip->item(10)->text().replace(QLatin1Char('\n'), QLatin1Char(' ')), QString("LP turbine"));
     QVERIFY2(window.windowTitle().contains("Two-spool turbojet"), qPrintable(window.windowTitle()));
     // A new two-spool case keeps the overall pressure ratio of 10: 2.5 times 4 (case_inputs.h).
     const cw::engine::Case& fresh = window.document().currentCase();
@@ -115,6 +116,20 @@ class TestArchitecture : public QObject {
     window.files().newCase(cw::engine::Architecture::Turbojet);
     QCOMPARE(stripKeys(window), single);
     QVERIFY(window.windowTitle().contains("Turbojet"));
+  }
+
+  void aTwoSpoolCaseIsEvaluatedAndItsStationsListed() {
+    MainWindow window;
+    QVERIFY(window.openCase(kSource + "/resources/examples/two-spool-cruise.json"));
+    QVERIFY(window.document().evaluation());
+    const auto* model = window.stationModel();
+    QStringList ids;
+    for (int row = 0; row < model->rowCount(); ++row) ids << model->index(row, 0).data().toString();
+    // SAE AS755: 25 and 45 where the spools split (no afterburner, so no 6).
+    QCOMPARE(ids, (QStringList{"0", "2", "25", "3", "4", "45", "5", "7", "8", "9"}));
+    // Selecting the HP turbine highlights its stations, 4 to 45.
+    window.selection().select(Section{"high_pressure_turbine"});
+    QCOMPARE(model->highlightedStations(), QSet<QString>({"4", "45"}));
   }
 
   void fileNewOffersEachArchitecture() {

@@ -12,6 +12,7 @@
 #include "dialogs/dialogs.h"
 #include "document/case_document.h"
 #include "document/selection_router.h"
+#include "document/settings.h"
 #include "gui_test_support.h"
 #include "main_window.h"
 
@@ -206,6 +207,7 @@ class TestLossAudit : public QObject {
   }
 
   void baselineWaterfallBesideTheCurrentOne() {
+    QSettings().remove("audit/baseline_beside");
     MainWindow window;
     window.units().setSystem(cw::gui::UnitSystem::SI);
     QVERIFY(window.openCase(kDemo));
@@ -283,6 +285,35 @@ class TestLossAudit : public QObject {
     QVERIFY(chart->baselineBars().empty());
     QVERIFY(!beside->isEnabled());
     checkBarsEqual(chart->bars(), currentReference, false);
+  }
+
+  void baselineBesideRememberedInANewWindow() {
+    // "Baseline beside" is kept in the settings (audit/baseline_beside, through AppSettings) and
+    // restored by the next window, also before it has a baseline (the box is then disabled).
+    QSettings().remove("audit/baseline_beside");
+    cw::engine::Case baseline = cw::test::demoCase();
+    baseline.compressor.pressureRatio = 11.0;
+    {
+      MainWindow window;
+      QVERIFY(!window.auditPanel()->baselineBox()->isChecked());  // off by default
+      QVERIFY(window.document().setBaseline(baseline, QStringLiteral("Review A")));
+      window.auditPanel()->baselineBox()->click();  // as a user ticks it
+      QVERIFY(window.auditPanel()->baselineBox()->isChecked());
+      QCOMPARE(cw::gui::AppSettings().auditBaselineBeside(), true);
+    }
+    {
+      MainWindow again;
+      QCheckBox* beside = again.auditPanel()->baselineBox();
+      QVERIFY(beside->isChecked());
+      QVERIFY(!beside->isEnabled());  // no baseline in the new window yet
+      QVERIFY(again.auditPanel()->chart()->baselineBars().empty());
+      QVERIFY(again.document().setBaseline(baseline, QStringLiteral("Review A")));
+      QTRY_VERIFY(!again.auditPanel()->chart()->baselineBars().empty());  // shown without a tick
+      beside->setChecked(false);
+      QCOMPARE(cw::gui::AppSettings().auditBaselineBeside(), false);
+    }
+    MainWindow third;
+    QVERIFY(!third.auditPanel()->baselineBox()->isChecked());
   }
 
   void valueAxisTitleFitsInTheBottomTab() {

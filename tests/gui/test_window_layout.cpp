@@ -1,13 +1,16 @@
 // The main window's layout holds: toolbar buttons keep their place whatever the undo text says;
 // at 1280 x 800 and 1920 x 1080, with and without the docks, no control is below its minimum
 // size or cut off, and the station and performance tables show every column (scrolling, if at
-// all, only vertically; at 1280 x 800 without a dock every station).
+// all, only vertically; at 1280 x 800 without a dock every station); in German too, and there the
+// component strip shows every item without scrolling sideways.
 #include "charts/cycle_chart.h"
 #include "charts/isobar_labels.h"
 #include "charts/label_placer.h"
 #include "document/case_document.h"
+#include "document/case_fields.h"
 #include "gui_test_support.h"
 #include "main_window.h"
+#include "startup/application.h"
 
 #include <qwt_plot.h>
 #include <qwt_plot_curve.h>
@@ -24,12 +27,14 @@
 #include <QFontMetricsF>
 #include <QHeaderView>
 #include <QLineEdit>
+#include <QListWidget>
 #include <QScrollBar>
 #include <QTabWidget>
 #include <QTableView>
 #include <QTest>
 #include <QToolBar>
 #include <QToolButton>
+#include <QTranslator>
 #include <QUndoStack>
 
 namespace {
@@ -138,6 +143,26 @@ void settle() {
   for (int i = 0; i < 4; ++i) QApplication::processEvents();
 }
 
+/// Installs a translation for the scope's lifetime ("en": none).
+class ScopedLanguage {
+ public:
+  explicit ScopedLanguage(const QString& language) {
+    if (language != QLatin1String("en"))
+      installed_ =
+          cw::gui::installTranslation(*qobject_cast<QApplication*>(QCoreApplication::instance()), language);
+  }
+  ~ScopedLanguage() {
+    for (auto* translator : QCoreApplication::instance()->findChildren<QTranslator*>()) {
+      QCoreApplication::removeTranslator(translator);
+      delete translator;
+    }
+  }
+  QString installed() const { return installed_; }
+
+ private:
+  QString installed_;
+};
+
 }  // namespace
 
 class TestWindowLayout : public QObject {
@@ -211,6 +236,13 @@ class TestWindowLayout : public QObject {
     // once grew to 1294 px at 1280 x 800 (the study's table beside its controls set the dock's
     // minimum width).
     QCOMPARE(window.size(), size);
+    // The component strip never scrolls sideways, with a dock beside it too (its widest names
+    // then give way, elided, whole in their tooltips).
+    auto* strip = window.findChild<QListWidget*>("componentStrip");
+    QCOMPARE(strip->horizontalScrollBar()->maximum(), 0);
+    for (int i = 0; i < strip->count(); ++i)
+      QVERIFY2(strip->viewport()->rect().contains(strip->visualItemRect(strip->item(i))),
+               qPrintable(strip->item(i)->text()));
     if (dock == "study") {
       // The study's results the dock's width, at least three rows high (once a sliver).
       auto* table = window.findChild<QTableView*>("studyTable");
@@ -265,6 +297,75 @@ class TestWindowLayout : public QObject {
       // Stations 8 and 9 in view at the laptop size too; the performance summary in one view.
       QVERIFY2(everyRowInView(table), name);
     }
+  }
+
+  // The component strip in one row without a horizontal scroll bar: in German at 1280 x 800 its
+  // names ("Auslegung und Größe", "Nachbrenner (nicht gezündet)") once made it scroll sideways;
+  // now a name of several words goes on two lines, each item whole in view and its name whole in
+  // its tooltip. In English at 1280 x 800 every name still stands on one line.
+  void stripFitsWithoutScrolling_data() {
+    QTest::addColumn<QString>("language");
+    QTest::addColumn<QSize>("size");
+    QTest::newRow("German 1280x800") << "de" << QSize(1280, 800);
+    QTest::newRow("German 1920x1080") << "de" << QSize(1920, 1080);
+    QTest::newRow("English 1280x800") << "en" << QSize(1280, 800);
+  }
+  void stripFitsWithoutScrolling() {
+    QFETCH(QString, language);
+    QFETCH(QSize, size);
+    const ScopedLanguage scoped(language);
+    if (language == "de") QCOMPARE(scoped.installed(), QString("de_DE"));
+    cw::gui::MainWindow window;
+    QVERIFY(window.openCase(":/demo/demo-turbojet.json"));
+    QVERIFY(!window.document().currentCase().afterburner.enabled);  // the longest name: unlit
+    window.resize(size);
+    window.show();
+    QVERIFY(QTest::qWaitForWindowExposed(&window));
+    settle();
+    if (!qEnvironmentVariableIsEmpty("CYCLEWRIGHT_LAYOUT_PICTURES"))
+      window.grab().save(QStringLiteral("%1/strip-%2-%3x%4.png")
+                             .arg(qEnvironmentVariable("CYCLEWRIGHT_LAYOUT_PICTURES"), language)
+                             .arg(size.width())
+                             .arg(size.height()));
+    QCOMPARE(window.size(), size);
+    auto* strip = window.findChild<QListWidget*>("componentStrip");
+    QVERIFY(strip);
+    const std::vector<cw::gui::Section> sections =
+        cw::gui::stripSections(window.document().currentCase().architecture);
+    QCOMPARE(strip->count(), int(sections.size()));
+    QCOMPARE(strip->horizontalScrollBar()->maximum(), 0);
+    QVERIFY(!strip->horizontalScrollBar()->isVisible());
+    const QFontMetrics metrics(strip->font());
+    const QRect view = strip->viewport()->rect();
+    bool twoLines = false;
+    for (int i = 0; i < strip->count(); ++i) {
+      const QListWidgetItem* item = strip->item(i);
+      const QRect place = strip->visualItemRect(item);
+      QVERIFY2(view.contains(place), qPrintable(item->text()));
+      // Each line of its text inside the item; at most two lines (the strip's height).
+      const QStringList lines = item->text().split('\n');
+      QVERIFY2(lines.size() <= 2, qPrintable(item->text()));
+      twoLines = twoLines || lines.size() == 2;
+      for (const QString& line : lines)
+        QVERIFY2(metrics.horizontalAdvance(line) <= place.width(), qPrintable(line));
+      QVERIFY2(lines.size() * metrics.height() <= place.height(), qPrintable(item->text()));
+      // The whole name, on one line, in the tooltip.
+      const cw::gui::Section section = sections[std::size_t(i)];
+      const QString name = section == cw::gui::Section::Afterburner
+                               ? QCoreApplication::translate("cw::gui::MainWindow", "%1 (unlit)")
+                                     .arg(cw::gui::sectionName(cw::gui::Section::Afterburner))
+                               : cw::gui::sectionName(section);
+      QVERIFY2(item->toolTip().startsWith(name), qPrintable(item->toolTip()));
+      QCOMPARE(QString(item->text()).replace('\n', ' '), name);
+    }
+    if (language == "de") {
+      QCOMPARE(cw::gui::sectionName(cw::gui::Section::Afterburner), QStringLiteral("Nachbrenner"));
+      if (size.width() == 1280) QVERIFY(twoLines);  // one line each would not fit
+    } else if (size.width() == 1280) {
+      QVERIFY(!twoLines);
+    }
+    const QStringList cramped = crampedControls(window);
+    QVERIFY2(cramped.isEmpty(), qPrintable(cramped.join("\n")));
   }
 
   // Every cycle chart's axis titles stand on one line: the entropy axis's title once wrapped to

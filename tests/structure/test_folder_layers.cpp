@@ -34,6 +34,7 @@ const std::vector<LayeredTree>& layeredTrees() {
         {"stream"},
         {"components"},
         {"engine"},
+        {"network"},
         {"analysis"},
         {"evaluation"},
         {"io"},

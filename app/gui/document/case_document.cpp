@@ -39,24 +39,6 @@ bool finite(const engine::CycleResult& r) {
   return true;
 }
 
-QString translatedFailure(const Error& e) {
-  const QString detail = QString::fromStdString(e.what());
-  switch (e.code()) {
-    case ErrorCode::NoSolution:
-      return QCoreApplication::translate("cw::gui::CaseDocument", "No solution for these inputs: %1")
-          .arg(detail);
-    case ErrorCode::NotConverged:
-      return QCoreApplication::translate("cw::gui::CaseDocument", "The solver did not converge: %1")
-          .arg(detail);
-    case ErrorCode::OutOfRange:
-      return QCoreApplication::translate("cw::gui::CaseDocument", "A property is outside its data range: %1")
-          .arg(detail);
-    case ErrorCode::InvalidInput:
-      break;
-  }
-  return QCoreApplication::translate("cw::gui::CaseDocument", "Invalid input: %1").arg(detail);
-}
-
 }  // namespace
 
 CaseDocument::CaseDocument(QObject* parent) : QObject(parent), undoStack_(new QUndoStack(this)) {
@@ -74,7 +56,11 @@ CaseDocument::CaseDocument(QObject* parent) : QObject(parent), undoStack_(new QU
 }
 
 bool CaseDocument::isStale() const {
-  return !live_ || !problems_.empty() || !failure_.isEmpty() || !entryProblems_.isEmpty();
+  return !live_ || !problems_.empty() || hasFailure() || !entryProblems_.isEmpty();
+}
+
+QString CaseDocument::failure(const DisplayUnits& units) const {
+  return coreFailure_ ? failureText(*coreFailure_, units) : failure_;
 }
 
 std::shared_ptr<const engine::Evaluation> CaseDocument::evaluation() const {
@@ -142,7 +128,8 @@ bool CaseDocument::pinBaseline() {
   return true;
 }
 
-bool CaseDocument::setBaseline(const engine::Case& inputs, const QString& title, QString* error) {
+bool CaseDocument::setBaseline(const engine::Case& inputs, const QString& title, QString* error,
+                               const DisplayUnits* units) {
   QString why;
   try {
     auto result = std::make_shared<engine::Evaluation>(engine::evaluateCase(inputs));
@@ -160,7 +147,8 @@ bool CaseDocument::setBaseline(const engine::Case& inputs, const QString& title,
     for (const auto& p : e.problems()) lines << QString::fromStdString(p.message);
     why = lines.join(QLatin1Char('\n'));
   } catch (const Error& e) {
-    why = translatedFailure(e);
+    const DisplayUnits si;
+    why = failureText(gui::coreFailure(e), units ? *units : si);
   } catch (const std::exception& e) {
     why = tr("Evaluation failed: %1").arg(QString::fromStdString(e.what()));
   }
@@ -267,6 +255,7 @@ void CaseDocument::markSaved(const QString& path) {
 void CaseDocument::evaluate() {
   problems_.clear();
   failure_.clear();
+  coreFailure_.reset();
   live_.reset();
   try {
     auto result = std::make_shared<engine::Evaluation>(engine::evaluateCase(case_));
@@ -278,7 +267,7 @@ void CaseDocument::evaluate() {
   } catch (const engine::CaseValidationError& e) {
     problems_ = e.problems();
   } catch (const Error& e) {
-    failure_ = translatedFailure(e);
+    coreFailure_ = gui::coreFailure(e);
   } catch (const std::exception& e) {
     failure_ = tr("Evaluation failed: %1").arg(QString::fromStdString(e.what()));
   }

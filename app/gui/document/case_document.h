@@ -15,6 +15,9 @@
 // and after; consecutive edits of one field merge (the command id is the field id). A
 // ScopedUndoDisabler turns recording off, e.g. while a file loads.
 
+#include "document/core_failure.h"
+#include "document/units.h"
+
 #include "analysis/loss_audit.h"
 #include "engine/case_inputs.h"
 #include "engine/case_problem.h"
@@ -27,6 +30,7 @@
 #include <QUndoCommand>
 
 #include <memory>
+#include <optional>
 #include <vector>
 
 class QTimer;
@@ -61,8 +65,13 @@ class CaseDocument : public QObject {
   const std::vector<engine::CaseProblem>& problems() const { return problems_; }
   /// The problem for a case-file path, or nullptr.
   const engine::CaseProblem* problemAt(const std::string& path) const;
-  /// Why the current inputs have no result, beyond per-field problems (translated); empty if none.
-  QString failure() const { return failure_; }
+  /// True when the current inputs have no result for a reason beyond per-field problems.
+  bool hasFailure() const { return coreFailure_.has_value() || !failure_.isEmpty(); }
+  /// Why the current inputs have no result, beyond per-field problems: translated, its numbers in
+  /// `units` at display precision (failureText); empty if none.
+  QString failure(const DisplayUnits& units) const;
+  /// The core's failure behind failure(), when the core failed.
+  const std::optional<CoreFailure>& coreFailure() const { return coreFailure_; }
   /// Fields whose text is not a number (field id -> translated message); they make the result stale.
   const QHash<int, QString>& entryProblems() const { return entryProblems_; }
 
@@ -94,8 +103,10 @@ class CaseDocument : public QObject {
   /// case's title, else its file name.
   bool pinBaseline();
   /// Evaluates a case and makes it the baseline. Returns false and sets *error (translated, with
-  /// the reason) when it has no cycle; the baseline is then unchanged.
-  bool setBaseline(const engine::Case& inputs, const QString& title, QString* error = nullptr);
+  /// the reason, its numbers in `units`, SI without) when it has no cycle; the baseline is then
+  /// unchanged.
+  bool setBaseline(const engine::Case& inputs, const QString& title, QString* error = nullptr,
+                   const DisplayUnits* units = nullptr);
   void clearBaseline();
 
   QUndoStack* undoStack() const { return undoStack_; }
@@ -165,7 +176,8 @@ class CaseDocument : public QObject {
   engine::Case baselineCase_;
   QString baselineTitle_;
   std::vector<engine::CaseProblem> problems_;
-  QString failure_;
+  QString failure_;                         ///< a failure that is not the core's (translated)
+  std::optional<CoreFailure> coreFailure_;  ///< the core's failure, written when shown
   QHash<int, QString> entryProblems_;
   QUndoStack* undoStack_ = nullptr;
   int undoDisabled_ = 0;

@@ -56,6 +56,13 @@ void AppSettings::setAuditOrder(const QStringList& keys) {
   settings_.setValue("audit/waterfall_order", keys);
 }
 
+bool AppSettings::auditBaselineBeside() const {
+  return settings_.value("audit/baseline_beside", false).toBool();
+}
+void AppSettings::setAuditBaselineBeside(bool on) {
+  settings_.setValue("audit/baseline_beside", on);
+}
+
 StudySetup AppSettings::studySetup() const {
   StudySetup s;
   s.firstInput = settings_.value("study/first_input", s.firstInput).toString();

@@ -55,6 +55,10 @@ class AppSettings {
   /// The loss audit's waterfall order (loss keys); empty for the flow order.
   QStringList auditOrder() const;
   void setAuditOrder(const QStringList& keys);
+  /// The loss audit's "Baseline beside": the baseline's waterfall beside the current one
+  /// (shown once there is a baseline), default off.
+  bool auditBaselineBeside() const;
+  void setAuditBaselineBeside(bool on);
 
   /// The trade-study panel's choices.
   StudySetup studySetup() const;

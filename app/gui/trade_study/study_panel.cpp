@@ -448,12 +448,16 @@ bool TradeStudyPanel::isRunning() const {
   return runner_->isRunning();
 }
 
+QString TradeStudyPanel::outcomeError(const StudyOutcome& outcome) const {
+  return outcome.failure ? failureText(*outcome.failure, units_) : QString::fromStdString(outcome.error);
+}
+
 void TradeStudyPanel::finished(const StudyOutcome& outcome) {
   cancelButton_->setEnabled(false);
   status_->setPalette(palette());
   status_->clear();
   if (!outcome.study) {
-    refusal_ = tr("The study cannot run: %1").arg(QString::fromStdString(outcome.error));
+    refusal_ = tr("The study cannot run: %1").arg(outcomeError(outcome));
     status_->setText(refusal_);
     errorStyled(status_);
     progress_->setValue(0);
@@ -469,7 +473,7 @@ void TradeStudyPanel::finished(const StudyOutcome& outcome) {
   changedDescription_ = pendingDescription_;
   stale_ = studyIsStale();
   if (outcome.overlayFailed) {
-    status_->setText(tr("The comparison cannot run: %1").arg(QString::fromStdString(outcome.error)));
+    status_->setText(tr("The comparison cannot run: %1").arg(outcomeError(outcome)));
     errorStyled(status_);
   }
   // The bar says how far the study got: full, or the points run of a stopped one.

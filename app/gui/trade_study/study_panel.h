@@ -123,6 +123,8 @@ class TradeStudyPanel : public QWidget {
   void controlsChanged();
   void validateControls();
   void finished(const StudyOutcome& outcome);
+  /// Why a study or its comparison was refused: the core's failure written by failureText.
+  QString outcomeError(const StudyOutcome& outcome) const;
   void showStudy();
   void updateOverlay();
   void updateNote();

@@ -1,5 +1,7 @@
 #include "trade_study/study_runner.h"
 
+#include "common/error.h"
+
 #include <exception>
 
 namespace cw::gui {
@@ -55,6 +57,9 @@ void StudyRunner::start(StudyJob job) {
     try {
       outcome->study =
           std::make_shared<const study::TradeStudy>(study::runTradeStudy(job.spec, stop, reportFrom(0)));
+    } catch (const Error& e) {
+      outcome->error = e.what();
+      outcome->failure = coreFailure(e);
     } catch (const std::exception& e) {
       outcome->error = e.what();
     }
@@ -62,6 +67,10 @@ void StudyRunner::start(StudyJob job) {
       try {
         outcome->overlay = std::make_shared<const study::TradeStudy>(
             study::runTradeStudy(*job.overlay, stop, reportFrom(first)));
+      } catch (const Error& e) {
+        outcome->error = e.what();
+        outcome->failure = coreFailure(e);
+        outcome->overlayFailed = true;
       } catch (const std::exception& e) {
         outcome->error = e.what();
         outcome->overlayFailed = true;

@@ -8,6 +8,8 @@
 // job. Starting a job stops and joins the one running, whose results are then dropped; the
 // destructor stops and joins too, so that closing the window never leaves a thread behind.
 
+#include "document/core_failure.h"
+
 #include "study/trade_study.h"
 
 #include <QObject>
@@ -30,6 +32,7 @@ struct StudyOutcome {
   std::shared_ptr<const study::TradeStudy> study;    ///< null when the spec was refused
   std::shared_ptr<const study::TradeStudy> overlay;  ///< null when not asked for, refused or not run
   std::string error;                                 ///< the core's reason a spec was refused; empty if none
+  std::optional<CoreFailure> failure;                ///< its parts, when a cw::Error said it
   bool overlayFailed = false;                        ///< the error is the overlay's
 };
 
