@@ -28,16 +28,8 @@
         <translation>Einlauf</translation>
     </message>
     <message>
-        <source>Compressor</source>
-        <translation>Verdichter</translation>
-    </message>
-    <message>
         <source>Burner</source>
         <translation>Brennkammer</translation>
-    </message>
-    <message>
-        <source>Turbine</source>
-        <translation>Turbine</translation>
     </message>
     <message>
         <source>Jet pipe</source>
@@ -742,6 +734,30 @@ kein Kreisprozess mit diesen Eingaben</translation>
     <message>
         <source>Pressure ratio pt3/pt25</source>
         <translation>Druckverhältnis pt3/pt25</translation>
+    </message>
+    <message>
+        <source>Compressor</source>
+        <translation>Verdichter</translation>
+    </message>
+    <message>
+        <source>LP compressor</source>
+        <translation>ND-Verdichter</translation>
+    </message>
+    <message>
+        <source>HP compressor</source>
+        <translation>HD-Verdichter</translation>
+    </message>
+    <message>
+        <source>Turbine</source>
+        <translation>Turbine</translation>
+    </message>
+    <message>
+        <source>HP turbine</source>
+        <translation>HD-Turbine</translation>
+    </message>
+    <message>
+        <source>LP turbine</source>
+        <translation>ND-Turbine</translation>
     </message>
 </context>
 <context>
@@ -2350,6 +2366,14 @@ p = %7   v = %8</translation>
         <source>Copy &amp;Performance Table</source>
         <translation>&amp;Leistungstabelle kopieren</translation>
     </message>
+    <message>
+        <source>New</source>
+        <translation>Neu</translation>
+    </message>
+    <message>
+        <source>New turbojet case</source>
+        <translation>Neuer Fall: Strahltriebwerk</translation>
+    </message>
 </context>
 <context>
     <name>cw::gui::WindowAutosave</name>
@@ -2492,10 +2516,6 @@ p = %7   v = %8</translation>
 <context>
     <name>cw::gui::WindowFiles</name>
     <message>
-        <source>Opened %1</source>
-        <translation>%1 geöffnet</translation>
-    </message>
-    <message>
         <source>Cannot open case</source>
         <translation>Fall kann nicht geöffnet werden</translation>
     </message>
@@ -2540,10 +2560,6 @@ p = %7   v = %8</translation>
         <translation>Unbenannt</translation>
     </message>
     <message>
-        <source>%1[*] — Cyclewright</source>
-        <translation>%1[*] — Cyclewright</translation>
-    </message>
-    <message>
         <source>Not opened: %1</source>
         <translation>Nicht geöffnet: %1</translation>
     </message>
@@ -2570,6 +2586,34 @@ p = %7   v = %8</translation>
     <message>
         <source>The baseline is unchanged.</source>
         <translation>Die Basis bleibt unverändert.</translation>
+    </message>
+    <message>
+        <source>Opened %1, read as a version %2 single-spool turbojet case; saving writes version %3</source>
+        <translation>%1 geöffnet, gelesen als Fall der Version %2 (einwelliges Strahltriebwerk); Speichern schreibt Version %3</translation>
+    </message>
+    <message>
+        <source>Opened %1 (%2)</source>
+        <translation>%1 geöffnet (%2)</translation>
+    </message>
+    <message>
+        <source>Save as version %1</source>
+        <translation>Als Version %1 speichern</translation>
+    </message>
+    <message>
+        <source>%1 is a version %2 case file. Saving writes it as version %3, which older versions of Cyclewright cannot read. Save anyway?</source>
+        <translation>%1 ist eine Falldatei der Version %2. Beim Speichern wird sie als Version %3 geschrieben, die ältere Versionen von Cyclewright nicht lesen können. Trotzdem speichern?</translation>
+    </message>
+    <message>
+        <source>Not saved: %1 is kept as version %2</source>
+        <translation>Nicht gespeichert: %1 bleibt Version %2</translation>
+    </message>
+    <message>
+        <source>%1[*] — %2 — Cyclewright</source>
+        <translation>%1[*] — %2 — Cyclewright</translation>
+    </message>
+    <message>
+        <source>New case: %1</source>
+        <translation>Neuer Fall: %1</translation>
     </message>
 </context>
 </TS>

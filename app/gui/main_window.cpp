@@ -154,16 +154,37 @@ void MainWindow::createStrip(QVBoxLayout* layout) {
   strip_->setSpacing(3);
   strip_->setTextElideMode(Qt::ElideRight);  // a name that gives way (fitStrip); whole in its tooltip
   const QFontMetrics metrics(strip_->font());
-  for (int i = 0; i < kSectionCount; ++i) {
-    auto* item = new QListWidgetItem(sectionName(static_cast<Section>(i)), strip_);
-    item->setTextAlignment(Qt::AlignCenter);
-  }
   strip_->setFixedHeight(metrics.height() * 2 + 22);
   strip_->installEventFilter(this);  // refitted to its width (fitStrip)
+  fillStrip(document_->currentCase().architecture);
   connect(strip_, &QListWidget::currentRowChanged, this, [this](int row) {
-    if (row >= 0) router_->select(static_cast<Section>(row));
+    if (row >= 0 && row < int(stripSections_.size())) router_->select(stripSections_[size_t(row)]);
   });
   layout->addWidget(strip_);
+}
+
+void MainWindow::fillStrip(engine::Architecture architecture) {
+  // The items of the architecture from the registry, in flow order (a two-spool case: inlet, LP
+  // compressor, HP compressor, burner, HP turbine, LP turbine, jet pipe, afterburner, nozzle).
+  if (stripArchitecture_ == architecture) return;
+  stripArchitecture_ = architecture;
+  stripSections_ = stripSections(architecture);
+  const QSignalBlocker blocker(strip_);
+  strip_->clear();
+  for (const Section section : stripSections_) {  // texts and sizes: updateStrip and fitStrip
+    auto* item = new QListWidgetItem(sectionName(section), strip_);
+    item->setTextAlignment(Qt::AlignCenter);
+    item->setData(Qt::UserRole, sectionKey(section));
+  }
+  // A section of another architecture is no longer shown: select the first role of this one.
+  if (!forms_) return;  // the window is being built; its constructor selects
+  const Section current = router_->current();
+  if (std::find(stripSections_.begin(), stripSections_.end(), current) != stripSections_.end()) {
+    routeSelection(current);
+    return;
+  }
+  for (const Section section : stripSections_)
+    if (sectionArchitecture(section) == architecture) return router_->select(section);
 }
 
 void MainWindow::createBanner(QVBoxLayout* layout) {
@@ -183,9 +204,9 @@ QSplitter* MainWindow::createFormsAndCharts() {
   horizontal->setObjectName("horizontalSplitter");
   forms_ = new QStackedWidget;
   forms_->setObjectName("formStack");
-  for (int i = 0; i < kSectionCount; ++i) {
-    auto* form = new CaseForm(static_cast<Section>(i), *document_, *units_);
-    formOf_[static_cast<size_t>(i)] = form;
+  for (const Section section : allSections()) {
+    auto* form = new CaseForm(section, *document_, *units_);
+    formOf_.push_back(form);
     forms_->addWidget(form);
   }
   auto* scroll = new QScrollArea(horizontal);
@@ -455,12 +476,14 @@ QSet<QString> MainWindow::stationsOf(Section section) const {
 }
 
 void MainWindow::routeSelection(Section section) {
-  const int row = static_cast<int>(section);
+  const auto shown = std::find(stripSections_.begin(), stripSections_.end(), section);
   {
     const QSignalBlocker blocker(strip_);
-    strip_->setCurrentRow(row);
+    strip_->setCurrentRow(shown == stripSections_.end() ? -1 : int(shown - stripSections_.begin()));
   }
-  forms_->setCurrentIndex(row);
+  const auto& all = allSections();
+  const auto form = std::find(all.begin(), all.end(), section);
+  if (form != all.end()) forms_->setCurrentIndex(int(form - all.begin()));
   tsChart_->setHighlightedComponent(sectionComponent(section));
   pvChart_->setHighlightedComponent(sectionComponent(section));
   hsChart_->setHighlightedComponent(sectionComponent(section));
@@ -610,12 +633,14 @@ QString MainWindow::stripName(Section section) const {
 }
 
 void MainWindow::updateStrip() {
+  fillStrip(document_->currentCase().architecture);
   const bool lit = document_->currentCase().afterburner.enabled;
-  strip_->item(static_cast<int>(Section::Afterburner))
+  const auto afterburner = std::find(stripSections_.begin(), stripSections_.end(), Section::Afterburner);
+  strip_->item(int(afterburner - stripSections_.begin()))
       ->setForeground(lit ? palette().brush(QPalette::Text)
                           : palette().brush(QPalette::Disabled, QPalette::Text));
-  for (int i = 0; i < kSectionCount; ++i) {
-    const auto section = static_cast<Section>(i);
+  for (int i = 0; i < int(stripSections_.size()); ++i) {
+    const Section section = stripSections_[size_t(i)];
     const QSet<QString> stations = stationsOf(section);
     QStringList ids(stations.begin(), stations.end());
     std::sort(ids.begin(), ids.end(),
@@ -679,23 +704,24 @@ void MainWindow::fitStrip() {
   const int height = metrics.height() * 2 + 8;
   // Each item takes its width and the spacing on both sides.
   int oneLine = 0;
-  for (int i = 0; i < kSectionCount; ++i)
-    oneLine += stripItemWidth(metrics, stripName(static_cast<Section>(i))) + 2 * strip_->spacing();
+  const int count = int(stripSections_.size());
+  for (const Section section : stripSections_)
+    oneLine += stripItemWidth(metrics, stripName(section)) + 2 * strip_->spacing();
   // The view's inner width from its own (an event filter sees a resize before the viewport's).
   const int room = strip_->width() - 2 * strip_->frameWidth();
   const bool twoLines = oneLine > room;
   std::vector<int> widths;
   QStringList texts;
-  for (int i = 0; i < kSectionCount; ++i) {
-    const QString name = stripName(static_cast<Section>(i));
+  for (const Section section : stripSections_) {
+    const QString name = stripName(section);
     texts << (twoLines ? onTwoLines(metrics, name) : name);
     widths.push_back(stripItemWidth(metrics, texts.back()));
   }
   // Still too wide (a dock beside at 1280 px): the widest items give way, elided, to the
   // same width, no narrower than four characters.
   const int cap =
-      widthCap(widths, room - kSectionCount * 2 * strip_->spacing() - 2, metrics.averageCharWidth() * 4 + 28);
-  for (int i = 0; i < kSectionCount; ++i) {
+      widthCap(widths, room - count * 2 * strip_->spacing() - 2, metrics.averageCharWidth() * 4 + 28);
+  for (int i = 0; i < count; ++i) {
     QListWidgetItem* item = strip_->item(i);
     if (item->text() != texts[i]) item->setText(texts[i]);
     const QSize size(std::min(widths[static_cast<size_t>(i)], cap), height);

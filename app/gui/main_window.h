@@ -15,6 +15,8 @@
 
 #include <array>
 #include <memory>
+#include <optional>
+#include <vector>
 
 class QComboBox;
 class QDockWidget;
@@ -182,6 +184,8 @@ class MainWindow : public QMainWindow {
   /// The stale banner's colours from the window's palette (light or dark).
   void applyBannerPalette();
   void updateStrip();
+  /// Fills the strip with the items of the case's architecture (stripSections), when it changed.
+  void fillStrip(engine::Architecture architecture);
   /// The strip's items in one row without a scroll bar: each name on one line while they all
   /// fit, else a name of several words on two (the strip is two lines high), the longer line
   /// as short as it can be. The tooltips give each name whole.
@@ -203,7 +207,9 @@ class MainWindow : public QMainWindow {
 
   QListWidget* strip_ = nullptr;
   QStackedWidget* forms_ = nullptr;
-  std::array<CaseForm*, kSectionCount> formOf_{};
+  std::vector<CaseForm*> formOf_;                          ///< one per allSections(), in its order
+  std::vector<Section> stripSections_;                     ///< the strip's items, row by row
+  std::optional<engine::Architecture> stripArchitecture_;  ///< the architecture the strip shows
   QLabel* banner_ = nullptr;
   CycleChart* tsChart_ = nullptr;
   CycleChart* pvChart_ = nullptr;

@@ -11,6 +11,8 @@
 #include "trade_study/study_chart.h"
 #include "trade_study/study_panel.h"
 
+#include "engine/parameter_registry.h"
+
 #include <QAction>
 #include <QActionGroup>
 #include <QFileInfo>
@@ -42,9 +44,20 @@ QAction* WindowActions::make(const QString& text, const char* name) {
 
 void WindowActions::createFileActions() {
   WindowFiles& files = window_.files();
-  newCase_ = make(tr("&New"), "newAction");
+  // File › New: one action per architecture of the registry (engine.architecture); the first,
+  // the single-spool turbojet, is the toolbar's New and has the standard shortcut.
+  const engine::Parameter& architecture = *engine::findParameter("engine", "architecture");
+  for (std::size_t i = 0; i < architecture.choices.size(); ++i) {
+    const auto which = static_cast<engine::Architecture>(i);
+    QAction* action = make(WindowFiles::architectureText(which), i == 0 ? "newAction" : "newTwoSpoolAction");
+    action->setData(QString::fromLatin1(architecture.choices[i].value.data()));
+    connect(action, &QAction::triggered, &files, [&files, which] { files.newCase(which); });
+    newArchitecture_.push_back(action);
+  }
+  newCase_ = newArchitecture_.front();
   newCase_->setShortcut(QKeySequence::New);
-  connect(newCase_, &QAction::triggered, &files, &WindowFiles::newCase);
+  newCase_->setIconText(tr("New"));
+  newCase_->setToolTip(tr("New turbojet case"));
   open_ = make(tr("&Open…"), "openAction");
   open_->setShortcut(QKeySequence::Open);
   connect(open_, &QAction::triggered, &files, &WindowFiles::open);
@@ -127,7 +140,9 @@ void WindowActions::createViewActions() {
 void WindowActions::createFileMenu() {
   QMenu* fileMenu = window_.menuBar()->addMenu(tr("&File"));
   fileMenu->setObjectName("fileMenu");
-  fileMenu->addAction(newCase_);
+  QMenu* newMenu = fileMenu->addMenu(tr("&New"));
+  newMenu->setObjectName("newMenu");
+  for (QAction* action : newArchitecture_) newMenu->addAction(action);
   fileMenu->addAction(open_);
   recentMenu_ = fileMenu->addMenu(tr("Open &Recent"));
   recentMenu_->setObjectName("recentMenu");

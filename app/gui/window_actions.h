@@ -4,6 +4,8 @@
 
 #include <QObject>
 
+#include <vector>
+
 class QAction;
 class QActionGroup;
 class QMenu;
@@ -51,6 +53,7 @@ class WindowActions : public QObject {
           *copyStudyTable_ = nullptr, *copyPerformance_ = nullptr, *pinBaseline_ = nullptr,
           *openBaseline_ = nullptr, *clearBaseline_ = nullptr;
   QAction *resetZoom_ = nullptr, *logAxes_ = nullptr, *sideBySide_ = nullptr, *tabbed_ = nullptr;
+  std::vector<QAction*> newArchitecture_;  ///< File › New: one per architecture, in the registry's order
   QActionGroup* layoutGroup_ = nullptr;
   QMenu* recentMenu_ = nullptr;
   QMenu* viewMenu_ = nullptr;

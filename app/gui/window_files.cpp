@@ -6,9 +6,13 @@
 
 #include "common/error.h"
 #include "engine/case_validation_error.h"
+#include "engine/parameter_registry.h"
 #include "io/atomic_file.h"
 #include "io/case_file.h"
+#include "io/case_keys.h"
+#include "io/json_document.h"
 
+#include <QCoreApplication>
 #include <QDir>
 #include <QFile>
 #include <QFileDialog>
@@ -54,11 +58,31 @@ bool isResource(const QString& path) {
   return path.startsWith(QLatin1Char(':'));
 }
 
+/// The case-file version of a file that was read as a case (so its document is valid JSON).
+int caseVersionAt(const QString& path) {
+  try {
+    if (!isResource(path))
+      return io::caseDocumentVersion(io::readCaseDocument(QDir::toNativeSeparators(path).toStdString()));
+    QFile file(path);
+    if (!file.open(QIODevice::ReadOnly)) return io::kCaseVersion;
+    const QByteArray bytes = file.readAll();
+    return io::caseDocumentVersion(io::parseDocumentText(
+        std::string_view(bytes.constData(), static_cast<std::size_t>(bytes.size())), path.toStdString()));
+  } catch (const std::exception&) {
+    return io::kCaseVersion;
+  }
+}
+
 }  // namespace
 
 WindowFiles::WindowFiles(QMainWindow& window, CaseDocument& document, AppSettings& settings,
                          const DisplayUnits& units)
-    : QObject(&window), window_(window), document_(document), settings_(settings), units_(units) {
+    : QObject(&window),
+      window_(window),
+      document_(document),
+      settings_(settings),
+      units_(units),
+      fileVersion_(io::kCaseVersion) {
   connect(&document_, &CaseDocument::modifiedChanged, this, &WindowFiles::updateTitle);
 }
 
@@ -70,11 +94,21 @@ bool WindowFiles::openCase(const QString& path, QString* error) {
     return refuseToOpen(openFailureText(path, e), error);
   }
   removeStaleTemporariesOf(path);
+  fileVersion_ = caseVersionAt(path);
+  fileOfVersion_ = path;
   document_.load(loaded, path);
   if (!isResource(path)) settings_.addRecentFile(QFileInfo(path).absoluteFilePath());
   updateTitle();
   const QString title = QString::fromStdString(loaded.title);
-  window_.statusBar()->showMessage(tr("Opened %1").arg(title.isEmpty() ? path : title));
+  const QString name = title.isEmpty() ? path : title;
+  if (fileVersion_ < io::kCaseVersion)
+    window_.statusBar()->showMessage(
+        tr("Opened %1, read as a version %2 single-spool turbojet case; saving writes version %3")
+            .arg(name)
+            .arg(fileVersion_)
+            .arg(io::kCaseVersion));
+  else
+    window_.statusBar()->showMessage(tr("Opened %1 (%2)").arg(name, architectureText(loaded.architecture)));
   return true;
 }
 
@@ -113,7 +147,25 @@ bool WindowFiles::refuseToOpen(const QString& message, QString* error) {
   return false;
 }
 
+bool WindowFiles::confirmVersionUpgrade(const QString& path) {
+  if (fileVersion_ >= io::kCaseVersion || QFileInfo(path) != QFileInfo(fileOfVersion_)) return true;
+  QMessageBox box(QMessageBox::Question, tr("Save as version %1").arg(io::kCaseVersion),
+                  tr("%1 is a version %2 case file. Saving writes it as version %3, which older "
+                     "versions of Cyclewright cannot read. Save anyway?")
+                      .arg(QFileInfo(path).fileName())
+                      .arg(fileVersion_)
+                      .arg(io::kCaseVersion),
+                  QMessageBox::Save | QMessageBox::Cancel, &window_);
+  box.setObjectName(QStringLiteral("versionOneSaveBox"));
+  box.setDefaultButton(QMessageBox::Save);
+  return box.exec() == QMessageBox::Save;
+}
+
 bool WindowFiles::saveCaseAs(const QString& path) {
+  if (!confirmVersionUpgrade(path)) {
+    window_.statusBar()->showMessage(tr("Not saved: %1 is kept as version %2").arg(path).arg(fileVersion_));
+    return false;
+  }
   try {
     io::writeCaseFile(path.toStdString(), document_.currentCase());
   } catch (const std::exception& e) {
@@ -123,6 +175,8 @@ bool WindowFiles::saveCaseAs(const QString& path) {
     return false;
   }
   document_.markSaved(path);
+  fileVersion_ = io::kCaseVersion;
+  fileOfVersion_ = path;
   removeStaleTemporariesOf(path);
   settings_.addRecentFile(QFileInfo(path).absoluteFilePath());
   emit saved();
@@ -131,10 +185,13 @@ bool WindowFiles::saveCaseAs(const QString& path) {
   return true;
 }
 
-void WindowFiles::newCase() {
+void WindowFiles::newCase(engine::Architecture architecture) {
   if (!maybeSave()) return;
-  document_.load(engine::Case{}, QString());
+  fileVersion_ = io::kCaseVersion;
+  fileOfVersion_.clear();
+  document_.load(engine::newCase(architecture), QString());
   updateTitle();
+  window_.statusBar()->showMessage(tr("New case: %1").arg(architectureText(architecture)));
 }
 
 void WindowFiles::open() {
@@ -180,8 +237,16 @@ bool WindowFiles::maybeSave() {
 void WindowFiles::updateTitle() {
   const QString path = document_.filePath();
   const QString name = path.isEmpty() ? tr("Untitled") : QFileInfo(path).fileName();
-  window_.setWindowTitle(tr("%1[*] — Cyclewright").arg(name));
+  window_.setWindowTitle(
+      tr("%1[*] — %2 — Cyclewright").arg(name, architectureText(document_.currentCase().architecture)));
   window_.setWindowModified(document_.isModified());
+}
+
+QString WindowFiles::architectureText(engine::Architecture architecture) {
+  // The registry's names of the architectures (context "Parameters").
+  const engine::Parameter& entry = *engine::findParameter("engine", "architecture");
+  return QCoreApplication::translate("Parameters",
+                                     entry.choices.at(static_cast<std::size_t>(architecture)).label.data());
 }
 
 }  // namespace cw::gui

@@ -154,4 +154,14 @@ struct Case {
   bool operator==(const Case&) const = default;
 };
 
+/// A new case of `architecture` with the defaults; a two-spool case's HP compressor at a ratio of
+/// 4, so that with the LP compressor's 2.5 the overall ratio stays the single spool's 10. The
+/// case reader starts from it, and File > New.
+inline Case newCase(Architecture architecture) {
+  Case c;
+  c.architecture = architecture;
+  if (architecture == Architecture::TwoSpoolTurbojet) c.compressor.pressureRatio = 4.0;
+  return c;
+}
+
 }  // namespace cw::engine

@@ -544,7 +544,7 @@ Applies ofArchitecture(Architecture architecture) {
 void addCompressor(Table& t, const CompressorRole& role, const std::vector<std::string_view>& fieldKeys) {
   t.section(role.name, ofArchitecture(role.architecture));
   const auto m = role.member;
-  const CompressorInputs defaults = Case{}.*m;
+  const CompressorInputs defaults = newCase(role.architecture).*m;
   t.number(
       "pressure_ratio", role.pressureRatioLabel,
       CW_PARAMETER_TEXT("Parameters", "Compressor total-pressure ratio."), fieldKeys[0], Q::Dimensionless,
@@ -565,7 +565,7 @@ void addCompressor(Table& t, const CompressorRole& role, const std::vector<std::
 void addTurbine(Table& t, const TurbineRole& role, const std::vector<std::string_view>& fieldKeys) {
   t.section(role.name, ofArchitecture(role.architecture));
   const auto m = role.member;
-  const TurbineInputs defaults = Case{}.*m;
+  const TurbineInputs defaults = newCase(role.architecture).*m;
   addEfficiency(t, m, fieldKeys[0], fieldKeys[1], fieldKeys[2], defaults.efficiency.value);
   loss(t.number(
            "mechanical_efficiency", CW_PARAMETER_TEXT("Parameters", "Mechanical efficiency"),
@@ -860,21 +860,27 @@ std::vector<ParameterSection> makeSections() {
       "The low-pressure compressor of a two-spool turbojet (stations 2 to 25).",
       "The high-pressure compressor of a two-spool turbojet (stations 25 to 3).",
   };
-  const std::string_view compressorTitle[] = {"Compressor", "Low-pressure compressor",
-                                              "High-pressure compressor"};
+  // The titles name the strip's items in the GUI (translated in the context "Parameters").
+  const std::string_view compressorTitle[] = {CW_PARAMETER_TEXT("Parameters", "Compressor"),
+                                              CW_PARAMETER_TEXT("Parameters", "LP compressor"),
+                                              CW_PARAMETER_TEXT("Parameters", "HP compressor")};
   for (std::size_t i = 0; i < kCompressorRoles.size(); ++i)
     s.push_back({kCompressorRoles[i].name, compressorTitle[i], compressorText[i], false,
-                 kCompressorRoles[i].architecture == Architecture::Turbojet ? 1 : 2});
+                 kCompressorRoles[i].architecture == Architecture::Turbojet ? 1 : 2,
+                 kCompressorRoles[i].architecture});
   s.push_back({"burner", "Burner", "The burner (stations 3 to 4).", false, 1});
   const std::string_view turbineText[] = {
       "The turbine (stations 4 to 5).",
       "The high-pressure turbine of a two-spool turbojet (stations 4 to 45).",
       "The low-pressure turbine of a two-spool turbojet (stations 45 to 5).",
   };
-  const std::string_view turbineTitle[] = {"Turbine", "High-pressure turbine", "Low-pressure turbine"};
+  const std::string_view turbineTitle[] = {CW_PARAMETER_TEXT("Parameters", "Turbine"),
+                                           CW_PARAMETER_TEXT("Parameters", "HP turbine"),
+                                           CW_PARAMETER_TEXT("Parameters", "LP turbine")};
   for (std::size_t i = 0; i < kTurbineRoles.size(); ++i)
     s.push_back({kTurbineRoles[i].name, turbineTitle[i], turbineText[i], false,
-                 kTurbineRoles[i].architecture == Architecture::Turbojet ? 1 : 2});
+                 kTurbineRoles[i].architecture == Architecture::Turbojet ? 1 : 2,
+                 kTurbineRoles[i].architecture});
   s.push_back({"jet_pipe", "Jet pipe", "The jet pipe (turbine exit to nozzle entry).", false, 1});
   s.push_back({"afterburner", "Afterburner",
                "The afterburner. enabled means lit; unlit its duct loses pressure_loss_fraction_unlit "
@@ -963,6 +969,11 @@ const std::vector<ParameterSection>& parameterSections() {
 const std::vector<Parameter>& parameterRegistry() {
   static const std::vector<Parameter> registry = makeRegistry();
   return registry;
+}
+
+std::string_view architectureName(Architecture architecture) {
+  static const Parameter* const entry = findParameter("engine", "architecture");
+  return entry->choices.at(static_cast<std::size_t>(architecture)).value;
 }
 
 const Parameter* findParameter(std::string_view section, std::string_view key) {

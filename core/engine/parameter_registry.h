@@ -133,12 +133,17 @@ struct Parameter {
 
 /// A case-file object: a role (a component or the flight condition, design, ...).
 struct ParameterSection {
-  std::string_view name;         ///< "" for the top level
-  std::string_view title;        ///< English, e.g. "Low-pressure compressor"
+  std::string_view name;   ///< "" for the top level
+  std::string_view title;  ///< English, e.g. "LP compressor" (roles: the GUI's strip, context "Parameters")
   std::string_view description;  ///< one sentence for the documents
   bool required = false;         ///< the object must be present
   int sinceVersion = 1;
+  std::optional<Architecture> architecture = std::nullopt;  ///< a role: only this architecture has it
 };
+
+/// The architecture's value in the case file ("two-spool-turbojet"), from the registry's
+/// engine.architecture choice.
+std::string_view architectureName(Architecture architecture);
 
 /// Every section in the order of the file (the top level first).
 const std::vector<ParameterSection>& parameterSections();

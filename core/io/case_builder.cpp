@@ -1,6 +1,7 @@
 #include "io/case_builder.h"
 
 #include "engine/parameter_registry.h"
+#include "io/case_keys.h"
 
 #include <algorithm>
 
@@ -43,11 +44,13 @@ void apply(const Parameter& p, const json& value, Case& inputs) {
 }  // namespace
 
 Case buildCase(const json& clean) {
-  // Every key of version 1 in the order of the registry, so that a choice is set before the
-  // numbers that depend on it; each setter selects the alternative its key belongs to.
-  Case inputs;
+  // A new case of the document's architecture, then every key in the order of the registry, so
+  // that a choice is set before the numbers that depend on it; each setter selects the
+  // alternative its key belongs to. The checked document holds only keys of its version and
+  // the roles of its architecture.
+  Case inputs = newCase(caseDocumentArchitecture(clean));
   for (const Parameter& p : parameterRegistry()) {
-    if (!p.inFile || p.sinceVersion > 1) continue;
+    if (!p.inFile) continue;
     const json& o = object(clean, p.section);
     const auto it = o.find(std::string(p.key));
     if (it != o.end()) apply(p, *it, inputs);

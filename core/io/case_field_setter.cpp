@@ -4,9 +4,9 @@
 
 namespace cw::io {
 
-/// The numbers of the format's version 1 (the registry's entries of version 1 that are keys).
+/// The numbers of the format (the registry's entries that are keys, of every architecture).
 static bool isNumericKey(const engine::Parameter& p) {
-  return p.kind == engine::ParameterKind::Number && p.inFile && p.sinceVersion <= 1;
+  return p.kind == engine::ParameterKind::Number && p.inFile;
 }
 
 CaseFieldSetter numericCaseFieldSetter(std::string_view path) {

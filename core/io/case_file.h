@@ -1,6 +1,8 @@
 #pragma once
-// Case files: JSON documents of the format "cyclewright-case", version 1
-// (docs/case-format.md; JSON Schema in docs/case-schema.json).
+// Case files: JSON documents of the format "cyclewright-case", versions 1 and 2
+// (docs/case-format.md; JSON Schema in docs/case-schema.json). Version 2 names the engine's
+// architecture (engine.architecture) and gives one object per component role; a version 1 file
+// is read unchanged as a single-spool turbojet. The writer writes version 2.
 //
 // Reading reports every problem of a document at once, as one CaseValidationError whose
 // problems each name their JSON path, the value found and the valid range or form:
@@ -19,7 +21,10 @@
 namespace cw::io {
 
 inline constexpr std::string_view kCaseFormat = "cyclewright-case";
-inline constexpr int kCaseVersion = 1;
+/// The version written, and the newest read.
+inline constexpr int kCaseVersion = 2;
+/// The oldest version read.
+inline constexpr int kOldestCaseVersion = 1;
 
 /// The case a document describes; throws engine::CaseValidationError (where() = source, the
 /// file the document came from, or "case").

@@ -18,12 +18,11 @@ using json = nlohmann::ordered_json;
 
 namespace {
 
-constexpr int kVersion = 1;
-
+/// Every section of the newest version (a version 1 file has those of version 1).
 std::vector<const ParameterSection*> sectionsOfVersion() {
   std::vector<const ParameterSection*> sections;
   for (const ParameterSection& s : engine::parameterSections())
-    if (s.sinceVersion <= kVersion) sections.push_back(&s);
+    if (s.sinceVersion <= kCaseVersion) sections.push_back(&s);
   return sections;
 }
 
@@ -31,7 +30,7 @@ std::vector<const ParameterSection*> sectionsOfVersion() {
 std::vector<const Parameter*> keysOf(std::string_view section) {
   std::vector<const Parameter*> keys;
   for (const Parameter& p : engine::parameterRegistry())
-    if (p.section == section && p.inFile && p.sinceVersion <= kVersion) keys.push_back(&p);
+    if (p.section == section && p.inFile && p.sinceVersion <= kCaseVersion) keys.push_back(&p);
   return keys;
 }
 
@@ -39,7 +38,7 @@ std::vector<const Parameter*> keysOf(std::string_view section) {
 std::vector<const Parameter*> groupsOf(std::string_view section) {
   std::vector<const Parameter*> groups;
   for (const Parameter& p : engine::parameterRegistry())
-    if (p.section == section && !p.inFile && p.sinceVersion <= kVersion) groups.push_back(&p);
+    if (p.section == section && !p.inFile && p.sinceVersion <= kCaseVersion) groups.push_back(&p);
   return groups;
 }
 
@@ -282,6 +281,10 @@ std::string defaultText(const Parameter& p) {
 
 std::string keysTable(const ParameterSection& s) {
   std::string text = "### " + code(s.name) + "\n\n" + std::string(s.description);
+  if (s.sinceVersion > 1) text += " Version " + std::to_string(s.sinceVersion) + " only.";
+  if (s.architecture)
+    text += " Only when `engine.architecture` is " + code(engine::architectureName(*s.architecture)) +
+            (s.sinceVersion > 1 ? "" : " (always in a version 1 file)") + ".";
   for (const Parameter* group : groupsOf(s.name)) {
     if (group->groupRequired) continue;
     const Parameter& first = *membersOf(*group, 0).front();
@@ -379,15 +382,53 @@ std::string keysBlock() {
   return text + reasonsText();
 }
 
+/// "if the case is of architecture a": its engine.architecture is a (for the default architecture,
+/// also when the file does not say).
+json architectureIs(const Parameter& entry, std::size_t a) {
+  const std::string value(entry.choices.at(a).value);
+  json given = {
+      {"required", {"engine"}},
+      {"properties",
+       {{"engine",
+         {{"required", {"architecture"}}, {"properties", {{"architecture", {{"const", value}}}}}}}}}};
+  if (a != static_cast<std::size_t>(entry.defaultValue)) return given;
+  json notOther = {{"properties", {{"engine", {{"properties", {{"architecture", {{"const", value}}}}}}}}}};
+  return notOther;
+}
+
+/// The document's rules across objects: a version 1 file has no key of version 2, and the
+/// objects of a role apply only to their architecture.
+json documentRules() {
+  json rules = json::array();
+  json newer = json::object();
+  for (const ParameterSection* s : sectionsOfVersion())
+    if (s->sinceVersion > kOldestCaseVersion && !s->name.empty()) newer[std::string(s->name)] = false;
+  for (const Parameter* p : keysOf(""))
+    if (p->sinceVersion > kOldestCaseVersion) newer[std::string(p->key)] = false;
+  rules.push_back({{"if", {{"properties", {{"version", {{"const", kOldestCaseVersion}}}}}}},
+                   {"then", {{"properties", newer}}}});
+  const Parameter& architecture = *engine::findParameter("engine", "architecture");
+  for (std::size_t a = 0; a < architecture.choices.size(); ++a) {
+    json others = json::object();
+    for (const ParameterSection* s : sectionsOfVersion())
+      if (s->architecture && static_cast<std::size_t>(*s->architecture) != a)
+        others[std::string(s->name)] = false;
+    rules.push_back({{"if", architectureIs(architecture, a)}, {"then", {{"properties", others}}}});
+  }
+  return rules;
+}
+
 }  // namespace
 
 std::string caseSchemaText() {
   json schema = json::object();
   schema["$schema"] = "https://json-schema.org/draft/2020-12/schema";
-  schema["$id"] = "https://cyclewright.invalid/schemas/case-v1.json";
-  schema["title"] = "Cyclewright case, format cyclewright-case version 1";
+  schema["$id"] = "https://cyclewright.invalid/schemas/case-v2.json";
+  schema["title"] = "Cyclewright case, format cyclewright-case versions 1 and 2";
   schema["description"] =
-      "One design-point case of a single-spool turbojet. SI units; every dimensional key carries its unit in "
+      "One design-point case of a turbojet, single-spool or two-spool. Version 2 names the architecture "
+      "(engine.architecture) and has one object per component role; version 1 is a single-spool turbojet "
+      "without the engine object. SI units; every dimensional key carries its unit in "
       "its name. Documented in docs/case-format.md; generated from the registry of parameters "
       "(core/engine/parameter_registry.cpp) by the target case_format_docs.";
   schema["type"] = "object";
@@ -396,7 +437,10 @@ std::string caseSchemaText() {
   json properties = json::object();
   properties["format"] = {{"const", std::string(kCaseFormat)},
                           {"description", "Always \"cyclewright-case\"."}};
-  properties["version"] = {{"const", kCaseVersion}, {"description", "Format version; this build reads 1."}};
+  properties["version"] = {
+      {"enum", {kOldestCaseVersion, kCaseVersion}},
+      {"description",
+       "Format version: 1 (a single-spool turbojet) or 2 (any architecture; written by this build)."}};
   for (const ParameterSection* s : sectionsOfVersion()) {
     if (s->name.empty()) {
       for (const Parameter* p : keysOf("")) properties[std::string(p->key)] = propertyOf(*p);
@@ -407,6 +451,7 @@ std::string caseSchemaText() {
   }
   schema["required"] = required;
   schema["properties"] = properties;
+  schema["allOf"] = documentRules();
   return schema.dump(2) + "\n";
 }
 

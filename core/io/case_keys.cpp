@@ -3,6 +3,7 @@
 #include "engine/parameter_registry.h"
 
 #include <algorithm>
+#include <cstdint>
 #include <numeric>
 
 namespace cw::io {
@@ -57,7 +58,7 @@ std::vector<CaseSection> makeSections(int version) {
     std::vector<const Parameter*> parameters;
     for (const Parameter& p : engine::parameterRegistry())
       if (p.section == s.name && p.sinceVersion <= version) parameters.push_back(&p);
-    CaseSection section{s.name, s.required, {}, {}, {}};
+    CaseSection section{s.name, s.required, s.architecture, {}, {}, {}};
     if (s.name.empty()) {
       // The document's own keys, before the case's.
       section.keys = {{"format", T::String, {}, {}}, {"version", T::Integer, {}, {}}};
@@ -81,15 +82,43 @@ const CaseKey* CaseSection::find(std::string_view key) const {
   return nullptr;
 }
 
-const std::vector<CaseSection>& caseSections() {
-  static const std::vector<CaseSection> sections = makeSections(1);
-  return sections;
+const std::vector<CaseSection>& caseSections(int version) {
+  static const std::vector<std::vector<CaseSection>> versions = [] {
+    std::vector<std::vector<CaseSection>> list;
+    for (int v = kOldestCaseVersion; v <= kCaseVersion; ++v) list.push_back(makeSections(v));
+    return list;
+  }();
+  const int index = std::clamp(version, kOldestCaseVersion, kCaseVersion) - kOldestCaseVersion;
+  return versions[static_cast<std::size_t>(index)];
 }
 
-const CaseSection* findCaseSection(std::string_view name) {
-  for (const CaseSection& s : caseSections())
+const CaseSection* findCaseSection(std::string_view name, int version) {
+  for (const CaseSection& s : caseSections(version))
     if (s.name == name) return &s;
   return nullptr;
+}
+
+int caseDocumentVersion(const nlohmann::json& document) {
+  if (document.is_object()) {
+    const auto it = document.find("version");
+    if (it != document.end() && it->is_number_integer()) {
+      const auto version = it->get<std::int64_t>();
+      if (version >= kOldestCaseVersion && version <= kCaseVersion) return static_cast<int>(version);
+    }
+  }
+  return kCaseVersion;
+}
+
+engine::Architecture caseDocumentArchitecture(const nlohmann::json& document) {
+  if (caseDocumentVersion(document) < 2 || !document.is_object()) return engine::Architecture::Turbojet;
+  const auto engine = document.find("engine");
+  if (engine == document.end() || !engine->is_object()) return engine::Architecture::Turbojet;
+  const auto value = engine->find("architecture");
+  if (value == engine->end() || !value->is_string()) return engine::Architecture::Turbojet;
+  const engine::Parameter& entry = *engine::findParameter("engine", "architecture");
+  for (std::size_t i = 0; i < entry.choices.size(); ++i)
+    if (entry.choices[i].value == value->get<std::string>()) return static_cast<engine::Architecture>(i);
+  return engine::Architecture::Turbojet;
 }
 
 std::vector<std::string> knownCaseKeyPaths() {

@@ -78,6 +78,33 @@ void dropExcluded(const CaseSection& section, std::string_view name, const json&
       if (condition.selector == name && condition.value != valueText) object.erase(std::string(key.name));
 }
 
+/// Refuses a key of a role the document's architecture does not have.
+void requireArchitecture(const CaseSection& section, const std::string& path, const json& document) {
+  const engine::Architecture architecture = caseDocumentArchitecture(document);
+  if (!section.architecture || *section.architecture == architecture) return;
+  throw InvalidInput(path, "applies only when engine.architecture is \"" +
+                               std::string(engine::architectureName(*section.architecture)) +
+                               "\" (this case's is \"" + std::string(engine::architectureName(architecture)) +
+                               "\"; set engine.architecture first)");
+}
+
+/// A key of a newer version than the document's: a version 1 document is a version 2 turbojet
+/// as it stands, so it becomes version 2.
+void raiseVersionFor(const CaseSection& section, std::string_view key, json& document) {
+  const int version = caseDocumentVersion(document);
+  const CaseSection* old = findCaseSection(section.name, version);
+  if (old && old->find(key)) return;
+  if (version < kCaseVersion && document.contains("version")) document["version"] = kCaseVersion;
+}
+
+/// After setting the architecture, drop the objects of the roles it does not have.
+void dropOtherRoles(json& document) {
+  const engine::Architecture architecture = caseDocumentArchitecture(document);
+  for (const CaseSection& section : caseSections())
+    if (section.architecture && *section.architecture != architecture)
+      document.erase(std::string(section.name));
+}
+
 }  // namespace
 
 void applySetOverride(json& document, const std::string& assignment) {
@@ -110,6 +137,8 @@ void applySetOverride(json& document, const std::string& assignment) {
   }
 
   const json value = valueFor(*key, path, text);
+  requireArchitecture(*section, path, document);
+  raiseVersionFor(*section, keyName, document);
   json* object = &document;
   if (!section->name.empty()) {
     const std::string name(section->name);
@@ -119,6 +148,7 @@ void applySetOverride(json& document, const std::string& assignment) {
   }
   (*object)[keyName] = value;
   dropExcluded(*section, keyName, value, *object);
+  if (section->name == "engine" && keyName == "architecture") dropOtherRoles(document);
 }
 
 }  // namespace cw::io

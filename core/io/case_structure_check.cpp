@@ -103,19 +103,36 @@ void CaseStructureCheck::add(std::string path, std::string value, std::string va
 }
 
 void CaseStructureCheck::checkTopLevel(const json& document) {
-  const CaseSection& top = caseSections().front();
+  // The document's version chooses the table of keys (a version this build does not read is
+  // checked against the newest, so that its other problems are reported too); the architecture
+  // chooses the component roles that apply.
+  const int version = caseDocumentVersion(document);
+  const engine::Architecture architecture = caseDocumentArchitecture(document);
+  const std::vector<CaseSection>& sections = caseSections(version);
+  const CaseSection& top = sections.front();
   std::vector<std::string_view> topNames;
   for (const CaseKey& key : top.keys) topNames.push_back(key.name);
-  for (const CaseSection& section : caseSections())
-    if (!section.name.empty()) topNames.push_back(section.name);
+  for (const CaseSection& section : sections)
+    if (!section.name.empty() && (!section.architecture || *section.architecture == architecture))
+      topNames.push_back(section.name);
 
   for (const auto& [name, value] : document.items()) {
+    const CaseSection* section = name.empty() ? nullptr : findCaseSection(name, version);
     if (top.find(name)) {
       if (checkValue(top, name, value)) clean_[name] = value;
-    } else if (const CaseSection* section = findCaseSection(name); section && !name.empty()) {
+    } else if (section && section->architecture && *section->architecture != architecture) {
+      add(casePointer(name, ""), "", "",
+          "applies only when engine.architecture is \"" +
+              std::string(engine::architectureName(*section->architecture)) + "\" (this case's is \"" +
+              std::string(engine::architectureName(architecture)) + "\")");
+    } else if (section) {
       json clean = json::object();
       checkSection(*section, value, clean);
       if (value.is_object()) clean_[name] = std::move(clean);
+    } else if (!name.empty() && findCaseSection(name, kCaseVersion)) {
+      add(casePointer("", name), "", "",
+          "belongs to version " + std::to_string(kCaseVersion) + " of the format (this file is version " +
+              std::to_string(version) + ")");
     } else {
       const std::string suggestion = closestName(name, topNames);
       add(casePointer("", name), "", "",
@@ -125,7 +142,7 @@ void CaseStructureCheck::checkTopLevel(const json& document) {
 
   for (std::string_view key : top.requiredKeys)
     if (!document.contains(std::string(key))) add(casePointer("", key), "", "required", "required");
-  for (const CaseSection& section : caseSections())
+  for (const CaseSection& section : sections)
     if (section.required && !section.name.empty() && !document.contains(std::string(section.name)))
       add(casePointer(section.name, ""), "", "required", "required");
 
@@ -135,10 +152,12 @@ void CaseStructureCheck::checkTopLevel(const json& document) {
             std::string(kCaseFormat) + "\")");
     clean_.erase("format");
   }
-  if (clean_.contains("version") && clean_["version"] != kCaseVersion) {
-    add("/version", shortJson(clean_["version"]), std::to_string(kCaseVersion),
-        "unsupported version " + shortJson(clean_["version"]) + " (this build reads version " +
-            std::to_string(kCaseVersion) + ")");
+  if (clean_.contains("version") &&
+      (clean_["version"] < kOldestCaseVersion || clean_["version"] > kCaseVersion)) {
+    const std::string versions = std::to_string(kOldestCaseVersion) + " and " + std::to_string(kCaseVersion);
+    add("/version", shortJson(clean_["version"]), versions,
+        "unsupported version " + shortJson(clean_["version"]) + " (this build reads versions " + versions +
+            ")");
     clean_.erase("version");
   }
 }

@@ -49,12 +49,13 @@ nlohmann::ordered_json ordered(const json& document) {
 }  // namespace
 
 json caseToJson(const Case& inputs) {
-  // Every key of version 1 that applies to the case (defaults included), from the registry.
+  // Every key of the newest version that applies to the case (defaults included; the roles of
+  // its architecture), from the registry.
   json d = json::object();
   d["format"] = std::string(kCaseFormat);
   d["version"] = kCaseVersion;
   for (const Parameter& p : parameterRegistry()) {
-    if (!p.inFile || p.sinceVersion > 1 || !p.applies(inputs)) continue;
+    if (!p.inFile || !p.applies(inputs)) continue;
     json& object = p.section.empty() ? d : d[std::string(p.section)];
     object[std::string(p.key)] = valueOf(p, inputs);
   }

@@ -11,6 +11,7 @@
 #include <QTest>
 
 #include <cmath>
+#include <map>
 
 namespace {
 
@@ -115,6 +116,46 @@ class TestCliEvaluate : public QObject {
     const Run missing = runCli({"evaluate", "/no/such/case.json"});
     QCOMPARE(missing.status, 2);
     QVERIFY(missing.err.contains("/no/such/case.json"));
+  }
+  void versionOneAndTwoGiveTheSameOutput() {
+    // A version 1 file is a version 2 single-spool turbojet: the same document raised to version
+    // 2 (by setting its architecture) prints byte for byte the same.
+    const Run v1 = runCli({"evaluate", kExample, "--format", "json"});
+    const Run v2 =
+        runCli({"evaluate", kExample, "--format", "json", "--set", "engine.architecture=turbojet"});
+    QCOMPARE(v1.status, 0);
+    QCOMPARE(v2.status, 0);
+    QCOMPARE(v2.out, v1.out);
+  }
+  void twoSpoolCaseIsReadEvaluatedAndSet() {
+    // The invented two-spool example (version 2): stations after SAE AS755, 25 and 45 where the
+    // spools split; each compressor's ratio as given, and as --set gives it.
+    const QString twoSpool =
+        QStringLiteral(CYCLEWRIGHT_SOURCE_DIR "/resources/examples/two-spool-cruise.json");
+    const Run run = runCli(
+        {"evaluate", twoSpool, "--format", "json", "--set", "low_pressure_compressor.pressure_ratio=4"});
+    QCOMPARE(run.status, 0);
+    QVERIFY2(run.err.isEmpty(), run.err.constData());
+    const QJsonArray stations = QJsonDocument::fromJson(run.out).object()["stations"].toArray();
+    QStringList ids;
+    std::map<QString, double> pt;
+    for (const auto& s : stations) {
+      ids << s.toObject()["id"].toString();
+      pt[ids.back()] = s.toObject()["pt_Pa"].toDouble();
+    }
+    QCOMPARE(ids, QStringList({"0", "2", "25", "3", "4", "45", "5", "7", "8", "9"}));
+    QVERIFY(std::abs(pt["25"] / pt["2"] - 4.0) < 1e-12);
+    QVERIFY(std::abs(pt["3"] / pt["25"] - 5.0) < 1e-12);
+  }
+  void twoSpoolKeysAreRefusedOnATurbojet() {
+    const Run run = runCli({"evaluate", kExample, "--set", "low_pressure_compressor.pressure_ratio=3"});
+    QCOMPARE(run.status, 2);
+    QVERIFY(run.out.isEmpty());
+    QCOMPARE(run.err.count('\n'), 1);
+    QVERIFY2(
+        run.err.contains("low_pressure_compressor.pressure_ratio: applies only when engine.architecture is "
+                         "\"two-spool-turbojet\" (this case's is \"turbojet\""),
+        run.err.constData());
   }
   void noCycleExitsThree() {
     // Burner exit barely above compressor exit at Mach 2: the jet is slower than flight (no useful cycle).

@@ -103,7 +103,24 @@ std::vector<std::string> prerequisites(const std::string& pointer) {
       {"/flight/altitude_m", {"flight.geometric_altitude=true"}},
   };
   const auto it = table.find(pointer);
-  return it == table.end() ? std::vector<std::string>{} : it->second;
+  std::vector<std::string> lines = it == table.end() ? std::vector<std::string>{} : it->second;
+  // The objects of the two-spool roles apply only to that architecture.
+  for (const char* role : {"/low_pressure_compressor/", "/high_pressure_compressor/",
+                           "/high_pressure_turbine/", "/low_pressure_turbine/"})
+    if (pointer.rfind(role, 0) == 0) lines.insert(lines.begin(), "engine.architecture=two-spool-turbojet");
+  return lines;
+}
+
+/// A two-spool case with its own values in every role (invented round numbers).
+Case twoSpoolSample() {
+  Case c = newCase(Architecture::TwoSpoolTurbojet);
+  c.title = "two spools";
+  c.lowPressureCompressor = {3.0, {EfficiencyBasis::Polytropic, 0.9}, 0.01};
+  c.compressor = {5.5, {EfficiencyBasis::Isentropic, 0.84}, 0.03};
+  c.turbine = {{EfficiencyBasis::Isentropic, 0.9}, 0.985, 20000.0};
+  c.lowPressureTurbine = {{EfficiencyBasis::Polytropic, 0.91}, 0.99, 5000.0};
+  c.burner.setting = ExitTemperatureSetting{1500.0};
+  return c;
 }
 
 json documentFor(const std::string& pointer) {
@@ -166,6 +183,12 @@ std::vector<std::pair<std::string, Case>> sampleCases() {
   c.design.target = AirMassFlowTarget{0.1 + 0.2};  // a value with no short decimal form
   c.compressor.pressureRatio = 1.0 / 3.0 + 10.0;
   cases.push_back({"two gamma without fuel mass, awkward doubles", c});
+
+  cases.push_back({"two-spool, every role its own values", twoSpoolSample()});
+  Case d = newCase(Architecture::TwoSpoolTurbojet);
+  d.gasModel = {ConstantCpGasModel{1004.5, 1.4}, false};
+  d.design.target = NetThrustTarget{5000.0};
+  cases.push_back({"two-spool defaults, constant cp, thrust target", d});
   return cases;
 }
 
@@ -250,8 +273,11 @@ class TestCaseFile : public QObject {
     const std::string path = (folder.path / "ordered.json").string();
     cw::io::writeCaseFile(path, Case{});
     const std::string text = readText(path);
-    QVERIFY(text.rfind("{\n  \"format\": \"cyclewright-case\",\n  \"version\": 1,\n  \"title\": \"\",", 0) ==
+    QVERIFY(text.rfind("{\n  \"format\": \"cyclewright-case\",\n  \"version\": 2,\n  \"title\": \"\",", 0) ==
             0);
+    QVERIFY(text.find("\"engine\": {\n    \"architecture\": \"turbojet\"\n  },") != std::string::npos);
+    QVERIFY(text.find("\"notes\"") < text.find("\"engine\""));
+    QVERIFY(text.find("\"engine\"") < text.find("\"flight\""));
     QVERIFY(text.find("\"flight\"") < text.find("\"design\""));
     QVERIFY(text.find("\"nozzle\"") < text.find("\"sizing\""));
     QCOMPARE(text.back(), '\n');
@@ -418,11 +444,11 @@ class TestCaseFile : public QObject {
   void formatAndVersionAreChecked() {
     json document = minimalDocument();
     document["format"] = "someone-elses-case";
-    document["version"] = 2;
+    document["version"] = 3;
     auto problems = problemsOf(document);
     QCOMPARE(problems.size(), std::size_t{2});
     QVERIFY(hasProblemAt(problems, "/format", "is not a Cyclewright case format"));
-    QVERIFY(hasProblemAt(problems, "/version", "unsupported version 2 (this build reads version 1)"));
+    QVERIFY(hasProblemAt(problems, "/version", "unsupported version 3 (this build reads versions 1 and 2)"));
 
     document = minimalDocument();
     document["version"] = "1";
@@ -439,6 +465,135 @@ class TestCaseFile : public QObject {
     QVERIFY(hasProblemAt(problems, "/flight", "required"));
 
     QVERIFY(hasProblemAt(problemsOf(json::array()), "", "expected a JSON object"));
+  }
+
+  void versionOneIsReadAsASingleSpoolTurbojet() {
+    // A version 1 file: no engine object; its compressor and turbine are the single spool's.
+    json document = minimalDocument();
+    document["compressor"] = {{"pressure_ratio", 12.0}};
+    document["turbine"] = {{"power_offtake_W", 2000.0}};
+    const Case c = parseCase(document);
+    QCOMPARE(c.architecture, Architecture::Turbojet);
+    QCOMPARE(c.compressor.pressureRatio, 12.0);
+    QCOMPARE(c.turbine.powerOfftake, 2000.0);
+    // Written, it is version 2 and reads back as the same case.
+    const json written = cw::io::caseToJson(c);
+    QVERIFY(written["version"] == json(2));
+    QVERIFY(written["engine"]["architecture"] == json("turbojet"));
+    QCOMPARE(parseCase(written), c);
+    // The objects of version 2 are no part of version 1.
+    document["engine"] = {{"architecture", "turbojet"}};
+    document["low_pressure_compressor"] = {{"pressure_ratio", 2.0}};
+    const auto problems = problemsOf(document);
+    QCOMPARE(problems.size(), std::size_t{2});
+    QVERIFY(hasProblemAt(problems, "/engine",
+                         "/engine: belongs to version 2 of the format (this file is version 1)"));
+    QVERIFY(hasProblemAt(problems, "/low_pressure_compressor", "belongs to version 2"));
+  }
+
+  void versionTwoTwoSpoolFileIsRead() {
+    json document = minimalDocument();
+    document["version"] = 2;
+    document["engine"] = {{"architecture", "two-spool-turbojet"}};
+    document["low_pressure_compressor"] = {{"pressure_ratio", 3.0}, {"polytropic_efficiency", 0.9}};
+    document["high_pressure_compressor"] = {{"pressure_ratio", 5.0}, {"bleed_fraction", 0.02}};
+    document["high_pressure_turbine"] = {{"power_offtake_W", 1000.0}};
+    document["low_pressure_turbine"] = {{"isentropic_efficiency", 0.9}, {"mechanical_efficiency", 0.98}};
+    Case c = parseCase(document);
+    QCOMPARE(c.architecture, Architecture::TwoSpoolTurbojet);
+    QCOMPARE(c.lowPressureCompressor.pressureRatio, 3.0);
+    QCOMPARE(c.lowPressureCompressor.efficiency, (Efficiency{EfficiencyBasis::Polytropic, 0.9}));
+    QCOMPARE(c.compressor.pressureRatio, 5.0);
+    QCOMPARE(c.compressor.bleedFraction, 0.02);
+    QCOMPARE(c.turbine.powerOfftake, 1000.0);
+    QCOMPARE(c.lowPressureTurbine.efficiency, (Efficiency{EfficiencyBasis::Isentropic, 0.9}));
+    QCOMPARE(c.lowPressureTurbine.mechanicalEfficiency, 0.98);
+    // Roles not given take a new two-spool case's values: 2.5 times 4, an overall 10 (case_inputs.h).
+    for (const char* role : {"low_pressure_compressor", "high_pressure_compressor", "high_pressure_turbine",
+                             "low_pressure_turbine"})
+      document.erase(role);
+    c = parseCase(document);
+    QCOMPARE(c, newCase(Architecture::TwoSpoolTurbojet));
+    QCOMPARE(c.lowPressureCompressor.pressureRatio * c.compressor.pressureRatio, 10.0);
+    // A version 2 file without the engine object is a single-spool turbojet.
+    document.erase("engine");
+    QCOMPARE(parseCase(document), Case{});
+  }
+
+  void rolesApplyOnlyToTheirArchitecture() {
+    json twoSpool = minimalDocument();
+    twoSpool["version"] = 2;
+    twoSpool["engine"] = {{"architecture", "two-spool-turbojet"}};
+    twoSpool["compressor"] = {{"pressure_ratio", 8.0}};
+    twoSpool["turbine"] = {{"power_offtake_W", 0.0}};
+    twoSpool["low_pressure_compressor"] = {{"pressure_ratio", 0.5}};
+    auto problems = problemsOf(twoSpool);
+    QCOMPARE(problems.size(), std::size_t{3});
+    QVERIFY(hasProblemAt(problems, "/compressor",
+                         "/compressor: applies only when engine.architecture is \"turbojet\" (this case's is "
+                         "\"two-spool-turbojet\")"));
+    QVERIFY(hasProblemAt(problems, "/turbine", "applies only when engine.architecture is \"turbojet\""));
+    QVERIFY(
+        hasProblemAt(problems, "/low_pressure_compressor/pressure_ratio", "outside the valid range [1, 60]"));
+
+    json single = minimalDocument();
+    single["version"] = 2;
+    single["low_pressure_turbine"] = {{"power_offtake_W", 0.0}};
+    QVERIFY(hasProblemAt(problemsOf(single), "/low_pressure_turbine",
+                         "applies only when engine.architecture is \"two-spool-turbojet\" (this case's is "
+                         "\"turbojet\")"));
+    single["engine"] = {{"architecture", "turbojet"}};
+    QCOMPARE(problemsOf(single).size(), std::size_t{1});
+    single.erase("low_pressure_turbine");
+    single["engine"] = {{"architekture", "three-spool"}};
+    problems = problemsOf(single);
+    QCOMPARE(problems.size(), std::size_t{1});
+    QVERIFY(hasProblemAt(problems, "/engine/architekture", "unknown key (did you mean \"architecture\"?)"));
+    single["engine"] = {{"architecture", "three-spool"}};
+    QVERIFY(hasProblemAt(problemsOf(single), "/engine/architecture",
+                         "\"three-spool\" is not one of: turbojet, two-spool-turbojet"));
+  }
+
+  void setOverridesFollowTheArchitecture() {
+    json twoSpool = cw::io::caseToJson(twoSpoolSample());
+    applySetOverride(twoSpool, "low_pressure_compressor.pressure_ratio=3.2");
+    applySetOverride(twoSpool, "high_pressure_turbine.isentropic_efficiency=0.87");
+    Case c = parseCase(twoSpool);
+    QCOMPARE(c.lowPressureCompressor.pressureRatio, 3.2);
+    QCOMPARE(c.turbine.efficiency, (Efficiency{EfficiencyBasis::Isentropic, 0.87}));
+
+    json single = minimalDocument();
+    const json before = single;
+    try {
+      applySetOverride(single, "low_pressure_compressor.pressure_ratio=3");
+      QFAIL("no error");
+    } catch (const cw::InvalidInput& e) {
+      QCOMPARE(e.where(), std::string("low_pressure_compressor.pressure_ratio"));
+      QVERIFY2(std::string(e.what()).find("applies only when engine.architecture is \"two-spool-turbojet\" "
+                                          "(this case's is \"turbojet\"") != std::string::npos,
+               e.what());
+    }
+    try {
+      applySetOverride(twoSpool, "compressor.pressure_ratio=3");
+      QFAIL("no error");
+    } catch (const cw::InvalidInput& e) {
+      QVERIFY2(std::string(e.what()).find("applies only when engine.architecture is \"turbojet\"") !=
+                   std::string::npos,
+               e.what());
+    }
+    QVERIFY(single == before);
+
+    // Setting the architecture of a version 1 document makes it version 2 and drops the roles
+    // the new architecture does not have, as setting a kind drops the keys of another kind.
+    single["compressor"] = {{"pressure_ratio", 12.0}};
+    applySetOverride(single, "engine.architecture=two-spool-turbojet");
+    QVERIFY(single["version"] == json(2));
+    QVERIFY(!single.contains("compressor"));
+    applySetOverride(single, "low_pressure_compressor.pressure_ratio=2");
+    c = parseCase(single);
+    QCOMPARE(c.architecture, Architecture::TwoSpoolTurbojet);
+    QCOMPARE(c.lowPressureCompressor.pressureRatio, 2.0);
+    QCOMPARE(c.compressor.pressureRatio, 4.0);
   }
 
   void geopotentialAltitudeStopsAt84852() {
@@ -731,7 +886,8 @@ class TestCaseFile : public QObject {
         QVERIFY2(problems.empty(), (pointer + " = " + cw::formatNumber(bound) + describe(problems)).c_str());
       }
     }
-    QCOMPARE(fields, 42);  // every numeric key of docs/case-format.md
+    QCOMPARE(fields,
+             58);  // every numeric key of docs/case-format.md: 42 of version 1, 16 of the two-spool roles
   }
 
   void schemaAndParserKnowTheSameKeys() {

@@ -1,6 +1,6 @@
 // The registry of parameters (core/engine/parameter_registry.h) against its consumers: each key
-// of the schema, of the reader and each setter is exactly one registry entry, and each entry of
-// version 1 appears in each of them; the roles of a two-spool case come from one description.
+// of the schema, of the reader and each setter is exactly one registry entry, and each entry
+// appears in each of them; the roles of a two-spool case come from one description.
 #include "analysis/ideal_twin.h"
 #include "engine/case_roles.h"
 #include "engine/case_validation.h"
@@ -26,12 +26,11 @@ namespace {
 
 const std::string kSource = CYCLEWRIGHT_SOURCE_DIR;
 
-/// Every entry of version 1 that is a key of the case file, as "section.key".
+/// Every entry that is a key of the case file (of the newest version), as "section.key".
 std::multiset<std::string> registryKeys(bool numbersOnly = false) {
   std::multiset<std::string> keys;
   for (const Parameter& p : engine::parameterRegistry())
-    if (p.inFile && p.sinceVersion <= 1 && (!numbersOnly || p.kind == ParameterKind::Number))
-      keys.insert(p.dottedPath());
+    if (p.inFile && (!numbersOnly || p.kind == ParameterKind::Number)) keys.insert(p.dottedPath());
   return keys;
 }
 
@@ -46,11 +45,13 @@ bool isDocumentKey(const std::string& path) {
 
 /// Chooses, through the registry's choices, the architecture, kinds and alternative under which
 /// `p` applies.
+const engine::ParameterSection& sectionOf(const Parameter& p) {
+  return *std::find_if(engine::parameterSections().begin(), engine::parameterSections().end(),
+                       [&p](const engine::ParameterSection& s) { return s.name == p.section; });
+}
+
 void chooseWhereItApplies(const Parameter& p, engine::Case& c) {
-  const engine::ParameterSection& section =
-      *std::find_if(engine::parameterSections().begin(), engine::parameterSections().end(),
-                    [&p](const engine::ParameterSection& s) { return s.name == p.section; });
-  if (section.sinceVersion > 1) engine::findParameter("engine", "architecture")->set(c, 1.0);
+  if (sectionOf(p).sinceVersion > 1) engine::findParameter("engine", "architecture")->set(c, 1.0);
   for (const engine::KeyCondition& condition : p.conditions) {
     const Parameter& selector = *engine::findParameter(p.section, condition.selector);
     for (std::size_t i = 0; i < selector.choices.size(); ++i)
@@ -71,9 +72,22 @@ class TestParameterRegistry : public QObject {
       for (const io::CaseKey& key : section.keys)
         if (!isDocumentKey(dotted(section.name, key.name))) reader.insert(dotted(section.name, key.name));
     QCOMPARE(reader, registryKeys());
-    // The single-spool format: 12 objects, 42 numbers (docs/case-format.md).
-    QCOMPARE(io::caseSections().size(), std::size_t(13));
-    QCOMPARE(registryKeys(true).size(), std::size_t(42));
+    // Version 2: 17 objects (the engine and four two-spool roles besides the 12 of version 1), 58
+    // numbers (42 of version 1, 16 of the roles; docs/case-format.md).
+    QCOMPARE(io::caseSections().size(), std::size_t(18));
+    QCOMPARE(registryKeys(true).size(), std::size_t(58));
+    // Version 1: its 12 objects and 42 numbers, none of version 2.
+    std::size_t numbers = 0;
+    for (const io::CaseSection& section : io::caseSections(1))
+      for (const io::CaseKey& key : section.keys) {
+        QVERIFY(engine::findParameter(section.name, key.name) || isDocumentKey(std::string(key.name)));
+        if (const Parameter* p = engine::findParameter(section.name, key.name)) {
+          QCOMPARE(p->sinceVersion, 1);
+          numbers += p->kind == ParameterKind::Number;
+        }
+      }
+    QCOMPARE(io::caseSections(1).size(), std::size_t(13));
+    QCOMPARE(numbers, std::size_t(42));
   }
 
   void everySchemaParameterIsOneEntryAndEveryEntryInTheSchema() {
@@ -132,7 +146,8 @@ class TestParameterRegistry : public QObject {
     int checked = 0;
     for (const Parameter& p : engine::parameterRegistry()) {
       if (p.kind != ParameterKind::Number || !p.hasDefault) continue;
-      engine::Case c;
+      // A new case of the architecture that has the entry (File > New and the reader start there).
+      engine::Case c = engine::newCase(sectionOf(p).architecture.value_or(engine::Architecture::Turbojet));
       chooseWhereItApplies(p, c);
       QVERIFY2(p.applies(c), p.pointer().c_str());
       QVERIFY2(p.get(c) == p.defaultValue, p.pointer().c_str());
@@ -166,6 +181,10 @@ class TestParameterRegistry : public QObject {
     // The new two-spool case's split, 2.5 times 4 (case_inputs.h): the LP ratio is the LP member,
     // the HP ratio the case's compressor.
     QCOMPARE(lp.get(twoSpool), 2.5);
+    // A new two-spool case's HP ratio, and the default the documents give for it.
+    QCOMPARE(hp.get(engine::newCase(engine::Architecture::TwoSpoolTurbojet)), 4.0);
+    QCOMPARE(hp.defaultValue, 4.0);
+    QCOMPARE(only.defaultValue, 10.0);
     hp.set(twoSpool, 4.0);
     QCOMPARE(twoSpool.compressor.pressureRatio, 4.0);
     QCOMPARE(twoSpool.lowPressureCompressor.pressureRatio, 2.5);
@@ -226,7 +245,7 @@ class TestParameterRegistry : public QObject {
              "docs/case-format.md is stale: cmake --build --preset default --target case_format_docs");
     // The tables name every key of the format once per object it belongs to.
     for (const Parameter& p : engine::parameterRegistry())
-      if (p.inFile && p.sinceVersion <= 1 && !p.section.empty())
+      if (p.inFile && !p.section.empty())
         QVERIFY2(committed.find("| `" + std::string(p.key) + "` |") != std::string::npos,
                  p.pointer().c_str());
   }
@@ -246,6 +265,17 @@ class TestParameterRegistry : public QObject {
     c.nozzle.lossBasis = engine::NozzleLossBasis::IsentropicEfficiency;
     QVERIFY(engine::validateCase(c).empty());
     QVERIFY(io::parseCase(io::caseToJson(c)) == c);
+
+    // The same case with two spools: the architecture and the four roles are written and read.
+    c.architecture = engine::Architecture::TwoSpoolTurbojet;
+    c.lowPressureCompressor.pressureRatio = 3.5;
+    c.lowPressureTurbine.efficiency = {engine::EfficiencyBasis::Polytropic, 0.92};
+    QVERIFY(engine::validateCase(c).empty());
+    const json written = io::caseToJson(c);
+    QVERIFY(written["engine"]["architecture"] == json("two-spool-turbojet"));
+    QVERIFY(!written.contains("compressor") && !written.contains("turbine"));
+    QVERIFY(written["low_pressure_compressor"]["pressure_ratio"] == json(3.5));
+    QVERIFY(io::parseCase(written) == c);
   }
 };
 

@@ -200,7 +200,7 @@ class TestLossAudit : public QObject {
     QTest::mouseClick(chart->canvas(), Qt::LeftButton, Qt::NoModifier, centre);
     QCOMPARE(window.selection().current(), cw::gui::Section::Turbine);
     auto* strip = window.findChild<QListWidget*>("componentStrip");
-    QCOMPARE(strip->currentRow(), static_cast<int>(cw::gui::Section::Turbine));
+    QCOMPARE(strip->currentItem()->data(Qt::UserRole).toString(), QString("turbine"));
     // A total bar selects nothing.
     QTest::mouseClick(chart->canvas(), Qt::LeftButton, Qt::NoModifier, chart->barCentre(0));
     QCOMPARE(window.selection().current(), cw::gui::Section::Turbine);

@@ -4,6 +4,7 @@
 
 #include "charts/isobar_labels.h"
 #include "charts/log_scale_engine.h"
+#include "document/case_fields.h"
 
 #include "engine/isobars.h"
 
@@ -64,14 +65,10 @@ QColor inkColour(const QPalette& palette) {
 }
 
 QString componentName(const std::string& component) {
-  if (component == "inlet") return QCoreApplication::translate("CaseFields", "Inlet");
-  if (component == "compressor") return QCoreApplication::translate("CaseFields", "Compressor");
-  if (component == "burner") return QCoreApplication::translate("CaseFields", "Burner");
-  if (component == "turbine") return QCoreApplication::translate("CaseFields", "Turbine");
-  if (component == "jet_pipe") return QCoreApplication::translate("CaseFields", "Jet pipe");
-  if (component == "afterburner") return QCoreApplication::translate("CaseFields", "Afterburner");
-  if (component == "nozzle") return QCoreApplication::translate("CaseFields", "Nozzle");
   if (component == "closure") return QCoreApplication::translate("cw::gui::CycleChart", "Closure to ambient");
+  // The strip's name of the section the network's component is named after (its role).
+  for (const Section section : allSections())
+    if (sectionComponent(section) == component) return sectionName(section);
   return QString::fromStdString(component);
 }
 

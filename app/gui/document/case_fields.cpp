@@ -14,24 +14,19 @@ namespace {
 
 /// The strip item of a registry section (sizing is shown with the design target).
 Section sectionOf(std::string_view name) {
-  static const std::pair<std::string_view, Section> sections[] = {
-      {"", Section::Case},
-      {"flight", Section::Flight},
-      {"design", Section::Design},
-      {"sizing", Section::Design},
-      {"fuel", Section::Fuel},
-      {"gas_model", Section::GasModel},
-      {"inlet", Section::Inlet},
-      {"compressor", Section::Compressor},
-      {"burner", Section::Burner},
-      {"turbine", Section::Turbine},
-      {"jet_pipe", Section::JetPipe},
-      {"afterburner", Section::Afterburner},
-      {"nozzle", Section::Nozzle},
-  };
-  for (const auto& [key, section] : sections)
-    if (key == name) return section;
-  return Section::Case;
+  return name == "sizing" ? Section::Design : Section{name};
+}
+
+/// Sections that are inputs of the case rather than a component of the engine.
+bool isOperatingInput(Section section) {
+  return section == Section::Case || section == Section::Flight || section == Section::Design ||
+         section == Section::Fuel || section == Section::GasModel;
+}
+
+/// Whether a registry section is an item of the strip (the architecture is chosen by File >
+/// New and shown in the title, the sizing with the design).
+bool isStripItem(const ParameterSection& s) {
+  return s.name != "engine" && s.name != "sizing";
 }
 
 Quantity quantityOf(ParameterQuantity quantity) {
@@ -76,17 +71,17 @@ FieldKind kindOf(const Parameter& p) {
   return FieldKind::Number;
 }
 
-/// One field per registry entry of the single-spool case (the registry's texts are literals, so
+/// One field per registry entry of every architecture (the registry's texts are literals, so
 /// their data() are NUL-terminated); in form order, i.e. registry order within each section.
 std::vector<FieldSpec> buildFields() {
   std::vector<FieldSpec> f;
   int nextId = 1;
-  for (int section = 0; section < kSectionCount; ++section) {
+  for (const Section section : allSections()) {
     for (const Parameter& p : parameterRegistry()) {
-      if (p.sinceVersion > 1 || static_cast<int>(sectionOf(p.section)) != section) continue;
+      if (p.section == "engine" || sectionOf(p.section) != section) continue;
       FieldSpec s;
       s.id = nextId++;
-      s.section = sectionOf(p.section);
+      s.section = section;
       s.kind = kindOf(p);
       s.key = p.fieldKey.data();
       s.label = p.label.data();
@@ -111,63 +106,71 @@ std::vector<FieldSpec> buildFields() {
   return f;
 }
 
+const ParameterSection* registrySection(Section section) {
+  for (const ParameterSection& s : parameterSections())
+    if (s.name == section.name) return &s;
+  return nullptr;
+}
+
 }  // namespace
 
+std::vector<Section> stripSections(Architecture architecture) {
+  std::vector<Section> sections;
+  for (const ParameterSection& s : parameterSections())
+    if (isStripItem(s) && (!s.architecture || *s.architecture == architecture)) sections.push_back({s.name});
+  return sections;
+}
+
+const std::vector<Section>& allSections() {
+  static const std::vector<Section> sections = [] {
+    std::vector<Section> list;
+    for (const ParameterSection& s : parameterSections())
+      if (isStripItem(s)) list.push_back({s.name});
+    return list;
+  }();
+  return sections;
+}
+
+std::optional<Architecture> sectionArchitecture(Section section) {
+  const ParameterSection* s = registrySection(section);
+  return s ? s->architecture : std::nullopt;
+}
+
 std::string sectionComponent(Section section) {
-  switch (section) {
-    case Section::Inlet:
-      return "inlet";
-    case Section::Compressor:
-      return "compressor";
-    case Section::Burner:
-      return "burner";
-    case Section::Turbine:
-      return "turbine";
-    case Section::JetPipe:
-      return "jet_pipe";
-    case Section::Afterburner:
-      return "afterburner";
-    case Section::Nozzle:
-      return "nozzle";
-    default:
-      return {};
-  }
+  // The network names its components by their roles, i.e. the registry's sections.
+  return isOperatingInput(section) ? std::string() : std::string(section.name);
 }
 
 QString sectionName(Section section) {
-  switch (section) {
-    case Section::Case:
-      return QCoreApplication::translate("CaseFields", "Case");
-    case Section::Flight:
-      return QCoreApplication::translate("CaseFields", "Flight");
-    case Section::Design:
-      return QCoreApplication::translate("CaseFields", "Design and sizing");
-    case Section::Fuel:
-      return QCoreApplication::translate("CaseFields", "Fuel");
-    case Section::GasModel:
-      return QCoreApplication::translate("CaseFields", "Gas model");
-    case Section::Inlet:
-      return QCoreApplication::translate("CaseFields", "Inlet");
-    case Section::Compressor:
-      return QCoreApplication::translate("CaseFields", "Compressor");
-    case Section::Burner:
-      return QCoreApplication::translate("CaseFields", "Burner");
-    case Section::Turbine:
-      return QCoreApplication::translate("CaseFields", "Turbine");
-    case Section::JetPipe:
-      return QCoreApplication::translate("CaseFields", "Jet pipe");
-    case Section::Afterburner:
-      return QCoreApplication::translate("CaseFields", "Afterburner");
-    case Section::Nozzle:
-      return QCoreApplication::translate("CaseFields", "Nozzle");
-  }
-  return {};
+  if (section == Section::Case) return QCoreApplication::translate("CaseFields", "Case");
+  if (section == Section::Flight) return QCoreApplication::translate("CaseFields", "Flight");
+  if (section == Section::Design) return QCoreApplication::translate("CaseFields", "Design and sizing");
+  if (section == Section::Fuel) return QCoreApplication::translate("CaseFields", "Fuel");
+  if (section == Section::GasModel) return QCoreApplication::translate("CaseFields", "Gas model");
+  if (section == Section::Inlet) return QCoreApplication::translate("CaseFields", "Inlet");
+  if (section == Section::Burner) return QCoreApplication::translate("CaseFields", "Burner");
+  if (section == Section::JetPipe) return QCoreApplication::translate("CaseFields", "Jet pipe");
+  if (section == Section::Afterburner) return QCoreApplication::translate("CaseFields", "Afterburner");
+  if (section == Section::Nozzle) return QCoreApplication::translate("CaseFields", "Nozzle");
+  // A compressor or turbine role: its title in the registry.
+  const ParameterSection* s = registrySection(section);
+  return s ? QCoreApplication::translate("Parameters", s->title.data()) : QString();
 }
 
 QString sectionKey(Section section) {
-  static const char* keys[] = {"case",       "flight", "design",  "fuel",    "gasModel",    "inlet",
-                               "compressor", "burner", "turbine", "jetPipe", "afterburner", "nozzle"};
-  return QString::fromLatin1(keys[static_cast<int>(section)]);
+  // camelCase of the case-file object: "low_pressure_compressor" -> "lowPressureCompressor".
+  if (section == Section::Case) return QStringLiteral("case");
+  QString key;
+  bool upper = false;
+  for (const char c : section.name) {
+    if (c == '_') {
+      upper = true;
+      continue;
+    }
+    key += upper ? QChar(c).toUpper() : QChar(c);
+    upper = false;
+  }
+  return key;
 }
 
 const std::vector<FieldSpec>& caseFields() {

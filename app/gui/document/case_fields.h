@@ -11,35 +11,51 @@
 #include "engine/parameter_registry.h"
 
 #include <functional>
+#include <optional>
 #include <string>
 #include <vector>
 
 namespace cw::gui {
 
-/// The selectable items of the component strip: the case's own description (title, notes),
-/// then the operating inputs, then the components in flow order.
-enum class Section {
-  Case,
-  Flight,
-  Design,
-  Fuel,
-  GasModel,
-  Inlet,
-  Compressor,
-  Burner,
-  Turbine,
-  JetPipe,
-  Afterburner,
-  Nozzle,
+/// An item of the component strip: a section of the registry of parameters, named by its
+/// case-file object ("" for the case's own title and notes; sizing is shown with the design).
+/// Which items a case shows, and their order, come from the registry and the case's
+/// architecture (stripSections): the operating inputs, then the components in flow order.
+struct Section {
+  std::string_view name;  ///< the registry section (case-file object)
+  bool operator==(const Section&) const = default;
+
+  // Names of the sections every architecture has, and of the single spool's compressor and
+  // turbine roles (for callers that name one; the strip never lists them by hand).
+  static const Section Case, Flight, Design, Fuel, GasModel, Inlet, Compressor, Burner, Turbine, JetPipe,
+      Afterburner, Nozzle;
 };
-inline constexpr int kSectionCount = 12;
+inline constexpr Section Section::Case{""};
+inline constexpr Section Section::Flight{"flight"};
+inline constexpr Section Section::Design{"design"};
+inline constexpr Section Section::Fuel{"fuel"};
+inline constexpr Section Section::GasModel{"gas_model"};
+inline constexpr Section Section::Inlet{"inlet"};
+inline constexpr Section Section::Compressor{"compressor"};
+inline constexpr Section Section::Burner{"burner"};
+inline constexpr Section Section::Turbine{"turbine"};
+inline constexpr Section Section::JetPipe{"jet_pipe"};
+inline constexpr Section Section::Afterburner{"afterburner"};
+inline constexpr Section Section::Nozzle{"nozzle"};
+
+/// The strip's items for a case of `architecture`, in the registry's order (flow order).
+std::vector<Section> stripSections(engine::Architecture architecture);
+/// The strip's items of every architecture (one form each), in the registry's order.
+const std::vector<Section>& allSections();
+/// The architecture a section belongs to, if it is a role of one.
+std::optional<engine::Architecture> sectionArchitecture(Section section);
 
 /// The component name the core uses for a section's process path ("inlet", ...); empty for
 /// sections that are no component (case, flight, design, fuel, gas model).
 std::string sectionComponent(Section section);
 /// The section's translated display name.
 QString sectionName(Section section);
-/// A stable object name, e.g. "compressor".
+/// A stable object name, e.g. "compressor", "lowPressureCompressor".
 QString sectionKey(Section section);
 
 /// Text: one line of free text; Notes: several lines.

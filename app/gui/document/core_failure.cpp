@@ -65,10 +65,8 @@ QString residual(const CoreFailure& f, std::size_t i) {
 /// start of a where such as "nozzle: exit pressure for the area ratio"; empty when none.
 QString componentName(const std::string& where) {
   const std::string head = where.substr(0, where.find(':'));
-  for (int i = 0; i < kSectionCount; ++i) {
-    const auto section = static_cast<Section>(i);
+  for (const Section section : allSections())
     if (!sectionComponent(section).empty() && sectionComponent(section) == head) return sectionName(section);
-  }
   return {};
 }
 
