@@ -212,6 +212,46 @@ kein Kreisprozess mit diesen Eingaben</translation>
         <source>Nozzle</source>
         <translation>Schubdüse</translation>
     </message>
+    <message>
+        <source>LP compressor efficiency</source>
+        <translation>ND-Verdichterwirkungsgrad</translation>
+    </message>
+    <message>
+        <source>LP compressor</source>
+        <translation>ND-Verdichter</translation>
+    </message>
+    <message>
+        <source>LP turbine efficiency</source>
+        <translation>ND-Turbinenwirkungsgrad</translation>
+    </message>
+    <message>
+        <source>LP turbine</source>
+        <translation>ND-Turbine</translation>
+    </message>
+    <message>
+        <source>LP shaft mechanical efficiency</source>
+        <translation>Mechanischer Wirkungsgrad der ND-Welle</translation>
+    </message>
+    <message>
+        <source>LP shaft</source>
+        <translation>ND-Welle</translation>
+    </message>
+    <message>
+        <source>LP compressor bleed</source>
+        <translation>Zapfluft am ND-Verdichter</translation>
+    </message>
+    <message>
+        <source>LP bleed</source>
+        <translation>ND-Zapfluft</translation>
+    </message>
+    <message>
+        <source>LP shaft power offtake</source>
+        <translation>Leistungsentnahme an der ND-Welle</translation>
+    </message>
+    <message>
+        <source>LP offtake</source>
+        <translation>ND-Entnahme</translation>
+    </message>
 </context>
 <context>
     <name>Parameters</name>

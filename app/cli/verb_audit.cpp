@@ -53,7 +53,7 @@ nlohmann::json figuresJson(const analysis::AuditFigures& f) {
           {"tsfc_g_per_kN_s", f.thrustSpecificFuelConsumption * kTsfcToOutput}};
 }
 
-nlohmann::json auditToJson(const analysis::LossAudit& a) {
+nlohmann::json auditToJson(const analysis::LossAudit& a, const engine::Case& audited) {
   nlohmann::json j;
   j["caution"] = kCaution;
   j["actual"] = figuresJson(a.actual);
@@ -63,7 +63,7 @@ nlohmann::json auditToJson(const analysis::LossAudit& a) {
   j["one_at_a_time"] = nlohmann::json::array();
   for (const auto& d : a.oneAtATime) {
     nlohmann::json row = deltaJson(d);
-    const auto& loss = analysis::lossByKey(d.loss);
+    const auto& loss = analysis::lossByKey(d.loss, audited);
     row["field"] = loss.field;
     row["removed_to"] = loss.removedTo;
     j["one_at_a_time"].push_back(row);
@@ -178,10 +178,11 @@ int runAudit(const Arguments& args, Format format, std::ostream& out) {
   if (const auto text = args.text("order")) order = splitOrder(*text);
   nlohmann::json document = io::readCaseDocument(args.positional().front());
   for (const auto& assignment : args.all("set")) io::applySetOverride(document, assignment);
-  const analysis::LossAudit audit = analysis::auditCase(io::parseCase(document), order);
+  const engine::Case audited = io::parseCase(document);
+  const analysis::LossAudit audit = analysis::auditCase(audited, order);
   switch (format) {
     case Format::Json:
-      out << auditToJson(audit).dump(2) << '\n';
+      out << auditToJson(audit, audited).dump(2) << '\n';
       break;
     case Format::Csv:
       printCsv(out, audit);

@@ -26,7 +26,7 @@ double unitRange(const LossParameter& p) {
 }  // namespace
 
 LossSensitivity sensitivityOf(const AuditPoint& point, const std::string& key, double relativeStep) {
-  const LossDefinition& loss = lossByKey(key, "sensitivity");
+  const LossDefinition& loss = lossByKey(key, point.baseCase(), "sensitivity");
   if (!loss.parameter) throw InvalidInput("sensitivity", "loss '" + key + "' has no continuous parameter");
   const LossParameter& p = *loss.parameter;
   LossSensitivity s;
@@ -64,9 +64,9 @@ LossSensitivity sensitivityOf(const AuditPoint& point, const std::string& key, d
 
 std::vector<LossSensitivity> sensitivities(const AuditPoint& point, double relativeStep) {
   std::vector<LossSensitivity> list;
-  for (const auto& loss : lossCatalogue())
-    if (loss.parameter && loss.applies(point.baseCase()))
-      list.push_back(sensitivityOf(point, loss.key, relativeStep));
+  for (const LossDefinition* loss : lossesOf(point.baseCase().architecture))
+    if (loss->parameter && loss->applies(point.baseCase()))
+      list.push_back(sensitivityOf(point, loss->key, relativeStep));
   return list;
 }
 

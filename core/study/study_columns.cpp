@@ -92,10 +92,10 @@ std::vector<StudyColumn> sizingColumns() {
   };
 }
 
-std::vector<StudyColumn> auditColumns() {
+std::vector<StudyColumn> auditColumns(engine::Architecture architecture) {
   std::vector<StudyColumn> columns;
-  for (const analysis::LossDefinition& loss : analysis::lossCatalogue()) {
-    const std::string key = loss.key;
+  for (const analysis::LossDefinition* loss : analysis::lossesOf(architecture)) {
+    const std::string key = loss->key;
     auto find = [key](const StudyPoint& p) -> const analysis::LossDelta* {
       for (const analysis::LossDelta& d : p.audit)
         if (d.loss == key) return &d;
@@ -118,19 +118,19 @@ std::vector<StudyColumn> auditColumns() {
 
 }  // namespace
 
-std::vector<StudyColumn> studyColumns(bool withAudit) {
+std::vector<StudyColumn> studyColumns(bool withAudit, engine::Architecture architecture) {
   std::vector<StudyColumn> columns;
   for (const PerformanceFigure& figure : kPerformance) columns.push_back(performanceColumn(figure, false));
   for (StudyColumn& column : sizingColumns()) columns.push_back(std::move(column));
   for (const PerformanceFigure& figure : kPerformance) columns.push_back(performanceColumn(figure, true));
   if (withAudit)
-    for (StudyColumn& column : auditColumns()) columns.push_back(std::move(column));
+    for (StudyColumn& column : auditColumns(architecture)) columns.push_back(std::move(column));
   return columns;
 }
 
-std::vector<StudyColumn> defaultStudyColumns(bool withAudit) {
+std::vector<StudyColumn> defaultStudyColumns(bool withAudit, engine::Architecture architecture) {
   std::vector<StudyColumn> columns;
-  for (StudyColumn& column : studyColumns(withAudit)) {
+  for (StudyColumn& column : studyColumns(withAudit, architecture)) {
     const bool idealOther = column.name.rfind("ideal.", 0) == 0 &&
                             column.name != "ideal.specific_thrust_N_s_per_kg" &&
                             column.name != "ideal.tsfc_g_per_kN_s";
@@ -140,8 +140,8 @@ std::vector<StudyColumn> defaultStudyColumns(bool withAudit) {
 }
 
 std::vector<StudyColumn> selectStudyColumns(const std::string& names, bool withAudit,
-                                            const std::string& where) {
-  std::vector<StudyColumn> all = studyColumns(withAudit);
+                                            const std::string& where, engine::Architecture architecture) {
+  std::vector<StudyColumn> all = studyColumns(withAudit, architecture);
   if (names.empty()) return all;
   std::vector<std::string> valid;
   for (const StudyColumn& c : all) valid.push_back(c.name);

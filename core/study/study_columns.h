@@ -5,7 +5,10 @@
 // A column's name carries the unit of its file value (e.g. "tsfc_g_per_kN_s"); value() gives
 // the SI value (kg/(N s) for TSFC) and fileScale converts it for files. Figures of the ideal
 // twin are prefixed "ideal."; the loss audit's are "audit.<loss>.delta_specific_thrust_N_s_per_kg"
-// and "audit.<loss>.delta_tsfc_g_per_kN_s" (present when the study ran the audit).
+// and "audit.<loss>.delta_tsfc_g_per_kN_s" (present when the study ran the audit), for the losses
+// of the case's architecture (analysis::lossesOf): a turbojet's study has no low-pressure
+// columns. The architecture defaults to the single-spool turbojet, the only one case files
+// give so far.
 
 #include "study/trade_study.h"
 
@@ -39,16 +42,19 @@ struct StudyColumn {
 };
 
 /// Every column a study offers, in a fixed order: the cycle's figures, the ideal twin's, then
-/// (when the study ran the audit) the audit's, in flow order of the losses.
-std::vector<StudyColumn> studyColumns(bool withAudit);
+/// (when the study ran the audit) the audit's, in flow order of the architecture's losses.
+std::vector<StudyColumn> studyColumns(bool withAudit,
+                                      engine::Architecture architecture = engine::Architecture::Turbojet);
 
 /// The columns named (comma-separated names, in the given order), or every column when empty.
 /// An unknown or repeated name throws cw::InvalidInput (where = `where`) listing the valid ones.
-std::vector<StudyColumn> selectStudyColumns(const std::string& names, bool withAudit,
-                                            const std::string& where = "--output-columns");
+std::vector<StudyColumn> selectStudyColumns(
+    const std::string& names, bool withAudit, const std::string& where = "--output-columns",
+    engine::Architecture architecture = engine::Architecture::Turbojet);
 
 /// The default columns of the command line: the cycle's figures and the ideal twin's specific
 /// thrust and TSFC (and the audit's when run).
-std::vector<StudyColumn> defaultStudyColumns(bool withAudit);
+std::vector<StudyColumn> defaultStudyColumns(
+    bool withAudit, engine::Architecture architecture = engine::Architecture::Turbojet);
 
 }  // namespace cw::study

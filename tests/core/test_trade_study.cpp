@@ -477,6 +477,32 @@ class TestTradeStudy : public QObject {
     QVERIFY(!study::selectStudyColumns("tsfc_g_per_kN_s", false).front().value(p).has_value());
   }
 
+  void auditColumnsFollowTheArchitecture() {
+    // A turbojet's study has the audit columns of its 13 losses, none of the LP spool's (the
+    // command line's sweep --audit unchanged); a two-spool case's has the LP ones too (18 losses,
+    // two columns each), and their values are the point's own audit.
+    const auto turbojet = study::studyColumns(true);
+    const auto twoSpool = study::studyColumns(true, engine::Architecture::TwoSpoolTurbojet);
+    QCOMPARE(twoSpool.size() - turbojet.size(), std::size_t(2 * 5));
+    const std::string lpBleed = "audit.low_pressure_bleed.delta_specific_thrust_N_s_per_kg";
+    QVERIFY(std::none_of(turbojet.begin(), turbojet.end(), [&](const auto& c) { return c.name == lpBleed; }));
+    QVERIFY(errorOf([&] { study::selectStudyColumns(lpBleed, true); }).contains("unknown column"));
+    engine::Case c;
+    c.architecture = engine::Architecture::TwoSpoolTurbojet;
+    c.lowPressureCompressor.pressureRatio = 2.5;
+    c.lowPressureCompressor.bleedFraction = 0.02;
+    c.compressor.pressureRatio = 4.0;
+    const study::StudyPoint p = study::evaluatePoint(c, true);
+    const auto column =
+        study::selectStudyColumns(lpBleed, true, "--output-columns", engine::Architecture::TwoSpoolTurbojet);
+    const auto it = std::find_if(p.audit.begin(), p.audit.end(),
+                                 [](const analysis::LossDelta& d) { return d.loss == "low_pressure_bleed"; });
+    QVERIFY(it != p.audit.end());
+    QCOMPARE(*column.front().value(p), it->deltaSpecificThrust);
+    QVERIFY(it->deltaSpecificThrust >
+            0.0);  // no LP bleed, more air through the core (common practice, no source)
+  }
+
   // ---- the thread pool -----------------------------------------------------------------------------
 
   void threadPoolRunsEveryIndexOnce() {

@@ -79,9 +79,7 @@ bool CaseDocument::isAuditStale() const {
 bool CaseDocument::setAuditOrder(const QStringList& keys) {
   QStringList known;
   for (const QString& key : keys) {
-    const bool valid =
-        std::any_of(analysis::lossCatalogue().begin(), analysis::lossCatalogue().end(),
-                    [&](const analysis::LossDefinition& l) { return l.key == key.toStdString(); });
+    const bool valid = analysis::isLossKey(key.toStdString());
     if (valid && !known.contains(key)) known << key;
   }
   if (known == auditOrder_) return false;

@@ -15,9 +15,14 @@ struct LossNames {
   Section section;
 };
 
-constexpr std::array<LossNames, 13> kLosses{{
+// The shared keys (compressor_efficiency, bleed, ...) name the HP spool's losses in a two-spool
+// case; their names stay those of the single spool (no case reaches these names). The LP losses
+// belong to the compressor's and the turbine's strip items until the strip has LP items.
+constexpr std::array<LossNames, 18> kLosses{{
     {"inlet_recovery", QT_TRANSLATE_NOOP("LossNames", "Inlet pressure recovery"),
      QT_TRANSLATE_NOOP("LossNames", "Inlet"), Section::Inlet},
+    {"low_pressure_compressor_efficiency", QT_TRANSLATE_NOOP("LossNames", "LP compressor efficiency"),
+     QT_TRANSLATE_NOOP("LossNames", "LP compressor"), Section::Compressor},
     {"compressor_efficiency", QT_TRANSLATE_NOOP("LossNames", "Compressor efficiency"),
      QT_TRANSLATE_NOOP("LossNames", "Compressor"), Section::Compressor},
     {"burner_pressure_loss", QT_TRANSLATE_NOOP("LossNames", "Burner pressure loss"),
@@ -28,6 +33,10 @@ constexpr std::array<LossNames, 13> kLosses{{
      QT_TRANSLATE_NOOP("LossNames", "Turbine"), Section::Turbine},
     {"mechanical_efficiency", QT_TRANSLATE_NOOP("LossNames", "Mechanical efficiency"),
      QT_TRANSLATE_NOOP("LossNames", "Shaft"), Section::Turbine},
+    {"low_pressure_turbine_efficiency", QT_TRANSLATE_NOOP("LossNames", "LP turbine efficiency"),
+     QT_TRANSLATE_NOOP("LossNames", "LP turbine"), Section::Turbine},
+    {"low_pressure_mechanical_efficiency", QT_TRANSLATE_NOOP("LossNames", "LP shaft mechanical efficiency"),
+     QT_TRANSLATE_NOOP("LossNames", "LP shaft"), Section::Turbine},
     {"jet_pipe_loss", QT_TRANSLATE_NOOP("LossNames", "Jet pipe pressure loss"),
      QT_TRANSLATE_NOOP("LossNames", "Jet pipe"), Section::JetPipe},
     {"afterburner_loss", QT_TRANSLATE_NOOP("LossNames", "Afterburner losses"),
@@ -38,10 +47,14 @@ constexpr std::array<LossNames, 13> kLosses{{
      QT_TRANSLATE_NOOP("LossNames", "Nozzle Cd"), Section::Nozzle},
     {"nozzle_expansion", QT_TRANSLATE_NOOP("LossNames", "Incomplete nozzle expansion"),
      QT_TRANSLATE_NOOP("LossNames", "Expansion"), Section::Nozzle},
+    {"low_pressure_bleed", QT_TRANSLATE_NOOP("LossNames", "LP compressor bleed"),
+     QT_TRANSLATE_NOOP("LossNames", "LP bleed"), Section::Compressor},
     {"bleed", QT_TRANSLATE_NOOP("LossNames", "Compressor bleed"), QT_TRANSLATE_NOOP("LossNames", "Bleed"),
      Section::Compressor},
     {"power_offtake", QT_TRANSLATE_NOOP("LossNames", "Shaft power offtake"),
      QT_TRANSLATE_NOOP("LossNames", "Offtake"), Section::Turbine},
+    {"low_pressure_power_offtake", QT_TRANSLATE_NOOP("LossNames", "LP shaft power offtake"),
+     QT_TRANSLATE_NOOP("LossNames", "LP offtake"), Section::Turbine},
 }};
 
 const LossNames* find(const std::string& key) {
