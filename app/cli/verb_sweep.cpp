@@ -7,6 +7,7 @@
 // already run are printed, the rest are marked not-run, and the exit status is 130.
 #include "common/error.h"
 #include "io/case_file.h"
+#include "io/case_keys.h"
 #include "output.h"
 #include "study/study_columns.h"
 #include "study/study_export.h"
@@ -91,12 +92,15 @@ int runSweep(const Arguments& args, Format format, std::ostream& out) {
     throw InvalidInput("--vary", "give --vary PATH=START:STOP:COUNT once (a sweep) or twice (a carpet)");
   spec.withAudit = args.has("audit");
   spec.threads = static_cast<unsigned>(args.wholeNumber("threads", 0, 256, 0));
-  const auto columns = args.has("output-columns")
-                           ? study::selectStudyColumns(*args.text("output-columns"), spec.withAudit)
-                           : study::defaultStudyColumns(spec.withAudit);
   spec.source = args.positional().front();
   spec.document = io::readCaseDocument(spec.source);
   for (const auto& assignment : args.all("set")) io::applySetOverride(spec.document, assignment);
+  // The audit's columns are the losses of the case's architecture (a two-spool case adds the LP ones).
+  const engine::Architecture architecture = io::caseDocumentArchitecture(spec.document);
+  const auto columns = args.has("output-columns")
+                           ? study::selectStudyColumns(*args.text("output-columns"), spec.withAudit,
+                                                       "--output-columns", architecture)
+                           : study::defaultStudyColumns(spec.withAudit, architecture);
 
   // --progress: a line on stderr about every 1 % (the callback runs on worker threads).
   std::mutex progressMutex;

@@ -170,4 +170,14 @@ std::vector<StudyColumn> selectStudyColumns(const std::string& names, bool withA
   return chosen;
 }
 
+std::vector<StudyColumn> everyStudyColumn() {
+  std::vector<StudyColumn> every;
+  for (const engine::Architecture a :
+       {engine::Architecture::Turbojet, engine::Architecture::TwoSpoolTurbojet})
+    for (StudyColumn& c : studyColumns(true, a))
+      if (std::none_of(every.begin(), every.end(), [&c](const StudyColumn& e) { return e.name == c.name; }))
+        every.push_back(std::move(c));
+  return every;
+}
+
 }  // namespace cw::study

@@ -46,6 +46,10 @@ struct StudyColumn {
 std::vector<StudyColumn> studyColumns(bool withAudit,
                                       engine::Architecture architecture = engine::Architecture::Turbojet);
 
+/// Every column a study of any architecture may have, each once (for finding a column by its
+/// name, as the GUI's views do).
+std::vector<StudyColumn> everyStudyColumn();
+
 /// The columns named (comma-separated names, in the given order), or every column when empty.
 /// An unknown or repeated name throws cw::InvalidInput (where = `where`) listing the valid ones.
 std::vector<StudyColumn> selectStudyColumns(

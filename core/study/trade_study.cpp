@@ -154,6 +154,7 @@ TradeStudy runTradeStudy(const TradeStudySpec& spec, std::stop_token stop, const
   TradeStudy study;
   study.axes = spec.axes;
   study.withAudit = spec.withAudit;
+  study.architecture = base.architecture;
 
   // --- the design point: the case as given -----------------------------------------------------
   try {

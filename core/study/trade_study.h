@@ -12,6 +12,7 @@
 //   point index = i * count2 + j   (i along the first axis, j along the second).
 
 #include "analysis/loss_audit.h"
+#include "engine/case_inputs.h"
 #include "engine/cycle_result.h"
 #include "study/sweep_axis.h"
 
@@ -71,6 +72,8 @@ struct TradeStudy {
   StudyPoint designPoint;
   std::array<bool, 2> designPointOnAxis{false, false};  ///< whether inputs[k] is the case's value
   bool withAudit = false;
+  /// The case's architecture: which audit columns the study has (study_columns.h).
+  engine::Architecture architecture = engine::Architecture::Turbojet;
   bool stopped = false;  ///< a stop request ended the study before every point ran
   unsigned threads = 1;  ///< threads used
 

@@ -94,6 +94,29 @@ class TestCliSweep : public QObject {
     QVERIFY2(gain > 0.0 && gain < 50.0, rows[3].c_str());  // removing a 1 % bleed gains a little thrust
   }
 
+  void aTwoSpoolStudyHasTheLowPressureSpoolsAuditColumns() {
+    // The audit's columns are the losses of the case's architecture: a two-spool case adds the LP
+    // spool's; the same column is refused on a single-spool case, naming the option.
+    const std::string twoSpool = CYCLEWRIGHT_SOURCE_DIR "/resources/examples/two-spool-cruise.json";
+    const std::string column = "audit.low_pressure_turbine_efficiency.delta_specific_thrust_N_s_per_kg";
+    const auto run =
+        cw::test::runCli({"sweep", twoSpool, "--vary", "low_pressure_compressor.pressure_ratio=2:3:2",
+                          "--audit", "--output-columns", column});
+    QCOMPARE(run.status, 0);
+    const auto rows = lines(run.out);
+    QCOMPARE(rows[2], "low_pressure_compressor.pressure_ratio,status," + column + ",reason");
+    for (const std::size_t row : {std::size_t(3), std::size_t(4)}) {
+      // Removing the LP turbine's loss (efficiency below 1) gains specific thrust (common
+      // practice, no source: a lossless turbine needs less of the jet's energy).
+      const double gain = std::stod(rows[row].substr(rows[row].find("solved,") + 7));
+      QVERIFY2(gain > 0.0 && gain < 200.0, rows[row].c_str());
+    }
+    const auto refused = cw::test::runCli({"sweep", kDemo, "--vary", "compressor.pressure_ratio=6:10:2",
+                                           "--audit", "--output-columns", column});
+    QCOMPARE(refused.status, 2);
+    QVERIFY2(refused.err.find("--output-columns") != std::string::npos, refused.err.c_str());
+  }
+
   void errorsExitTwoWithOneLine_data() {
     QTest::addColumn<QStringList>("words");
     QTest::addColumn<QString>("message");

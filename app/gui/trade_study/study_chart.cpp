@@ -95,7 +95,7 @@ QPen linePen(StudyChart::Family family, bool overlay, StudyOverlay kind, StudyPl
 }  // namespace
 
 StudyChart::StudyChart(DisplayUnits& units, QWidget* parent)
-    : ChartBase(parent), units_(units), columns_(study::studyColumns(true)) {
+    : ChartBase(parent), units_(units), columns_(study::everyStudyColumn()) {
   setObjectName("studyChart");
   setMinimumSize(240, 180);
 

@@ -517,7 +517,9 @@ void TradeStudyPanel::fillPlotBox() {
   const bool withAudit = study_ ? study_->withAudit : audit_->isChecked();
   plot_->clear();
   if (carpet) plot_->addItem(tr("Carpet: specific thrust against TSFC"), QString());
-  for (const study::StudyColumn& c : study::studyColumns(withAudit))
+  const engine::Architecture architecture =
+      study_ ? study_->architecture : document_.currentCase().architecture;
+  for (const study::StudyColumn& c : study::studyColumns(withAudit, architecture))
     plot_->addItem(studyColumnLabel(c), QString::fromStdString(c.name));
   int index = plot_->findData(QString::fromStdString(plotColumn_));
   if (index < 0) index = plot_->findData(QStringLiteral("specific_thrust_N_s_per_kg"));
@@ -586,8 +588,9 @@ void TradeStudyPanel::updateNote() {
 bool TradeStudyPanel::exportCsv(const QString& path, QString* error) const {
   if (!study_) return false;
   try {
-    io::writeFileAtomically(path.toStdString(),
-                            study::studyToCsv(*study_, study::studyColumns(study_->withAudit)));
+    io::writeFileAtomically(
+        path.toStdString(),
+        study::studyToCsv(*study_, study::studyColumns(study_->withAudit, study_->architecture)));
   } catch (const std::exception& e) {
     if (error) *error = QString::fromStdString(e.what());
     return false;
@@ -598,8 +601,10 @@ bool TradeStudyPanel::exportCsv(const QString& path, QString* error) const {
 bool TradeStudyPanel::exportJson(const QString& path, QString* error) const {
   if (!study_) return false;
   try {
-    io::writeFileAtomically(path.toStdString(),
-                            study::studyToJson(*study_, study::studyColumns(study_->withAudit)).dump(2) + "\n");
+    io::writeFileAtomically(
+        path.toStdString(),
+        study::studyToJson(*study_, study::studyColumns(study_->withAudit, study_->architecture)).dump(2) +
+            "\n");
   } catch (const std::exception& e) {
     if (error) *error = QString::fromStdString(e.what());
     return false;

@@ -20,7 +20,7 @@ const char* const kTsfc = "tsfc_g_per_kN_s";
 }  // namespace
 
 StudyTableModel::StudyTableModel(DisplayUnits& units, QObject* parent)
-    : QAbstractTableModel(parent), units_(units), all_(study::studyColumns(true)) {
+    : QAbstractTableModel(parent), units_(units), all_(study::everyStudyColumn()) {
   connect(&units_, &DisplayUnits::changed, this, [this] {
     beginResetModel();
     endResetModel();
