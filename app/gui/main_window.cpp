@@ -457,12 +457,17 @@ void MainWindow::setPressureVolumeLogAxes(bool on) {
 
 QSet<QString> MainWindow::stationsOf(Section section) const {
   QSet<QString> out;
-  if (section == Section::Flight) out.insert("0");
-  if (section == Section::Design) out.insert("2");
   const auto evaluation = document_->evaluation();
-  const std::string component = sectionComponent(section);
-  if (!evaluation || component.empty()) return out;
+  if (!evaluation) return out;
   const auto& cycle = evaluation->actual;
+  // The flight condition is the free stream's state, the design's sizing the engine face's: the
+  // network's description names their stations.
+  if (cycle.network && section == Section::Flight)
+    out.insert(QString::fromStdString(cycle.network->freeStream));
+  if (cycle.network && section == Section::Design)
+    out.insert(QString::fromStdString(cycle.network->engineFace));
+  const std::string component = sectionComponent(section);
+  if (component.empty()) return out;
   const int p = componentPath(cycle, component);
   if (p < 0) return out;
   const auto& path = cycle.paths[static_cast<size_t>(p)];

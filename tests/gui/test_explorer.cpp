@@ -286,6 +286,12 @@ class TestExplorer : public QObject {
     QVERIFY(window.findChild<QWidget*>("turbineForm")->isVisibleTo(window.findChild<QWidget*>("formStack")));
     window.selection().select(cw::gui::Section::Nozzle);
     QCOMPARE(window.stationModel()->highlightedStations(), QSet<QString>({"7", "8", "9"}));
+    // The flight condition is the free stream's state, the design's sizing the engine face's
+    // (SAE AS755: 0 free stream, 2 engine face).
+    window.selection().select(cw::gui::Section::Flight);
+    QCOMPARE(window.stationModel()->highlightedStations(), QSet<QString>({"0"}));
+    window.selection().select(cw::gui::Section::Design);
+    QCOMPARE(window.stationModel()->highlightedStations(), QSet<QString>({"2"}));
   }
 
   void readoutShowsStateWithUnits() {
