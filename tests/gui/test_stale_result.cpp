@@ -89,6 +89,16 @@ bool atDisplayPrecision(double shown, double expected) {
   return std::fabs(shown - expected) <= 5e-5 * std::fabs(expected);
 }
 
+/// The rows of a test run in both unit systems and both languages: columns "us" and "language".
+void addUnitAndLanguageRows() {
+  QTest::addColumn<bool>("us");
+  QTest::addColumn<QString>("language");
+  QTest::newRow("SI, English") << false << "en";
+  QTest::newRow("U.S., English") << true << "en";
+  QTest::newRow("SI, German") << false << "de";
+  QTest::newRow("U.S., German") << true << "de";
+}
+
 double shownNetThrust(const MainWindow& window) {
   return window.performanceModel()->index(P::NetThrust, P::Actual).data(P::ValueRole).toDouble();
 }
@@ -235,14 +245,7 @@ class TestStaleResult : public QObject {
   // much pressure to drive the compressor that the nozzle entry total pressure is below the
   // ambient pressure. The banner names that cause in the chosen language, its pressures in the
   // chosen units at display precision, and no SI number when U.S. customary units are on.
-  void aCoreFailureInTheChosenUnitsAndLanguage_data() {
-    QTest::addColumn<bool>("us");
-    QTest::addColumn<QString>("language");
-    QTest::newRow("SI, English") << false << "en";
-    QTest::newRow("U.S., English") << true << "en";
-    QTest::newRow("SI, German") << false << "de";
-    QTest::newRow("U.S., German") << true << "de";
-  }
+  void aCoreFailureInTheChosenUnitsAndLanguage_data() { addUnitAndLanguageRows(); }
   void aCoreFailureInTheChosenUnitsAndLanguage() {
     QFETCH(bool, us);
     QFETCH(QString, language);
@@ -300,14 +303,7 @@ class TestStaleResult : public QObject {
   // errors are the core's own classes; the values are chosen so that their conversions are
   // exact: 2000 K = 3600 °R (1 K = 1.8 °R), 1 163 000 J/kg = 500 Btu/lbm (1 Btu/lbm = 2326 J/kg
   // exactly, NIST SP 811 appendix B.8).
-  void everyKindOfFailureInDisplayUnits_data() {
-    QTest::addColumn<bool>("us");
-    QTest::addColumn<QString>("language");
-    QTest::newRow("SI, English") << false << "en";
-    QTest::newRow("U.S., English") << true << "en";
-    QTest::newRow("SI, German") << false << "de";
-    QTest::newRow("U.S., German") << true << "de";
-  }
+  void everyKindOfFailureInDisplayUnits_data() { addUnitAndLanguageRows(); }
   void everyKindOfFailureInDisplayUnits() {
     QFETCH(bool, us);
     QFETCH(QString, language);
